@@ -1,0 +1,1 @@
+//! IAPWS backward equations.
