@@ -28,3 +28,25 @@ pub(crate) fn powf(x: f64, y: f64) -> f64 {
 pub(crate) fn cbrt(x: f64) -> f64 {
     libm::cbrt(x)
 }
+
+/// `x^n` by binary exponentiation; negative `n` gives `1 / x^|n|`.
+/// Written out (not `f64::powi`) so that it exists without `std` and rounds
+/// identically on every target.
+#[inline]
+pub(crate) fn powi(x: f64, n: i32) -> f64 {
+    let mut base = x;
+    let mut exponent = n.unsigned_abs();
+    let mut result = 1.0;
+    while exponent > 0 {
+        if exponent & 1 == 1 {
+            result *= base;
+        }
+        base *= base;
+        exponent >>= 1;
+    }
+    if n < 0 {
+        1.0 / result
+    } else {
+        result
+    }
+}
