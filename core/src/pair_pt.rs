@@ -1,0 +1,52 @@
+//! States from pressure and temperature, the formulation's own variables:
+//! regions 1, 2 and 5 evaluate directly, region 3 solves for the density.
+
+use crate::error::{native_input, Error};
+use crate::regions::{locate, single_phase, Located};
+use crate::state::{Region, State};
+use crate::units::{Quantity, Units};
+use crate::{region1, region2, region3, region3_density, region5};
+
+impl State {
+    /// The stable state at pressure `p` and temperature `t`, in `units`.
+    ///
+    /// Valid for 273.15 K ≤ T ≤ 1073.15 K at 0 < p ≤ 100 MPa and for
+    /// 1073.15 K < T ≤ 2273.15 K at 0 < p ≤ 50 MPa. Pressure and
+    /// temperature do not fix a two-phase state: a (p, T) exactly on the
+    /// saturation line gives the saturated liquid's single-phase limit as
+    /// compressed liquid; use [`crate::Saturation`] or [`State::from_px`]
+    /// for the saturation line itself.
+    pub fn from_pt(p: f64, t: f64, units: Units) -> Result<State, Error> {
+        let p = native_input(units, Quantity::Pressure, p)?;
+        let t = native_input(units, Quantity::Temperature, t)?;
+        let (props, region, liquid) = match locate(p, t, units)? {
+            Located::Region1 => (region1::gibbs(p, t).properties(p, t), Region::One, true),
+            Located::Region2 => (region2::gibbs(p, t).properties(p, t), Region::Two, false),
+            Located::Region5 => (region5::gibbs(p, t).properties(p, t), Region::Five, false),
+            Located::Region3(branch) => {
+                let rho = region3_density::density(p, t, branch)?;
+                let mut props = region3::helmholtz(rho, t).properties(rho, t);
+                // Report the caller's pressure, which the density reproduces
+                // to its last bit or two, rather than the recomputed one.
+                props.p = p;
+                (props, Region::Three, branch == region3_density::Branch::Liquid)
+            }
+        };
+        Ok(State::single_phase(props, region, single_phase(p, t, liquid), units))
+    }
+}
+
+/// Specific enthalpy alone at pressure `p` and temperature `t`, in `units`:
+/// the cheap path for batches that need nothing else. Same value, bit for
+/// bit, as `State::from_pt(p, t, units)?.enthalpy()` in regions 1, 2 and 5.
+pub fn enthalpy_from_pt(p: f64, t: f64, units: Units) -> Result<f64, Error> {
+    let p_native = native_input(units, Quantity::Pressure, p)?;
+    let t_native = native_input(units, Quantity::Temperature, t)?;
+    let h = match locate(p_native, t_native, units)? {
+        Located::Region1 => region1::enthalpy(p_native, t_native),
+        Located::Region2 => region2::enthalpy(p_native, t_native),
+        Located::Region5 => region5::enthalpy(p_native, t_native),
+        Located::Region3(_) => return State::from_pt(p, t, units).map(|s| s.enthalpy()),
+    };
+    Ok(units.from_native(Quantity::SpecificEnergy, h))
+}

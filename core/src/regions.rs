@@ -1,0 +1,75 @@
+//! Which IF97 region holds a (p, T) state: the boundaries of R7-97(2012),
+//! section 4 and Figure 1, and the checks against the range of validity.
+
+use crate::boundary_b23;
+use crate::constants::*;
+use crate::error::Error;
+use crate::region3_density::Branch;
+use crate::saturation_line::saturation_pressure;
+use crate::state::Phase;
+use crate::units::{Quantity, Units};
+
+/// Where a (p, T) state lies.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub(crate) enum Located {
+    Region1,
+    Region2,
+    Region3(Branch),
+    Region5,
+}
+
+/// Locates native `p` (MPa) and `t` (K); out-of-range errors are reported
+/// in `units`. A state exactly on the saturation line is taken as liquid.
+pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
+    if !(MIN_TEMPERATURE..=MAX_TEMPERATURE).contains(&t) {
+        return Err(Error::out_of_range(
+            Quantity::Temperature,
+            t,
+            MIN_TEMPERATURE,
+            MAX_TEMPERATURE,
+            units,
+        ));
+    }
+    let max_pressure = if t <= REGION2_MAX_TEMPERATURE {
+        MAX_PRESSURE
+    } else {
+        REGION5_MAX_PRESSURE
+    };
+    if !(p > 0.0 && p <= max_pressure) {
+        return Err(Error::out_of_range(Quantity::Pressure, p, 0.0, max_pressure, units));
+    }
+    Ok(if t <= REGION13_TEMPERATURE {
+        if p >= saturation_pressure(t) {
+            Located::Region1
+        } else {
+            Located::Region2
+        }
+    } else if t <= B23_MAX_TEMPERATURE {
+        if p <= boundary_b23::pressure(t) {
+            Located::Region2
+        } else if t >= CRITICAL_TEMPERATURE {
+            Located::Region3(Branch::Supercritical)
+        } else if p >= saturation_pressure(t) {
+            Located::Region3(Branch::Liquid)
+        } else {
+            Located::Region3(Branch::Vapour)
+        }
+    } else if t <= REGION2_MAX_TEMPERATURE {
+        Located::Region2
+    } else {
+        Located::Region5
+    })
+}
+
+/// The phase of a single-phase state off the saturation line: liquid below
+/// Tc, supercritical above both Tc and pc, otherwise vapour or gas
+/// (common practice).
+pub(crate) fn single_phase(p: f64, t: f64, liquid: bool) -> Phase {
+    if t > CRITICAL_TEMPERATURE && p > CRITICAL_PRESSURE {
+        Phase::SupercriticalFluid
+    } else if liquid {
+        Phase::CompressedLiquid
+    } else {
+        Phase::SuperheatedVapour
+    }
+}

@@ -1,0 +1,187 @@
+//! The saturation line: saturated liquid and vapour at a given pressure or
+//! temperature, and wet steam between them.
+//!
+//! Up to 623.15 K the two phases come from regions 1 and 2 at (psat, T).
+//! Above it both lie in region 3: the pressure is still the region 4
+//! equation's psat(T), and each phase's density is the root of
+//! p(ρ, T) = psat on its own branch of the Helmholtz equation, so the two
+//! share p and T exactly and their Gibbs energies agree to the
+//! formulation's consistency. At the critical point the phases coincide.
+
+use crate::constants::*;
+use crate::error::{native_input, Error};
+use crate::free_energy::Properties;
+use crate::region3_density::{density, Branch};
+use crate::saturation_line::{saturation_pressure, saturation_temperature};
+use crate::state::{Phase, Region, State};
+use crate::units::{Quantity, Units};
+use crate::{region1, region2, region3};
+
+/// Lowest saturation pressure of the range of validity, psat(273.15 K),
+/// MPa, from the region 4 equation.
+pub fn min_saturation_pressure() -> f64 {
+    saturation_pressure(MIN_TEMPERATURE)
+}
+
+/// The saturated liquid and vapour at one point of the saturation line.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct Saturation {
+    liquid: State,
+    vapour: State,
+}
+
+impl Saturation {
+    /// Saturation at pressure `p`, from psat(273.15 K) to the critical
+    /// pressure, in `units`.
+    pub fn at_pressure(p: f64, units: Units) -> Result<Saturation, Error> {
+        let p = native_input(units, Quantity::Pressure, p)?;
+        let min = min_saturation_pressure();
+        if !(min..=CRITICAL_PRESSURE).contains(&p) {
+            return Err(Error::out_of_range(Quantity::Pressure, p, min, CRITICAL_PRESSURE, units));
+        }
+        let t = if p == CRITICAL_PRESSURE {
+            CRITICAL_TEMPERATURE
+        } else {
+            saturation_temperature(p)
+        };
+        Saturation::at(p, t, units)
+    }
+
+    /// Saturation at temperature `t`, from 273.15 K to the critical
+    /// temperature, in `units`.
+    pub fn at_temperature(t: f64, units: Units) -> Result<Saturation, Error> {
+        let t = native_input(units, Quantity::Temperature, t)?;
+        if !(MIN_TEMPERATURE..=CRITICAL_TEMPERATURE).contains(&t) {
+            return Err(Error::out_of_range(
+                Quantity::Temperature,
+                t,
+                MIN_TEMPERATURE,
+                CRITICAL_TEMPERATURE,
+                units,
+            ));
+        }
+        let p = if t == CRITICAL_TEMPERATURE {
+            CRITICAL_PRESSURE
+        } else {
+            saturation_pressure(t)
+        };
+        Saturation::at(p, t, units)
+    }
+
+    /// Both phases at native `p`, `t` on the line.
+    fn at(p: f64, t: f64, units: Units) -> Result<Saturation, Error> {
+        let (liquid, vapour, region) = if t <= REGION13_TEMPERATURE {
+            (
+                region1::gibbs(p, t).properties(p, t),
+                region2::gibbs(p, t).properties(p, t),
+                (Region::One, Region::Two),
+            )
+        } else if t >= CRITICAL_TEMPERATURE {
+            let critical = region3_phase(p, t, Branch::Supercritical)?;
+            (critical, critical, (Region::Three, Region::Three))
+        } else {
+            (
+                region3_phase(p, t, Branch::Liquid)?,
+                region3_phase(p, t, Branch::Vapour)?,
+                (Region::Three, Region::Three),
+            )
+        };
+        Ok(Saturation {
+            liquid: State::single_phase(liquid, region.0, Phase::SaturatedLiquid, units),
+            vapour: State::single_phase(vapour, region.1, Phase::SaturatedVapour, units),
+        })
+    }
+
+    /// The saturated liquid, x = 0.
+    pub fn liquid(&self) -> &State {
+        &self.liquid
+    }
+
+    /// The saturated vapour, x = 1.
+    pub fn vapour(&self) -> &State {
+        &self.vapour
+    }
+
+    /// Saturation pressure.
+    pub fn pressure(&self) -> f64 {
+        self.liquid.pressure()
+    }
+
+    /// Saturation temperature.
+    pub fn temperature(&self) -> f64 {
+        self.liquid.temperature()
+    }
+
+    /// The same saturation point, read in other units.
+    pub fn in_units(&self, units: Units) -> Saturation {
+        Saturation {
+            liquid: self.liquid.in_units(units),
+            vapour: self.vapour.in_units(units),
+        }
+    }
+
+    /// Wet steam of quality `x` (vapour mass fraction, 0 ≤ x ≤ 1) at this
+    /// point: v, u, h, s and g by the lever rule. x = 0 and x = 1 give the
+    /// saturated phases themselves.
+    pub fn mixture(&self, x: f64) -> Result<State, Error> {
+        check_quality(x)?;
+        if x == 0.0 {
+            return Ok(self.liquid);
+        }
+        if x == 1.0 {
+            return Ok(self.vapour);
+        }
+        let (l, g) = (self.liquid.native(), self.vapour.native());
+        let lever = |a: f64, b: f64| (1.0 - x) * a + x * b;
+        let props = Properties {
+            p: l.p,
+            t: l.t,
+            v: lever(l.v, g.v),
+            u: lever(l.u, g.u),
+            h: lever(l.h, g.h),
+            s: lever(l.s, g.s),
+            g: lever(l.g, g.g),
+            cp: f64::NAN,
+            cv: f64::NAN,
+            w: f64::NAN,
+            alpha_v: f64::NAN,
+            kappa_t: f64::NAN,
+        };
+        Ok(State::wet(props, x, self.liquid.units()))
+    }
+}
+
+/// Refuses a quality that is not a number in [0, 1].
+pub(crate) fn check_quality(x: f64) -> Result<(), Error> {
+    if !x.is_finite() {
+        return Err(Error::NotFinite {
+            quantity: Quantity::Quality,
+        });
+    }
+    if !(0.0..=1.0).contains(&x) {
+        return Err(Error::QualityOutOfRange { value: x });
+    }
+    Ok(())
+}
+
+/// One saturated phase in region 3 at native `p`, `t`.
+fn region3_phase(p: f64, t: f64, branch: Branch) -> Result<Properties, Error> {
+    let rho = density(p, t, branch)?;
+    let mut props = region3::helmholtz(rho, t).properties(rho, t);
+    props.p = p;
+    Ok(props)
+}
+
+impl State {
+    /// Wet steam (or a saturated phase) at pressure `p` and quality `x`.
+    pub fn from_px(p: f64, x: f64, units: Units) -> Result<State, Error> {
+        check_quality(x)?;
+        Saturation::at_pressure(p, units)?.mixture(x)
+    }
+
+    /// Wet steam (or a saturated phase) at temperature `t` and quality `x`.
+    pub fn from_tx(t: f64, x: f64, units: Units) -> Result<State, Error> {
+        check_quality(x)?;
+        Saturation::at_temperature(t, units)?.mixture(x)
+    }
+}

@@ -1,0 +1,206 @@
+//! A solved state of water or steam: every property from one evaluation of
+//! the free-energy derivatives, read in the units of the caller's choice.
+
+use crate::free_energy::Properties;
+use crate::units::{Quantity, Units};
+
+/// The IF97 region whose equation produced a state. Wet steam is region 4.
+#[derive(Clone, Copy, Debug, PartialEq, Eq, Hash)]
+#[repr(u32)]
+pub enum Region {
+    /// Region 1: compressed liquid.
+    One = 1,
+    /// Region 2: vapour.
+    Two = 2,
+    /// Region 3: around the critical point.
+    Three = 3,
+    /// Region 4: the saturation line (wet steam).
+    Four = 4,
+    /// Region 5: high-temperature steam.
+    Five = 5,
+}
+
+impl Region {
+    /// The region's number, 1 to 5, as IF97 numbers them.
+    pub const fn number(self) -> u32 {
+        self as u32
+    }
+}
+
+/// The physical phase of a state.
+#[derive(Clone, Copy, Debug, PartialEq, Eq, Hash)]
+#[repr(u32)]
+pub enum Phase {
+    /// Liquid below the critical temperature, above its saturation pressure.
+    CompressedLiquid = 1,
+    /// Vapour below its saturation temperature's pressure, or gas above the
+    /// critical temperature below the critical pressure.
+    SuperheatedVapour = 2,
+    /// Above both the critical temperature and the critical pressure.
+    SupercriticalFluid = 3,
+    /// A two-phase mixture on the saturation line, 0 < x < 1.
+    WetSteam = 4,
+    /// Liquid on the saturation line, x = 0.
+    SaturatedLiquid = 5,
+    /// Vapour on the saturation line, x = 1.
+    SaturatedVapour = 6,
+    /// Supercooled vapour below its saturation temperature, from the
+    /// metastable-vapour equation; only on explicit request.
+    MetastableVapour = 7,
+}
+
+/// A state of water or steam. Properties that do not exist for the state
+/// (the heat capacities, speed of sound, expansion coefficient and
+/// compressibility of wet steam; the quality of a single-phase state) read
+/// as `None`.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct State {
+    props: Properties,
+    quality: Option<f64>,
+    region: Region,
+    phase: Phase,
+    units: Units,
+}
+
+impl State {
+    /// A single-phase state, or a saturated phase when `phase` says so.
+    pub(crate) fn single_phase(props: Properties, region: Region, phase: Phase, units: Units) -> State {
+        let quality = match phase {
+            Phase::SaturatedLiquid => Some(0.0),
+            Phase::SaturatedVapour => Some(1.0),
+            _ => None,
+        };
+        State {
+            props,
+            quality,
+            region,
+            phase,
+            units,
+        }
+    }
+
+    /// A two-phase mixture of quality `x` in (0, 1); the caller has checked
+    /// `x`. Properties that a mixture lacks are NaN inside and `None` out.
+    pub(crate) fn wet(props: Properties, x: f64, units: Units) -> State {
+        State {
+            props,
+            quality: Some(x),
+            region: Region::Four,
+            phase: Phase::WetSteam,
+            units,
+        }
+    }
+
+    /// The same state, read in other units.
+    pub fn in_units(&self, units: Units) -> State {
+        State { units, ..*self }
+    }
+
+    /// The unit system this state's properties are read in.
+    pub fn units(&self) -> Units {
+        self.units
+    }
+
+    /// The IF97 region of the equation that produced the state.
+    pub fn region(&self) -> Region {
+        self.region
+    }
+
+    /// The physical phase.
+    pub fn phase(&self) -> Phase {
+        self.phase
+    }
+
+    /// The native-unit properties (MPa, K, kJ/kg, …), for the layers built
+    /// on the core. For wet steam the single-phase-only fields are NaN.
+    pub fn native(&self) -> &Properties {
+        &self.props
+    }
+
+    #[inline]
+    fn read(&self, quantity: Quantity, value: f64) -> f64 {
+        self.units.from_native(quantity, value)
+    }
+
+    #[inline]
+    fn read_single_phase(&self, quantity: Quantity, value: f64) -> Option<f64> {
+        (self.phase != Phase::WetSteam).then(|| self.read(quantity, value))
+    }
+
+    /// Pressure.
+    pub fn pressure(&self) -> f64 {
+        self.read(Quantity::Pressure, self.props.p)
+    }
+
+    /// Temperature.
+    pub fn temperature(&self) -> f64 {
+        self.read(Quantity::Temperature, self.props.t)
+    }
+
+    /// Specific volume.
+    pub fn specific_volume(&self) -> f64 {
+        self.read(Quantity::SpecificVolume, self.props.v)
+    }
+
+    /// Density, the reciprocal of the specific volume.
+    pub fn density(&self) -> f64 {
+        self.read(Quantity::Density, 1.0 / self.props.v)
+    }
+
+    /// Specific internal energy.
+    pub fn internal_energy(&self) -> f64 {
+        self.read(Quantity::SpecificEnergy, self.props.u)
+    }
+
+    /// Specific enthalpy.
+    pub fn enthalpy(&self) -> f64 {
+        self.read(Quantity::SpecificEnergy, self.props.h)
+    }
+
+    /// Specific entropy.
+    pub fn entropy(&self) -> f64 {
+        self.read(Quantity::SpecificEntropy, self.props.s)
+    }
+
+    /// Specific Gibbs free energy, h − Ts.
+    pub fn gibbs_energy(&self) -> f64 {
+        self.read(Quantity::SpecificEnergy, self.props.g)
+    }
+
+    /// Specific Helmholtz free energy, u − Ts.
+    pub fn helmholtz_energy(&self) -> f64 {
+        self.read(Quantity::SpecificEnergy, self.props.g - self.props.h + self.props.u)
+    }
+
+    /// Vapour mass fraction: 0 < x < 1 for wet steam, 0 and 1 on the
+    /// saturation lines, `None` off them.
+    pub fn quality(&self) -> Option<f64> {
+        self.quality
+    }
+
+    /// Specific isobaric heat capacity cp; `None` for wet steam.
+    pub fn isobaric_heat_capacity(&self) -> Option<f64> {
+        self.read_single_phase(Quantity::SpecificEntropy, self.props.cp)
+    }
+
+    /// Specific isochoric heat capacity cv; `None` for wet steam.
+    pub fn isochoric_heat_capacity(&self) -> Option<f64> {
+        self.read_single_phase(Quantity::SpecificEntropy, self.props.cv)
+    }
+
+    /// Speed of sound; `None` for wet steam.
+    pub fn speed_of_sound(&self) -> Option<f64> {
+        self.read_single_phase(Quantity::Speed, self.props.w)
+    }
+
+    /// Isobaric cubic expansion coefficient αv = (∂v/∂T)_p / v; `None` for
+    /// wet steam.
+    pub fn expansion_coefficient(&self) -> Option<f64> {
+        self.read_single_phase(Quantity::ExpansionCoefficient, self.props.alpha_v)
+    }
+
+    /// Isothermal compressibility κT = −(∂v/∂p)_T / v; `None` for wet steam.
+    pub fn compressibility(&self) -> Option<f64> {
+        self.read_single_phase(Quantity::Compressibility, self.props.kappa_t)
+    }
+}
