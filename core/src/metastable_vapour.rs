@@ -3,11 +3,11 @@
 
 use crate::constants::{MIN_TEMPERATURE, TRIPLE_POINT_PRESSURE};
 use crate::error::{native_input, Error};
+use crate::region2_metastable::{gibbs, MAX_PRESSURE};
 use crate::saturation::Saturation;
 use crate::saturation_line::saturation_temperature;
 use crate::state::{Phase, Region, State};
 use crate::units::{Quantity, Units};
-use crate::region2_metastable::{gibbs, MAX_PRESSURE};
 
 /// Equilibrium moisture at the cold limit of the equation, R7-97(2012),
 /// section 6.2: the 5 % equilibrium-moisture line.
@@ -39,9 +39,20 @@ impl State {
         let props = gibbs(p, t).properties(p, t);
         if !(MIN_TEMPERATURE..=t_sat).contains(&t) || props.h < h_limit {
             let t_min = limit_temperature(p, h_limit, t_sat).max(MIN_TEMPERATURE);
-            return Err(Error::out_of_range(Quantity::Temperature, t, t_min, t_sat, units));
+            return Err(Error::out_of_range(
+                Quantity::Temperature,
+                t,
+                t_min,
+                t_sat,
+                units,
+            ));
         }
-        Ok(State::single_phase(props, Region::Two, Phase::MetastableVapour, units))
+        Ok(State::single_phase(
+            props,
+            Region::Two,
+            Phase::MetastableVapour,
+            units,
+        ))
     }
 }
 

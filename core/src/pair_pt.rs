@@ -29,10 +29,19 @@ impl State {
                 // Report the caller's pressure, which the density reproduces
                 // to its last bit or two, rather than the recomputed one.
                 props.p = p;
-                (props, Region::Three, branch == region3_density::Branch::Liquid)
+                (
+                    props,
+                    Region::Three,
+                    branch == region3_density::Branch::Liquid,
+                )
             }
         };
-        Ok(State::single_phase(props, region, single_phase(p, t, liquid), units))
+        Ok(State::single_phase(
+            props,
+            region,
+            single_phase(p, t, liquid),
+            units,
+        ))
     }
 }
 

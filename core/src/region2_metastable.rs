@@ -8,7 +8,9 @@
 
 use crate::free_energy::ReducedGibbs;
 use crate::gibbs_parts;
-use crate::region2::{IDEAL_COEFFICIENTS as REGION2_IDEAL, REDUCING_PRESSURE, REDUCING_TEMPERATURE};
+use crate::region2::{
+    IDEAL_COEFFICIENTS as REGION2_IDEAL, REDUCING_PRESSURE, REDUCING_TEMPERATURE,
+};
 use crate::series::Term;
 
 /// Highest pressure of the metastable-vapour equation, MPa.

@@ -36,7 +36,13 @@ pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
         REGION5_MAX_PRESSURE
     };
     if !(p > 0.0 && p <= max_pressure) {
-        return Err(Error::out_of_range(Quantity::Pressure, p, 0.0, max_pressure, units));
+        return Err(Error::out_of_range(
+            Quantity::Pressure,
+            p,
+            0.0,
+            max_pressure,
+            units,
+        ));
     }
     Ok(if t <= REGION13_TEMPERATURE {
         if p >= saturation_pressure(t) {

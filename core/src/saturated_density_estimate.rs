@@ -14,7 +14,8 @@ use crate::math::{cbrt, exp, powf};
 pub(crate) fn liquid(t: f64) -> f64 {
     let theta = 1.0 - t / CRITICAL_TEMPERATURE;
     let c = cbrt(theta); // θ^(1/3)
-    let sum = 1.99274064 * c + 1.09965342 * c * c - 0.510839303 * powf(c, 5.0)
+    let sum = 1.99274064 * c + 1.09965342 * c * c
+        - 0.510839303 * powf(c, 5.0)
         - 1.75493479 * powf(c, 16.0)
         - 45.5170352 * powf(c, 43.0)
         - 6.74694450e5 * powf(c, 110.0);

@@ -37,7 +37,13 @@ impl Saturation {
         let p = native_input(units, Quantity::Pressure, p)?;
         let min = min_saturation_pressure();
         if !(min..=CRITICAL_PRESSURE).contains(&p) {
-            return Err(Error::out_of_range(Quantity::Pressure, p, min, CRITICAL_PRESSURE, units));
+            return Err(Error::out_of_range(
+                Quantity::Pressure,
+                p,
+                min,
+                CRITICAL_PRESSURE,
+                units,
+            ));
         }
         let t = if p == CRITICAL_PRESSURE {
             CRITICAL_TEMPERATURE

@@ -107,6 +107,9 @@ mod tests {
         assert!((s.y * scale - yfy).abs() < 1e-13);
         let yyfyy = 2.0 * powi(x, 3) * powi(y, 2) * 2.0 + 5.0 * x / y * 2.0;
         assert!((s.yy * scale - yyfyy).abs() < 1e-13);
-        assert!((y_weighted_sum(&terms, &powers::<4>(x), &powers::<4>(y), 1) * scale - yfy).abs() < 1e-13);
+        assert!(
+            (y_weighted_sum(&terms, &powers::<4>(x), &powers::<4>(y), 1) * scale - yfy).abs()
+                < 1e-13
+        );
     }
 }

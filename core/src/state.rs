@@ -49,6 +49,27 @@ pub enum Phase {
     MetastableVapour = 7,
 }
 
+impl Phase {
+    /// The phase's name in the trade's words, e.g. "superheated vapour".
+    pub const fn name(self) -> &'static str {
+        match self {
+            Phase::CompressedLiquid => "compressed liquid",
+            Phase::SuperheatedVapour => "superheated vapour",
+            Phase::SupercriticalFluid => "supercritical fluid",
+            Phase::WetSteam => "wet steam",
+            Phase::SaturatedLiquid => "saturated liquid",
+            Phase::SaturatedVapour => "saturated vapour",
+            Phase::MetastableVapour => "metastable vapour",
+        }
+    }
+}
+
+impl core::fmt::Display for Phase {
+    fn fmt(&self, f: &mut core::fmt::Formatter<'_>) -> core::fmt::Result {
+        f.write_str(self.name())
+    }
+}
+
 /// A state of water or steam. Properties that do not exist for the state
 /// (the heat capacities, speed of sound, expansion coefficient and
 /// compressibility of wet steam; the quality of a single-phase state) read
@@ -64,7 +85,12 @@ pub struct State {
 
 impl State {
     /// A single-phase state, or a saturated phase when `phase` says so.
-    pub(crate) fn single_phase(props: Properties, region: Region, phase: Phase, units: Units) -> State {
+    pub(crate) fn single_phase(
+        props: Properties,
+        region: Region,
+        phase: Phase,
+        units: Units,
+    ) -> State {
         let quality = match phase {
             Phase::SaturatedLiquid => Some(0.0),
             Phase::SaturatedVapour => Some(1.0),
@@ -169,7 +195,10 @@ impl State {
 
     /// Specific Helmholtz free energy, u − Ts.
     pub fn helmholtz_energy(&self) -> f64 {
-        self.read(Quantity::SpecificEnergy, self.props.g - self.props.h + self.props.u)
+        self.read(
+            Quantity::SpecificEnergy,
+            self.props.g - self.props.h + self.props.u,
+        )
     }
 
     /// Vapour mass fraction: 0 < x < 1 for wet steam, 0 and 1 on the

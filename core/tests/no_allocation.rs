@@ -40,7 +40,8 @@ fn read_all(s: Result<State, ebullio::Error>) -> f64 {
             let mut sum = s.pressure() + s.temperature() + s.specific_volume() + s.density();
             sum += s.internal_energy() + s.enthalpy() + s.entropy();
             sum += s.gibbs_energy() + s.helmholtz_energy();
-            sum += s.isobaric_heat_capacity().unwrap_or(0.0) + s.isochoric_heat_capacity().unwrap_or(0.0);
+            sum += s.isobaric_heat_capacity().unwrap_or(0.0)
+                + s.isochoric_heat_capacity().unwrap_or(0.0);
             sum += s.speed_of_sound().unwrap_or(0.0) + s.quality().unwrap_or(0.0);
             sum += s.expansion_coefficient().unwrap_or(0.0) + s.compressibility().unwrap_or(0.0);
             sum += f64::from(s.region().number()) + f64::from(s.phase() as u32);
@@ -58,7 +59,15 @@ fn exercise_everything() -> f64 {
     for units in Units::ALL {
         let p = |x: f64| units.from_native(ebullio::Quantity::Pressure, x);
         let t = |x: f64| units.from_native(ebullio::Quantity::Temperature, x);
-        for (pp, tt) in [(3.0, 300.0), (0.0035, 700.0), (25.0, 650.0), (20.0, 640.0), (30.0, 1500.0), (200.0, 300.0), (1.0, 200.0)] {
+        for (pp, tt) in [
+            (3.0, 300.0),
+            (0.0035, 700.0),
+            (25.0, 650.0),
+            (20.0, 640.0),
+            (30.0, 1500.0),
+            (200.0, 300.0),
+            (1.0, 200.0),
+        ] {
             sum += read_all(State::from_pt(p(pp), t(tt), units));
             sum += ebullio::enthalpy_from_pt(p(pp), t(tt), units).unwrap_or(0.0);
         }
@@ -85,17 +94,21 @@ fn exercise_everything() -> f64 {
     // The raw equations, boundaries and backward equations.
     sum += region1::gibbs(3.0, 300.0).properties(3.0, 300.0).h + region1::enthalpy(3.0, 300.0);
     sum += region2::gibbs(1.0, 500.0).properties(1.0, 500.0).h + region2::enthalpy(1.0, 500.0);
-    sum += region2_metastable::gibbs(1.0, 450.0).properties(1.0, 450.0).h;
+    sum += region2_metastable::gibbs(1.0, 450.0)
+        .properties(1.0, 450.0)
+        .h;
     sum += region3::helmholtz(500.0, 650.0).properties(500.0, 650.0).p;
     sum += region5::gibbs(1.0, 1500.0).properties(1.0, 1500.0).h + region5::enthalpy(1.0, 1500.0);
-    sum += saturation_line::saturation_pressure(400.0) + saturation_line::saturation_temperature(1.0);
+    sum +=
+        saturation_line::saturation_pressure(400.0) + saturation_line::saturation_temperature(1.0);
     sum += saturation_line::saturation_pressure_slope(400.0) + ebullio::min_saturation_pressure();
     sum += boundary_b23::pressure(700.0) + boundary_b23::temperature(50.0);
     sum += r7_97::temperature_region1_ph(3.0, 500.0) + r7_97::temperature_region1_ps(3.0, 0.5);
     sum += r7_97::temperature_region2_ph(5.0, 3000.0) + r7_97::temperature_region2_ps(5.0, 6.0);
     sum += sr2_01::pressure_region1_hs(500.0, 1.0) + sr2_01::pressure_region2_hs(3000.0, 6.0);
     sum += sr3_03::temperature_region3_ph(25.0, 1800.0) + sr3_03::volume_region3_ps(25.0, 4.0);
-    sum += sr4_04::pressure_region3_hs(1800.0, 4.0) + sr4_04::saturation_temperature_hs(2400.0, 6.0);
+    sum +=
+        sr4_04::pressure_region3_hs(1800.0, 4.0) + sr4_04::saturation_temperature_hs(2400.0, 6.0);
     sum
 }
 
@@ -106,7 +119,12 @@ fn main() {
     let sum = std::hint::black_box(exercise_everything());
     let after = ALLOCATIONS.load(Ordering::SeqCst);
     assert!(sum.is_finite());
-    assert_eq!(after - before, 0, "the engine allocated {} times", after - before);
+    assert_eq!(
+        after - before,
+        0,
+        "the engine allocated {} times",
+        after - before
+    );
     // The counter itself works: a Vec is seen.
     let probe = std::hint::black_box(vec![1u8; 16]);
     assert!(ALLOCATIONS.load(Ordering::SeqCst) > after);

@@ -7,7 +7,9 @@ use ebullio::{Region, State, Units};
 /// A grid of (p, T) states covering regions 1, 2, 3 and 5.
 fn grid() -> Vec<(f64, f64)> {
     let mut states = Vec::new();
-    for &p in &[0.001, 0.01, 0.1, 1.0, 5.0, 10.0, 16.0, 20.0, 25.0, 30.0, 50.0, 70.0, 100.0] {
+    for &p in &[
+        0.001, 0.01, 0.1, 1.0, 5.0, 10.0, 16.0, 20.0, 25.0, 30.0, 50.0, 70.0, 100.0,
+    ] {
         let mut t = 275.0;
         while t <= 2273.15 {
             if t <= 1073.15 || p <= 50.0 {
@@ -35,11 +37,21 @@ fn heat_capacity_difference_identity() {
     // cp − cv = T v αv² / κT (e.g. any thermodynamics text; IAPWS AN3-07).
     for (p, t) in grid() {
         let s = State::from_pt(p, t, Units::Native).unwrap();
-        let (cp, cv) = (s.isobaric_heat_capacity().unwrap(), s.isochoric_heat_capacity().unwrap());
-        let (alpha, kappa) = (s.expansion_coefficient().unwrap(), s.compressibility().unwrap());
+        let (cp, cv) = (
+            s.isobaric_heat_capacity().unwrap(),
+            s.isochoric_heat_capacity().unwrap(),
+        );
+        let (alpha, kappa) = (
+            s.expansion_coefficient().unwrap(),
+            s.compressibility().unwrap(),
+        );
         // 1/MPa and m³/kg: T v α²/κT in MPa·m³/(kg·K) = 10³ kJ/(kg·K).
         let rhs = t * s.specific_volume() * alpha * alpha / kappa * 1e3;
-        assert!(((cp - cv) - rhs).abs() <= 1e-9 * cp, "{p} MPa {t} K: {} vs {rhs}", cp - cv);
+        assert!(
+            ((cp - cv) - rhs).abs() <= 1e-9 * cp,
+            "{p} MPa {t} K: {} vs {rhs}",
+            cp - cv
+        );
     }
 }
 
@@ -67,13 +79,20 @@ fn derivatives_match_central_differences() {
         // the liquid's nearly constant g(p) large enough that the difference
         // of g stands well above its rounding.
         let dt = 2e-6 * t;
-        let dp = if s.region() == Region::One { (1e-5 * p).max(1e-4) } else { 1e-5 * p };
+        let dp = if s.region() == Region::One {
+            (1e-5 * p).max(1e-4)
+        } else {
+            1e-5 * p
+        };
         let neighbours = [at(p, t - dt), at(p, t + dt), at(p - dp, t), at(p + dp, t)];
         // Stay inside the state's region (and the range) for the differences.
         let [Some(lo_t), Some(hi_t), Some(lo_p), Some(hi_p)] = neighbours else {
             continue;
         };
-        if [&lo_t, &hi_t, &lo_p, &hi_p].iter().any(|n| n.region() != s.region()) {
+        if [&lo_t, &hi_t, &lo_p, &hi_p]
+            .iter()
+            .any(|n| n.region() != s.region())
+        {
             continue;
         }
         let cp_fd = (hi_t.enthalpy() - lo_t.enthalpy()) / (2.0 * dt);
@@ -83,7 +102,10 @@ fn derivatives_match_central_differences() {
         let kappa_fd = -(hi_p.specific_volume().ln() - lo_p.specific_volume().ln()) / (2.0 * dp);
         let alpha_fd = (hi_t.specific_volume().ln() - lo_t.specific_volume().ln()) / (2.0 * dt);
         let near = |what: &str, a: f64, b: f64, tol: f64| {
-            assert!((a - b).abs() <= tol * b.abs().max(1e-12), "{p} MPa {t} K: {what} {a} vs {b}");
+            assert!(
+                (a - b).abs() <= tol * b.abs().max(1e-12),
+                "{p} MPa {t} K: {what} {a} vs {b}"
+            );
         };
         near("cp", s.isobaric_heat_capacity().unwrap(), cp_fd, 1e-5);
         near("s", s.entropy(), s_fd, 1e-6);

@@ -20,13 +20,18 @@ fn assert_consistent(at: &str, a: &Properties, b: &Properties) {
         ("Δg, kJ/kg", (a.g - b.g).abs(), 0.2),
     ];
     for (what, value, limit) in checks {
-        assert!(value <= limit, "{at}: {what} = {value:.3e} exceeds {limit:.1e}");
+        assert!(
+            value <= limit,
+            "{at}: {what} = {value:.3e} exceeds {limit:.1e}"
+        );
     }
 }
 
 /// Region 3 at (p, T), with the density solved through the public API.
 fn region3_at(p: f64, t: f64) -> Properties {
-    let rho = ebullio::State::from_pt(p, t, Units::Native).unwrap().density();
+    let rho = ebullio::State::from_pt(p, t, Units::Native)
+        .unwrap()
+        .density();
     region3::helmholtz(rho, t).properties(rho, t)
 }
 
@@ -38,7 +43,9 @@ fn regions_1_and_3_meet_at_623_15_k() {
     for k in 1..=20 {
         let p = p_low + (100.0 - p_low) * f64::from(k) / 20.0;
         let r1 = region1::gibbs(p, t).properties(p, t);
-        let rho = ebullio::State::from_pt(p, t + 1e-9, Units::Native).unwrap().density();
+        let rho = ebullio::State::from_pt(p, t + 1e-9, Units::Native)
+            .unwrap()
+            .density();
         let r3 = region3::helmholtz(rho, t).properties(rho, t);
         assert_consistent(&format!("1/3 at {p:.3} MPa"), &r1, &r3);
     }
@@ -79,14 +86,22 @@ fn clausius_clapeyron_along_the_saturation_line() {
         let sat = Saturation::at_temperature(t, Units::Native).unwrap();
         let (l, v) = (sat.liquid(), sat.vapour());
         // kJ/(kg·K) over m³/kg is kPa/K; the slope is in MPa/K.
-        let clapeyron = (v.entropy() - l.entropy()) / (v.specific_volume() - l.specific_volume()) / 1e3;
+        let clapeyron =
+            (v.entropy() - l.entropy()) / (v.specific_volume() - l.specific_volume()) / 1e3;
         let slope = saturation_pressure_slope(t);
         let limit = if t <= 623.15 { 5e-4 } else { 1e-3 };
         let rel = (clapeyron / slope - 1.0).abs();
-        assert!(rel <= limit, "T = {t} K: Clapeyron {clapeyron}, slope {slope}, relative {rel:.2e}");
+        assert!(
+            rel <= limit,
+            "T = {t} K: Clapeyron {clapeyron}, slope {slope}, relative {rel:.2e}"
+        );
         // The enthalpy form, Δh/(T Δv), is the same relation.
-        let by_enthalpy = (v.enthalpy() - l.enthalpy()) / (t * (v.specific_volume() - l.specific_volume())) / 1e3;
-        assert!((by_enthalpy / clapeyron - 1.0).abs() <= limit, "T = {t} K: enthalpy form");
+        let by_enthalpy =
+            (v.enthalpy() - l.enthalpy()) / (t * (v.specific_volume() - l.specific_volume())) / 1e3;
+        assert!(
+            (by_enthalpy / clapeyron - 1.0).abs() <= limit,
+            "T = {t} K: enthalpy form"
+        );
         t += if t < 600.0 { 7.3 } else { 1.7 };
     }
 }
@@ -98,6 +113,9 @@ fn saturation_slope_matches_a_central_difference() {
         let fd = (ebullio::saturation_line::saturation_pressure(t + dt)
             - ebullio::saturation_line::saturation_pressure(t - dt))
             / (2.0 * dt);
-        assert!((saturation_pressure_slope(t) / fd - 1.0).abs() < 1e-7, "T = {t} K");
+        assert!(
+            (saturation_pressure_slope(t) / fd - 1.0).abs() < 1e-7,
+            "T = {t} K"
+        );
     }
 }

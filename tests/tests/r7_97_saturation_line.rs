@@ -15,7 +15,15 @@ fn saturation_pressure_table35() {
 #[test]
 fn saturation_temperature_table36() {
     // recalled from IAPWS R7-97(2012), Table 36
-    assert_printed("Tsat(0.1 MPa)", saturation_temperature(0.1), "0.372755919e3");
+    assert_printed(
+        "Tsat(0.1 MPa)",
+        saturation_temperature(0.1),
+        "0.372755919e3",
+    );
     assert_printed("Tsat(1 MPa)", saturation_temperature(1.0), "0.453035632e3");
-    assert_printed("Tsat(10 MPa)", saturation_temperature(10.0), "0.584149488e3");
+    assert_printed(
+        "Tsat(10 MPa)",
+        saturation_temperature(10.0),
+        "0.584149488e3",
+    );
 }

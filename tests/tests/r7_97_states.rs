@@ -5,15 +5,32 @@
 use ebullio::{Phase, Region, Saturation, State, Units};
 use ebullio_conformance::{assert_printed, assert_relative};
 
-
 #[test]
 fn region3_density_from_pressure_and_temperature() {
     // recalled from IAPWS R7-97(2012), Table 33: (ρ, T) → p; here p, T → ρ
     // must give back the table's density and its printed properties.
     let rows = [
-        (500.0, 650.0, 25.5837018, "0.186343019e4", Phase::SupercriticalFluid),
-        (200.0, 650.0, 22.2930643, "0.237512401e4", Phase::SupercriticalFluid),
-        (500.0, 750.0, 78.3095639, "0.225868845e4", Phase::SupercriticalFluid),
+        (
+            500.0,
+            650.0,
+            25.5837018,
+            "0.186343019e4",
+            Phase::SupercriticalFluid,
+        ),
+        (
+            200.0,
+            650.0,
+            22.2930643,
+            "0.237512401e4",
+            Phase::SupercriticalFluid,
+        ),
+        (
+            500.0,
+            750.0,
+            78.3095639,
+            "0.225868845e4",
+            Phase::SupercriticalFluid,
+        ),
     ];
     for (rho, t, p, h, phase) in rows {
         let state = State::from_pt(p, t, Units::Native).unwrap();
@@ -40,7 +57,11 @@ fn region_location_follows_figure1() {
         (30.0, 2000.0, Region::Five),
     ];
     for (p, t, region) in cases {
-        assert_eq!(State::from_pt(p, t, Units::Native).unwrap().region(), region, "{p} MPa {t} K");
+        assert_eq!(
+            State::from_pt(p, t, Units::Native).unwrap().region(),
+            region,
+            "{p} MPa {t} K"
+        );
     }
 }
 
@@ -69,7 +90,9 @@ fn saturated_phases_share_gibbs_energy() {
     // IF97's boundary consistency, not exactly; R7-97 section 8 lists the
     // permissible inconsistency as Δg = 0.2 kJ/kg (recalled). In region 3 both
     // phases come from one Helmholtz equation at psat(T).
-    for t in [275.0, 300.0, 373.15, 450.0, 550.0, 620.0, 623.15, 630.0, 640.0, 645.0, 647.0] {
+    for t in [
+        275.0, 300.0, 373.15, 450.0, 550.0, 620.0, 623.15, 630.0, 640.0, 645.0, 647.0,
+    ] {
         let sat = Saturation::at_temperature(t, Units::Native).unwrap();
         let dg = sat.liquid().gibbs_energy() - sat.vapour().gibbs_energy();
         assert!(dg.abs() < 0.2, "T = {t} K: g' − g'' = {dg} kJ/kg");
@@ -85,8 +108,18 @@ fn saturation_at_pressure_and_temperature_agree() {
         let by_p = Saturation::at_pressure(p, Units::Native).unwrap();
         let by_t = Saturation::at_temperature(by_p.temperature(), Units::Native).unwrap();
         assert_relative("psat(Tsat(p))", by_t.pressure(), p, 1e-12);
-        assert_relative("h'", by_t.liquid().enthalpy(), by_p.liquid().enthalpy(), 1e-9);
-        assert_relative("h''", by_t.vapour().enthalpy(), by_p.vapour().enthalpy(), 1e-9);
+        assert_relative(
+            "h'",
+            by_t.liquid().enthalpy(),
+            by_p.liquid().enthalpy(),
+            1e-9,
+        );
+        assert_relative(
+            "h''",
+            by_t.vapour().enthalpy(),
+            by_p.vapour().enthalpy(),
+            1e-9,
+        );
     }
 }
 
@@ -96,7 +129,12 @@ fn critical_point_phases_coincide() {
     assert_eq!(sat.liquid().density(), sat.vapour().density());
     // The region 3 equation passes through the critical point (R7-97 section 5):
     // the density at (pc, Tc) is ρc to the equation's precision.
-    assert_relative("ρ at the critical point", sat.liquid().density(), 322.0, 1e-3);
+    assert_relative(
+        "ρ at the critical point",
+        sat.liquid().density(),
+        322.0,
+        1e-3,
+    );
 }
 
 #[test]
@@ -107,9 +145,21 @@ fn wet_steam_follows_the_lever_rule() {
     assert_eq!(wet.phase(), Phase::WetSteam);
     assert_eq!(wet.region(), Region::Four);
     assert_eq!(wet.quality(), Some(0.25));
-    assert_eq!(wet.enthalpy(), lever(sat.liquid().enthalpy(), sat.vapour().enthalpy()));
-    assert_eq!(wet.entropy(), lever(sat.liquid().entropy(), sat.vapour().entropy()));
-    assert_eq!(wet.specific_volume(), lever(sat.liquid().specific_volume(), sat.vapour().specific_volume()));
+    assert_eq!(
+        wet.enthalpy(),
+        lever(sat.liquid().enthalpy(), sat.vapour().enthalpy())
+    );
+    assert_eq!(
+        wet.entropy(),
+        lever(sat.liquid().entropy(), sat.vapour().entropy())
+    );
+    assert_eq!(
+        wet.specific_volume(),
+        lever(
+            sat.liquid().specific_volume(),
+            sat.vapour().specific_volume()
+        )
+    );
     // Properties a two-phase mixture does not have are undefined, not numbers.
     assert_eq!(wet.isobaric_heat_capacity(), None);
     assert_eq!(wet.isochoric_heat_capacity(), None);
@@ -117,8 +167,16 @@ fn wet_steam_follows_the_lever_rule() {
     assert_eq!(wet.expansion_coefficient(), None);
     assert_eq!(wet.compressibility(), None);
     // x = 0 and x = 1 are the saturated phases themselves.
-    assert_eq!(State::from_px(0.1, 0.0, Units::Native).unwrap(), *sat.liquid());
-    assert_eq!(State::from_tx(sat.temperature(), 1.0, Units::Native).unwrap().phase(), Phase::SaturatedVapour);
+    assert_eq!(
+        State::from_px(0.1, 0.0, Units::Native).unwrap(),
+        *sat.liquid()
+    );
+    assert_eq!(
+        State::from_tx(sat.temperature(), 1.0, Units::Native)
+            .unwrap()
+            .phase(),
+        Phase::SaturatedVapour
+    );
 }
 
 #[test]
@@ -132,10 +190,17 @@ fn single_phase_states_have_no_quality() {
 fn metastable_vapour_only_on_request() {
     // R7-97 Table 18's first state (1 MPa, 450 K, below Tsat = 453.04 K):
     // from_pt gives the stable liquid, metastable_vapour the supercooled vapour.
-    assert_eq!(State::from_pt(1.0, 450.0, Units::Native).unwrap().phase(), Phase::CompressedLiquid);
+    assert_eq!(
+        State::from_pt(1.0, 450.0, Units::Native).unwrap().phase(),
+        Phase::CompressedLiquid
+    );
     let meta = State::metastable_vapour(1.0, 450.0, Units::Native).unwrap();
     assert_eq!(meta.phase(), Phase::MetastableVapour);
-    assert_printed("v, R7-97 Table 18 (recalled)", meta.specific_volume(), "0.192516540");
+    assert_printed(
+        "v, R7-97 Table 18 (recalled)",
+        meta.specific_volume(),
+        "0.192516540",
+    );
     // Above the saturation temperature, and far below it (past the 5 %
     // moisture line), the equation is refused.
     assert!(State::metastable_vapour(1.0, 460.0, Units::Native).is_err());
@@ -145,7 +210,14 @@ fn metastable_vapour_only_on_request() {
 
 #[test]
 fn enthalpy_alone_is_the_full_states_enthalpy_to_the_bit() {
-    for (p, t) in [(3.0, 300.0), (80.0, 500.0), (0.0035, 700.0), (30.0, 700.0), (30.0, 2000.0), (25.0, 650.0)] {
+    for (p, t) in [
+        (3.0, 300.0),
+        (80.0, 500.0),
+        (0.0035, 700.0),
+        (30.0, 700.0),
+        (30.0, 2000.0),
+        (25.0, 650.0),
+    ] {
         for units in Units::ALL {
             let (p, t) = (
                 units.from_native(ebullio::Quantity::Pressure, p),

@@ -13,7 +13,11 @@ fn factors_match_nist_sp_811_appendix_b8() {
     assert_printed("ft³/lb → m³/kg", FT3_PER_LBM_M3_PER_KG, "6.242796e-2");
     assert_printed("lb/ft³ → kg/m³", 1.0 / FT3_PER_LBM_M3_PER_KG, "1.601846e1");
     assert_printed("Btu_IT/lb → J/kg", BTU_PER_LBM_KJ_PER_KG * 1e3, "2.326e3");
-    assert_printed("Btu_IT/(lb·°R) → J/(kg·K)", BTU_PER_LBM_R_KJ_PER_KG_K * 1e3, "4.1868e3");
+    assert_printed(
+        "Btu_IT/(lb·°R) → J/(kg·K)",
+        BTU_PER_LBM_R_KJ_PER_KG_K * 1e3,
+        "4.1868e3",
+    );
     assert_printed("ft → m", FOOT_M, "3.048e-1");
     assert_printed("lb → kg", POUND_MASS_KG, "4.5359237e-1");
 }
@@ -52,7 +56,10 @@ fn every_quantity_round_trips_in_every_system() {
         for q in quantities {
             let x = 123.456;
             let back = units.from_native(q, units.to_native(q, x));
-            assert!((back - x).abs() <= 4.0 * f64::EPSILON * x, "{units:?} {q:?}");
+            assert!(
+                (back - x).abs() <= 4.0 * f64::EPSILON * x,
+                "{units:?} {q:?}"
+            );
             assert!(units.symbol(q).len() < 16);
         }
     }
@@ -70,9 +77,15 @@ fn a_state_reads_the_same_in_every_system() {
         let h = units.to_native(Quantity::SpecificEnergy, s.enthalpy());
         assert!((h / native.enthalpy() - 1.0).abs() < 1e-13, "{units:?}");
         let v = units.to_native(Quantity::SpecificVolume, s.specific_volume());
-        assert!((v / native.specific_volume() - 1.0).abs() < 1e-13, "{units:?}");
+        assert!(
+            (v / native.specific_volume() - 1.0).abs() < 1e-13,
+            "{units:?}"
+        );
         // Reading the native state in these units gives the same numbers.
         let view = native.in_units(units);
-        assert!((view.entropy() / s.entropy() - 1.0).abs() < 1e-13, "{units:?}");
+        assert!(
+            (view.entropy() / s.entropy() - 1.0).abs() < 1e-13,
+            "{units:?}"
+        );
     }
 }
