@@ -1,6 +1,9 @@
 //! The errors every call can return. Values in messages are in the caller's
 //! units, so a message can be shown to the person who typed the input.
 
+use core::fmt::{self, Write};
+
+use crate::math::{floor, log10};
 use crate::units::{Quantity, Units};
 
 /// Why a state could not be computed.
@@ -17,7 +20,9 @@ pub enum Error {
     /// An input lies outside the formulation's range of validity for the
     /// state; `min` and `max` bound it, in the caller's units.
     #[error(
-        "{quantity} {value} {unit} is outside the valid range {min} to {max} {unit}",
+        "{quantity} {value} {unit} is outside the valid range {} to {} {unit}",
+        Significant(*min),
+        Significant(*max),
         unit = units.symbol(*quantity)
     )]
     OutOfRange {
@@ -76,5 +81,79 @@ pub(crate) fn native_input(units: Units, quantity: Quantity, value: f64) -> Resu
         Ok(units.to_native(quantity, value))
     } else {
         Err(Error::NotFinite { quantity })
+    }
+}
+
+/// A range bound printed to seven significant digits without trailing
+/// zeros: limits converted to the caller's units (14503.77 psia) read as
+/// numbers a person would write, not as 14503.773773020925.
+struct Significant(f64);
+
+impl fmt::Display for Significant {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        let x = self.0;
+        if x == 0.0 || !x.is_finite() {
+            return write!(f, "{x}");
+        }
+        let exponent = floor(log10(x.abs())) as i32;
+        let decimals = (6 - exponent).clamp(0, 17) as usize;
+        let mut buffer = StackText::default();
+        write!(buffer, "{x:.decimals$}")?;
+        let mut text = buffer.as_str();
+        if text.contains('.') {
+            text = text.trim_end_matches('0').trim_end_matches('.');
+        }
+        f.write_str(text)
+    }
+}
+
+/// A fixed-size text buffer, so formatting needs no heap.
+struct StackText {
+    bytes: [u8; 64],
+    len: usize,
+}
+
+impl Default for StackText {
+    fn default() -> Self {
+        StackText {
+            bytes: [0; 64],
+            len: 0,
+        }
+    }
+}
+
+impl StackText {
+    fn as_str(&self) -> &str {
+        // Only whole `str`s are ever written in, so this cannot fail.
+        core::str::from_utf8(&self.bytes[..self.len]).unwrap_or("")
+    }
+}
+
+impl Write for StackText {
+    fn write_str(&mut self, s: &str) -> fmt::Result {
+        let end = self.len + s.len();
+        if end > self.bytes.len() {
+            return Err(fmt::Error);
+        }
+        self.bytes[self.len..end].copy_from_slice(s.as_bytes());
+        self.len = end;
+        Ok(())
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    extern crate std;
+    use super::Significant;
+    use std::string::ToString;
+
+    #[test]
+    fn bounds_print_to_seven_significant_digits() {
+        assert_eq!(Significant(14503.773773020925).to_string(), "14503.77");
+        assert_eq!(Significant(2000.0).to_string(), "2000");
+        assert_eq!(Significant(0.000611212677).to_string(), "0.0006112127");
+        assert_eq!(Significant(1e8).to_string(), "100000000");
+        assert_eq!(Significant(0.0).to_string(), "0");
+        assert_eq!(Significant(-459.67).to_string(), "-459.67");
     }
 }

@@ -47,3 +47,8 @@ pub use pair_pt::enthalpy_from_pt;
 pub use saturation::{min_saturation_pressure, Saturation};
 pub use state::{Phase, Region, State};
 pub use units::{Quantity, Units};
+
+/// The README's Rust example, compiled and run as a doctest.
+#[cfg(doctest)]
+#[doc = include_str!("../../README.md")]
+struct ReadmeExample;

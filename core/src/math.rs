@@ -25,6 +25,16 @@ pub(crate) fn powf(x: f64, y: f64) -> f64 {
 }
 
 #[inline]
+pub(crate) fn log10(x: f64) -> f64 {
+    libm::log10(x)
+}
+
+#[inline]
+pub(crate) fn floor(x: f64) -> f64 {
+    libm::floor(x)
+}
+
+#[inline]
 pub(crate) fn cbrt(x: f64) -> f64 {
     libm::cbrt(x)
 }

@@ -88,7 +88,8 @@ mod tests {
         let p = powers::<40>(1.37);
         for (k, &pk) in p.iter().enumerate() {
             let direct = powi(1.37, k as i32);
-            assert!((pk - direct).abs() <= 4.0 * f64::EPSILON * direct, "{k}");
+            // Both round once per multiplication, about log2(k) times each.
+            assert!((pk - direct).abs() <= 16.0 * f64::EPSILON * direct, "{k}");
         }
     }
 
