@@ -45,6 +45,14 @@ pub enum Error {
         value: f64,
     },
 
+    /// No state within the formulation's range has this pair of values
+    /// (for pairs whose valid range cannot be given as one interval).
+    #[error("no state within the range of validity has this {pair}")]
+    NoStateInRange {
+        /// The pair, in words, e.g. "specific volume and internal energy".
+        pair: &'static str,
+    },
+
     /// An iteration did not reach the formulation's precision within its
     /// bound; no approximate state is returned.
     #[error("the {what} iteration did not converge")]

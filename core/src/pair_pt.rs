@@ -57,5 +57,5 @@ pub fn enthalpy_from_pt(p: f64, t: f64, units: Units) -> Result<f64, Error> {
         Located::Region5 => region5::enthalpy(p_native, t_native),
         Located::Region3(_) => return State::from_pt(p, t, units).map(|s| s.enthalpy()),
     };
-    Ok(units.from_native(Quantity::SpecificEnergy, h))
+    Ok(units.from_native(Quantity::Enthalpy, h))
 }

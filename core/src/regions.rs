@@ -79,3 +79,13 @@ pub(crate) fn single_phase(p: f64, t: f64, liquid: bool) -> Phase {
         Phase::SuperheatedVapour
     }
 }
+
+/// The phase of a region 3 state at `p` (MPa) and `t` (K): liquid-like at
+/// or above psat(T) below the critical temperature.
+pub(crate) fn region3_phase(p: f64, t: f64) -> Phase {
+    single_phase(
+        p,
+        t,
+        t < CRITICAL_TEMPERATURE && p >= saturation_pressure(t),
+    )
+}

@@ -175,17 +175,17 @@ impl State {
 
     /// Specific internal energy.
     pub fn internal_energy(&self) -> f64 {
-        self.read(Quantity::SpecificEnergy, self.props.u)
+        self.read(Quantity::InternalEnergy, self.props.u)
     }
 
     /// Specific enthalpy.
     pub fn enthalpy(&self) -> f64 {
-        self.read(Quantity::SpecificEnergy, self.props.h)
+        self.read(Quantity::Enthalpy, self.props.h)
     }
 
     /// Specific entropy.
     pub fn entropy(&self) -> f64 {
-        self.read(Quantity::SpecificEntropy, self.props.s)
+        self.read(Quantity::Entropy, self.props.s)
     }
 
     /// Specific Gibbs free energy, h − Ts.

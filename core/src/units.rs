@@ -36,9 +36,15 @@ pub enum Quantity {
     SpecificVolume,
     /// Density.
     Density,
-    /// Specific internal energy, enthalpy, Gibbs and Helmholtz energy.
+    /// Specific enthalpy.
+    Enthalpy,
+    /// Specific internal energy.
+    InternalEnergy,
+    /// Specific entropy.
+    Entropy,
+    /// Any other specific energy: Gibbs and Helmholtz free energy.
     SpecificEnergy,
-    /// Specific entropy and heat capacities.
+    /// Specific heat capacities, and any other kJ/(kg·K) quantity.
     SpecificEntropy,
     /// Speed of sound.
     Speed,
@@ -59,12 +65,52 @@ impl Quantity {
             Quantity::TemperatureDifference => "temperature difference",
             Quantity::SpecificVolume => "specific volume",
             Quantity::Density => "density",
+            Quantity::Enthalpy => "enthalpy",
+            Quantity::InternalEnergy => "internal energy",
+            Quantity::Entropy => "entropy",
             Quantity::SpecificEnergy => "specific energy",
             Quantity::SpecificEntropy => "specific entropy",
             Quantity::Speed => "speed",
             Quantity::ExpansionCoefficient => "expansion coefficient",
             Quantity::Compressibility => "compressibility",
             Quantity::Quality => "quality",
+        }
+    }
+}
+
+/// What a quantity is measured in: enthalpy, internal energy and the free
+/// energies share one unit, entropy and the heat capacities another.
+#[derive(Clone, Copy)]
+enum UnitKind {
+    Pressure,
+    Temperature,
+    TemperatureDifference,
+    SpecificVolume,
+    Density,
+    SpecificEnergy,
+    SpecificEntropy,
+    Speed,
+    ExpansionCoefficient,
+    Compressibility,
+    Dimensionless,
+}
+
+impl Quantity {
+    const fn unit_kind(self) -> UnitKind {
+        match self {
+            Quantity::Pressure => UnitKind::Pressure,
+            Quantity::Temperature => UnitKind::Temperature,
+            Quantity::TemperatureDifference => UnitKind::TemperatureDifference,
+            Quantity::SpecificVolume => UnitKind::SpecificVolume,
+            Quantity::Density => UnitKind::Density,
+            Quantity::Enthalpy | Quantity::InternalEnergy | Quantity::SpecificEnergy => {
+                UnitKind::SpecificEnergy
+            }
+            Quantity::Entropy | Quantity::SpecificEntropy => UnitKind::SpecificEntropy,
+            Quantity::Speed => UnitKind::Speed,
+            Quantity::ExpansionCoefficient => UnitKind::ExpansionCoefficient,
+            Quantity::Compressibility => UnitKind::Compressibility,
+            Quantity::Quality => UnitKind::Dimensionless,
         }
     }
 }
@@ -102,9 +148,9 @@ pub const CELSIUS_OFFSET: f64 = 273.15;
 /// How many caller units make one native unit, for the quantities that
 /// convert by a factor alone.
 fn units_per_native(units: Units, quantity: Quantity) -> f64 {
-    use Quantity as Q;
-    match (units, quantity) {
-        (Units::Native, _) | (_, Q::Quality) => 1.0,
+    use UnitKind as Q;
+    match (units, quantity.unit_kind()) {
+        (Units::Native, _) | (_, Q::Dimensionless) => 1.0,
         (Units::SiBase, Q::Pressure) => 1e6,
         (Units::SiBase, Q::SpecificEnergy | Q::SpecificEntropy) => 1e3,
         (Units::SiBase, Q::Compressibility) => 1e-6,
@@ -150,9 +196,9 @@ impl Units {
 
     /// The unit symbol of `quantity` in these units, as printed in messages.
     pub const fn symbol(self, quantity: Quantity) -> &'static str {
-        use Quantity as Q;
-        match (self, quantity) {
-            (_, Q::Quality) => "",
+        use UnitKind as Q;
+        match (self, quantity.unit_kind()) {
+            (_, Q::Dimensionless) => "",
             (_, Q::Density) if matches!(self, Units::UsCustomary) => "lbm/ft³",
             (_, Q::Density) => "kg/m³",
             (_, Q::SpecificVolume) if matches!(self, Units::UsCustomary) => "ft³/lbm",

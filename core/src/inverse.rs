@@ -1,0 +1,169 @@
+//! The refinement every inverse pair shares: Newton's method in the
+//! region's own variables — (p, T) for the Gibbs regions 1, 2 and 5, (ρ, T)
+//! for the Helmholtz region 3 — until the state reproduces the two given
+//! properties to relative 1e-10 or better (absolute 1e-9 in native units
+//! where a value passes through zero).
+//!
+//! The Jacobian needs nothing beyond the properties one evaluation already
+//! gives (v, T, cp, cv, αv, κT): the partial derivatives of p, T, v, ρ, u,
+//! h and s with respect to either pair of variables follow from them by the
+//! standard relations (Maxwell's, and dh = T ds + v dp).
+
+use crate::error::Error;
+use crate::free_energy::Properties;
+use crate::{region1, region2, region3, region5};
+
+/// A property that can be prescribed as one half of an input pair.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub(crate) enum Given {
+    Pressure,
+    Temperature,
+    Density,
+    SpecificVolume,
+    InternalEnergy,
+    Enthalpy,
+    Entropy,
+}
+
+/// The basic equation a state is refined on, which fixes its variables.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub(crate) enum Equation {
+    /// Gibbs, variables (p, T).
+    Region1,
+    Region2,
+    Region5,
+    /// Helmholtz, variables (ρ, T).
+    Region3,
+}
+
+impl Equation {
+    /// The properties at the variables `(x, t)`: x is p for the Gibbs
+    /// regions, ρ for region 3.
+    #[inline]
+    pub(crate) fn evaluate(self, x: f64, t: f64) -> Properties {
+        match self {
+            Equation::Region1 => region1::gibbs(x, t).properties(x, t),
+            Equation::Region2 => region2::gibbs(x, t).properties(x, t),
+            Equation::Region5 => region5::gibbs(x, t).properties(x, t),
+            Equation::Region3 => region3::helmholtz(x, t).properties(x, t),
+        }
+    }
+}
+
+/// The value of `given` at a state.
+#[inline]
+pub(crate) fn value(given: Given, props: &Properties) -> f64 {
+    match given {
+        Given::Pressure => props.p,
+        Given::Temperature => props.t,
+        Given::Density => 1.0 / props.v,
+        Given::SpecificVolume => props.v,
+        Given::InternalEnergy => props.u,
+        Given::Enthalpy => props.h,
+        Given::Entropy => props.s,
+    }
+}
+
+/// (∂z/∂x, ∂z/∂T) of `given` = z, where x is p (Gibbs) or ρ (Helmholtz).
+/// pv-type products carry a factor 10³ (MPa·m³/kg = 10³ kJ/kg).
+#[inline]
+fn partials(equation: Equation, given: Given, s: &Properties) -> (f64, f64) {
+    let (v, t, alpha, kappa) = (s.v, s.t, s.alpha_v, s.kappa_t);
+    match equation {
+        Equation::Region3 => {
+            let v2k = 1e3 * v * v / kappa;
+            match given {
+                Given::Pressure => (v / kappa, alpha / kappa),
+                Given::Temperature => (0.0, 1.0),
+                Given::Density => (1.0, 0.0),
+                Given::SpecificVolume => (-v * v, 0.0),
+                Given::InternalEnergy => (v2k * (s.p * kappa - t * alpha), s.cv),
+                Given::Enthalpy => (v2k * (1.0 - t * alpha), s.cv + 1e3 * v * alpha / kappa),
+                Given::Entropy => (-v2k * alpha, s.cv / t),
+            }
+        }
+        _ => match given {
+            Given::Pressure => (1.0, 0.0),
+            Given::Temperature => (0.0, 1.0),
+            Given::Density => (kappa / v, -alpha / v),
+            Given::SpecificVolume => (-v * kappa, v * alpha),
+            Given::InternalEnergy => (
+                1e3 * v * (s.p * kappa - t * alpha),
+                s.cp - 1e3 * s.p * v * alpha,
+            ),
+            Given::Enthalpy => (1e3 * v * (1.0 - t * alpha), s.cp),
+            Given::Entropy => (-1e3 * v * alpha, s.cp / t),
+        },
+    }
+}
+
+/// Whether `actual` reproduces `target` to `relative` (or `absolute`, in
+/// native units, where the target is near zero).
+#[inline]
+fn within(actual: f64, target: f64, relative: f64, absolute: f64) -> bool {
+    (actual - target).abs() <= (relative * target.abs()).max(absolute)
+}
+
+/// What the caller is promised: relative 1e-10, absolute 1e-9 near zero.
+/// The iteration itself aims a thousand times tighter.
+const PROMISED: (f64, f64) = (1e-10, 1e-9);
+const AIMED: (f64, f64) = (1e-13, 1e-12);
+
+/// Bounds of the variables during the iteration, so that a wild step can
+/// never leave the equation's domain (they are wider than the region, the
+/// caller has already placed the solution inside it).
+#[derive(Clone, Copy, Debug)]
+pub(crate) struct Bounds {
+    pub x: (f64, f64),
+    pub t: (f64, f64),
+}
+
+const MAX_STEPS: u32 = 60;
+
+/// Newton's method on the two equations `value(a) = a.1`, `value(b) = b.1`,
+/// from the start `(x, t)`; returns the refined state's properties.
+pub(crate) fn refine(
+    equation: Equation,
+    a: (Given, f64),
+    b: (Given, f64),
+    start: (f64, f64),
+    bounds: Bounds,
+) -> Result<Properties, Error> {
+    let (mut x, mut t) = start;
+    for _ in 0..MAX_STEPS {
+        let props = equation.evaluate(x, t);
+        let (va, vb) = (value(a.0, &props), value(b.0, &props));
+        if within(va, a.1, AIMED.0, AIMED.1) && within(vb, b.1, AIMED.0, AIMED.1) {
+            return Ok(props);
+        }
+        let (fa, fb) = (va - a.1, vb - b.1);
+        let (ax, at) = partials(equation, a.0, &props);
+        let (bx, bt) = partials(equation, b.0, &props);
+        let det = ax * bt - at * bx;
+        if !det.is_finite() || det == 0.0 {
+            break;
+        }
+        let dx = (fa * bt - fb * at) / det;
+        let dt = (ax * fb - bx * fa) / det;
+        let (next_x, next_t) = (
+            (x - dx).clamp(bounds.x.0, bounds.x.1),
+            (t - dt).clamp(bounds.t.0, bounds.t.1),
+        );
+        let settled = (next_x - x).abs() <= 4.0 * f64::EPSILON * x.abs()
+            && (next_t - t).abs() <= 4.0 * f64::EPSILON * t;
+        x = next_x;
+        t = next_t;
+        if settled {
+            break;
+        }
+    }
+    let props = equation.evaluate(x, t);
+    let (va, vb) = (value(a.0, &props), value(b.0, &props));
+    if within(va, a.1, PROMISED.0, PROMISED.1) && within(vb, b.1, PROMISED.0, PROMISED.1) {
+        Ok(props)
+    } else {
+        Err(Error::NotConverged {
+            what: "inverse-pair",
+        })
+    }
+}

@@ -1,0 +1,302 @@
+//! States from pressure and enthalpy, (p, h), and from pressure and
+//! entropy, (p, s): the pairs of simulators, historians and expansion lines.
+//!
+//! Both follow one plan. The given pressure and the saturation line at it
+//! decide the region (or wet steam, where the quality follows from the
+//! lever rule); the IAPWS backward equation of that region — R7-97(2012)
+//! for regions 1 and 2, SR3-03(2014) for region 3 — gives the start, and
+//! Newton's method on the basic equation finishes (see [`crate::inverse`]).
+//! Region 5 has no backward equation; its start interpolates between the
+//! region's temperature limits.
+//!
+//! Valid wherever a (p, T) state is: 273.15 K ≤ T ≤ 1073.15 K at
+//! p ≤ 100 MPa and up to 2273.15 K at p ≤ 50 MPa; outside, the error names
+//! the enthalpy (or entropy) range valid at the given pressure.
+
+use crate::backward::{r7_97, sr3_03};
+use crate::boundary_b23;
+use crate::constants::*;
+use crate::error::{native_input, Error};
+use crate::free_energy::Properties;
+use crate::inverse::{refine, value, Bounds, Equation, Given};
+use crate::regions::{region3_phase, single_phase};
+use crate::saturation::Saturation;
+use crate::saturation_line::{saturation_pressure, saturation_temperature};
+use crate::state::{Region, State};
+use crate::units::{Quantity, Units};
+
+/// How an inverse pair is finished.
+#[derive(Clone, Copy, Debug, PartialEq, Eq, Hash, Default)]
+#[repr(u32)]
+pub enum Method {
+    /// Refined on the basic equations until the state reproduces the given
+    /// pair to relative 1e-10 or better (the default).
+    #[default]
+    Exact = 0,
+    /// The IAPWS backward equations' own values, unrefined, for matching
+    /// another IF97 implementation's backward results digit for digit.
+    /// Where IF97 has no backward equation (region 5) the state is exact.
+    BackwardOnly = 1,
+}
+
+/// The second property of a (p, h) or (p, s) pair.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub(crate) enum Caloric {
+    Enthalpy,
+    Entropy,
+}
+
+impl Caloric {
+    fn given(self) -> Given {
+        match self {
+            Caloric::Enthalpy => Given::Enthalpy,
+            Caloric::Entropy => Given::Entropy,
+        }
+    }
+
+    fn quantity(self) -> Quantity {
+        match self {
+            Caloric::Enthalpy => Quantity::Enthalpy,
+            Caloric::Entropy => Quantity::Entropy,
+        }
+    }
+
+    /// The property at (p, T) on a Gibbs region's equation.
+    fn at(self, equation: Equation, p: f64, t: f64) -> f64 {
+        value(self.given(), &equation.evaluate(p, t))
+    }
+
+    fn backward_temperature(self, equation: Equation, p: f64, z: f64) -> f64 {
+        match (self, equation) {
+            (Caloric::Enthalpy, Equation::Region1) => r7_97::temperature_region1_ph(p, z),
+            (Caloric::Entropy, Equation::Region1) => r7_97::temperature_region1_ps(p, z),
+            (Caloric::Enthalpy, Equation::Region2) => r7_97::temperature_region2_ph(p, z),
+            (Caloric::Entropy, Equation::Region2) => r7_97::temperature_region2_ps(p, z),
+            (Caloric::Enthalpy, _) => sr3_03::temperature_region3_ph(p, z),
+            (Caloric::Entropy, _) => sr3_03::temperature_region3_ps(p, z),
+        }
+    }
+
+    fn backward_region3_volume(self, p: f64, z: f64) -> f64 {
+        match self {
+            Caloric::Enthalpy => sr3_03::volume_region3_ph(p, z),
+            Caloric::Entropy => sr3_03::volume_region3_ps(p, z),
+        }
+    }
+}
+
+/// Where a (p, z) state lies.
+// The wet variant carries the solved saturation point so it is not solved
+// twice; it lives on the stack for one call.
+#[allow(clippy::large_enum_variant)]
+enum Location {
+    Single(Equation),
+    Wet(Saturation, f64),
+}
+
+/// Solves (p, z) for z = h or s, all native; errors in `units`.
+pub(crate) fn solve(
+    p: f64,
+    z: f64,
+    caloric: Caloric,
+    method: Method,
+    units: Units,
+) -> Result<State, Error> {
+    if !(p > 0.0 && p <= MAX_PRESSURE) {
+        return Err(Error::out_of_range(
+            Quantity::Pressure,
+            p,
+            0.0,
+            MAX_PRESSURE,
+            units,
+        ));
+    }
+    let out_of_range =
+        |min: f64, max: f64| Error::out_of_range(caloric.quantity(), z, min, max, units);
+    let z_at = |equation, t| caloric.at(equation, p, t);
+    let lowest =
+        || z_at(Equation::Region1, MIN_TEMPERATURE).min(z_at(Equation::Region2, MIN_TEMPERATURE));
+    let highest = || {
+        if p <= REGION5_MAX_PRESSURE {
+            z_at(Equation::Region5, MAX_TEMPERATURE)
+        } else {
+            z_at(Equation::Region2, REGION2_MAX_TEMPERATURE)
+        }
+    };
+
+    let location = if p < crate::saturation::min_saturation_pressure() {
+        // Below psat(273.15 K) only vapour lies within the range.
+        Location::Single(Equation::Region2)
+    } else if p <= saturation_pressure(REGION13_TEMPERATURE) {
+        let t_sat = saturation_temperature(p);
+        if z < z_at(Equation::Region1, t_sat) {
+            Location::Single(Equation::Region1)
+        } else if z <= z_at(Equation::Region2, t_sat) {
+            let sat = Saturation::at_pressure(p, Units::Native)?;
+            Location::Wet(sat, z)
+        } else {
+            Location::Single(Equation::Region2)
+        }
+    } else if z <= z_at(Equation::Region1, REGION13_TEMPERATURE) {
+        Location::Single(Equation::Region1)
+    } else if z >= z_at(Equation::Region2, boundary_b23::temperature(p)) {
+        Location::Single(Equation::Region2)
+    } else if p < CRITICAL_PRESSURE {
+        let sat = Saturation::at_pressure(p, Units::Native)?;
+        let (zl, zv) = (
+            value(caloric.given(), sat.liquid().native()),
+            value(caloric.given(), sat.vapour().native()),
+        );
+        if (zl..=zv).contains(&z) {
+            Location::Wet(sat, z)
+        } else {
+            Location::Single(Equation::Region3)
+        }
+    } else {
+        Location::Single(Equation::Region3)
+    };
+
+    let equation = match location {
+        Location::Wet(sat, z) => {
+            let (zl, zv) = (
+                value(caloric.given(), sat.liquid().native()),
+                value(caloric.given(), sat.vapour().native()),
+            );
+            let x = ((z - zl) / (zv - zl)).clamp(0.0, 1.0);
+            return Ok(sat.mixture(x)?.in_units(units));
+        }
+        Location::Single(equation) => equation,
+    };
+    // Past region 2's hot end lies region 5 (up to 50 MPa).
+    let equation =
+        if equation == Equation::Region2 && z > z_at(Equation::Region2, REGION2_MAX_TEMPERATURE) {
+            if p > REGION5_MAX_PRESSURE {
+                return Err(out_of_range(lowest(), highest()));
+            }
+            Equation::Region5
+        } else {
+            equation
+        };
+
+    let props = match equation {
+        Equation::Region1 | Equation::Region2 => {
+            let t0 = caloric.backward_temperature(equation, p, z);
+            // The range's cold end: below 273.15 K there is no state.
+            if t0 < MIN_TEMPERATURE + 1.0 && z < z_at(equation, MIN_TEMPERATURE) {
+                return Err(out_of_range(lowest(), highest()));
+            }
+            if method == Method::BackwardOnly {
+                equation.evaluate(p, t0)
+            } else {
+                let t_range = (MIN_TEMPERATURE - 10.0, REGION2_MAX_TEMPERATURE + 10.0);
+                refine_pt(equation, p, z, caloric, t0, t_range)?
+            }
+        }
+        Equation::Region5 => {
+            let (z_lo, z_hi) = (z_at(Equation::Region5, REGION2_MAX_TEMPERATURE), highest());
+            if z > z_hi {
+                return Err(out_of_range(lowest(), z_hi));
+            }
+            let span = MAX_TEMPERATURE - REGION2_MAX_TEMPERATURE;
+            let t0 = REGION2_MAX_TEMPERATURE + span * (z - z_lo) / (z_hi - z_lo);
+            refine_pt(
+                equation,
+                p,
+                z,
+                caloric,
+                t0,
+                (REGION2_MAX_TEMPERATURE - 10.0, MAX_TEMPERATURE + 10.0),
+            )?
+        }
+        Equation::Region3 => {
+            let t0 = caloric.backward_temperature(equation, p, z);
+            let rho0 = 1.0 / caloric.backward_region3_volume(p, z);
+            let mut props = if method == Method::BackwardOnly {
+                equation.evaluate(rho0, t0)
+            } else {
+                let bounds = Bounds {
+                    x: (20.0, 1100.0),
+                    t: (REGION13_TEMPERATURE - 20.0, B23_MAX_TEMPERATURE + 20.0),
+                };
+                refine(
+                    equation,
+                    (Given::Pressure, p),
+                    (caloric.given(), z),
+                    (rho0, t0),
+                    bounds,
+                )?
+            };
+            if method == Method::Exact {
+                // Report the given pressure, which the state reproduces.
+                props.p = p;
+            }
+            return Ok(State::single_phase(
+                props,
+                Region::Three,
+                region3_phase(props.p, props.t),
+                units,
+            ));
+        }
+    };
+    let (region, liquid) = match equation {
+        Equation::Region1 => (Region::One, true),
+        Equation::Region2 => (Region::Two, false),
+        _ => (Region::Five, false),
+    };
+    Ok(State::single_phase(
+        props,
+        region,
+        single_phase(p, props.t, liquid),
+        units,
+    ))
+}
+
+/// Newton in T at the given p on a Gibbs region.
+fn refine_pt(
+    equation: Equation,
+    p: f64,
+    z: f64,
+    caloric: Caloric,
+    t0: f64,
+    t_range: (f64, f64),
+) -> Result<Properties, Error> {
+    let bounds = Bounds {
+        x: (p, p),
+        t: t_range,
+    };
+    refine(
+        equation,
+        (Given::Pressure, p),
+        (caloric.given(), z),
+        (p, t0),
+        bounds,
+    )
+}
+
+impl State {
+    /// The state at pressure `p` and specific enthalpy `h`, in `units`,
+    /// refined to reproduce both to relative 1e-10 or better.
+    pub fn from_ph(p: f64, h: f64, units: Units) -> Result<State, Error> {
+        State::from_ph_with(p, h, units, Method::Exact)
+    }
+
+    /// [`State::from_ph`] with the choice of [`Method`].
+    pub fn from_ph_with(p: f64, h: f64, units: Units, method: Method) -> Result<State, Error> {
+        let p = native_input(units, Quantity::Pressure, p)?;
+        let h = native_input(units, Quantity::Enthalpy, h)?;
+        solve(p, h, Caloric::Enthalpy, method, units)
+    }
+
+    /// The state at pressure `p` and specific entropy `s`, in `units`,
+    /// refined to reproduce both to relative 1e-10 or better.
+    pub fn from_ps(p: f64, s: f64, units: Units) -> Result<State, Error> {
+        State::from_ps_with(p, s, units, Method::Exact)
+    }
+
+    /// [`State::from_ps`] with the choice of [`Method`].
+    pub fn from_ps_with(p: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
+        let p = native_input(units, Quantity::Pressure, p)?;
+        let s = native_input(units, Quantity::Entropy, s)?;
+        solve(p, s, Caloric::Entropy, method, units)
+    }
+}

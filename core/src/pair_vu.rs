@@ -1,0 +1,309 @@
+//! States from specific volume and internal energy, (v, u): the state
+//! variables of simulators that integrate mass and energy balances of a
+//! fixed volume.
+//!
+//! No IAPWS backward equation exists for this pair. Each single-phase
+//! region is tried with Newton's method on its basic equation from a
+//! physically reasonable start, in the order the specific volume makes
+//! likely, and a solution is accepted only where that region's equation is
+//! the stable one — its (p, T) lies in the region, and in region 3 the
+//! (p, T) state has the same density. Otherwise the state is wet steam: the
+//! temperature where the lever rules on v and on u give the same quality,
+//! found by bisection along the saturation line (where, at constant v, u
+//! rises with T).
+//!
+//! Valid wherever a (p, T) state is. This pair costs more than the others
+//! (microseconds for wet steam); see the benchmarks.
+
+use crate::constants::*;
+use crate::error::{native_input, Error};
+use crate::free_energy::Properties;
+use crate::inverse::{refine, Bounds, Equation, Given};
+use crate::region3_density::Branch;
+use crate::regions::{locate, region3_phase, single_phase, Located};
+use crate::saturation::Saturation;
+use crate::state::{Region, State};
+use crate::units::{Quantity, Units};
+
+impl State {
+    /// The state at specific volume `v` and specific internal energy `u`,
+    /// in `units`, reproducing both to relative 1e-10 or better.
+    pub fn from_vu(v: f64, u: f64, units: Units) -> Result<State, Error> {
+        let v = native_input(units, Quantity::SpecificVolume, v)?;
+        let u = native_input(units, Quantity::InternalEnergy, u)?;
+        solve(v, u, units)
+    }
+}
+
+/// Solves native (v, u); errors reported in `units`.
+pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
+    if v <= 0.0 {
+        return Err(Error::out_of_range(
+            Quantity::SpecificVolume,
+            v,
+            0.0,
+            f64::INFINITY,
+            units,
+        ));
+    }
+    let liquid_like = v < 1.0 / CRITICAL_DENSITY;
+    let order: [Equation; 4] = if liquid_like {
+        [
+            Equation::Region1,
+            Equation::Region3,
+            Equation::Region2,
+            Equation::Region5,
+        ]
+    } else {
+        [
+            Equation::Region2,
+            Equation::Region3,
+            Equation::Region5,
+            Equation::Region1,
+        ]
+    };
+    for equation in order {
+        if let Some(state) = single_phase_state(equation, v, u, units) {
+            return Ok(state);
+        }
+    }
+    if let Some(state) = wet_state(v, u)? {
+        return Ok(state.in_units(units));
+    }
+    Err(Error::NoStateInRange {
+        pair: "specific volume and internal energy",
+    })
+}
+
+/// The stable state on `equation`, if the pair has one there.
+fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Option<State> {
+    let props = match equation {
+        Equation::Region3 => {
+            // ρ is region 3's own variable: one Newton iteration in T.
+            let rho = 1.0 / v;
+            if !(50.0..=1000.0).contains(&rho) {
+                return None;
+            }
+            let bounds = Bounds {
+                x: (rho, rho),
+                t: (REGION13_TEMPERATURE - 10.0, B23_MAX_TEMPERATURE + 10.0),
+            };
+            let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
+            refine(equation, targets.0, targets.1, (rho, 700.0), bounds).ok()?
+        }
+        Equation::Region1 => liquid(v, u)?,
+        Equation::Region2 => {
+            along_isochore(equation, v, u, (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE))?
+        }
+        Equation::Region5 => {
+            along_isochore(equation, v, u, (REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE))?
+        }
+    };
+    accept(equation, &props, units)
+}
+
+const ISOCHORE_STEPS: u32 = 80;
+
+/// Region 1: Newton in (p, T) together from a start where u fixes T
+/// (cv ≈ 4.2 kJ/(kg·K) from u = 0 at the triple point), falling back to the
+/// isochore where the density anomaly below 277 K defeats it.
+fn liquid(v: f64, u: f64) -> Option<Properties> {
+    let t0 = (TRIPLE_POINT_TEMPERATURE + u / 4.2).clamp(MIN_TEMPERATURE, REGION13_TEMPERATURE);
+    let bounds = Bounds {
+        x: (P_FLOOR, P_CEILING),
+        t: (MIN_TEMPERATURE - 1.0, REGION13_TEMPERATURE + 1.0),
+    };
+    let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
+    refine(Equation::Region1, targets.0, targets.1, (10.0, t0), bounds)
+        .ok()
+        .or_else(|| {
+            along_isochore(
+                Equation::Region1,
+                v,
+                u,
+                (MIN_TEMPERATURE, REGION13_TEMPERATURE),
+            )
+        })
+}
+
+/// A Gibbs region's state with specific volume `v` and internal energy
+/// `u`: Newton's method in T along the isochore (∂u/∂T at constant v is
+/// cv > 0, so u rises with T), kept inside a shrinking bracket of
+/// `t_range`, with the pressure at each T from v(p, T) = v.
+fn along_isochore(equation: Equation, v: f64, u: f64, t_range: (f64, f64)) -> Option<Properties> {
+    let (mut lo, mut hi) = t_range;
+    let mut t = 0.5 * (lo + hi);
+    let mut p = match equation {
+        Equation::Region1 => 10.0,
+        _ => (SPECIFIC_GAS_CONSTANT * t / (1e3 * v)).min(MAX_PRESSURE),
+    };
+    let mut best: Option<Properties> = None;
+    for _ in 0..ISOCHORE_STEPS {
+        let next = match pressure_on_isotherm(equation, v, t, p) {
+            Ok(props) => {
+                let excess = props.u - u;
+                if excess.abs() <= (1e-13 * u.abs()).max(1e-12) {
+                    return Some(props);
+                }
+                if best.map_or(true, |b| excess.abs() < (b.u - u).abs()) {
+                    best = Some(props);
+                }
+                p = props.p;
+                if excess > 0.0 {
+                    hi = t;
+                } else {
+                    lo = t;
+                }
+                t - excess / props.cv
+            }
+            // (∂p/∂T) at constant v is αv/κT: where αv > 0, needing a
+            // pressure below the range means T is too low, above it too
+            // high; in the liquid's density anomaly (αv < 0, below 277 K)
+            // the other way round.
+            Err((bound, alpha)) => {
+                if (bound == PressureBound::Low) == (alpha > 0.0) {
+                    lo = t;
+                } else {
+                    hi = t;
+                }
+                f64::NAN
+            }
+        };
+        t = if next > lo && next < hi {
+            next
+        } else {
+            0.5 * (lo + hi)
+        };
+        if hi - lo <= 4.0 * f64::EPSILON * hi {
+            break;
+        }
+    }
+    // The bracket has closed to the last bit of T: keep the best state if
+    // it meets the promised precision.
+    best.filter(|b| (b.u - u).abs() <= (1e-10 * u.abs()).max(1e-9))
+}
+
+/// Which end of the pressure range an isotherm ran into.
+#[derive(Clone, Copy, PartialEq, Eq)]
+enum PressureBound {
+    Low,
+    High,
+}
+
+const P_FLOOR: f64 = 1e-9;
+const P_CEILING: f64 = MAX_PRESSURE * 1.01;
+
+/// The state on `equation` at temperature `t` with specific volume `v`:
+/// Newton's method in p (∂v/∂p = −v·κT).
+/// Failing, it names the bound it ran into and the expansion coefficient
+/// there.
+fn pressure_on_isotherm(
+    equation: Equation,
+    v: f64,
+    t: f64,
+    p0: f64,
+) -> Result<Properties, (PressureBound, f64)> {
+    let mut p = p0.clamp(P_FLOOR, P_CEILING);
+    for _ in 0..ISOCHORE_STEPS {
+        let props = equation.evaluate(p, t);
+        let excess = props.v - v;
+        // A liquid's v hardly moves with p: stop at v's own rounding, where
+        // the Newton steps in p only jitter.
+        if excess.abs() <= 64.0 * f64::EPSILON * v {
+            return Ok(props);
+        }
+        let next = p + excess / (props.v * props.kappa_t);
+
+        let next = if next.is_nan() { p } else { next };
+        if next <= P_FLOOR && p == P_FLOOR {
+            return Err((PressureBound::Low, props.alpha_v));
+        }
+        if next >= P_CEILING && p == P_CEILING {
+            return Err((PressureBound::High, props.alpha_v));
+        }
+        let next = next.clamp(P_FLOOR, P_CEILING);
+        if (next - p).abs() <= 2.0 * f64::EPSILON * p {
+            return Ok(equation.evaluate(next, t));
+        }
+        p = next;
+    }
+    Err((PressureBound::High, equation.evaluate(p, t).alpha_v))
+}
+
+/// The state if `equation` is the stable one at the solution's (p, T).
+fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State> {
+    // A solution at the range's edge may sit a hair outside it (the pair
+    // fixes p only to its conditioning); that is not extrapolation.
+    let t = props.t.clamp(MIN_TEMPERATURE, MAX_TEMPERATURE);
+    let p_max = if t <= REGION2_MAX_TEMPERATURE {
+        MAX_PRESSURE
+    } else {
+        REGION5_MAX_PRESSURE
+    };
+    let p = props.p.min(p_max);
+    if (t - props.t).abs() > 1e-9 * t || (p - props.p).abs() > 1e-9 * p {
+        return None;
+    }
+    let located = locate(p, t, Units::Native).ok()?;
+    let (region, phase) = match (equation, located) {
+        (Equation::Region1, Located::Region1) => {
+            (Region::One, single_phase(props.p, props.t, true))
+        }
+        (Equation::Region2, Located::Region2) => {
+            (Region::Two, single_phase(props.p, props.t, false))
+        }
+        (Equation::Region5, Located::Region5) => {
+            (Region::Five, single_phase(props.p, props.t, false))
+        }
+        (Equation::Region3, Located::Region3(branch)) => {
+            // Inside the van der Waals loop the Helmholtz equation has
+            // states that are not the stable ones at their (p, T).
+            if branch != Branch::Supercritical {
+                let stable = crate::State::from_pt(p, t, Units::Native).ok()?;
+                if (stable.native().v / props.v - 1.0).abs() > 1e-9 {
+                    return None;
+                }
+            }
+            (Region::Three, region3_phase(props.p, props.t))
+        }
+        _ => return None,
+    };
+    Some(State::single_phase(*props, region, phase, units))
+}
+
+const WET_BISECTION_STEPS: u32 = 60;
+
+/// Wet steam with this (v, u), if there is such a state.
+fn wet_state(v: f64, u: f64) -> Result<Option<State>, Error> {
+    // Along the isochore, the mixture's u rises with T up to where the
+    // isochore leaves the dome (x reaches 0 or 1).
+    let (mut lo, mut hi) = (MIN_TEMPERATURE, CRITICAL_TEMPERATURE);
+    let mut found = None;
+    for _ in 0..WET_BISECTION_STEPS {
+        let t = 0.5 * (lo + hi);
+        let sat = Saturation::at_temperature(t, Units::Native)?;
+        let (l, g) = (sat.liquid().native(), sat.vapour().native());
+        let x = (v - l.v) / (g.v - l.v);
+        if !(0.0..=1.0).contains(&x) {
+            hi = t;
+            continue;
+        }
+        let u_mix = (1.0 - x) * l.u + x * g.u;
+        if u_mix < u {
+            lo = t;
+        } else {
+            hi = t;
+        }
+        found = Some((sat, x, u_mix));
+        if hi - lo <= 4.0 * f64::EPSILON * hi {
+            break;
+        }
+    }
+    let Some((sat, x, u_mix)) = found else {
+        return Ok(None);
+    };
+    if (u_mix - u).abs() > (1e-10 * u.abs()).max(1e-9) {
+        return Ok(None);
+    }
+    sat.mixture(x).map(Some)
+}
