@@ -21,6 +21,10 @@ pub const MIN_TEMPERATURE: f64 = 273.15;
 pub const REGION2_MAX_TEMPERATURE: f64 = 1073.15;
 /// Highest temperature of region 5, K.
 pub const MAX_TEMPERATURE: f64 = 2273.15;
+/// Lowest pressure ebullio accepts, MPa (1 µPa). R7-97 lets regions 2 and
+/// 5 extend formally to p → 0; this floor is ours, far below any use, and
+/// keeps v = RT/p and its derivatives finite.
+pub const MIN_PRESSURE: f64 = 1e-12;
 /// Highest pressure up to 1073.15 K, MPa.
 pub const MAX_PRESSURE: f64 = 100.0;
 /// Highest pressure of region 5, MPa (as revised in R7-97(2012)).

@@ -53,6 +53,16 @@ pub enum Error {
         pair: &'static str,
     },
 
+    /// In [`crate::Method::BackwardOnly`], the IAPWS backward equation
+    /// gives no state inside its region here (it is used outside the range
+    /// it was fitted to, e.g. at extremely low pressure); the exact method
+    /// still answers.
+    #[error("the {equation} backward equation gives no valid state here; use the exact method")]
+    BackwardEquationOutOfRange {
+        /// Which backward equation, e.g. "T(p,s) region 2".
+        equation: &'static str,
+    },
+
     /// An iteration did not reach the formulation's precision within its
     /// bound; no approximate state is returned.
     #[error("the {what} iteration did not converge")]
@@ -104,8 +114,18 @@ impl fmt::Display for Significant {
             return write!(f, "{x}");
         }
         let exponent = floor(log10(x.abs())) as i32;
-        let decimals = (6 - exponent).clamp(0, 17) as usize;
         let mut buffer = StackText::default();
+        if exponent < -4 {
+            // Tiny bounds in scientific notation: 1.5e-12, not 0.0000…
+            write!(buffer, "{x:.6e}")?;
+            let (mantissa, power) = buffer
+                .as_str()
+                .split_once('e')
+                .unwrap_or((buffer.as_str(), "0"));
+            let mantissa = mantissa.trim_end_matches('0').trim_end_matches('.');
+            return write!(f, "{mantissa}e{power}");
+        }
+        let decimals = (6 - exponent).clamp(0, 17) as usize;
         write!(buffer, "{x:.decimals$}")?;
         let mut text = buffer.as_str();
         if text.contains('.') {
@@ -160,6 +180,8 @@ mod tests {
         assert_eq!(Significant(14503.773773020925).to_string(), "14503.77");
         assert_eq!(Significant(2000.0).to_string(), "2000");
         assert_eq!(Significant(0.000611212677).to_string(), "0.0006112127");
+        assert_eq!(Significant(1e-12).to_string(), "1e-12");
+        assert_eq!(Significant(6.112126774443449e-5).to_string(), "6.112127e-5");
         assert_eq!(Significant(1e8).to_string(), "100000000");
         assert_eq!(Significant(0.0).to_string(), "0");
         assert_eq!(Significant(-459.67).to_string(), "-459.67");

@@ -97,16 +97,32 @@ fn partials(equation: Equation, given: Given, s: &Properties) -> (f64, f64) {
     }
 }
 
-/// Whether `actual` reproduces `target` to `relative` (or `absolute`, in
-/// native units, where the target is near zero).
+/// Whether `actual` reproduces the `given` property's `target` to
+/// `relative`, or to `absolute` (native units) for u, h and s, which pass
+/// through zero at the triple point; p, T, ρ and v never do, however small.
 #[inline]
-fn within(actual: f64, target: f64, relative: f64, absolute: f64) -> bool {
-    (actual - target).abs() <= (relative * target.abs()).max(absolute)
+fn within(given: Given, actual: f64, target: f64, (relative, absolute): (f64, f64)) -> bool {
+    let floor = match given {
+        Given::InternalEnergy | Given::Enthalpy | Given::Entropy => absolute,
+        _ => 0.0,
+    };
+    (actual - target).abs() <= (relative * target.abs()).max(floor)
+}
+
+/// Whether `props` reproduces both given values to `tolerance`.
+#[inline]
+pub(crate) fn reproduces(
+    props: &Properties,
+    a: (Given, f64),
+    b: (Given, f64),
+    tolerance: (f64, f64),
+) -> bool {
+    within(a.0, value(a.0, props), a.1, tolerance) && within(b.0, value(b.0, props), b.1, tolerance)
 }
 
 /// What the caller is promised: relative 1e-10, absolute 1e-9 near zero.
 /// The iteration itself aims a thousand times tighter.
-const PROMISED: (f64, f64) = (1e-10, 1e-9);
+pub(crate) const PROMISED: (f64, f64) = (1e-10, 1e-9);
 const AIMED: (f64, f64) = (1e-13, 1e-12);
 
 /// Bounds of the variables during the iteration, so that a wild step can
@@ -132,10 +148,10 @@ pub(crate) fn refine(
     let (mut x, mut t) = start;
     for _ in 0..MAX_STEPS {
         let props = equation.evaluate(x, t);
-        let (va, vb) = (value(a.0, &props), value(b.0, &props));
-        if within(va, a.1, AIMED.0, AIMED.1) && within(vb, b.1, AIMED.0, AIMED.1) {
+        if reproduces(&props, a, b, AIMED) {
             return Ok(props);
         }
+        let (va, vb) = (value(a.0, &props), value(b.0, &props));
         let (fa, fb) = (va - a.1, vb - b.1);
         let (ax, at) = partials(equation, a.0, &props);
         let (bx, bt) = partials(equation, b.0, &props);
@@ -158,8 +174,7 @@ pub(crate) fn refine(
         }
     }
     let props = equation.evaluate(x, t);
-    let (va, vb) = (value(a.0, &props), value(b.0, &props));
-    if within(va, a.1, PROMISED.0, PROMISED.1) && within(vb, b.1, PROMISED.0, PROMISED.1) {
+    if reproduces(&props, a, b, PROMISED) {
         Ok(props)
     } else {
         Err(Error::NotConverged {

@@ -77,6 +77,17 @@ impl Caloric {
         }
     }
 
+    fn backward_name(self, equation: Equation) -> &'static str {
+        match (self, equation) {
+            (Caloric::Enthalpy, Equation::Region1) => "T(p,h) region 1",
+            (Caloric::Entropy, Equation::Region1) => "T(p,s) region 1",
+            (Caloric::Enthalpy, Equation::Region2) => "T(p,h) region 2",
+            (Caloric::Entropy, Equation::Region2) => "T(p,s) region 2",
+            (Caloric::Enthalpy, _) => "T(p,h), v(p,h) region 3",
+            (Caloric::Entropy, _) => "T(p,s), v(p,s) region 3",
+        }
+    }
+
     fn backward_region3_volume(self, p: f64, z: f64) -> f64 {
         match self {
             Caloric::Enthalpy => sr3_03::volume_region3_ph(p, z),
@@ -102,11 +113,11 @@ pub(crate) fn solve(
     method: Method,
     units: Units,
 ) -> Result<State, Error> {
-    if !(p > 0.0 && p <= MAX_PRESSURE) {
+    if !(MIN_PRESSURE..=MAX_PRESSURE).contains(&p) {
         return Err(Error::out_of_range(
             Quantity::Pressure,
             p,
-            0.0,
+            MIN_PRESSURE,
             MAX_PRESSURE,
             units,
         ));
@@ -186,6 +197,11 @@ pub(crate) fn solve(
                 return Err(out_of_range(lowest(), highest()));
             }
             if method == Method::BackwardOnly {
+                let (t_lo, t_hi) = match equation {
+                    Equation::Region1 => (MIN_TEMPERATURE, REGION13_TEMPERATURE),
+                    _ => (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE),
+                };
+                backward_valid(t0, (t_lo, t_hi), caloric.backward_name(equation))?;
                 equation.evaluate(p, t0)
             } else {
                 let t_range = (MIN_TEMPERATURE - 10.0, REGION2_MAX_TEMPERATURE + 10.0);
@@ -212,6 +228,16 @@ pub(crate) fn solve(
             let t0 = caloric.backward_temperature(equation, p, z);
             let rho0 = 1.0 / caloric.backward_region3_volume(p, z);
             let mut props = if method == Method::BackwardOnly {
+                backward_valid(
+                    t0,
+                    (REGION13_TEMPERATURE, B23_MAX_TEMPERATURE),
+                    caloric.backward_name(equation),
+                )?;
+                if !(rho0 > 0.0 && rho0.is_finite()) {
+                    return Err(Error::BackwardEquationOutOfRange {
+                        equation: caloric.backward_name(equation),
+                    });
+                }
                 equation.evaluate(rho0, t0)
             } else {
                 let bounds = Bounds {
@@ -249,6 +275,20 @@ pub(crate) fn solve(
         single_phase(p, props.t, liquid),
         units,
     ))
+}
+
+/// How far (K) a backward temperature may stray past its region's limits:
+/// the releases promise 25 mK or better inside them.
+const BACKWARD_SLACK: f64 = 1.0;
+
+/// Refuses a backward-equation temperature that is no state of the region
+/// (the equation used far outside the range it was fitted to).
+fn backward_valid(t: f64, (lo, hi): (f64, f64), equation: &'static str) -> Result<(), Error> {
+    if t >= lo - BACKWARD_SLACK && t <= hi + BACKWARD_SLACK {
+        Ok(())
+    } else {
+        Err(Error::BackwardEquationOutOfRange { equation })
+    }
 }
 
 /// Newton in T at the given p on a Gibbs region.

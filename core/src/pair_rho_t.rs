@@ -56,8 +56,9 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
     let rho_max = || {
         crate::State::from_pt(p_max, t, Units::Native).map_or(f64::INFINITY, |s| 1.0 / s.native().v)
     };
-    let out_of_range = || Error::out_of_range(Quantity::Density, rho, 0.0, rho_max(), units);
-    if rho <= 0.0 {
+    let rho_min = 1e3 * MIN_PRESSURE / (SPECIFIC_GAS_CONSTANT * t);
+    let out_of_range = || Error::out_of_range(Quantity::Density, rho, rho_min, rho_max(), units);
+    if rho < rho_min {
         return Err(out_of_range());
     }
 
@@ -102,8 +103,12 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
             let p0 = ideal_gas_pressure(rho, t).min(p_b23);
             return gibbs_state(Equation::Region2, rho, t, p0, (0.0, p_b23 * 1.001), units);
         }
+        if rho > rho_max() {
+            return Err(out_of_range());
+        }
         let props = Equation::Region3.evaluate(rho, t);
-        if props.p > p_max * (1.0 + PRESSURE_SLACK) {
+        // Written to refuse NaN as well: far beyond the range the equation has no number.
+        if !props.p.is_finite() || props.p > p_max * (1.0 + PRESSURE_SLACK) {
             return Err(out_of_range());
         }
         return Ok(State::single_phase(
@@ -145,7 +150,7 @@ fn gibbs_state(
     units: Units,
 ) -> Result<State, Error> {
     let bounds = Bounds {
-        x: (p_range.0.max(1e-12), p_range.1),
+        x: (p_range.0.max(0.5 * MIN_PRESSURE), p_range.1),
         t: (t, t),
     };
     let props = refine(

@@ -190,7 +190,7 @@ enum PressureBound {
     High,
 }
 
-const P_FLOOR: f64 = 1e-9;
+const P_FLOOR: f64 = MIN_PRESSURE;
 const P_CEILING: f64 = MAX_PRESSURE * 1.01;
 
 /// The state on `equation` at temperature `t` with specific volume `v`:

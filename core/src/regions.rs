@@ -35,11 +35,11 @@ pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
     } else {
         REGION5_MAX_PRESSURE
     };
-    if !(p > 0.0 && p <= max_pressure) {
+    if !(MIN_PRESSURE..=max_pressure).contains(&p) {
         return Err(Error::out_of_range(
             Quantity::Pressure,
             p,
-            0.0,
+            MIN_PRESSURE,
             max_pressure,
             units,
         ));
