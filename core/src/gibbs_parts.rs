@@ -6,64 +6,59 @@
 
 use crate::free_energy::ReducedGibbs;
 use crate::math::ln;
-use crate::series::{powers, sums, y_weighted_sum, SeriesSums, Term};
+use crate::series::{Series, Term};
 
-/// Ideal-gas part: tables hold (0, J°ᵢ, n°ᵢ); `J_SHIFT` lifts the most
-/// negative J° to zero, `NY` is the size of the τ power table it needs.
-#[inline(always)]
-fn ideal_sums<const NY: usize, const J_SHIFT: i32>(ideal: &[Term], tau: f64) -> SeriesSums {
-    let tp = powers::<NY>(tau);
-    let mut s = sums(ideal, &[1.0], &tp, J_SHIFT);
-    let scale = 1.0 / tp[J_SHIFT as usize];
-    s.value *= scale;
-    s.y *= scale;
-    s.yy *= scale;
-    s
+/// A region's two series, arranged at compile time.
+pub(crate) struct GibbsParts {
+    ideal: Series,
+    residual: Series,
+    /// τ₀ of the residual's temperature variable τ − τ₀.
+    tau_shift: f64,
 }
 
-/// γ = γ° + γʳ with reduced derivatives, for π, τ and the residual's
-/// shifted temperature variable `tau - tau_shift`.
-#[inline(always)]
-pub(crate) fn gibbs<const NI: usize, const NJ: usize, const NY0: usize, const J0_SHIFT: i32>(
-    ideal: &[Term],
-    residual: &[Term],
-    tau_shift: f64,
-    pi: f64,
-    tau: f64,
-) -> ReducedGibbs {
-    let o = ideal_sums::<NY0, J0_SHIFT>(ideal, tau);
-    let y = tau - tau_shift;
-    let r = sums(residual, &powers::<NI>(pi), &powers::<NJ>(y), 0);
-    let ty = tau / y;
-    ReducedGibbs {
-        g: ln(pi) + o.value + r.value,
-        // π·γ°_π = 1 and π²·γ°_ππ = −1; the ideal part has no mixed term.
-        g_p: 1.0 + r.x,
-        g_pp: -1.0 + r.xx,
-        g_t: o.y + ty * r.y,
-        g_tt: o.yy + ty * ty * r.yy,
-        g_pt: ty * r.xy,
+impl GibbsParts {
+    /// From the tables: `ideal` holds (0, J°ᵢ, n°ᵢ), lifted by `ideal_shift`
+    /// so no exponent is negative, and `residual` holds (Iᵢ, Jᵢ, nᵢ).
+    pub(crate) const fn new(
+        ideal: &[Term],
+        ideal_shift: i32,
+        residual: &[Term],
+        tau_shift: f64,
+    ) -> GibbsParts {
+        GibbsParts {
+            ideal: Series::new(ideal, ideal_shift),
+            residual: Series::new(residual, 0),
+            tau_shift,
+        }
     }
-}
 
-/// τ·γ_τ alone, for the enthalpy-only path; the same operations as
-/// [`gibbs`] so both paths agree to the bit.
-#[inline(always)]
-pub(crate) fn tau_derivative<
-    const NI: usize,
-    const NJ: usize,
-    const NY0: usize,
-    const J0_SHIFT: i32,
->(
-    ideal: &[Term],
-    residual: &[Term],
-    tau_shift: f64,
-    pi: f64,
-    tau: f64,
-) -> f64 {
-    let tp = powers::<NY0>(tau);
-    let ideal_part = y_weighted_sum(ideal, &[1.0], &tp, J0_SHIFT) * (1.0 / tp[J0_SHIFT as usize]);
-    let y = tau - tau_shift;
-    let residual_part = y_weighted_sum(residual, &powers::<NI>(pi), &powers::<NJ>(y), 0);
-    ideal_part + tau / y * residual_part
+    /// γ = γ° + γʳ with reduced derivatives at π, τ.
+    #[inline(always)]
+    pub(crate) fn gibbs(&self, pi: f64, tau: f64) -> ReducedGibbs {
+        let (o, tp) = self.ideal.sums(1.0, tau);
+        let scale = 1.0 / tp;
+        let y = tau - self.tau_shift;
+        let (r, _) = self.residual.sums(pi, y);
+        let ty = tau / y;
+        ReducedGibbs {
+            g: ln(pi) + o.value * scale + r.value,
+            // π·γ°_π = 1 and π²·γ°_ππ = −1; the ideal part has no mixed term.
+            g_p: 1.0 + r.x,
+            g_pp: -1.0 + r.xx,
+            g_t: o.y * scale + ty * r.y,
+            g_tt: o.yy * scale + ty * ty * r.yy,
+            g_pt: ty * r.xy,
+        }
+    }
+
+    /// τ·γ_τ alone, for the enthalpy-only path; the same operations as
+    /// [`GibbsParts::gibbs`] so both paths agree to the bit.
+    #[inline(always)]
+    pub(crate) fn tau_derivative(&self, pi: f64, tau: f64) -> f64 {
+        let (o_y, tp) = self.ideal.y_weighted_sum(1.0, tau);
+        let scale = 1.0 / tp;
+        let y = tau - self.tau_shift;
+        let (r_y, _) = self.residual.y_weighted_sum(pi, y);
+        o_y * scale + tau / y * r_y
+    }
 }

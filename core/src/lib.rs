@@ -29,6 +29,7 @@ pub mod free_energy;
 mod gibbs_parts;
 mod inverse;
 mod metastable_vapour;
+mod pair_hs;
 mod pair_ph_ps;
 mod pair_pt;
 mod pair_rho_t;

@@ -145,7 +145,7 @@ fn along_isochore(equation: Equation, v: f64, u: f64, t_range: (f64, f64)) -> Op
                 if excess.abs() <= (1e-13 * u.abs()).max(1e-12) {
                     return Some(props);
                 }
-                if best.map_or(true, |b| excess.abs() < (b.u - u).abs()) {
+                if best.is_none_or(|b| excess.abs() < (b.u - u).abs()) {
                     best = Some(props);
                 }
                 p = props.p;

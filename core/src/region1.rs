@@ -6,7 +6,7 @@
 
 use crate::constants::SPECIFIC_GAS_CONSTANT as R;
 use crate::free_energy::ReducedGibbs;
-use crate::series::{powers, sums, y_weighted_sum, Term};
+use crate::series::{Series, Term};
 
 /// Reducing pressure p*, MPa.
 pub const REDUCING_PRESSURE: f64 = 16.53;
@@ -55,6 +55,8 @@ pub const COEFFICIENTS: [Term; 34] = [
 /// Exponent shift that makes every J of Table 2 non-negative.
 const J_SHIFT: i32 = 41;
 
+const SERIES: Series = Series::new(&COEFFICIENTS, J_SHIFT);
+
 #[inline(always)]
 fn shifted_variables(p: f64, t: f64) -> (f64, f64, f64, f64) {
     let pi = p / REDUCING_PRESSURE;
@@ -66,10 +68,9 @@ fn shifted_variables(p: f64, t: f64) -> (f64, f64, f64, f64) {
 #[inline]
 pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
     let (pi, tau, x, y) = shifted_variables(p, t);
-    let yp = powers::<59>(y);
-    let s = sums(&COEFFICIENTS, &powers::<33>(x), &yp, J_SHIFT);
+    let (s, yp) = SERIES.sums(x, y);
     // Undo the exponent shift: multiply by y^−41.
-    let scale = 1.0 / yp[J_SHIFT as usize];
+    let scale = 1.0 / yp;
     // d/dπ of (7.1 − π)^I brings −I/(7.1 − π); d/dτ of (τ − 1.222)^J brings J/(τ − 1.222).
     let px = -pi / x;
     let ty = tau / y;
@@ -87,8 +88,7 @@ pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
 #[inline]
 pub fn enthalpy(p: f64, t: f64) -> f64 {
     let (_, tau, x, y) = shifted_variables(p, t);
-    let yp = powers::<59>(y);
-    let sum_j = y_weighted_sum(&COEFFICIENTS, &powers::<33>(x), &yp, J_SHIFT);
+    let (sum_j, yp) = SERIES.y_weighted_sum(x, y);
     // Same operations as `gibbs` followed by `properties`, bit for bit.
-    R * t * (tau / y * sum_j * (1.0 / yp[J_SHIFT as usize]))
+    R * t * (tau / y * sum_j * (1.0 / yp))
 }

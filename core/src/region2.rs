@@ -8,7 +8,7 @@
 
 use crate::constants::SPECIFIC_GAS_CONSTANT as R;
 use crate::free_energy::ReducedGibbs;
-use crate::gibbs_parts;
+use crate::gibbs_parts::GibbsParts;
 use crate::series::Term;
 
 /// Reducing pressure p*, MPa.
@@ -81,28 +81,18 @@ pub const RESIDUAL_COEFFICIENTS: [Term; 43] = [
 /// τ₀ of the residual part's temperature variable τ − τ₀.
 const TAU_SHIFT: f64 = 0.5;
 
+const PARTS: GibbsParts =
+    GibbsParts::new(&IDEAL_COEFFICIENTS, 5, &RESIDUAL_COEFFICIENTS, TAU_SHIFT);
+
 /// γ and its reduced derivatives at `p` (MPa) and `t` (K).
 #[inline]
 pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
-    gibbs_parts::gibbs::<25, 59, 9, 5>(
-        &IDEAL_COEFFICIENTS,
-        &RESIDUAL_COEFFICIENTS,
-        TAU_SHIFT,
-        p / REDUCING_PRESSURE,
-        REDUCING_TEMPERATURE / t,
-    )
+    PARTS.gibbs(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
 }
 
 /// Specific enthalpy alone, kJ/kg, at `p` (MPa) and `t` (K).
 #[inline]
 pub fn enthalpy(p: f64, t: f64) -> f64 {
     let tau = REDUCING_TEMPERATURE / t;
-    R * t
-        * gibbs_parts::tau_derivative::<25, 59, 9, 5>(
-            &IDEAL_COEFFICIENTS,
-            &RESIDUAL_COEFFICIENTS,
-            TAU_SHIFT,
-            p / REDUCING_PRESSURE,
-            tau,
-        )
+    R * t * PARTS.tau_derivative(p / REDUCING_PRESSURE, tau)
 }

@@ -7,7 +7,7 @@
 //! R7-97 Table 18. ebullio returns such states only on explicit request.
 
 use crate::free_energy::ReducedGibbs;
-use crate::gibbs_parts;
+use crate::gibbs_parts::GibbsParts;
 use crate::region2::{
     IDEAL_COEFFICIENTS as REGION2_IDEAL, REDUCING_PRESSURE, REDUCING_TEMPERATURE,
 };
@@ -47,14 +47,10 @@ pub const RESIDUAL_COEFFICIENTS: [Term; 13] = [
     (5, 10, -0.26456501482810e-2),
 ];
 
+const PARTS: GibbsParts = GibbsParts::new(&IDEAL_COEFFICIENTS, 5, &RESIDUAL_COEFFICIENTS, 0.5);
+
 /// γ and its reduced derivatives at `p` (MPa) and `t` (K).
 #[inline]
 pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
-    gibbs_parts::gibbs::<6, 17, 9, 5>(
-        &IDEAL_COEFFICIENTS,
-        &RESIDUAL_COEFFICIENTS,
-        0.5,
-        p / REDUCING_PRESSURE,
-        REDUCING_TEMPERATURE / t,
-    )
+    PARTS.gibbs(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
 }

@@ -8,7 +8,7 @@
 use crate::constants::{CRITICAL_DENSITY, CRITICAL_TEMPERATURE, SPECIFIC_GAS_CONSTANT as R};
 use crate::free_energy::ReducedHelmholtz;
 use crate::math::ln;
-use crate::series::{powers, sums, Term};
+use crate::series::{Series, Term};
 
 /// n₁ of the logarithmic term n₁ ln δ, R7-97 Table 30.
 pub const N1: f64 = 0.10658070028513e1;
@@ -57,12 +57,14 @@ pub const COEFFICIENTS: [Term; 39] = [
     (11, 26, -0.44923899061815e-4),
 ];
 
+const SERIES: Series = Series::new(&COEFFICIENTS, 0);
+
 /// φ and its reduced derivatives at density `rho` (kg/m³) and `t` (K).
 #[inline]
 pub fn helmholtz(rho: f64, t: f64) -> ReducedHelmholtz {
     let delta = rho / CRITICAL_DENSITY;
     let tau = CRITICAL_TEMPERATURE / t;
-    let s = sums(&COEFFICIENTS, &powers::<12>(delta), &powers::<27>(tau), 0);
+    let (s, _) = SERIES.sums(delta, tau);
     ReducedHelmholtz {
         f: N1 * ln(delta) + s.value,
         // δ ∂/∂δ of n₁ ln δ is n₁; δ² ∂²/∂δ² of it is −n₁.

@@ -7,7 +7,13 @@
 //! (the brackets are verified by the sign of p − p_target, never assumed)
 //! and the root is polished by Newton's method kept inside the bracket, to
 //! the last bit of the density.
+//!
+//! The start is the SR5-05(2016) backward equation v(p, T), with a narrow
+//! bracket around it verified by sign; where that equation is missing (its
+//! unverified subregions) or its bracket fails, the branch is bracketed
+//! from the saturated-density estimates instead.
 
+use crate::backward::sr5_05;
 use crate::constants::{CRITICAL_DENSITY, SPECIFIC_GAS_CONSTANT};
 use crate::error::Error;
 use crate::region3::pressure_and_slope;
@@ -28,13 +34,52 @@ pub(crate) enum Branch {
 const MAX_BRACKET_STEPS: u32 = 60;
 const MAX_NEWTON_STEPS: u32 = 100;
 
+/// Relative half-width of the bracket around the backward equation's
+/// density: far wider than SR5-05's stated accuracy.
+const BACKWARD_BRACKET: f64 = 1e-3;
+
 /// The density, kg/m³, at `p` (MPa) and `t` (K) on `branch`.
 pub(crate) fn density(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
+    if let Some(rho) = from_backward_start(p, t, branch) {
+        return Ok(rho);
+    }
+    bracketed(p, t, branch)
+}
+
+/// The root from the SR5-05 start, if its narrow bracket holds the root of
+/// the wanted branch.
+fn from_backward_start(p: f64, t: f64, branch: Branch) -> Option<f64> {
+    let rho0 = 1.0 / sr5_05::specific_volume(p, t)?;
+    // On the saturation line SR5-05's subregion choice and ours may differ
+    // by a rounding; the liquid root lies above ρc, the vapour root below.
+    let on_branch = match branch {
+        Branch::Liquid => rho0 > CRITICAL_DENSITY,
+        Branch::Vapour => rho0 < CRITICAL_DENSITY,
+        Branch::Supercritical => rho0 > 0.0,
+    };
+    if !(on_branch && rho0.is_finite()) {
+        return None;
+    }
+    let (lo, hi) = (
+        rho0 * (1.0 - BACKWARD_BRACKET),
+        rho0 * (1.0 + BACKWARD_BRACKET),
+    );
+    let (p_lo, slope_lo) = pressure_and_slope(lo, t);
+    let (p_hi, slope_hi) = pressure_and_slope(hi, t);
+    // The bracket must hold the root on a rising stretch of the isotherm.
+    if !(p_lo <= p && p <= p_hi && slope_lo > 0.0 && slope_hi > 0.0) {
+        return None;
+    }
+    newton_in_bracket(p, t, lo, hi, rho0)
+}
+
+/// The root by bracketing the branch from the saturated-density estimates.
+fn bracketed(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
     let excess = |rho: f64| pressure_and_slope(rho, t).0 - p;
     let not_converged = Error::NotConverged {
         what: "region 3 density",
     };
-    let (lo, hi, start_high) = match branch {
+    let (lo, hi, start) = match branch {
         Branch::Liquid => {
             // Walk down toward ρc until below the root but still above the
             // unstable middle root: steps shrink with the distance to ρc.
@@ -48,7 +93,7 @@ pub(crate) fn density(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
                 }
             }
             let hi = widen_up(lo, &excess).ok_or(not_converged)?;
-            (lo, hi, true)
+            (lo, hi, hi)
         }
         Branch::Vapour => {
             let mut hi = estimate::vapour(t).min(CRITICAL_DENSITY);
@@ -61,17 +106,22 @@ pub(crate) fn density(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
                 }
             }
             let lo = widen_down(hi, &excess).ok_or(not_converged)?;
-            (lo, hi, false)
+            (lo, hi, lo)
         }
         Branch::Supercritical => {
             // Region 3 states are denser than the ideal gas at the same p, T.
             let ideal = 1e3 * p / (SPECIFIC_GAS_CONSTANT * t);
             let lo = widen_down(ideal, &excess).ok_or(not_converged)?;
             let hi = widen_up(lo, &excess).ok_or(not_converged)?;
-            (lo, hi, p > crate::constants::CRITICAL_PRESSURE)
+            let start = if p > crate::constants::CRITICAL_PRESSURE {
+                hi
+            } else {
+                lo
+            };
+            (lo, hi, start)
         }
     };
-    newton_in_bracket(p, t, lo, hi, start_high).ok_or(not_converged)
+    newton_in_bracket(p, t, lo, hi, start).ok_or(not_converged)
 }
 
 /// From `lo` (where p < target) upward to a density where p ≥ target.
@@ -100,8 +150,8 @@ fn widen_down(hi: f64, excess: &impl Fn(f64) -> f64) -> Option<f64> {
 
 /// Newton's method on p(ρ) = p, falling back to bisection whenever a step
 /// would leave the bracket [lo, hi] that holds the root.
-fn newton_in_bracket(p: f64, t: f64, mut lo: f64, mut hi: f64, start_high: bool) -> Option<f64> {
-    let mut rho = if start_high { hi } else { lo };
+fn newton_in_bracket(p: f64, t: f64, mut lo: f64, mut hi: f64, start: f64) -> Option<f64> {
+    let mut rho = start;
     for _ in 0..MAX_NEWTON_STEPS {
         let (pressure, slope) = pressure_and_slope(rho, t);
         let excess = pressure - p;

@@ -7,7 +7,7 @@
 
 use crate::constants::SPECIFIC_GAS_CONSTANT as R;
 use crate::free_energy::ReducedGibbs;
-use crate::gibbs_parts;
+use crate::gibbs_parts::GibbsParts;
 use crate::series::Term;
 
 /// Reducing pressure p*, MPa.
@@ -37,27 +37,16 @@ pub const RESIDUAL_COEFFICIENTS: [Term; 6] = [
     (3, 7, 0.37919454823456e-7),
 ];
 
+const PARTS: GibbsParts = GibbsParts::new(&IDEAL_COEFFICIENTS, 3, &RESIDUAL_COEFFICIENTS, 0.0);
+
 /// γ and its reduced derivatives at `p` (MPa) and `t` (K).
 #[inline]
 pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
-    gibbs_parts::gibbs::<4, 10, 6, 3>(
-        &IDEAL_COEFFICIENTS,
-        &RESIDUAL_COEFFICIENTS,
-        0.0,
-        p / REDUCING_PRESSURE,
-        REDUCING_TEMPERATURE / t,
-    )
+    PARTS.gibbs(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
 }
 
 /// Specific enthalpy alone, kJ/kg, at `p` (MPa) and `t` (K).
 #[inline]
 pub fn enthalpy(p: f64, t: f64) -> f64 {
-    R * t
-        * gibbs_parts::tau_derivative::<4, 10, 6, 3>(
-            &IDEAL_COEFFICIENTS,
-            &RESIDUAL_COEFFICIENTS,
-            0.0,
-            p / REDUCING_PRESSURE,
-            REDUCING_TEMPERATURE / t,
-        )
+    R * t * PARTS.tau_derivative(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
 }

@@ -1,11 +1,13 @@
 //! The one shape shared by every v(p,T) backward equation of region 3.
 //!
-//! IAPWS SR5-05(2016), Eq. (4) and, for subregion 3n, Eq. (5):
+//! IAPWS SR5-05(2016), Eq. (4):
 //!
 //! ```text
 //! v(p,T)/v* = ω(π,θ) = [ Σᵢ nᵢ ((π − a)^c)^Iᵢ ((θ − b)^d)^Jᵢ ]^e      (4)
-//! v(p,T)/v* = ω(π,θ) = exp[ Σᵢ nᵢ (π − a)^Iᵢ (θ − b)^Jᵢ ]                  (5)
 //! ```
+//!
+//! (Subregion 3n's exponential form, Eq. (5), joins with 3n's table once
+//! that is verified.)
 //!
 //! with π = p/p* and θ = T/T*. Each subregion has its own reducing
 //! quantities v*, p*, T*, shifts a, b, exponents c, d, e and number of
@@ -18,7 +20,7 @@
 //! to; see [`super::specific_volume`].
 
 use crate::backward::{sum_terms, Term};
-use crate::math::{exp, sqrt};
+use crate::math::sqrt;
 
 /// The inner exponent c or d applied to a shifted reduced variable.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -49,8 +51,6 @@ pub(super) enum Outer {
     Sum,
     /// e = 4 in Eq. (4): ω is the fourth power of the sum.
     FourthPower,
-    /// Eq. (5), subregion 3n only: ω is the exponential of the sum.
-    Exponential,
 }
 
 /// Reducing quantities, shifts, exponents and coefficients of the v(p,T)
@@ -71,7 +71,7 @@ pub(super) struct Equation {
     pub c: Root,
     /// Exponent d on (θ − b).
     pub d: Root,
-    /// Exponent e on the sum, or the exponential of Eq. (5).
+    /// Exponent e on the sum.
     pub e: Outer,
     /// (Iᵢ, Jᵢ, nᵢ), i = 1 … N, as the release prints them.
     pub terms: &'static [Term],
@@ -91,7 +91,6 @@ impl Equation {
                 let square = sum * sum;
                 square * square
             }
-            Outer::Exponential => exp(sum),
         };
         self.v_star * omega
     }

@@ -1,0 +1,1006 @@
+//! States from specific enthalpy and entropy, (h, s): the Mollier-chart
+//! pair of expansion lines, turbine tests and isentropic efficiencies.
+//!
+//! The state is first placed in the h–s plane with the boundary equations
+//! of IAPWS SR4-04(2014) and SR2-01(2014), as those releases intend: the
+//! saturated-liquid lines h'_1(s), h'_3(s), the saturated-vapour lines
+//! h''_2ab(s), h''_2c3b(s), the 1/3 boundary h_B13(s), and between
+//! regions 2 and 3 the temperature T_B23(h,s) with the B23 equation of
+//! R7-97 against p_2c(h,s). Region 5 (above 1073.15 K), which has no
+//! boundary equation in the h–s plane, is split from region 2 on the
+//! 1073.15 K isotherm of the region 2 equation itself.
+//!
+//! The boundary equations are approximations, so the answer is decided on
+//! the basic equations: the state found in the indicated region must lie
+//! inside that region when checked in (p, T) (saturation pressure, B23,
+//! 623.15 K, 1073.15 K), and wet steam must have a quality in [0, 1] with
+//! the saturated phases of [`Saturation`] bracketing h and s. If the
+//! solution lands outside, the neighbour its position points to is tried,
+//! then any place not yet tried (each at most once). Where two basic
+//! equations meet (623.15 K, B23, 1073.15 K) they disagree slightly, within
+//! the consistency R7-97 requires of them: near such a boundary both may
+//! reproduce (h, s) inside their own regions (the two states differ by up
+//! to about 0.04 K and 2e-4 in p, measured), and the region the boundary
+//! equations indicate wins; should neither lie inside, the one nearer to
+//! its region is returned (relative excess ≤ 1e-4 in p or T).
+//!
+//! Single-phase states start from p(h,s) (SR2-01 for regions 1 and 2,
+//! SR4-04 for region 3) and T(p,h) (R7-97; SR3-03 with v(p,h) for region
+//! 3) and are refined by Newton's method on the basic equation (see
+//! [`crate::inverse`]). SR2-01 covers region 2 down to psat(273.15 K)
+//! only; below that pressure, and in region 5, the start is an ideal-gas
+//! like Newton iteration in (ln p, T) on the region's own equation. Wet
+//! steam solves h = h'(T) + x (h'' − h'), s = s'(T) + x (s'' − s') for
+//! T (x eliminated by the lever rule on s) by a safeguarded Newton and
+//! bisection iteration on [273.15 K, Tc], starting from SR4-04's
+//! Tsat(h,s) where that equation is valid (s ≥ s''(623.15 K)).
+
+use crate::backward::{r7_97, sr2_01, sr3_03, sr4_04};
+use crate::boundary_b23;
+use crate::constants::*;
+use crate::error::{native_input, Error};
+use crate::free_energy::Properties;
+use crate::inverse::{refine, Bounds, Equation, Given};
+use crate::math::{exp, ln};
+use crate::pair_ph_ps::Method;
+use crate::regions::{region3_phase, single_phase};
+use crate::saturation::{min_saturation_pressure, Saturation};
+use crate::saturation_line::{saturation_pressure, saturation_pressure_slope};
+use crate::state::{Region, State};
+use crate::units::{Quantity, Units};
+
+// Entropies and enthalpies that bound the ranges of the SR4-04 boundary
+// equations, all computed by the release from the basic equations of
+// R7-97 (recalled from IAPWS SR4-04(2014), the ranges of Eqs. 3 to 8).
+/// s'(273.15 K), kJ/(kg·K).
+const S_LIQUID_273: f64 = -1.545_495_919e-4;
+/// s(100 MPa, 623.15 K), kJ/(kg·K): the 1/3 boundary's low end.
+const S_13_100MPA: f64 = 3.397_782_955;
+/// s'(623.15 K), kJ/(kg·K).
+const S_LIQUID_623: f64 = 3.778_281_340;
+/// s''(623.15 K), kJ/(kg·K): the low end of Tsat(h,s).
+const S_VAPOUR_623: f64 = 5.210_887_825;
+/// The entropy range of T_B23(h,s), kJ/(kg·K).
+const S_B23: (f64, f64) = (5.048_096_828, 5.260_578_707);
+/// The enthalpy range of T_B23(h,s), kJ/kg.
+const H_B23: (f64, f64) = (2_563.592_004, 2_812.942_061);
+/// The entropy separating subregions 2b and 2c in SR2-01, kJ/(kg·K).
+const S_2BC: f64 = 5.85;
+/// s''(273.15 K), kJ/(kg·K).
+const S_VAPOUR_273: f64 = 9.155_759_395;
+
+/// No state of region 5 lies below this enthalpy, kJ/kg: the lowest is at
+/// 50 MPa and 1073.15 K, 3926 kJ/kg (R7-97 region 5, computed), kept with
+/// a margin. Below it the 2/5 split need not be computed.
+const H_REGION5_BELOW: f64 = 3_900.0;
+
+/// The lowest pressure at which (h, s) states are sought, MPa: IF97 has no
+/// lower limit, this one keeps ln p and its powers far from underflow. It
+/// bounds the entropy of the range from above: s of region 5 at 2273.15 K
+/// and this pressure, about 220 kJ/(kg·K).
+const LOWEST_PRESSURE: f64 = 1e-200;
+
+/// Relative tolerance of the membership checks in (p, T): what the
+/// refinement (relative 1e-13 on h and s) leaves in p and T, with margin.
+const INSIDE: f64 = 1e-9;
+/// The largest relative excess over a region boundary accepted when both
+/// neighbouring equations put their solution outside their own region
+/// (the formulation's consistency seams).
+const SEAM: f64 = 1e-4;
+/// The wet iteration's target, as the one of [`crate::inverse`]:
+/// (relative, absolute kJ/kg).
+const WET_AIMED: (f64, f64) = (1e-13, 1e-12);
+/// Upper end of the wet iteration, K: just below the critical point, where
+/// the two saturated phases are still distinct.
+const WET_MAX_TEMPERATURE: f64 = CRITICAL_TEMPERATURE - 1e-6;
+/// How far the backward equations' own state may miss the given h
+/// (relative, absolute kJ/kg) or s (relative, absolute kJ/(kg·K)) before
+/// BackwardOnly treats the point as outside their range: a few times what
+/// their permissible deviations (25 mK in T, 0.01 % in p or v) induce.
+const BACKWARD_SANITY_H: (f64, f64) = (1e-3, 2.0);
+const BACKWARD_SANITY_S: (f64, f64) = (1e-3, 5e-3);
+/// The highest pressure a backward equation may return for a state of the
+/// range, MPa: 100 MPa and the equations' own deviation above it.
+const BACKWARD_MAX_PRESSURE: f64 = MAX_PRESSURE * (1.0 + 1e-3);
+
+/// Where in the h–s plane a state is sought.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+enum Place {
+    Wet,
+    One,
+    Two,
+    Three,
+    Five,
+}
+
+impl Place {
+    fn bit(self) -> u8 {
+        match self {
+            Place::Wet => 1,
+            Place::One => 2,
+            Place::Two => 4,
+            Place::Three => 8,
+            Place::Five => 16,
+        }
+    }
+}
+
+/// What one attempt in one place gave.
+enum Attempt {
+    /// A state inside the place: the answer.
+    Inside(State),
+    /// The solution lies outside the place, beyond the boundary to `next`,
+    /// by the relative `excess`; `candidate` is its state, if any.
+    Outside {
+        next: Place,
+        excess: f64,
+        candidate: Option<State>,
+    },
+    /// The solution lies beyond the formulation's range: the quantity, its
+    /// native value and the native limits. If it lies within a seam of a
+    /// neighbour's boundary, that neighbour may still hold the state.
+    Beyond(Limit, Option<Place>),
+}
+
+/// A limit of the range a solution exceeds: the quantity, its native
+/// value, the native limits.
+type Limit = (Quantity, f64, f64, f64);
+
+/// The place the boundary equations of SR4-04 and SR2-01 indicate.
+fn place_by_boundary_equations(h: f64, s: f64) -> Place {
+    let single = if s < S_LIQUID_273 {
+        // Below the entropy of the saturated liquid at 273.15 K: only
+        // compressed liquid (or nothing).
+        return Place::One;
+    } else if s <= S_LIQUID_623 {
+        if h <= sr4_04::enthalpy_saturated_liquid_region1_s(s) {
+            return Place::Wet;
+        }
+        if s >= S_13_100MPA && h > sr4_04::enthalpy_boundary_13_s(s) {
+            Place::Three
+        } else {
+            Place::One
+        }
+    } else if s <= sr3_03::ENTROPY_CRITICAL {
+        if h <= sr4_04::enthalpy_saturated_liquid_region3_s(s) {
+            return Place::Wet;
+        }
+        Place::Three
+    } else if s <= S_2BC {
+        if h <= sr4_04::enthalpy_saturated_vapour_region2c3b_s(s) {
+            return Place::Wet;
+        }
+        if s < S_B23.0 {
+            Place::Three
+        } else if s > S_B23.1 || h > H_B23.1 {
+            Place::Two
+        } else if h < H_B23.0 {
+            Place::Three
+        } else {
+            // SR4-04's procedure: region 3 where p_2c(h,s) exceeds the B23
+            // pressure at T_B23(h,s).
+            let t_b23 = sr4_04::temperature_boundary_23_hs(h, s);
+            if sr2_01::pressure_region2c_hs(h, s) > boundary_b23::pressure(t_b23) {
+                Place::Three
+            } else {
+                Place::Two
+            }
+        }
+    } else if s <= S_VAPOUR_273 {
+        if h <= sr4_04::enthalpy_saturated_vapour_region2ab_s(s) {
+            return Place::Wet;
+        }
+        Place::Two
+    } else {
+        Place::Two
+    };
+    if single == Place::Two && h > H_REGION5_BELOW && is_region5(h, s) {
+        Place::Five
+    } else {
+        single
+    }
+}
+
+/// Whether (h, s) lies above the 1073.15 K isotherm of the region 2
+/// equation, i.e. in region 5 rather than region 2.
+fn is_region5(h: f64, s: f64) -> bool {
+    let at_100 = Equation::Region2.evaluate(MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
+    if s <= at_100.s {
+        // The isotherm meets this entropy only above 100 MPa.
+        return false;
+    }
+    match isotherm_pressure(
+        Equation::Region2,
+        REGION2_MAX_TEMPERATURE,
+        s,
+        (LOWEST_PRESSURE, MAX_PRESSURE),
+    ) {
+        Some(p) => h > Equation::Region2.evaluate(p, REGION2_MAX_TEMPERATURE).h,
+        None => false,
+    }
+}
+
+/// The pressure at which the isotherm `t` of a Gibbs equation has entropy
+/// `s`, within `range` (MPa), where s(range.0) ≥ s ≥ s(range.1): bisection
+/// in ln p, accelerated by Newton steps where they stay in the bracket.
+fn isotherm_pressure(equation: Equation, t: f64, s: f64, range: (f64, f64)) -> Option<f64> {
+    let excess = |p: f64| {
+        let props = equation.evaluate(p, t);
+        // (s − target, ∂s/∂ln p at constant T)
+        (props.s - s, -1e3 * p * props.v * props.alpha_v)
+    };
+    let (mut lo, mut hi) = (ln(range.0), ln(range.1));
+    let (f_lo, _) = excess(range.0);
+    let (f_hi, _) = excess(range.1);
+    if !(f_lo >= 0.0 && f_hi <= 0.0) {
+        return None;
+    }
+    // Ideal-gas guess from the high end: s falls by R per unit of ln p.
+    let mut x = (hi + f_hi / SPECIFIC_GAS_CONSTANT).clamp(lo, hi);
+    for _ in 0..200 {
+        let (f, slope) = excess(exp(x));
+        if !f.is_finite() {
+            return None;
+        }
+        if f.abs() <= 1e-14 * s.abs().max(1.0) {
+            break;
+        }
+        if f > 0.0 {
+            lo = x;
+        } else {
+            hi = x;
+        }
+        let newton = x - f / slope;
+        x = if slope < 0.0 && newton > lo && newton < hi {
+            newton
+        } else {
+            0.5 * (lo + hi)
+        };
+        if hi - lo <= 1e-15 * x.abs().max(1.0) {
+            break;
+        }
+    }
+    let p = exp(x);
+    (p > 0.0 && p.is_finite()).then_some(p)
+}
+
+/// A start for a gas-like state of region 2 or 5 on the region's own
+/// equation. First as an ideal gas: T from h at a low pressure, then p from
+/// s (which falls by R per unit of ln p); then Newton's method in
+/// (ln p, T), nearly linear for a nearly ideal gas.
+fn gas_start(equation: Equation, h: f64, s: f64) -> Option<(f64, f64)> {
+    const LOW: f64 = 1e-3;
+    let mut t = if equation == Equation::Region5 {
+        1_500.0
+    } else {
+        700.0
+    };
+    for _ in 0..8 {
+        let props = equation.evaluate(LOW, t);
+        t = (t - (props.h - h) / props.cp).clamp(200.0, 2_500.0);
+    }
+    let at_low = equation.evaluate(LOW, t);
+    let mut lnp = (ln(LOW) + (at_low.s - s) / SPECIFIC_GAS_CONSTANT).min(ln(1.2 * MAX_PRESSURE));
+    for _ in 0..40 {
+        let p = exp(lnp);
+        if p.is_nan() || p <= 0.0 {
+            return None;
+        }
+        let props = equation.evaluate(p, t);
+        let (fh, fs) = (props.h - h, props.s - s);
+        let pv = 1e3 * p * props.v;
+        let (hx, ht) = (pv * (1.0 - t * props.alpha_v), props.cp);
+        let (sx, st) = (-pv * props.alpha_v, props.cp / t);
+        let det = hx * st - ht * sx;
+        if !det.is_finite() || det == 0.0 {
+            return None;
+        }
+        let dx = ((fh * st - fs * ht) / det).clamp(-5.0, 5.0);
+        let dt = ((hx * fs - sx * fh) / det).clamp(-300.0, 300.0);
+        lnp = (lnp - dx).min(ln(1.2 * MAX_PRESSURE));
+        t = (t - dt).clamp(200.0, 2_500.0);
+        if dx.abs() < 1e-12 && dt.abs() < 1e-9 * t {
+            break;
+        }
+    }
+    let p = exp(lnp);
+    (p > 0.0 && p.is_finite() && t.is_finite()).then_some((p, t))
+}
+
+/// Newton on the basic equation of a Gibbs region from `(p0, t0)`.
+fn refine_gibbs(
+    equation: Equation,
+    h: f64,
+    s: f64,
+    (p0, t0): (f64, f64),
+    t_range: (f64, f64),
+) -> Result<Properties, Error> {
+    let upper = match equation {
+        Equation::Region5 => 1.2 * REGION5_MAX_PRESSURE,
+        _ => 1.2 * MAX_PRESSURE,
+    };
+    // Liquid: p may move far from a start where the backward pressure is
+    // poor in relative terms (near psat at low pressure); gas: within a
+    // factor 4 of a start that is good to far better than that.
+    let x = match equation {
+        Equation::Region1 => (1e-9, upper),
+        _ => (0.25 * p0, (4.0 * p0).min(upper)),
+    };
+    let bounds = Bounds { x, t: t_range };
+    refine(
+        equation,
+        (Given::Enthalpy, h),
+        (Given::Entropy, s),
+        (p0, t0),
+        bounds,
+    )
+}
+
+/// Further Newton steps on a region 1 state that [`refine`] accepted.
+/// Compressed liquid barely changes h and s with p (dh = v dp), so the
+/// 1e-13 to which `refine` brings h and s leaves up to ~1e-9 relative in
+/// a low pressure; two more steps take p to rounding level. A step is
+/// kept only if it does not make the residual worse.
+fn polish_region1(mut props: Properties, h: f64, s: f64) -> Properties {
+    let residual = |q: &Properties| {
+        ((q.h - h) / h.abs().max(1.0))
+            .abs()
+            .max(((q.s - s) / s.abs().max(1.0)).abs())
+    };
+    for _ in 0..2 {
+        let (fh, fs) = (props.h - h, props.s - s);
+        let pv = 1e3 * props.v;
+        let (hp, ht) = (pv * (1.0 - props.t * props.alpha_v), props.cp);
+        let (sp, st) = (-pv * props.alpha_v, props.cp / props.t);
+        let det = hp * st - ht * sp;
+        let dp = (fh * st - fs * ht) / det;
+        let dt = (hp * fs - sp * fh) / det;
+        if !(dp.is_finite() && dt.is_finite())
+            || dp.abs() <= 2.0 * f64::EPSILON * props.p && dt.abs() <= 2.0 * f64::EPSILON * props.t
+        {
+            break;
+        }
+        let next = Equation::Region1.evaluate(props.p - dp, props.t - dt);
+        if residual(&next) > residual(&props) {
+            break;
+        }
+        props = next;
+    }
+    props
+}
+
+/// The start for region 1: p(h,s) of SR2-01, then T(p,h) of R7-97.
+fn start_region1(h: f64, s: f64) -> (f64, f64) {
+    let p = sr2_01::pressure_region1_hs(h, s);
+    let p = if p.is_finite() {
+        p.clamp(min_saturation_pressure(), MAX_PRESSURE)
+    } else {
+        1.0
+    };
+    let t = r7_97::temperature_region1_ph(p, h);
+    let t = if t.is_finite() {
+        t.clamp(MIN_TEMPERATURE, REGION13_TEMPERATURE)
+    } else {
+        300.0
+    };
+    (p, t)
+}
+
+/// The start for region 2 from SR2-01 and R7-97, where SR2-01 is valid:
+/// down to psat(273.15 K), up to 100 MPa (and the backward equation's own
+/// deviation, 0.1 %, above) and 1073.15 K.
+fn start_region2(h: f64, s: f64) -> Option<(f64, f64)> {
+    let p = sr2_01::pressure_region2_hs(h, s);
+    if !(p >= min_saturation_pressure() && p <= BACKWARD_MAX_PRESSURE) {
+        return None;
+    }
+    let t = r7_97::temperature_region2_ph(p, h);
+    (t.is_finite() && (MIN_TEMPERATURE - 5.0..=REGION2_MAX_TEMPERATURE).contains(&t))
+        .then_some((p, t))
+}
+
+/// The start for region 3: (ρ, T) from p(h,s) of SR4-04, T(p,h) and
+/// v(p,h) of SR3-03; also returns that p.
+fn start_region3(h: f64, s: f64) -> (f64, f64, f64) {
+    let p = sr4_04::pressure_region3_hs(h, s);
+    let p = if p.is_finite() {
+        p.clamp(16.0, MAX_PRESSURE)
+    } else {
+        50.0
+    };
+    let t = sr3_03::temperature_region3_ph(p, h);
+    let t = if t.is_finite() {
+        t.clamp(REGION13_TEMPERATURE, B23_MAX_TEMPERATURE)
+    } else {
+        700.0
+    };
+    let rho = 1.0 / sr3_03::volume_region3_ph(p, h);
+    let rho = if rho.is_finite() {
+        rho.clamp(50.0, 1_000.0)
+    } else {
+        CRITICAL_DENSITY
+    };
+    (rho, t, p)
+}
+
+/// Relative excess of `a` over `limit` (positive when a > limit).
+fn over(a: f64, limit: f64) -> f64 {
+    (a - limit) / limit
+}
+
+/// The state of a single-phase solution in its region.
+fn single_state(place: Place, props: Properties) -> State {
+    let (p, t) = (props.p, props.t);
+    let (region, phase) = match place {
+        Place::One => (Region::One, single_phase(p, t, true)),
+        Place::Three => (Region::Three, region3_phase(p, t)),
+        Place::Five => (Region::Five, single_phase(p, t, false)),
+        _ => (Region::Two, single_phase(p, t, false)),
+    };
+    State::single_phase(props, region, phase, Units::Native)
+}
+
+/// Whether a single-phase solution lies inside `place`, in (p, T); if
+/// not, the neighbour across the boundary it exceeds most, and by how much
+/// (relative), or the limit of the range it exceeds.
+fn check(place: Place, props: Properties) -> Attempt {
+    let (p, t) = (props.p, props.t);
+    let mut worst: Option<(Place, f64)> = None;
+    let mut note = |next: Place, excess: f64| {
+        let larger = match worst {
+            Some((_, e)) => excess > e,
+            None => true,
+        };
+        if excess > INSIDE && larger {
+            worst = Some((next, excess));
+        }
+    };
+    match place {
+        Place::One => {
+            note(Place::Three, over(t, REGION13_TEMPERATURE));
+            let p_sat = saturation_pressure(t.min(CRITICAL_TEMPERATURE));
+            note(Place::Wet, -over(p, p_sat));
+        }
+        Place::Two => {
+            note(Place::Five, over(t, REGION2_MAX_TEMPERATURE));
+            if (REGION13_TEMPERATURE..=B23_MAX_TEMPERATURE).contains(&t) {
+                note(Place::Three, over(p, boundary_b23::pressure(t)));
+            } else if t < REGION13_TEMPERATURE {
+                note(Place::Wet, over(p, saturation_pressure(t)));
+            }
+        }
+        Place::Three => {
+            let liquid_like = 1.0 / props.v > CRITICAL_DENSITY;
+            let colder = if liquid_like { Place::One } else { Place::Two };
+            note(colder, -over(t, REGION13_TEMPERATURE));
+            note(Place::Two, over(t, B23_MAX_TEMPERATURE));
+            let t_b23 = t.clamp(REGION13_TEMPERATURE, B23_MAX_TEMPERATURE);
+            note(Place::Two, -over(p, boundary_b23::pressure(t_b23)));
+            if t < CRITICAL_TEMPERATURE {
+                // A stable state below Tc: mechanically stable, and on its
+                // own side of the saturation pressure (liquid-like states,
+                // denser than critical, at or above it; vapour-like below).
+                if props.kappa_t <= 0.0 {
+                    note(Place::Wet, 1.0);
+                }
+                let p_sat = saturation_pressure(t);
+                note(
+                    Place::Wet,
+                    if liquid_like {
+                        -over(p, p_sat)
+                    } else {
+                        over(p, p_sat)
+                    },
+                );
+            }
+        }
+        Place::Five => note(Place::Two, -over(t, REGION2_MAX_TEMPERATURE)),
+        Place::Wet => {}
+    }
+    let max_p = if place == Place::Five {
+        REGION5_MAX_PRESSURE
+    } else {
+        MAX_PRESSURE
+    };
+    let limit = if -over(t, MIN_TEMPERATURE) > INSIDE || over(t, MAX_TEMPERATURE) > INSIDE {
+        Some((Quantity::Temperature, t, MIN_TEMPERATURE, MAX_TEMPERATURE))
+    } else if over(p, max_p) > INSIDE {
+        Some((Quantity::Pressure, p, 0.0, max_p))
+    } else {
+        None
+    };
+    match (limit, worst) {
+        (None, None) => Attempt::Inside(single_state(place, props)),
+        (None, Some((next, excess))) => Attempt::Outside {
+            next,
+            excess,
+            candidate: Some(single_state(place, props)),
+        },
+        (Some(limit), worst) => {
+            // Beyond the range here, but at a region boundary the
+            // neighbour's equation (which disagrees by the formulation's
+            // consistency) may still place the state inside the range:
+            // 100 MPa at 623.15 K or 863.15 K, 50 MPa at 1073.15 K.
+            let near = |boundary: f64| over(t, boundary).abs() <= SEAM;
+            let seam = match place {
+                Place::One if near(REGION13_TEMPERATURE) => Some(Place::Three),
+                Place::Two if near(REGION2_MAX_TEMPERATURE) => Some(Place::Five),
+                Place::Two if near(B23_MAX_TEMPERATURE) => Some(Place::Three),
+                Place::Three if near(REGION13_TEMPERATURE) => Some(Place::One),
+                Place::Three if near(B23_MAX_TEMPERATURE) => Some(Place::Two),
+                Place::Five if near(REGION2_MAX_TEMPERATURE) => Some(Place::Two),
+                _ => None,
+            };
+            Attempt::Beyond(limit, worst.map(|(next, _)| next).or(seam))
+        }
+    }
+}
+
+/// Solves (h, s) on the basic equation of one single-phase place.
+fn attempt_single(place: Place, h: f64, s: f64) -> Result<Attempt, Error> {
+    let props = match place {
+        Place::One => polish_region1(
+            refine_gibbs(
+                Equation::Region1,
+                h,
+                s,
+                start_region1(h, s),
+                (MIN_TEMPERATURE - 25.0, REGION13_TEMPERATURE + 40.0),
+            )?,
+            h,
+            s,
+        ),
+        Place::Two => {
+            let t_range = (MIN_TEMPERATURE - 70.0, REGION2_MAX_TEMPERATURE + 130.0);
+            let by_backward = start_region2(h, s)
+                .map(|start| refine_gibbs(Equation::Region2, h, s, start, t_range));
+            match by_backward {
+                Some(Ok(props)) => props,
+                _ => {
+                    let start = gas_start(Equation::Region2, h, s).ok_or(NOT_CONVERGED)?;
+                    refine_gibbs(Equation::Region2, h, s, start, t_range)?
+                }
+            }
+        }
+        Place::Five => {
+            let start = gas_start(Equation::Region5, h, s).ok_or(NOT_CONVERGED)?;
+            refine_gibbs(
+                Equation::Region5,
+                h,
+                s,
+                start,
+                (REGION2_MAX_TEMPERATURE - 100.0, MAX_TEMPERATURE + 200.0),
+            )?
+        }
+        Place::Three => {
+            let (rho, t, _) = start_region3(h, s);
+            let bounds = Bounds {
+                x: (20.0, 1_100.0),
+                t: (REGION13_TEMPERATURE - 30.0, B23_MAX_TEMPERATURE + 40.0),
+            };
+            refine(
+                Equation::Region3,
+                (Given::Enthalpy, h),
+                (Given::Entropy, s),
+                (rho, t),
+                bounds,
+            )?
+        }
+        Place::Wet => return attempt_wet(h, s),
+    };
+    Ok(check(place, props))
+}
+
+const NOT_CONVERGED: Error = Error::NotConverged {
+    what: "enthalpy-entropy",
+};
+
+/// Wet steam at T with entropy s: the saturation point, the quality by the
+/// lever rule on s, the enthalpy that quality gives minus `h`, and the
+/// approximate slope of that difference in T (h'' − h' = T (s'' − s')).
+fn wet_at(t: f64, h: f64, s: f64) -> Result<(Saturation, f64, f64, f64), Error> {
+    let sat = Saturation::at_temperature(t, Units::Native)?;
+    let (l, g) = (sat.liquid().native(), sat.vapour().native());
+    let x = (s - l.s) / (g.s - l.s);
+    let f = l.h + x * (g.h - l.h) - h;
+    let slope = (s - l.s) + 1e3 * l.v * saturation_pressure_slope(t);
+    Ok((sat, x, f, slope))
+}
+
+fn within(f: f64, h: f64, (relative, absolute): (f64, f64)) -> bool {
+    f.abs() <= (relative * h.abs()).max(absolute)
+}
+
+/// Wet steam of (h, s), or the side of the saturation line it lies on.
+fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
+    // The quality may leave [0, 1] by what rounding leaves in s.
+    let x_slack = |sat: &Saturation| {
+        let (l, g) = (sat.liquid().native(), sat.vapour().native());
+        1e-12 * s.abs().max(1.0) / (g.s - l.s)
+    };
+    let found = |sat: Saturation, x: f64, t: f64| -> Result<Attempt, Error> {
+        let slack = x_slack(&sat);
+        Ok(if x < -slack {
+            liquid_side(t)
+        } else if x > 1.0 + slack {
+            vapour_side(t)
+        } else {
+            Attempt::Inside(sat.mixture(x.clamp(0.0, 1.0))?)
+        })
+    };
+
+    let (mut lo, mut hi) = (MIN_TEMPERATURE, WET_MAX_TEMPERATURE);
+    let (sat, x, f, _) = wet_at(lo, h, s)?;
+    if x > 1.0 + x_slack(&sat) {
+        // Above s''(273.15 K): no wet steam at this entropy.
+        return Ok(vapour_side(lo));
+    }
+    if x < 0.0 {
+        // Below s'(273.15 K): no wet steam at this entropy.
+        return Ok(liquid_side(lo));
+    }
+    if within(f, h, WET_AIMED) {
+        return found(sat, x, lo);
+    }
+    if f > 0.0 {
+        // Below the 273.15 K isotherm, the lower edge of the wet region.
+        return Ok(Attempt::Beyond(
+            (
+                Quantity::Temperature,
+                lo - f / (s - sat.liquid().native().s).max(1e-3),
+                MIN_TEMPERATURE,
+                MAX_TEMPERATURE,
+            ),
+            None,
+        ));
+    }
+    // Below s'(623.15 K) the state is colder than 623.15 K.
+    if s <= S_LIQUID_623 {
+        hi = REGION13_TEMPERATURE;
+    }
+    let tsat = sr4_04::saturation_temperature_hs(h, s);
+    let mut t = if (S_VAPOUR_623..=S_VAPOUR_273).contains(&s) && tsat > lo && tsat < hi {
+        tsat
+    } else {
+        0.5 * (lo + hi)
+    };
+    // On [273.15 K, T_sat(s)] the difference rises with T; above T_sat(s)
+    // (quality below 0, liquid side) it counts as "too hot".
+    for _ in 0..100 {
+        let (sat, x, f, slope) = wet_at(t, h, s)?;
+        // Near x = 0 the difference hardly depends on T (all wet isobars
+        // touch the liquid line), so T is settled only when the Newton
+        // step, not just the difference, is at rounding level.
+        if x >= 0.0 && within(f, h, WET_AIMED) && (f / slope).abs() <= 1e-13 * t {
+            return found(sat, x, t);
+        }
+        if x < 0.0 || f > 0.0 {
+            hi = t;
+        } else {
+            lo = t;
+        }
+        let newton = t - f / slope;
+        t = if x >= 0.0 && slope > 0.0 && newton > lo && newton < hi {
+            newton
+        } else {
+            0.5 * (lo + hi)
+        };
+        if hi - lo <= 4.0 * f64::EPSILON * t {
+            break;
+        }
+    }
+    // A root to rounding level only: a point off the saturation line by
+    // less than the promise (compressed liquid at low pressure barely
+    // differs from the saturated liquid in h and s) belongs to the
+    // single-phase neighbour, which reproduces its p and T.
+    let (sat, x, f, _) = wet_at(t, h, s)?;
+    if x >= 0.0 && within(f, h, WET_AIMED) {
+        found(sat, x, t)
+    } else if x < 0.0 || t < hi {
+        // The bracket closed on T_sat(s) from the cold side without a
+        // root: h lies above the saturated liquid.
+        Ok(liquid_side(t))
+    } else {
+        Ok(vapour_side(t))
+    }
+}
+
+fn liquid_side(t: f64) -> Attempt {
+    Attempt::Outside {
+        next: if t <= REGION13_TEMPERATURE {
+            Place::One
+        } else {
+            Place::Three
+        },
+        excess: f64::INFINITY,
+        candidate: None,
+    }
+}
+
+fn vapour_side(t: f64) -> Attempt {
+    Attempt::Outside {
+        next: if t <= REGION13_TEMPERATURE {
+            Place::Two
+        } else {
+            Place::Three
+        },
+        excess: f64::INFINITY,
+        candidate: None,
+    }
+}
+
+/// Solves (h, s), native, on the basic equations.
+fn solve_exact(h: f64, s: f64, units: Units) -> Result<State, Error> {
+    // Every place is tried at most once: first the one the boundary
+    // equations indicate, then the neighbour each solution points to, and
+    // when a solution points nowhere new (or fails), the places not yet
+    // tried.
+    const ORDER: [Place; 5] = [
+        Place::Wet,
+        Place::One,
+        Place::Two,
+        Place::Three,
+        Place::Five,
+    ];
+    let mut place = Some(place_by_boundary_equations(h, s));
+    let mut tried = 0u8;
+    // Solutions outside their place: (place, the neighbour it points to,
+    // excess, state), at most one per place.
+    let mut outside: [Option<(Place, Place, f64, State)>; 5] = [None; 5];
+    let mut beyond = None;
+    for slot in outside.iter_mut() {
+        let Some(current) = place else { break };
+        tried |= current.bit();
+        let pointed = match attempt_single(current, h, s) {
+            Ok(Attempt::Inside(state)) => return Ok(state.in_units(units)),
+            Ok(Attempt::Outside {
+                next,
+                excess,
+                candidate,
+            }) => {
+                *slot = candidate.map(|state| (current, next, excess, state));
+                Some(next)
+            }
+            Ok(Attempt::Beyond(limit, neighbour)) => {
+                beyond = beyond.or(Some(limit));
+                neighbour
+            }
+            Err(_) => None,
+        };
+        let untried = |p: &Place| tried & p.bit() == 0;
+        place = pointed
+            .filter(untried)
+            .or_else(|| ORDER.into_iter().find(untried));
+    }
+    // A gap of a seam: two neighbours whose solutions each lie just across
+    // the boundary into the other; the one nearer to its own region.
+    let mut nearest: Option<(f64, State)> = None;
+    for (place, next, excess, state) in outside.iter().flatten() {
+        let mutual = outside
+            .iter()
+            .flatten()
+            .any(|(other, back, _, _)| other == next && back == place);
+        let nearer = match &nearest {
+            Some((e, _)) => excess < e,
+            None => true,
+        };
+        if mutual && *excess <= SEAM && nearer {
+            nearest = Some((*excess, *state));
+        }
+    }
+    match nearest {
+        Some((_, state)) => Ok(state.in_units(units)),
+        None => Err(refusal(h, s, beyond, units)),
+    }
+}
+
+/// The error for a point that has no state: the enthalpy range valid at
+/// this entropy if h lies outside it; otherwise the temperature or
+/// pressure the solution would need; otherwise non-convergence.
+fn refusal(h: f64, s: f64, beyond: Option<Limit>, units: Units) -> Error {
+    let s_min = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE).s;
+    let s_max = Equation::Region5
+        .evaluate(LOWEST_PRESSURE, MAX_TEMPERATURE)
+        .s;
+    let entropy_error = || Error::out_of_range(Quantity::Entropy, s, s_min, s_max, units);
+    if !(s_min..=s_max).contains(&s) {
+        return entropy_error();
+    }
+    let Some((h_min, h_max)) = enthalpy_range(s) else {
+        return entropy_error();
+    };
+    let slack = 1e-10 * h.abs().max(1.0);
+    if !(h_min - slack..=h_max + slack).contains(&h) {
+        return Error::out_of_range(Quantity::Enthalpy, h, h_min, h_max, units);
+    }
+    match beyond {
+        Some((quantity, value, min, max)) => Error::out_of_range(quantity, value, min, max, units),
+        None => NOT_CONVERGED,
+    }
+}
+
+/// The lowest and highest enthalpy of the range of validity at entropy s,
+/// kJ/kg; `None` below the lowest entropy of the range, s(100 MPa,
+/// 273.15 K). Where the edge cannot be computed the extreme enthalpies of
+/// the whole range stand in.
+fn enthalpy_range(s: f64) -> Option<(f64, f64)> {
+    let cold_top = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE);
+    if s.is_nan() || s < cold_top.s {
+        return None;
+    }
+    let triple = Saturation::at_temperature(MIN_TEMPERATURE, Units::Native).ok()?;
+    let (l, g) = (*triple.liquid().native(), *triple.vapour().native());
+    let p_min = min_saturation_pressure();
+    // The 273.15 K isotherm (liquid from 100 MPa down, then the wet
+    // states at 273.15 K, then vapour down to vanishing pressure).
+    let lowest = if s < l.s {
+        isotherm_pressure(Equation::Region1, MIN_TEMPERATURE, s, (p_min, MAX_PRESSURE))
+            .map(|p| Equation::Region1.evaluate(p, MIN_TEMPERATURE).h)
+    } else if s <= g.s {
+        Some(l.h + (s - l.s) * (g.h - l.h) / (g.s - l.s))
+    } else {
+        isotherm_pressure(
+            Equation::Region2,
+            MIN_TEMPERATURE,
+            s,
+            (LOWEST_PRESSURE, p_min),
+        )
+        .map(|p| Equation::Region2.evaluate(p, MIN_TEMPERATURE).h)
+    };
+    // The 100 MPa isobar to 1073.15 K, that isotherm to 50 MPa, the
+    // 50 MPa isobar to 2273.15 K, and that isotherm to vanishing pressure.
+    let hot_100 = Equation::Region2.evaluate(MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
+    let hot_50 = Equation::Region2.evaluate(REGION5_MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
+    let hottest_50 = Equation::Region5.evaluate(REGION5_MAX_PRESSURE, MAX_TEMPERATURE);
+    let on_isobar = |p: f64| {
+        State::from_ps(p, s, Units::Native)
+            .ok()
+            .map(|st| st.native().h)
+    };
+    let highest = if s <= hot_100.s {
+        on_isobar(MAX_PRESSURE)
+    } else if s <= hot_50.s {
+        isotherm_pressure(
+            Equation::Region2,
+            REGION2_MAX_TEMPERATURE,
+            s,
+            (REGION5_MAX_PRESSURE, MAX_PRESSURE),
+        )
+        .map(|p| Equation::Region2.evaluate(p, REGION2_MAX_TEMPERATURE).h)
+    } else if s <= hottest_50.s {
+        on_isobar(REGION5_MAX_PRESSURE)
+    } else {
+        isotherm_pressure(
+            Equation::Region5,
+            MAX_TEMPERATURE,
+            s,
+            (LOWEST_PRESSURE, REGION5_MAX_PRESSURE),
+        )
+        .map(|p| Equation::Region5.evaluate(p, MAX_TEMPERATURE).h)
+    };
+    let hottest = Equation::Region5.evaluate(1e-6, MAX_TEMPERATURE).h;
+    Some((lowest.unwrap_or(l.h), highest.unwrap_or(hottest)))
+}
+
+/// The backward equations' own state for (h, s), native, or `None` where
+/// they do not apply: region 5, region 2 below psat(273.15 K), wet steam
+/// below s''(623.15 K), and any point where their state misses the given
+/// h or s by more than [`BACKWARD_SANITY_H`] or [`BACKWARD_SANITY_S`] (outside their range).
+fn solve_backward(h: f64, s: f64) -> Option<State> {
+    let close = |props: &Properties| {
+        within(props.h - h, h, BACKWARD_SANITY_H) && within(props.s - s, s, BACKWARD_SANITY_S)
+    };
+    // The range, widened by the backward equations' own deviations.
+    let in_range = |p: f64, t: f64, max_t: f64| {
+        p > 0.0 && p <= BACKWARD_MAX_PRESSURE && t >= MIN_TEMPERATURE - 0.05 && t <= max_t + 0.05
+    };
+    let state = match place_by_boundary_equations(h, s) {
+        Place::Wet => {
+            if !(S_VAPOUR_623..=S_VAPOUR_273).contains(&s) {
+                return None;
+            }
+            let t = sr4_04::saturation_temperature_hs(h, s);
+            if !(MIN_TEMPERATURE..=REGION13_TEMPERATURE).contains(&t) {
+                return None;
+            }
+            let sat = Saturation::at_temperature(t, Units::Native).ok()?;
+            let (l, g) = (sat.liquid().native(), sat.vapour().native());
+            let x = (s - l.s) / (g.s - l.s);
+            if !(-0.01..=1.01).contains(&x) {
+                return None;
+            }
+            sat.mixture(x.clamp(0.0, 1.0)).ok()?
+        }
+        Place::One => {
+            let p = sr2_01::pressure_region1_hs(h, s);
+            let t = r7_97::temperature_region1_ph(p, h);
+            if !in_range(p, t, REGION13_TEMPERATURE) {
+                return None;
+            }
+            single_state(Place::One, Equation::Region1.evaluate(p, t))
+        }
+        Place::Two => {
+            let (p, t) = start_region2(h, s)?;
+            single_state(Place::Two, Equation::Region2.evaluate(p, t))
+        }
+        Place::Three => {
+            let p = sr4_04::pressure_region3_hs(h, s);
+            let t = sr3_03::temperature_region3_ph(p, h);
+            let v = sr3_03::volume_region3_ph(p, h);
+            if !(in_range(p, t, B23_MAX_TEMPERATURE) && v > 0.0) {
+                return None;
+            }
+            let mut props = Equation::Region3.evaluate(1.0 / v, t);
+            // The backward pressure itself, not the Helmholtz one at (v, T).
+            props.p = p;
+            single_state(Place::Three, props)
+        }
+        Place::Five => return None,
+    };
+    close(state.native()).then_some(state)
+}
+
+/// Solves (h, s), native, with the chosen method.
+fn solve(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
+    if method == Method::BackwardOnly {
+        if let Some(state) = solve_backward(h, s) {
+            // Near the edge of the range the backward state may lie on
+            // either side of it by the equations' own deviation: the exact
+            // state decides whether the point is in range, so that both
+            // methods refuse the same points.
+            let (p, t) = (state.native().p, state.native().t);
+            if p >= 0.99 * MAX_PRESSURE || t <= MIN_TEMPERATURE + 0.5 {
+                solve_exact(h, s, units)?;
+            }
+            return Ok(state.in_units(units));
+        }
+    }
+    solve_exact(h, s, units)
+}
+
+impl State {
+    /// The state at specific enthalpy `h` and specific entropy `s`, in
+    /// `units`, refined on the basic equations to reproduce both to
+    /// relative 1e-10 or better (absolute 1e-9 kJ/kg, kJ/(kg·K) near zero).
+    ///
+    /// Valid over the whole range of IF97 — every single-phase state of
+    /// regions 1, 2, 3 and 5 (273.15 K ≤ T ≤ 1073.15 K at p ≤ 100 MPa,
+    /// up to 2273.15 K at p ≤ 50 MPa, down to any positive pressure) and
+    /// wet steam from 273.15 K to the critical point. Wet steam comes back
+    /// as [`Saturation::mixture`] of the saturation temperature found, a
+    /// point on a saturation line as the saturated phase itself.
+    ///
+    /// Outside the range the error is [`Error::OutOfRange`] for the
+    /// enthalpy, with the lowest and highest enthalpy valid at the given
+    /// entropy (on the 273.15 K isotherm and on the 100 MPa isobar, the
+    /// 1073.15 K isotherm, the 50 MPa isobar or the 2273.15 K isotherm);
+    /// below the lowest entropy of the range, s(100 MPa, 273.15 K), it is
+    /// for the entropy. Inside that enthalpy band lie a few tiny pockets
+    /// colder than 273.15 K (cold water near s = 0, where isentropic
+    /// compression cools it); there the error names the temperature the
+    /// state would need. A NaN or infinite input is [`Error::NotFinite`];
+    /// an iteration that fails is [`Error::NotConverged`], never an
+    /// approximate state.
+    pub fn from_hs(h: f64, s: f64, units: Units) -> Result<State, Error> {
+        State::from_hs_with(h, s, units, Method::Exact)
+    }
+
+    /// [`State::from_hs`] with the choice of [`Method`].
+    ///
+    /// With [`Method::BackwardOnly`] the state is the IAPWS backward
+    /// equations' own, unrefined, in the region the SR4-04 / SR2-01
+    /// boundary equations indicate: p(h,s) of SR2-01 (regions 1, 2) or
+    /// SR4-04 (region 3, with the properties at T(p,h) and v(p,h) of
+    /// SR3-03, the pressure reported being the backward one), T(p,h) of
+    /// R7-97, and for wet steam Tsat(h,s) of SR4-04 with the quality from
+    /// the lever rule on s. Where no backward equation applies — region 5,
+    /// region 2 below psat(273.15 K), wet steam below s''(623.15 K) — or
+    /// the backward state misses h or s by more than 0.1 % (the point is
+    /// outside their range), the exact state is returned, as are the
+    /// errors.
+    pub fn from_hs_with(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
+        let h = native_input(units, Quantity::Enthalpy, h)?;
+        let s = native_input(units, Quantity::Entropy, s)?;
+        solve(h, s, units, method)
+    }
+}
