@@ -74,13 +74,42 @@ impl core::fmt::Display for Phase {
 /// (the heat capacities, speed of sound, expansion coefficient and
 /// compressibility of wet steam; the quality of a single-phase state) read
 /// as `None`.
-#[derive(Clone, Copy, Debug, PartialEq)]
+#[derive(Clone, Copy, Debug)]
 pub struct State {
     props: Properties,
     quality: Option<f64>,
     region: Region,
     phase: Phase,
     units: Units,
+}
+
+/// Two states are equal when every property is; the properties a wet state
+/// lacks (NaN inside) count as equal to each other.
+impl PartialEq for State {
+    fn eq(&self, other: &State) -> bool {
+        let same = |a: f64, b: f64| a == b || (a.is_nan() && b.is_nan());
+        let (a, b) = (&self.props, &other.props);
+        self.quality == other.quality
+            && self.region == other.region
+            && self.phase == other.phase
+            && self.units == other.units
+            && [
+                (a.p, b.p),
+                (a.t, b.t),
+                (a.v, b.v),
+                (a.u, b.u),
+                (a.h, b.h),
+                (a.s, b.s),
+                (a.g, b.g),
+                (a.cp, b.cp),
+                (a.cv, b.cv),
+                (a.w, b.w),
+                (a.alpha_v, b.alpha_v),
+                (a.kappa_t, b.kappa_t),
+            ]
+            .iter()
+            .all(|&(x, y)| same(x, y))
+    }
 }
 
 impl State {
