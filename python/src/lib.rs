@@ -1,0 +1,1 @@
+//! The Python extension module of ebullio (being written).
