@@ -1,23 +1,68 @@
 //! Instruction-count probe: run under callgrind; argument selects the call.
 use std::hint::black_box;
 fn main() {
-    let which: u32 = std::env::args().nth(1).and_then(|a| a.parse().ok()).unwrap_or(0);
-    let pts1 = [(3.0, 300.0), (80.0, 300.0), (3.0, 500.0), (10.0, 400.0), (50.0, 350.0), (1.0, 280.0), (20.0, 600.0), (100.0, 450.0)];
-    let pts2 = [(0.0035, 300.0), (0.0035, 700.0), (30.0, 700.0), (1.0, 500.0), (10.0, 900.0), (0.1, 400.0), (5.0, 600.0), (50.0, 1000.0)];
+    let which: u32 = std::env::args()
+        .nth(1)
+        .and_then(|a| a.parse().ok())
+        .unwrap_or(0);
+    let pts1 = [
+        (3.0, 300.0),
+        (80.0, 300.0),
+        (3.0, 500.0),
+        (10.0, 400.0),
+        (50.0, 350.0),
+        (1.0, 280.0),
+        (20.0, 600.0),
+        (100.0, 450.0),
+    ];
+    let pts2 = [
+        (0.0035, 300.0),
+        (0.0035, 700.0),
+        (30.0, 700.0),
+        (1.0, 500.0),
+        (10.0, 900.0),
+        (0.1, 400.0),
+        (5.0, 600.0),
+        (50.0, 1000.0),
+    ];
     let n = 100_000;
     let mut acc = 0.0;
     for k in 0..n {
         let (p1, t1) = black_box(pts1[k & 7]);
         let (p2, t2) = black_box(pts2[k & 7]);
         acc += match which {
-            1 => { let s = ebullio::region1::gibbs(p1, t1).properties(p1, t1); s.v + s.h + s.u + s.s + s.cp + s.cv + s.w + s.alpha_v + s.kappa_t }
+            1 => {
+                let s = ebullio::region1::gibbs(p1, t1).properties(p1, t1);
+                s.v + s.h + s.u + s.s + s.cp + s.cv + s.w + s.alpha_v + s.kappa_t
+            }
             2 => ebullio::region1::enthalpy(p1, t1),
-            3 => { let s = ebullio::region2::gibbs(p2, t2).properties(p2, t2); s.v + s.h + s.u + s.s + s.cp + s.cv + s.w + s.alpha_v + s.kappa_t }
+            3 => {
+                let s = ebullio::region2::gibbs(p2, t2).properties(p2, t2);
+                s.v + s.h + s.u + s.s + s.cp + s.cv + s.w + s.alpha_v + s.kappa_t
+            }
             4 => ebullio::region2::enthalpy(p2, t2),
-            5 => { let s = ebullio::State::from_pt(p1, t1, ebullio::Units::Native).unwrap(); s.enthalpy() + s.entropy() + s.specific_volume() + s.isobaric_heat_capacity().unwrap() + s.speed_of_sound().unwrap() }
-            6 => { let s = ebullio::State::from_pt(p2, t2, ebullio::Units::Native).unwrap(); s.enthalpy() + s.entropy() + s.specific_volume() + s.isobaric_heat_capacity().unwrap() + s.speed_of_sound().unwrap() }
+            5 => {
+                let s = ebullio::State::from_pt(p1, t1, ebullio::Units::Native).unwrap();
+                s.enthalpy()
+                    + s.entropy()
+                    + s.specific_volume()
+                    + s.isobaric_heat_capacity().unwrap()
+                    + s.speed_of_sound().unwrap()
+            }
+            6 => {
+                let s = ebullio::State::from_pt(p2, t2, ebullio::Units::Native).unwrap();
+                s.enthalpy()
+                    + s.entropy()
+                    + s.specific_volume()
+                    + s.isobaric_heat_capacity().unwrap()
+                    + s.speed_of_sound().unwrap()
+            }
             7 => ebullio::enthalpy_from_pt(p1, t1, ebullio::Units::Native).unwrap(),
-            8 => { let rho = black_box(300.0 + 30.0 * (k & 7) as f64); let s = ebullio::region3::helmholtz(rho, 700.0).properties(rho, 700.0); s.p + s.h + s.cp + s.w }
+            8 => {
+                let rho = black_box(300.0 + 30.0 * (k & 7) as f64);
+                let s = ebullio::region3::helmholtz(rho, 700.0).properties(rho, 700.0);
+                s.p + s.h + s.cp + s.w
+            }
             _ => 0.0,
         };
     }

@@ -10,7 +10,7 @@
 //! standard relations (Maxwell's, and dh = T ds + v dp).
 
 use crate::error::Error;
-use crate::free_energy::Properties;
+use crate::free_energy::{Properties, ReducedGibbs};
 use crate::{region1, region2, region3, region5};
 
 /// A property that can be prescribed as one half of an input pair.
@@ -46,6 +46,17 @@ impl Equation {
             Equation::Region2 => region2::gibbs(x, t).properties(x, t),
             Equation::Region5 => region5::gibbs(x, t).properties(x, t),
             Equation::Region3 => region3::helmholtz(x, t).properties(x, t),
+        }
+    }
+
+    /// The reduced Gibbs derivatives alone, without the properties: what
+    /// an iteration along an isobar needs. Gibbs regions only.
+    #[inline]
+    pub(crate) fn reduced_gibbs(self, p: f64, t: f64) -> ReducedGibbs {
+        match self {
+            Equation::Region1 => region1::gibbs(p, t),
+            Equation::Region5 => region5::gibbs(p, t),
+            _ => region2::gibbs(p, t),
         }
     }
 }
@@ -109,20 +120,21 @@ fn within(given: Given, actual: f64, target: f64, (relative, absolute): (f64, f6
     (actual - target).abs() <= (relative * target.abs()).max(floor)
 }
 
+/// Whether `props` reproduces both given values to the promised precision.
+#[inline]
+pub(crate) fn reproduces_as_promised(props: &Properties, a: (Given, f64), b: (Given, f64)) -> bool {
+    reproduces(props, a, b, PROMISED)
+}
+
 /// Whether `props` reproduces both given values to `tolerance`.
 #[inline]
-pub(crate) fn reproduces(
-    props: &Properties,
-    a: (Given, f64),
-    b: (Given, f64),
-    tolerance: (f64, f64),
-) -> bool {
+fn reproduces(props: &Properties, a: (Given, f64), b: (Given, f64), tolerance: (f64, f64)) -> bool {
     within(a.0, value(a.0, props), a.1, tolerance) && within(b.0, value(b.0, props), b.1, tolerance)
 }
 
 /// What the caller is promised: relative 1e-10, absolute 1e-9 near zero.
 /// The iteration itself aims a thousand times tighter.
-pub(crate) const PROMISED: (f64, f64) = (1e-10, 1e-9);
+const PROMISED: (f64, f64) = (1e-10, 1e-9);
 const AIMED: (f64, f64) = (1e-13, 1e-12);
 
 /// Bounds of the variables during the iteration, so that a wild step can

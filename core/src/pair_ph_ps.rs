@@ -18,12 +18,14 @@ use crate::boundary_b23;
 use crate::constants::*;
 use crate::error::{native_input, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{refine, value, Bounds, Equation, Given};
+use crate::free_energy::ReducedGibbs;
+use crate::inverse::{refine, reproduces_as_promised, value, Bounds, Equation, Given};
 use crate::regions::{region3_phase, single_phase};
 use crate::saturation::Saturation;
 use crate::saturation_line::{saturation_pressure, saturation_temperature};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
+use crate::{region1, region2, region5};
 
 /// How an inverse pair is finished.
 #[derive(Clone, Copy, Debug, PartialEq, Eq, Hash, Default)]
@@ -61,9 +63,29 @@ impl Caloric {
         }
     }
 
-    /// The property at (p, T) on a Gibbs region's equation.
+    /// The property at (p, T) on a Gibbs region's equation, from the
+    /// reduced derivatives alone (enthalpy by its single-sum path); the
+    /// same bits as the full state's.
     fn at(self, equation: Equation, p: f64, t: f64) -> f64 {
-        value(self.given(), &equation.evaluate(p, t))
+        match (self, equation) {
+            (Caloric::Enthalpy, Equation::Region1) => region1::enthalpy(p, t),
+            (Caloric::Enthalpy, Equation::Region5) => region5::enthalpy(p, t),
+            (Caloric::Enthalpy, _) => region2::enthalpy(p, t),
+            (Caloric::Entropy, _) => {
+                let g = equation.reduced_gibbs(p, t);
+                SPECIFIC_GAS_CONSTANT * (g.g_t - g.g)
+            }
+        }
+    }
+
+    /// The property and its slope along the isobar, d/dT at constant p:
+    /// (h, cp) or (s, cp/T), from the reduced derivatives.
+    fn with_slope(self, g: &ReducedGibbs, t: f64) -> (f64, f64) {
+        let cp = -SPECIFIC_GAS_CONSTANT * g.g_tt;
+        match self {
+            Caloric::Enthalpy => (SPECIFIC_GAS_CONSTANT * t * g.g_t, cp),
+            Caloric::Entropy => (SPECIFIC_GAS_CONSTANT * (g.g_t - g.g), cp / t),
+        }
     }
 
     fn backward_temperature(self, equation: Equation, p: f64, z: f64) -> f64 {
@@ -291,7 +313,14 @@ fn backward_valid(t: f64, (lo, hi): (f64, f64), equation: &'static str) -> Resul
     }
 }
 
-/// Newton in T at the given p on a Gibbs region.
+/// Newton steps in T smaller than this (relative) leave, by quadratic
+/// convergence, an error far below the promise: the next state is final.
+const SETTLED_STEP: f64 = 1e-7;
+const ISOBAR_STEPS: u32 = 60;
+
+/// Newton's method in T along the isobar p on a Gibbs region, on the
+/// reduced derivatives alone; the properties are evaluated once, at the
+/// end, and checked against the promise.
 fn refine_pt(
     equation: Equation,
     p: f64,
@@ -300,17 +329,25 @@ fn refine_pt(
     t0: f64,
     t_range: (f64, f64),
 ) -> Result<Properties, Error> {
-    let bounds = Bounds {
-        x: (p, p),
-        t: t_range,
-    };
-    refine(
-        equation,
-        (Given::Pressure, p),
-        (caloric.given(), z),
-        (p, t0),
-        bounds,
-    )
+    let given = (caloric.given(), z);
+    let mut t = t0.clamp(t_range.0, t_range.1);
+    for _ in 0..ISOBAR_STEPS {
+        let (value, slope) = caloric.with_slope(&equation.reduced_gibbs(p, t), t);
+        let next = (t - (value - z) / slope).clamp(t_range.0, t_range.1);
+        if !next.is_finite() {
+            break;
+        }
+        if (next - t).abs() <= SETTLED_STEP * t {
+            let props = equation.evaluate(p, next);
+            if reproduces_as_promised(&props, (Given::Pressure, p), given) {
+                return Ok(props);
+            }
+        }
+        t = next;
+    }
+    Err(Error::NotConverged {
+        what: "inverse-pair",
+    })
 }
 
 impl State {

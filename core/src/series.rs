@@ -130,17 +130,55 @@ pub(crate) struct Series {
     x_weights: [[f64; 2]; MAX_TERMS],
     x_chain: PowerChain,
     y_chain: PowerChain,
+    x_shift: usize,
     y_shift: usize,
 }
 
 impl Series {
-    /// Arranges `terms` (sorted by I, as every IF97 table is), with every J
-    /// lifted by `y_shift` so that it is not negative; the caller scales the
-    /// sums by y^(−y_shift).
+    /// Arranges `terms` (sorted by I, as every IF97 basic-equation table
+    /// is), with every J lifted by `y_shift` so that it is not negative; the
+    /// caller scales the sums by y^(−y_shift).
     pub(crate) const fn new(terms: &[Term], y_shift: i32) -> Series {
-        assert!(terms.len() <= MAX_TERMS);
+        Series::new_shifted(terms, 0, y_shift)
+    }
+
+    /// A backward equation's table: the shifts that lift its most negative
+    /// I and J to zero are found here.
+    pub(crate) const fn for_table(table: &[Term]) -> Series {
+        let (mut min_i, mut min_j) = (0, 0);
+        let mut k = 0;
+        while k < table.len() {
+            if table[k].0 < min_i {
+                min_i = table[k].0;
+            }
+            if table[k].1 < min_j {
+                min_j = table[k].1;
+            }
+            k += 1;
+        }
+        Series::new_shifted(table, -min_i, -min_j)
+    }
+
+    /// The same for tables with negative I as well (the backward
+    /// equations): the terms are put in order of I here, and both shifts
+    /// are undone by [`Series::value`].
+    pub(crate) const fn new_shifted(table: &[Term], x_shift: i32, y_shift: i32) -> Series {
+        assert!(table.len() <= MAX_TERMS);
+        // A stable insertion sort by I, at compile time.
+        let mut terms = [(0, 0, 0.0); MAX_TERMS];
+        let mut k = 0;
+        while k < table.len() {
+            let mut m = k;
+            while m > 0 && terms[m - 1].0 > table[k].0 {
+                terms[m] = terms[m - 1];
+                m -= 1;
+            }
+            terms[m] = table[k];
+            k += 1;
+        }
+        let len = table.len();
         let mut series = Series {
-            len: terms.len(),
+            len,
             y_index: [0; MAX_TERMS],
             coefficients: [[0.0; 3]; MAX_TERMS],
             closes_group: [false; MAX_TERMS],
@@ -148,27 +186,26 @@ impl Series {
             x_weights: [[0.0; 2]; MAX_TERMS],
             x_chain: PowerChain::new([false; MAX_POWER]),
             y_chain: PowerChain::new([false; MAX_POWER]),
+            x_shift: x_shift as usize,
             y_shift: y_shift as usize,
         };
         let mut x_needed = [false; MAX_POWER];
         let mut y_needed = [false; MAX_POWER];
-        // y^shift is what the caller divides by.
+        // The shifts' powers are what the results are divided by.
+        x_needed[x_shift as usize] = true;
         y_needed[y_shift as usize] = true;
         let mut k = 0;
-        while k < terms.len() {
+        while k < len {
             let (i, j, n) = terms[k];
-            assert!(i >= 0 && (i as usize) < MAX_POWER);
+            assert!(i + x_shift >= 0 && ((i + x_shift) as usize) < MAX_POWER);
             assert!(j + y_shift >= 0 && ((j + y_shift) as usize) < MAX_POWER);
-            if k > 0 {
-                assert!(i >= terms[k - 1].0, "table not sorted by I");
-            }
-            series.closes_group[k] = k + 1 == terms.len() || terms[k + 1].0 != i;
-            series.x_index[k] = i as u8;
+            series.closes_group[k] = k + 1 == len || terms[k + 1].0 != i;
+            series.x_index[k] = (i + x_shift) as u8;
             series.x_weights[k] = [i as f64, (i * (i - 1)) as f64];
             series.y_index[k] = (j + y_shift) as u8;
             let jf = j as f64;
             series.coefficients[k] = [n, n * jf, n * jf * (jf - 1.0)];
-            x_needed[i as usize] = true;
+            x_needed[(i + x_shift) as usize] = true;
             y_needed[(j + y_shift) as usize] = true;
             k += 1;
         }
@@ -177,7 +214,27 @@ impl Series {
         series
     }
 
-    /// All six sums at `x`, `y`, and y^y_shift, which undoes the shift.
+    /// Σ nᵢ x^Iᵢ y^Jᵢ alone, the shifts undone: a backward equation's sum.
+    #[allow(unused_assignments)]
+    #[inline(always)]
+    pub(crate) fn value(&self, x: f64, y: f64) -> f64 {
+        let px = self.x_chain.powers(x);
+        let py = self.y_chain.powers(y);
+        let (mut sum, mut p) = (0.0, 0.0);
+        unrolled!(K, {
+            if K < self.len {
+                p += self.coefficients[K][0] * py[self.y_index[K] as usize];
+                if self.closes_group[K] {
+                    sum += px[self.x_index[K] as usize] * p;
+                    p = 0.0;
+                }
+            }
+        });
+        sum / (px[self.x_shift] * py[self.y_shift])
+    }
+
+    /// All six sums at `x`, `y`, and y^y_shift, which undoes the shift
+    /// (tables without an x shift only).
     // The unrolled copy after the last group resets sums nobody reads.
     #[allow(unused_assignments)]
     #[inline(always)]

@@ -14,18 +14,19 @@ pub mod sr3_03;
 pub mod sr4_04;
 pub mod sr5_05;
 
-use crate::math::powi;
-
 /// One term `n · x^i · y^j` of a backward equation, exponents and
 /// coefficient as the release prints them.
 pub(crate) type Term = (i32, i32, f64);
 
-/// `Σ nᵢ · x^Iᵢ · y^Jᵢ`, the shape shared by most backward equations once
-/// their reduced, shifted variables `x` and `y` are formed.
-#[inline]
-pub(crate) fn sum_terms(terms: &[Term], x: f64, y: f64) -> f64 {
-    terms
-        .iter()
-        .map(|&(i, j, n)| n * powi(x, i) * powi(y, j))
-        .sum()
+/// `Σ nᵢ · x^Iᵢ · y^Jᵢ` over a constant table, the shape shared by most
+/// backward equations once their reduced, shifted variables `x` and `y` are
+/// formed. The table is arranged at compile time (see [`crate::series`]):
+/// only the powers it uses are computed, each once, and the sum is
+/// straight-line code.
+macro_rules! sum_terms {
+    ($table:expr, $x:expr, $y:expr) => {{
+        const SERIES: $crate::series::Series = $crate::series::Series::for_table(&$table);
+        SERIES.value($x, $y)
+    }};
 }
+pub(crate) use sum_terms;

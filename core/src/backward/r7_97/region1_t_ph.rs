@@ -54,5 +54,5 @@ const TERMS: [Term; 20] = [
 pub fn temperature_region1_ph(p: f64, h: f64) -> f64 {
     let pi = p / P_STAR;
     let eta = h / H_STAR;
-    T_STAR * sum_terms(&TERMS, pi, eta + 1.0)
+    T_STAR * sum_terms!(TERMS, pi, eta + 1.0)
 }

@@ -54,5 +54,5 @@ const TERMS: [Term; 20] = [
 pub fn temperature_region1_ps(p: f64, s: f64) -> f64 {
     let pi = p / P_STAR;
     let sigma = s / S_STAR;
-    T_STAR * sum_terms(&TERMS, pi, sigma + 2.0)
+    T_STAR * sum_terms!(TERMS, pi, sigma + 2.0)
 }

@@ -146,7 +146,7 @@ const TERMS_2C: [Term; 23] = [
 pub fn temperature_region2a_ph(p: f64, h: f64) -> f64 {
     let pi = p / P_STAR;
     let eta = h / H_STAR;
-    T_STAR * sum_terms(&TERMS_2A, pi, eta - 2.1)
+    T_STAR * sum_terms!(TERMS_2A, pi, eta - 2.1)
 }
 
 /// Temperature in K of superheated vapour in subregion 2b at pressure `p` in
@@ -157,7 +157,7 @@ pub fn temperature_region2a_ph(p: f64, h: f64) -> f64 {
 pub fn temperature_region2b_ph(p: f64, h: f64) -> f64 {
     let pi = p / P_STAR;
     let eta = h / H_STAR;
-    T_STAR * sum_terms(&TERMS_2B, pi - 2.0, eta - 2.6)
+    T_STAR * sum_terms!(TERMS_2B, pi - 2.0, eta - 2.6)
 }
 
 /// Temperature in K of superheated vapour in subregion 2c at pressure `p` in
@@ -168,7 +168,7 @@ pub fn temperature_region2b_ph(p: f64, h: f64) -> f64 {
 pub fn temperature_region2c_ph(p: f64, h: f64) -> f64 {
     let pi = p / P_STAR;
     let eta = h / H_STAR;
-    T_STAR * sum_terms(&TERMS_2C, pi + 25.0, eta - 1.8)
+    T_STAR * sum_terms!(TERMS_2C, pi + 25.0, eta - 1.8)
 }
 
 /// Temperature in K of superheated vapour (region 2) at pressure `p` in MPa

@@ -197,7 +197,7 @@ pub fn temperature_region2a_ps(p: f64, s: f64) -> f64 {
 pub fn temperature_region2b_ps(p: f64, s: f64) -> f64 {
     let pi = p / P_STAR;
     let sigma = s / S_STAR_2B;
-    T_STAR * sum_terms(&TERMS_2B, pi, 10.0 - sigma)
+    T_STAR * sum_terms!(TERMS_2B, pi, 10.0 - sigma)
 }
 
 /// Temperature in K of superheated vapour in subregion 2c at pressure `p` in
@@ -207,7 +207,7 @@ pub fn temperature_region2b_ps(p: f64, s: f64) -> f64 {
 pub fn temperature_region2c_ps(p: f64, s: f64) -> f64 {
     let pi = p / P_STAR;
     let sigma = s / S_STAR_2C;
-    T_STAR * sum_terms(&TERMS_2C, pi, 2.0 - sigma)
+    T_STAR * sum_terms!(TERMS_2C, pi, 2.0 - sigma)
 }
 
 /// Temperature in K of superheated vapour (region 2) at pressure `p` in MPa

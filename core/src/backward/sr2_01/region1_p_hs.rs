@@ -55,5 +55,5 @@ const TERMS: [Term; 19] = [
 pub fn pressure_region1_hs(h: f64, s: f64) -> f64 {
     let eta = h / H_STAR;
     let sigma = s / S_STAR;
-    P_STAR * sum_terms(&TERMS, eta + 0.05, sigma + 0.05)
+    P_STAR * sum_terms!(TERMS, eta + 0.05, sigma + 0.05)
 }

@@ -160,7 +160,7 @@ const TERMS_2C: [Term; 31] = [
 pub fn pressure_region2a_hs(h: f64, s: f64) -> f64 {
     let eta = h / H_STAR_2A;
     let sigma = s / S_STAR_2A;
-    P_STAR_2A * powi(sum_terms(&TERMS_2A, eta - 0.5, sigma - 1.2), 4)
+    P_STAR_2A * powi(sum_terms!(TERMS_2A, eta - 0.5, sigma - 1.2), 4)
 }
 
 /// Pressure in MPa of superheated vapour in subregion 2b at specific
@@ -171,7 +171,7 @@ pub fn pressure_region2a_hs(h: f64, s: f64) -> f64 {
 pub fn pressure_region2b_hs(h: f64, s: f64) -> f64 {
     let eta = h / H_STAR_2B;
     let sigma = s / S_STAR_2B;
-    P_STAR_2BC * powi(sum_terms(&TERMS_2B, eta - 0.6, sigma - 1.01), 4)
+    P_STAR_2BC * powi(sum_terms!(TERMS_2B, eta - 0.6, sigma - 1.01), 4)
 }
 
 /// Pressure in MPa of superheated vapour in subregion 2c at specific
@@ -182,7 +182,7 @@ pub fn pressure_region2b_hs(h: f64, s: f64) -> f64 {
 pub fn pressure_region2c_hs(h: f64, s: f64) -> f64 {
     let eta = h / H_STAR_2C;
     let sigma = s / S_STAR_2C;
-    P_STAR_2BC * powi(sum_terms(&TERMS_2C, eta - 0.7, sigma - 1.1), 4)
+    P_STAR_2BC * powi(sum_terms!(TERMS_2C, eta - 0.7, sigma - 1.1), 4)
 }
 
 /// Pressure in MPa of superheated vapour (region 2) at specific enthalpy `h`

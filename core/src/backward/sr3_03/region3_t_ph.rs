@@ -110,7 +110,7 @@ const TERMS_3B: [Term; 33] = [
 pub fn temperature_region3a_ph(p: f64, h: f64) -> f64 {
     let pi = p / P_STAR;
     let eta = h / H_STAR_3A;
-    T_STAR_3A * sum_terms(&TERMS_3A, pi + 0.240, eta - 0.615)
+    T_STAR_3A * sum_terms!(TERMS_3A, pi + 0.240, eta - 0.615)
 }
 
 /// Temperature in K in subregion 3b at pressure `p` in MPa and
@@ -121,7 +121,7 @@ pub fn temperature_region3a_ph(p: f64, h: f64) -> f64 {
 pub fn temperature_region3b_ph(p: f64, h: f64) -> f64 {
     let pi = p / P_STAR;
     let eta = h / H_STAR_3B;
-    T_STAR_3B * sum_terms(&TERMS_3B, pi + 0.298, eta - 0.720)
+    T_STAR_3B * sum_terms!(TERMS_3B, pi + 0.298, eta - 0.720)
 }
 
 /// Temperature in K in region 3 at pressure `p` in MPa and

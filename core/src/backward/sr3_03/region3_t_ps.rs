@@ -106,7 +106,7 @@ const TERMS_3B: [Term; 28] = [
 pub fn temperature_region3a_ps(p: f64, s: f64) -> f64 {
     let pi = p / P_STAR;
     let sigma = s / S_STAR_3A;
-    T_STAR_3A * sum_terms(&TERMS_3A, pi + 0.240, sigma - 0.703)
+    T_STAR_3A * sum_terms!(TERMS_3A, pi + 0.240, sigma - 0.703)
 }
 
 /// Temperature in K in subregion 3b at pressure `p` in MPa and
@@ -116,7 +116,7 @@ pub fn temperature_region3a_ps(p: f64, s: f64) -> f64 {
 pub fn temperature_region3b_ps(p: f64, s: f64) -> f64 {
     let pi = p / P_STAR;
     let sigma = s / S_STAR_3B;
-    T_STAR_3B * sum_terms(&TERMS_3B, pi + 0.760, sigma - 0.818)
+    T_STAR_3B * sum_terms!(TERMS_3B, pi + 0.760, sigma - 0.818)
 }
 
 /// Temperature in K in region 3 at pressure `p` in MPa and

@@ -108,7 +108,7 @@ const TERMS_3B: [Term; 30] = [
 pub fn volume_region3a_ph(p: f64, h: f64) -> f64 {
     let pi = p / P_STAR;
     let eta = h / H_STAR_3A;
-    V_STAR_3A * sum_terms(&TERMS_3A, pi + 0.128, eta - 0.727)
+    V_STAR_3A * sum_terms!(TERMS_3A, pi + 0.128, eta - 0.727)
 }
 
 /// Specific volume in m³/kg in subregion 3b at pressure `p` in MPa and
@@ -119,7 +119,7 @@ pub fn volume_region3a_ph(p: f64, h: f64) -> f64 {
 pub fn volume_region3b_ph(p: f64, h: f64) -> f64 {
     let pi = p / P_STAR;
     let eta = h / H_STAR_3B;
-    V_STAR_3B * sum_terms(&TERMS_3B, pi + 0.0661, eta - 0.720)
+    V_STAR_3B * sum_terms!(TERMS_3B, pi + 0.0661, eta - 0.720)
 }
 
 /// Specific volume in m³/kg in region 3 at pressure `p` in MPa and

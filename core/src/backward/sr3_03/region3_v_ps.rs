@@ -104,7 +104,7 @@ const TERMS_3B: [Term; 31] = [
 pub fn volume_region3a_ps(p: f64, s: f64) -> f64 {
     let pi = p / P_STAR;
     let sigma = s / S_STAR_3A;
-    V_STAR_3A * sum_terms(&TERMS_3A, pi + 0.187, sigma - 0.755)
+    V_STAR_3A * sum_terms!(TERMS_3A, pi + 0.187, sigma - 0.755)
 }
 
 /// Specific volume in m³/kg in subregion 3b at pressure `p` in MPa and
@@ -114,7 +114,7 @@ pub fn volume_region3a_ps(p: f64, s: f64) -> f64 {
 pub fn volume_region3b_ps(p: f64, s: f64) -> f64 {
     let pi = p / P_STAR;
     let sigma = s / S_STAR_3B;
-    V_STAR_3B * sum_terms(&TERMS_3B, pi + 0.298, sigma - 0.816)
+    V_STAR_3B * sum_terms!(TERMS_3B, pi + 0.298, sigma - 0.816)
 }
 
 /// Specific volume in m³/kg in region 3 at pressure `p` in MPa and

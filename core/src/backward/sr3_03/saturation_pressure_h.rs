@@ -48,5 +48,5 @@ const TERMS: [Term; 14] = [
 /// line from 623.15 K to the critical point. The caller checks the range.
 pub fn saturation_pressure_region3_h(h: f64) -> f64 {
     let eta = h / H_STAR;
-    P_STAR * sum_terms(&TERMS, eta - 1.02, eta - 0.608)
+    P_STAR * sum_terms!(TERMS, eta - 1.02, eta - 0.608)
 }

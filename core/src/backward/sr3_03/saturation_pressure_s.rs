@@ -45,5 +45,5 @@ const TERMS: [Term; 10] = [
 /// range.
 pub fn saturation_pressure_region3_s(s: f64) -> f64 {
     let sigma = s / S_STAR;
-    P_STAR * sum_terms(&TERMS, sigma - 1.03, sigma - 0.699)
+    P_STAR * sum_terms!(TERMS, sigma - 1.03, sigma - 0.699)
 }

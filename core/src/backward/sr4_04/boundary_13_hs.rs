@@ -38,5 +38,5 @@ const TERMS: [Term; 6] = [
 /// checks the range.
 pub fn enthalpy_boundary_13_s(s: f64) -> f64 {
     let sigma = s / S_STAR;
-    H_STAR * sum_terms(&TERMS, sigma - 0.884, sigma - 0.864)
+    H_STAR * sum_terms!(TERMS, sigma - 0.884, sigma - 0.864)
 }

@@ -64,5 +64,5 @@ const TERMS: [Term; 25] = [
 pub fn temperature_boundary_23_hs(h: f64, s: f64) -> f64 {
     let eta = h / H_STAR;
     let sigma = s / S_STAR;
-    T_STAR * sum_terms(&TERMS, eta - 0.727, sigma - 0.864)
+    T_STAR * sum_terms!(TERMS, eta - 0.727, sigma - 0.864)
 }

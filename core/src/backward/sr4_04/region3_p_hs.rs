@@ -116,7 +116,7 @@ const TERMS_3B: [Term; 35] = [
 pub fn pressure_region3a_hs(h: f64, s: f64) -> f64 {
     let eta = h / H_STAR_3A;
     let sigma = s / S_STAR_3A;
-    P_STAR_3A * sum_terms(&TERMS_3A, eta - 1.01, sigma - 0.750)
+    P_STAR_3A * sum_terms!(TERMS_3A, eta - 1.01, sigma - 0.750)
 }
 
 /// Pressure in MPa in subregion 3b at specific enthalpy `h` in kJ/kg and
@@ -127,7 +127,7 @@ pub fn pressure_region3a_hs(h: f64, s: f64) -> f64 {
 pub fn pressure_region3b_hs(h: f64, s: f64) -> f64 {
     let eta = h / H_STAR_3B;
     let sigma = s / S_STAR_3B;
-    P_STAR_3B / sum_terms(&TERMS_3B, eta - 0.681, sigma - 0.792)
+    P_STAR_3B / sum_terms!(TERMS_3B, eta - 0.681, sigma - 0.792)
 }
 
 /// Pressure in MPa in region 3 at specific enthalpy `h` in kJ/kg and

@@ -59,5 +59,5 @@ const TERMS: [Term; 27] = [
 /// (273.15 K to 623.15 K). The caller checks the range.
 pub fn enthalpy_saturated_liquid_region1_s(s: f64) -> f64 {
     let sigma = s / S_STAR;
-    H_STAR * sum_terms(&TERMS, sigma - 1.09, sigma + 0.366e-4)
+    H_STAR * sum_terms!(TERMS, sigma - 1.09, sigma + 0.366e-4)
 }

@@ -51,5 +51,5 @@ const TERMS: [Term; 19] = [
 /// (623.15 K to the critical point). The caller checks the range.
 pub fn enthalpy_saturated_liquid_region3_s(s: f64) -> f64 {
     let sigma = s / S_STAR;
-    H_STAR * sum_terms(&TERMS, sigma - 1.09, sigma + 0.366e-4)
+    H_STAR * sum_terms!(TERMS, sigma - 1.09, sigma + 0.366e-4)
 }

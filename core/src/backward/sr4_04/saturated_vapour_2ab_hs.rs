@@ -66,5 +66,5 @@ const TERMS: [Term; 30] = [
 pub fn enthalpy_saturated_vapour_region2ab_s(s: f64) -> f64 {
     let sigma1 = s / S1_STAR;
     let sigma2 = s / S2_STAR;
-    H_STAR * exp(sum_terms(&TERMS, 1.0 / sigma1 - 0.513, sigma2 - 0.524))
+    H_STAR * exp(sum_terms!(TERMS, 1.0 / sigma1 - 0.513, sigma2 - 0.524))
 }

@@ -47,7 +47,7 @@ const TERMS: [Term; 16] = [
 /// caller checks the range.
 pub fn enthalpy_saturated_vapour_region2c3b_s(s: f64) -> f64 {
     let sigma = s / S_STAR;
-    let root = sum_terms(&TERMS, sigma - 1.02, sigma - 0.726);
+    let root = sum_terms!(TERMS, sigma - 1.02, sigma - 0.726);
     let square = root * root;
     H_STAR * square * square
 }

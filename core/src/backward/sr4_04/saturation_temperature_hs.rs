@@ -74,5 +74,5 @@ const TERMS: [Term; 36] = [
 pub fn saturation_temperature_hs(h: f64, s: f64) -> f64 {
     let eta = h / H_STAR;
     let sigma = s / S_STAR;
-    T_STAR * sum_terms(&TERMS, eta - 0.119, sigma - 1.07)
+    T_STAR * sum_terms!(TERMS, eta - 0.119, sigma - 1.07)
 }

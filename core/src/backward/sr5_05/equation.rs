@@ -19,8 +19,8 @@
 //! Validity and accuracy are those of the subregion the parameters belong
 //! to; see [`super::specific_volume`].
 
-use crate::backward::{sum_terms, Term};
 use crate::math::sqrt;
+use crate::series::Series;
 
 /// The inner exponent c or d applied to a shifted reduced variable.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -73,8 +73,9 @@ pub(super) struct Equation {
     pub d: Root,
     /// Exponent e on the sum.
     pub e: Outer,
-    /// (Iᵢ, Jᵢ, nᵢ), i = 1 … N, as the release prints them.
-    pub terms: &'static [Term],
+    /// The table (Iᵢ, Jᵢ, nᵢ), i = 1 … N, as the release prints them,
+    /// arranged at compile time.
+    pub series: Series,
 }
 
 impl Equation {
@@ -84,7 +85,7 @@ impl Equation {
     pub(super) fn specific_volume(&self, p: f64, t: f64) -> f64 {
         let x = self.c.apply(p / self.p_star - self.a);
         let y = self.d.apply(t / self.t_star - self.b);
-        let sum = sum_terms(self.terms, x, y);
+        let sum = self.series.value(x, y);
         let omega = match self.e {
             Outer::Sum => sum,
             Outer::FourthPower => {

@@ -7,6 +7,7 @@
 
 use super::equation::{Equation, Outer, Root};
 use crate::backward::Term;
+use crate::series::Series;
 
 /// Subregion 3a: v* = 0.0024 m³/kg, p* = 100 MPa, T* = 760 K, N = 30,
 /// a = 0.085, b = 0.817, c = 1, d = 1, e = 1.
@@ -19,7 +20,7 @@ pub(super) const A: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::Sum,
-    terms: &A_TERMS,
+    series: Series::for_table(&A_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3a, recalled from IAPWS SR5-05(2016), Table 6.
@@ -68,7 +69,7 @@ pub(super) const B: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::Sum,
-    terms: &B_TERMS,
+    series: Series::for_table(&B_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3b, recalled from IAPWS SR5-05(2016), Table 7.
@@ -119,7 +120,7 @@ pub(super) const C: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::Sum,
-    terms: &C_TERMS,
+    series: Series::for_table(&C_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3c, recalled from IAPWS SR5-05(2016), Table 8.
@@ -173,7 +174,7 @@ pub(super) const D: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &D_TERMS,
+    series: Series::for_table(&D_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3d, recalled from IAPWS SR5-05(2016), Table 9.
@@ -230,7 +231,7 @@ pub(super) const F: Equation = Equation {
     c: Root::Square,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &F_TERMS,
+    series: Series::for_table(&F_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3f, recalled from IAPWS SR5-05(2016), Table 11.
@@ -291,7 +292,7 @@ pub(super) const G: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &G_TERMS,
+    series: Series::for_table(&G_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3g, recalled from IAPWS SR5-05(2016), Table 12.
@@ -348,7 +349,7 @@ pub(super) const I: Equation = Equation {
     c: Root::Square,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &I_TERMS,
+    series: Series::for_table(&I_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3i, recalled from IAPWS SR5-05(2016), Table 14.
@@ -409,7 +410,7 @@ pub(super) const J: Equation = Equation {
     c: Root::Square,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &J_TERMS,
+    series: Series::for_table(&J_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3j, recalled from IAPWS SR5-05(2016), Table 15.
@@ -457,7 +458,7 @@ pub(super) const K: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::Sum,
-    terms: &K_TERMS,
+    series: Series::for_table(&K_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3k, recalled from IAPWS SR5-05(2016), Table 16.

@@ -7,6 +7,7 @@
 
 use super::equation::{Equation, Outer, Root};
 use crate::backward::Term;
+use crate::series::Series;
 
 /// Subregion 3l: v* = 0.0026 m³/kg, p* = 24 MPa, T* = 650 K, N = 43,
 /// a = 0.908, b = 0.989, c = 1, d = 1, e = 4.
@@ -19,7 +20,7 @@ pub(super) const L: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &L_TERMS,
+    series: Series::for_table(&L_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3l, recalled from IAPWS SR5-05(2016), Table 17.
@@ -81,7 +82,7 @@ pub(super) const M: Equation = Equation {
     c: Root::One,
     d: Root::Fourth,
     e: Outer::Sum,
-    terms: &M_TERMS,
+    series: Series::for_table(&M_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3m, recalled from IAPWS SR5-05(2016), Table 18.
@@ -140,7 +141,7 @@ pub(super) const O: Equation = Equation {
     c: Root::Square,
     d: Root::One,
     e: Outer::Sum,
-    terms: &O_TERMS,
+    series: Series::for_table(&O_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3o, recalled from IAPWS SR5-05(2016), Table 20.
@@ -183,7 +184,7 @@ pub(super) const P: Equation = Equation {
     c: Root::Square,
     d: Root::One,
     e: Outer::Sum,
-    terms: &P_TERMS,
+    series: Series::for_table(&P_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3p, recalled from IAPWS SR5-05(2016), Table 21.
@@ -229,7 +230,7 @@ pub(super) const Q: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &Q_TERMS,
+    series: Series::for_table(&Q_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3q, recalled from IAPWS SR5-05(2016), Table 22.
@@ -272,7 +273,7 @@ pub(super) const R: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::Sum,
-    terms: &R_TERMS,
+    series: Series::for_table(&R_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3r, recalled from IAPWS SR5-05(2016), Table 23.
@@ -318,7 +319,7 @@ pub(super) const S: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &S_TERMS,
+    series: Series::for_table(&S_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3s, recalled from IAPWS SR5-05(2016), Table 24.
@@ -366,7 +367,7 @@ pub(super) const T: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::Sum,
-    terms: &T_TERMS,
+    series: Series::for_table(&T_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3t, recalled from IAPWS SR5-05(2016), Table 25.

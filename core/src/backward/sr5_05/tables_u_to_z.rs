@@ -8,6 +8,7 @@
 
 use super::equation::{Equation, Outer, Root};
 use crate::backward::Term;
+use crate::series::Series;
 
 /// Subregion 3u: v* = 0.0026 m³/kg, p* = 23 MPa, T* = 650 K, N = 38,
 /// a = 0.902, b = 0.988, c = 1, d = 1, e = 1.
@@ -20,7 +21,7 @@ pub(super) const U: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::Sum,
-    terms: &U_TERMS,
+    series: Series::for_table(&U_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3u, recalled from IAPWS SR5-05(2016).
@@ -77,7 +78,7 @@ pub(super) const V: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::Sum,
-    terms: &V_TERMS,
+    series: Series::for_table(&V_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3v, recalled from IAPWS SR5-05(2016).
@@ -135,7 +136,7 @@ pub(super) const W: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &W_TERMS,
+    series: Series::for_table(&W_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3w, recalled from IAPWS SR5-05(2016).
@@ -189,7 +190,7 @@ pub(super) const Y: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &Y_TERMS,
+    series: Series::for_table(&Y_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3y, recalled from IAPWS SR5-05(2016).
@@ -228,7 +229,7 @@ pub(super) const Z: Equation = Equation {
     c: Root::One,
     d: Root::One,
     e: Outer::FourthPower,
-    terms: &Z_TERMS,
+    series: Series::for_table(&Z_TERMS),
 };
 
 /// (Iᵢ, Jᵢ, nᵢ) of subregion 3z, recalled from IAPWS SR5-05(2016).
