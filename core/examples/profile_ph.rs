@@ -13,11 +13,11 @@ fn main() {
     ];
     let h2: Vec<f64> = pts2
         .iter()
-        .map(|&(p, t)| State::from_pt(p, t, Units::Native).unwrap().enthalpy())
+        .map(|&(p, t)| State::from_pt(p, t, Units::Native).unwrap().entropy())
         .collect();
     let mut acc = 0.0;
     for k in 0..20000 {
-        acc += State::from_ph(black_box(pts2[k & 7].0), h2[k & 7], Units::Native)
+        acc += State::from_ps(black_box(pts2[k & 7].0), h2[k & 7], Units::Native)
             .unwrap()
             .temperature();
     }

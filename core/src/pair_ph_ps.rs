@@ -99,6 +99,17 @@ impl Caloric {
         }
     }
 
+    /// A value between the saturated liquid's largest z (at 623.15 K) and
+    /// the saturated vapour's smallest z on the line up to 623.15 K: h' ≤
+    /// 1671 kJ/kg < 2000 < 2500 kJ/kg ≤ h'', s' ≤ 3.78 < 4.5 < 5.21 ≤ s''
+    /// kJ/(kg·K) (the conformance suite checks both along the line).
+    pub(crate) const fn dome_divide(self) -> f64 {
+        match self {
+            Caloric::Enthalpy => 2000.0,
+            Caloric::Entropy => 4.5,
+        }
+    }
+
     fn backward_name(self, equation: Equation) -> &'static str {
         match (self, equation) {
             (Caloric::Enthalpy, Equation::Region1) => "T(p,h) region 1",
@@ -162,13 +173,18 @@ pub(crate) fn solve(
         Location::Single(Equation::Region2)
     } else if p <= saturation_pressure(REGION13_TEMPERATURE) {
         let t_sat = saturation_temperature(p);
-        if z < z_at(Equation::Region1, t_sat) {
-            Location::Single(Equation::Region1)
-        } else if z <= z_at(Equation::Region2, t_sat) {
-            let sat = Saturation::at_pressure(p, Units::Native)?;
-            Location::Wet(sat, z)
-        } else {
+        // One saturated phase decides: below the divide z cannot exceed
+        // the vapour's value, above it cannot fall short of the liquid's.
+        if z <= caloric.dome_divide() {
+            if z < z_at(Equation::Region1, t_sat) {
+                Location::Single(Equation::Region1)
+            } else {
+                Location::Wet(Saturation::at_pressure(p, Units::Native)?, z)
+            }
+        } else if z > z_at(Equation::Region2, t_sat) {
             Location::Single(Equation::Region2)
+        } else {
+            Location::Wet(Saturation::at_pressure(p, Units::Native)?, z)
         }
     } else if z <= z_at(Equation::Region1, REGION13_TEMPERATURE) {
         Location::Single(Equation::Region1)
@@ -201,15 +217,37 @@ pub(crate) fn solve(
         Location::Single(equation) => equation,
     };
     // Past region 2's hot end lies region 5 (up to 50 MPa).
-    let equation =
-        if equation == Equation::Region2 && z > z_at(Equation::Region2, REGION2_MAX_TEMPERATURE) {
-            if p > REGION5_MAX_PRESSURE {
-                return Err(out_of_range(lowest(), highest()));
-            }
-            Equation::Region5
+    let beyond_region2 = || z > z_at(Equation::Region2, REGION2_MAX_TEMPERATURE);
+    let region5_or_refuse = || {
+        if p > REGION5_MAX_PRESSURE {
+            Err(out_of_range(lowest(), highest()))
         } else {
-            equation
-        };
+            Ok(Equation::Region5)
+        }
+    };
+    let equation = match (equation, method) {
+        // The backward equation of region 2 says nothing past 1073.15 K.
+        (Equation::Region2, Method::BackwardOnly) if beyond_region2() => region5_or_refuse()?,
+        (Equation::Region2, Method::Exact) => {
+            // The iteration stops at 1073.15 K if the state lies beyond.
+            let t0 = caloric.backward_temperature(Equation::Region2, p, z);
+            let t_range = (MIN_TEMPERATURE - 10.0, REGION2_MAX_TEMPERATURE);
+            match refine_pt(Equation::Region2, p, z, caloric, t0, t_range) {
+                Ok(props) => {
+                    let phase = single_phase(p, props.t, false);
+                    return Ok(State::single_phase(props, Region::Two, phase, units));
+                }
+                Err(_) if beyond_region2() => region5_or_refuse()?,
+                Err(e) => {
+                    if t0 < MIN_TEMPERATURE + 1.0 && z < z_at(Equation::Region2, MIN_TEMPERATURE) {
+                        return Err(out_of_range(lowest(), highest()));
+                    }
+                    return Err(e);
+                }
+            }
+        }
+        (equation, _) => equation,
+    };
 
     let props = match equation {
         Equation::Region1 | Equation::Region2 => {
@@ -334,7 +372,8 @@ fn refine_pt(
     for _ in 0..ISOBAR_STEPS {
         let (value, slope) = caloric.with_slope(&equation.reduced_gibbs(p, t), t);
         let next = (t - (value - z) / slope).clamp(t_range.0, t_range.1);
-        if !next.is_finite() {
+        // Pinned at a bound twice: the state lies beyond it.
+        if !next.is_finite() || (next == t && (t == t_range.0 || t == t_range.1)) {
             break;
         }
         if (next - t).abs() <= SETTLED_STEP * t {

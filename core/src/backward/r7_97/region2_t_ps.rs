@@ -17,7 +17,7 @@
 //! the three equations keep within it.
 
 use crate::backward::{sum_terms, Term};
-use crate::math::{powi, sqrt};
+use crate::math::sqrt;
 
 /// Reducing pressure p*, MPa.
 const P_STAR: f64 = 1.0;
@@ -172,6 +172,19 @@ const TERMS_2C: [Term; 30] = [
     (7, 5, -0.164_298_282_813_47e-9),
 ];
 
+/// Table 25 with each I written as the integer 4I, derived at compile
+/// time, so that the sum runs in powers of π^¼.
+const TERMS_2A_IN_QUARTERS: [Term; 46] = {
+    let mut table = [(0, 0, 0.0); 46];
+    let mut k = 0;
+    while k < 46 {
+        let (i, j, n) = TERMS_2A[k];
+        table[k] = ((4.0 * i) as i32, j, n);
+        k += 1;
+    }
+    table
+};
+
 /// Temperature in K of superheated vapour in subregion 2a at pressure `p` in
 /// MPa and specific entropy `s` in kJ/(kg·K), IAPWS R7-97(2012) Eq. (25).
 ///
@@ -182,11 +195,7 @@ pub fn temperature_region2a_ps(p: f64, s: f64) -> f64 {
     // π^I with I a multiple of ¼ is (π^¼)^(4I): one double square root,
     // then integer powers, instead of a general power per term.
     let pi_quarter = sqrt(sqrt(pi));
-    let y = sigma - 2.0;
-    let theta: f64 = TERMS_2A
-        .iter()
-        .map(|&(i, j, n)| n * powi(pi_quarter, (4.0 * i) as i32) * powi(y, j))
-        .sum();
+    let theta = sum_terms!(TERMS_2A_IN_QUARTERS, pi_quarter, sigma - 2.0);
     T_STAR * theta
 }
 
