@@ -77,13 +77,13 @@ pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
 
 /// The stable state on `equation`, if the pair has one there.
 fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Option<State> {
+    if !could_hold(equation, v, u) {
+        return None;
+    }
     let props = match equation {
         Equation::Region3 => {
             // ρ is region 3's own variable: one Newton iteration in T.
             let rho = 1.0 / v;
-            if !(50.0..=1000.0).contains(&rho) {
-                return None;
-            }
             let bounds = Bounds {
                 x: (rho, rho),
                 t: (REGION13_TEMPERATURE - 10.0, B23_MAX_TEMPERATURE + 10.0),
@@ -100,6 +100,23 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
         }
     };
     accept(equation, &props, units)
+}
+
+/// Whether a region can hold a state with this v and u at all, by the
+/// extremes of v, ρ and u over the region (measured on the basic equations
+/// along the region's limits, with margin; the conformance suite checks
+/// them): region 1 has v ≤ 0.00174 m³/kg and u ≤ 1642.1 kJ/kg (both at
+/// 623.15 K on the saturation line); region 3 has 113.6 ≤ ρ ≤ 762.4 kg/m³
+/// and 1422.7 ≤ u ≤ 2554.5 kJ/kg; region 5 has v ≥ 0.00907 m³/kg and
+/// u ≥ 3472 kJ/kg (at 1073.15 K, 50 MPa). Skipping a region that cannot
+/// hold the state saves a failing iteration.
+fn could_hold(equation: Equation, v: f64, u: f64) -> bool {
+    match equation {
+        Equation::Region1 => v <= 0.00175 && u <= 1650.0,
+        Equation::Region3 => (105.0..=770.0).contains(&(1.0 / v)) && (1400.0..=2570.0).contains(&u),
+        Equation::Region5 => v >= 0.009 && u >= 3450.0,
+        Equation::Region2 => true,
+    }
 }
 
 const ISOCHORE_STEPS: u32 = 80;
@@ -244,7 +261,27 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
     if (t - props.t).abs() > 1e-9 * t || (p - props.p).abs() > 1e-9 * p {
         return None;
     }
-    let located = locate(p, t, Units::Native).ok()?;
+    // A solution on a region boundary may land a rounding on the
+    // neighbour's side: look a hair around it before refusing.
+    let nudges = [
+        (1.0, 1.0),
+        (1.0 + 1e-12, 1.0),
+        (1.0 - 1e-12, 1.0),
+        (1.0, 1.0 + 1e-12),
+        (1.0, 1.0 - 1e-12),
+    ];
+    let located = nudges
+        .iter()
+        .filter_map(|&(fp, ft)| locate(p * fp, t * ft, Units::Native).ok())
+        .find(|&l| {
+            matches!(
+                (equation, l),
+                (Equation::Region1, Located::Region1)
+                    | (Equation::Region2, Located::Region2)
+                    | (Equation::Region5, Located::Region5)
+                    | (Equation::Region3, Located::Region3(_))
+            )
+        })?;
     let (region, phase) = match (equation, located) {
         (Equation::Region1, Located::Region1) => {
             (Region::One, single_phase(props.p, props.t, true))
@@ -271,30 +308,60 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
     Some(State::single_phase(*props, region, phase, units))
 }
 
-const WET_BISECTION_STEPS: u32 = 60;
+const WET_STEPS: u32 = 100;
 
 /// Wet steam with this (v, u), if there is such a state.
 fn wet_state(v: f64, u: f64) -> Result<Option<State>, Error> {
-    // Along the isochore, the mixture's u rises with T up to where the
-    // isochore leaves the dome (x reaches 0 or 1).
+    // Along the isochore the mixture's u rises with T up to where the
+    // isochore leaves the dome (x reaches 0 or 1): a bracket on T, shrunk
+    // by regula falsi (Illinois variant) where both ends have a mixture and
+    // by bisection where the upper end lies outside the dome.
     let (mut lo, mut hi) = (MIN_TEMPERATURE, CRITICAL_TEMPERATURE);
+    let (mut f_lo, mut f_hi): (Option<f64>, Option<f64>) = (None, None);
     let mut found = None;
-    for _ in 0..WET_BISECTION_STEPS {
-        let t = 0.5 * (lo + hi);
+    let mut last_side = 0i8;
+    for _ in 0..WET_STEPS {
+        let t = match (f_lo, f_hi) {
+            (Some(a), Some(b)) if b > a => {
+                let secant = lo + (hi - lo) * (-a) / (b - a);
+                if secant > lo && secant < hi {
+                    secant
+                } else {
+                    0.5 * (lo + hi)
+                }
+            }
+            _ => 0.5 * (lo + hi),
+        };
         let sat = Saturation::at_temperature(t, Units::Native)?;
         let (l, g) = (sat.liquid().native(), sat.vapour().native());
         let x = (v - l.v) / (g.v - l.v);
         if !(0.0..=1.0).contains(&x) {
             hi = t;
-            continue;
-        }
-        let u_mix = (1.0 - x) * l.u + x * g.u;
-        if u_mix < u {
-            lo = t;
+            f_hi = None;
         } else {
-            hi = t;
+            let u_mix = (1.0 - x) * l.u + x * g.u;
+            let f = u_mix - u;
+            found = Some((sat, x, u_mix));
+            if f.abs() <= (1e-13 * u.abs()).max(1e-12) {
+                break;
+            }
+            if f < 0.0 {
+                lo = t;
+                f_lo = Some(f);
+                // Illinois: halve the stale end's value when one end repeats.
+                if last_side == -1 {
+                    f_hi = f_hi.map(|b| 0.5 * b);
+                }
+                last_side = -1;
+            } else {
+                hi = t;
+                f_hi = Some(f);
+                if last_side == 1 {
+                    f_lo = f_lo.map(|a| 0.5 * a);
+                }
+                last_side = 1;
+            }
         }
-        found = Some((sat, x, u_mix));
         if hi - lo <= 4.0 * f64::EPSILON * hi {
             break;
         }

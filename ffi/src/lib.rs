@@ -1,1 +1,52 @@
-//! The C ABI of ebullio (being written).
+//! The C ABI of ebullio: water and steam properties on IAPWS-IF97 for C,
+//! C++, Fortran, spreadsheet macros and anything else that calls a C
+//! function.
+//!
+//! The header `include/ebullio.h` is generated from this crate by cbindgen
+//! (`tests/header.rs` fails when it drifts). Promises:
+//!
+//! - **Stable.** Enum and status numbers are never renumbered or reused;
+//!   size-prefixed structs only grow at the end; `ebullio_abi_version()`
+//!   counts additions and never marks a break.
+//! - **Safe against careless callers.** Null pointers, unknown enum values,
+//!   bad lengths and struct sizes return status codes; no panic crosses
+//!   the boundary (`boundary!`); outputs are written only on success.
+//! - **Thread-safe.** No global mutable state at all: every call depends
+//!   on its arguments alone, from any number of threads at once.
+//! - **No memory to free.** The caller owns every buffer; the library
+//!   returns only pointers to static strings.
+//!
+//! The plumbing (status codes, the panic boundary, argument checks, the
+//! version) lives in its own modules; the domain calls in `state` and
+//! `array`. Every number comes from the core crate's own functions, so C
+//! gets the bits Rust gets.
+#![deny(unsafe_op_in_unsafe_fn)]
+#![warn(missing_docs)]
+
+mod args;
+mod boundary;
+mod codes;
+mod detail;
+mod status;
+mod version;
+
+mod array;
+mod state;
+
+#[cfg(test)]
+mod abi_tests;
+
+pub use array::{ebullio_properties_array, ebullio_property_array};
+pub use codes::{
+    EbullioInputPair, EbullioMethod, EbullioPhase, EbullioProperty, EbullioQuantity, EbullioRegion,
+    EbullioUnits,
+};
+pub use detail::{EbullioErrorDetail, EBULLIO_MESSAGE_CAPACITY};
+pub use state::{
+    ebullio_property, ebullio_saturation_at_pressure, ebullio_saturation_at_temperature,
+    ebullio_solve, EbullioState,
+};
+pub use status::EbullioStatus;
+pub use version::{
+    ebullio_abi_version, ebullio_status_message, ebullio_version, EBULLIO_ABI_VERSION,
+};

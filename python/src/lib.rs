@@ -1,1 +1,41 @@
-//! The Python extension module of ebullio (being written).
+//! `ebullio._native`: the extension module behind the `ebullio` Python
+//! package.
+//!
+//! A thin layer over the core's run-time dispatch. A scalar call is
+//! `State::solve(pair, a, b, units, method)` and nothing more; an array
+//! call runs the same core call once per element, split over the cores
+//! with the GIL released ([`arrays`]), so every element carries exactly the
+//! bits the Rust core gives for it. The arithmetic lives only in the core:
+//! nothing here computes a property.
+//!
+//! The Python side (`python/ebullio/`) keeps what is easier in Python:
+//! turning array-likes into float64 arrays and broadcasting them
+//! (`_dispatch.py`), the array result classes (`_arrays.py`) and the enums
+//! (`_enums.py`).
+
+use pyo3::prelude::*;
+
+mod arrays;
+mod columns;
+mod errors;
+mod names;
+mod saturation;
+mod state;
+
+#[pymodule]
+fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
+    m.add("__version__", env!("CARGO_PKG_VERSION"))?;
+    m.add_class::<state::PyState>()?;
+    m.add_class::<saturation::PySaturation>()?;
+    errors::register(m)?;
+    m.add_function(wrap_pyfunction!(state::solve_scalar, m)?)?;
+    m.add_function(wrap_pyfunction!(saturation::saturation_scalar, m)?)?;
+    m.add_function(wrap_pyfunction!(arrays::solve_many, m)?)?;
+    m.add_function(wrap_pyfunction!(arrays::saturation_many, m)?)?;
+    m.add_function(wrap_pyfunction!(arrays::raise_element, m)?)?;
+    m.add_function(wrap_pyfunction!(arrays::raise_saturation_element, m)?)?;
+    m.add("PROPERTIES", columns::table(m.py())?)?;
+    m.add("STATUS_CODES", errors::status_table(m.py())?)?;
+    m.add("INPUT_PAIRS", names::pair_table(m.py())?)?;
+    Ok(())
+}

@@ -1,0 +1,35 @@
+// The header compiled as C++11 (g++ -std=c++11 -Wall -Wextra -Werror) and
+// one call through it: the extern "C" block, the typed enums and the
+// struct layout C++ sees.
+#include <cmath>
+#include <cstdio>
+#include <cstring>
+#include <type_traits>
+
+#include "ebullio.h"
+
+static_assert(sizeof(EbullioState) == 136, "EbullioState version 1 is 136 bytes");
+static_assert(sizeof(EbullioErrorDetail) == 40 + EBULLIO_MESSAGE_CAPACITY,
+              "EbullioErrorDetail version 1 layout");
+static_assert(std::is_same<std::underlying_type<EbullioStatus>::type, int32_t>::value,
+              "statuses are 32-bit signed");
+static_assert(std::is_same<std::underlying_type<EbullioProperty>::type, uint32_t>::value,
+              "properties are 32-bit unsigned");
+static_assert(EBULLIO_STATUS_OK == 0, "0 is success");
+
+int main() {
+    EbullioState s;
+    std::memset(&s, 0, sizeof s);
+    s.size = sizeof s;
+    EbullioStatus st = ebullio_solve(EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, 3.0, 300.0,
+                                     EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, &s, nullptr);
+    // recalled from IAPWS R7-97(2012), Table 5: h(3 MPa, 300 K) = 0.115331273e3 kJ/kg
+    bool ok = st == EBULLIO_STATUS_OK && std::fabs(s.enthalpy - 115.331273) <= 5e-7 &&
+              s.region == EBULLIO_REGION_ONE;
+    EbullioStatus bad = EBULLIO_STATUS_OK;
+    double v = ebullio_property(EBULLIO_PROPERTY_ENTHALPY, 99, 3.0, 300.0,
+                                EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, &bad);
+    ok = ok && bad == EBULLIO_STATUS_UNKNOWN_INPUT_PAIR && std::isnan(v);
+    std::printf("c++: header compiles; h = %.9g kJ/kg, %s\n", s.enthalpy, ok ? "ok" : "WRONG");
+    return ok ? 0 : 1;
+}

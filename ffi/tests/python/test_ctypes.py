@@ -1,0 +1,99 @@
+"""The shared library loaded the way a spreadsheet macro's foreign-function
+declaration loads a DLL: by path, each function declared with its argument
+and return types by hand, scalars by value and the status by reference.
+Standard library only. Usage: python3 test_ctypes.py path/to/libebullio_c.so
+"""
+import ctypes
+import math
+import sys
+
+lib = ctypes.CDLL(sys.argv[1])
+
+# double ebullio_property(uint32 property, uint32 pair, double a, double b,
+#                         uint32 units, uint32 method, int32 *status)
+prop = lib.ebullio_property
+prop.argtypes = [ctypes.c_uint32, ctypes.c_uint32, ctypes.c_double, ctypes.c_double,
+                 ctypes.c_uint32, ctypes.c_uint32, ctypes.POINTER(ctypes.c_int32)]
+prop.restype = ctypes.c_double
+
+message = lib.ebullio_status_message
+message.argtypes = [ctypes.c_int32]
+message.restype = ctypes.c_char_p
+
+lib.ebullio_abi_version.restype = ctypes.c_uint32
+lib.ebullio_version.restype = ctypes.c_char_p
+
+# Numbers as a macro module would declare them as constants.
+PT, PH, PX = 1, 2, 8
+NATIVE, SI, METRIC, US = 0, 1, 2, 3
+T_, H, S, CP, W = 2, 6, 7, 8, 10
+
+checks = failures = 0
+
+
+def check(ok, what):
+    global checks, failures
+    checks += 1
+    if not ok:
+        failures += 1
+        print("check failed:", what)
+
+
+def printed(actual, text, what):
+    """Agreement to half a unit in the last printed place."""
+    mantissa, _, exponent = text.partition("e")
+    decimals = len(mantissa.partition(".")[2])
+    half = 0.5 * 10.0 ** (int(exponent or 0) - decimals)
+    check(abs(actual - float(text)) <= half * (1 + 1e-9), f"{what}: {actual!r} vs {text}")
+
+
+def cell(property, pair, a, b, units=NATIVE):
+    status = ctypes.c_int32(-1)
+    value = prop(property, pair, a, b, units, 0, ctypes.byref(status))
+    return value, status.value
+
+
+check(lib.ebullio_abi_version() == 1, "ABI version")
+check(lib.ebullio_version().decode() == sys.argv[2], "version string")
+
+# recalled from IAPWS R7-97(2012), Table 5 (3 MPa, 300 K) and Table 15 (0.0035 MPa, 300 K)
+for (p, t, prop_no, text) in [(3.0, 300.0, H, "0.115331273e3"),
+                              (3.0, 300.0, S, "0.392294792"),
+                              (3.0, 300.0, W, "0.150773921e4"),
+                              (0.0035, 300.0, H, "0.254991145e4"),
+                              (0.0035, 300.0, CP, "0.191300162e1")]:
+    value, status = cell(prop_no, PT, p, t)
+    check(status == 0, f"status {status}")
+    printed(value, text, f"property {prop_no} at ({p}, {t})")
+
+# The same Table 5 state in US customary units: 3 MPa = 435.1131 psia,
+# 300 K = 80.33 degF; h = 115.331273 kJ/kg / 2.326 (NIST SP 811, B.8: Btu_IT/lb).
+psia = 3e6 / (0.45359237 * 9.80665 / 0.3048 ** 2 * 144)
+h_us, status = cell(H, PT, psia, 300.0 * 1.8 - 459.67, US)
+check(status == 0, "US status")
+check(abs(h_us - 115.331273 / 2.326) < 1e-6, f"US h {h_us}")
+
+# recalled from IAPWS R7-97(2012), Table 36: Tsat(0.1 MPa)
+tsat, status = cell(T_, PX, 0.1, 1.0)
+printed(tsat, "0.372755919e3", "Tsat(0.1 MPa)")
+
+# Errors come back as NaN and a status, as a worksheet cell shows them.
+value, status = cell(H, PT, 200.0, 300.0)
+check(math.isnan(value) and status == 201, "out of range")
+check(b"outside" in message(status), "message for 201")
+value, status = cell(H, PT, float("nan"), 300.0)
+check(math.isnan(value) and status == 200, "NaN input")
+value, status = cell(CP, PX, 0.1, 0.5)
+check(math.isnan(value) and status == 205, "cp of wet steam")
+value, status = cell(99, PT, 3.0, 300.0)
+check(status == 104, "unknown property")
+value, status = cell(H, 0, 3.0, 300.0)
+check(status == 101, "unknown pair")
+value, status = cell(H, PT, 3.0, 300.0, 17)
+check(status == 102, "unknown units")
+# A null status pointer is allowed: the value alone.
+check(abs(prop(H, PT, 3.0, 300.0, 0, 0, None) - 115.331273) < 5e-7, "null status")
+check(message(12345) == b"unknown status code", "unknown code")
+
+print(f"python ctypes: {checks} checks, {failures} failed")
+sys.exit(1 if failures else 0)

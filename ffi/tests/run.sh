@@ -1,0 +1,126 @@
+#!/usr/bin/env bash
+# The C ABI from the languages that call it: C99 (dynamic and static link),
+# C++, Fortran, Python ctypes, valgrind memcheck and several threads at once.
+# Builds `cargo build --release -p ebullio-ffi` and uses
+# $CARGO_TARGET_DIR/release (default target/release) libebullio_c.{so,a}.
+# Prints one line per step and a final "ffi: N passed, M failed"; exits
+# non-zero if any step failed.
+set -euo pipefail
+
+here=$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)
+ffi=$(dirname "$here")
+root=$(dirname "$ffi")
+cd "$root"
+
+# Tools from Debian's packages: installed when missing and running as root,
+# otherwise a clear failure.
+need() {
+    local tool=$1 package=$2
+    command -v "$tool" >/dev/null 2>&1 && return 0
+    if [ "$(id -u)" = 0 ]; then
+        echo "ffi: installing $package for $tool"
+        apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "$package" >/dev/null
+    else
+        echo "ffi: $tool is missing; install it with: sudo apt-get install -y $package" >&2
+        exit 1
+    fi
+}
+need gcc gcc
+need g++ g++
+need gfortran gfortran
+need valgrind valgrind
+need pkg-config pkgconf
+need python3 python3
+
+cargo build --release -p ebullio-ffi --quiet
+
+target=${CARGO_TARGET_DIR:-target}
+case $target in /*) ;; *) target=$root/$target ;; esac
+lib=$target/release
+[ -f "$lib/libebullio_c.so" ] && [ -f "$lib/libebullio_c.a" ] || {
+    echo "ffi: $lib/libebullio_c.{so,a} not built" >&2
+    exit 1
+}
+version=$(sed -n 's/^version *= *"\(.*\)"/\1/p' Cargo.toml | head -n 1)
+abi=$(sed -n 's/^abi-version *= *\([0-9][0-9]*\).*/\1/p' ffi/Cargo.toml)
+
+work=$(mktemp -d)
+trap 'rm -rf "$work"' EXIT
+
+# The pkg-config file, pointed at the build tree; every C build uses it.
+mkdir -p "$work/pkgconfig"
+sed -e "s|@LIBDIR@|$lib|" -e "s|@INCLUDEDIR@|$ffi/include|" -e "s|@VERSION@|$version|" \
+    ffi/ebullio.pc.in >"$work/pkgconfig/ebullio.pc"
+export PKG_CONFIG_PATH=$work/pkgconfig
+read -r -a cflags <<<"$(pkg-config --cflags ebullio)"
+read -r -a libs <<<"$(pkg-config --libs ebullio)"
+static_libs=()
+for word in $(pkg-config --static --libs ebullio); do
+    case $word in
+        -lebullio_c) static_libs+=("$lib/libebullio_c.a") ;;
+        -L*) ;;
+        *) static_libs+=("$word") ;;
+    esac
+done
+c99=(-std=c99 -Wall -Wextra -Werror -pedantic)
+expect=(-DEXPECTED_VERSION="\"$version\"" -DEXPECTED_ABI="$abi")
+rpath=(-Wl,-rpath,"$lib")
+
+c_dynamic() {
+    gcc "${c99[@]}" "${cflags[@]}" "${expect[@]}" "$here/c/test_ebullio.c" \
+        -o "$work/c_dynamic" "${libs[@]}" "${rpath[@]}" -lm &&
+        ldd "$work/c_dynamic" | grep -q 'libebullio_c\.so' &&
+        "$work/c_dynamic"
+}
+
+c_static() {
+    gcc "${c99[@]}" "${cflags[@]}" "${expect[@]}" "$here/c/test_ebullio.c" \
+        -o "$work/c_static" "${static_libs[@]}" &&
+        ! ldd "$work/c_static" | grep -q libebullio_c &&
+        "$work/c_static"
+}
+
+cxx_header() {
+    g++ -std=c++11 -Wall -Wextra -Werror -pedantic "${cflags[@]}" "$here/cpp/test_header.cpp" \
+        -o "$work/cxx" "${libs[@]}" "${rpath[@]}" &&
+        "$work/cxx"
+}
+
+fortran() {
+    mkdir -p "$work/fortran" &&
+        gfortran -std=f2008 -Wall -Wextra -Werror -J"$work/fortran" \
+            "$here/fortran/ebullio_mod.f90" "$here/fortran/test_ebullio.f90" \
+            -o "$work/fortran/test" "${libs[@]}" "${rpath[@]}" &&
+        "$work/fortran/test"
+}
+
+python_ctypes() {
+    python3 "$here/python/test_ctypes.py" "$lib/libebullio_c.so" "$version"
+}
+
+valgrind_memcheck() {
+    gcc -g "${c99[@]}" "${cflags[@]}" "${expect[@]}" "$here/c/test_ebullio.c" \
+        -o "$work/c_valgrind" "${libs[@]}" "${rpath[@]}" -lm &&
+        valgrind --error-exitcode=1 --leak-check=full --quiet "$work/c_valgrind"
+}
+
+threads() {
+    gcc "${c99[@]}" -pthread "${cflags[@]}" "$here/c/test_threads.c" \
+        -o "$work/threads" "${libs[@]}" "${rpath[@]}" &&
+        "$work/threads"
+}
+
+passed=0
+failed=0
+for step in c_dynamic c_static cxx_header fortran python_ctypes valgrind_memcheck threads; do
+    if "$step" >"$work/$step.log" 2>&1; then
+        passed=$((passed + 1))
+        echo "ok   $step: $(tail -n 1 "$work/$step.log")"
+    else
+        failed=$((failed + 1))
+        echo "FAIL $step:"
+        sed 's/^/    /' "$work/$step.log"
+    fi
+done
+echo "ffi: $passed passed, $failed failed"
+[ "$failed" = 0 ]

@@ -1,0 +1,240 @@
+"""Array results: every property as an ndarray, a status per element.
+
+``StateArray`` and ``SaturationArray`` are what the constructors return for
+array-like inputs. Their property attributes are made from the native
+module's table, so a property the core gains appears here with no change.
+"""
+
+from __future__ import annotations
+
+from typing import Any
+
+import numpy as np
+
+from . import _native
+from ._enums import Status, Units
+
+_NAMES = tuple(row[0] for row in _native.PROPERTIES)
+_SYMBOLS = {row[0]: dict(zip(("native", "si", "metric", "us"), row[2])) for row in _native.PROPERTIES}
+_INDEX = {name: k for k, name in enumerate(_NAMES)}
+
+
+def element_label(k: int, shape: tuple[int, ...]) -> str:
+    """How an error names element ``k`` (flat) of an array of ``shape``."""
+    if len(shape) == 0:
+        return "the element"
+    if len(shape) == 1:
+        return f"element {k}"
+    return f"element {tuple(int(i) for i in np.unravel_index(k, shape))}"
+
+
+def _column(k: int, doc: str) -> property:
+    def get(self: StateArray) -> np.ndarray:
+        return self._columns[k]
+
+    return property(get, doc=f"{doc} NaN where the element is bad or the property does not exist.")
+
+
+class StateArray:
+    """States of water or steam, one per element of the broadcast inputs.
+
+    Each property (``p, t, v, rho, u, h, s, cp, cv, w, x, alpha_v,
+    kappa_t, g, f``) is a float64 ndarray of the inputs' broadcast shape, in
+    the units ``units``. ``region`` (1 to 5) and ``phase`` (``ebullio.Phase``
+    codes) are uint8 arrays, 0 where an element is bad. ``status`` holds an
+    ``ebullio.Status`` code per element, ``ok`` is ``status == 0``. A bad
+    element is NaN in every property; the others are computed. A property
+    that does not exist for an element (cp of wet steam, x of superheated
+    vapour) is NaN with status OK.
+    """
+
+    __slots__ = ("_columns", "region", "phase", "status", "units", "_origin")
+
+    _columns: np.ndarray
+    region: np.ndarray
+    phase: np.ndarray
+    status: np.ndarray
+    units: Units
+
+    def __init__(self) -> None:
+        raise TypeError("StateArray results come from the State constructors, e.g. State.from_pt(p_array, t_array)")
+
+    @classmethod
+    def _make(cls, columns: np.ndarray, region: np.ndarray, phase: np.ndarray, status: np.ndarray, units: Units, origin: tuple) -> StateArray:
+        self = object.__new__(cls)
+        self._columns = columns
+        self.region = region
+        self.phase = phase
+        self.status = status
+        self.units = Units(units)
+        self._origin = origin
+        return self
+
+    @property
+    def ok(self) -> np.ndarray:
+        """True where the element was computed (``status == Status.OK``)."""
+        return self.status == Status.OK
+
+    @property
+    def shape(self) -> tuple[int, ...]:
+        """The broadcast shape of the inputs."""
+        return self.status.shape
+
+    @property
+    def size(self) -> int:
+        """How many elements."""
+        return int(self.status.size)
+
+    @property
+    def ndim(self) -> int:
+        return self.status.ndim
+
+    def __len__(self) -> int:
+        if not self.shape:
+            raise TypeError("len() of a 0-d StateArray")
+        return self.shape[0]
+
+    def __getitem__(self, key: Any) -> StateArray:
+        """The elements ``key`` selects (numpy indexing), as a StateArray."""
+        pair, a, b, units, method = self._origin
+        shape = self.shape
+        a = np.broadcast_to(a, shape)[key]
+        b = np.broadcast_to(b, shape)[key]
+        return StateArray._make(
+            self._columns[(slice(None),) + (key if isinstance(key, tuple) else (key,))],
+            self.region[key],
+            self.phase[key],
+            self.status[key],
+            self.units,
+            (pair, np.asarray(a), np.asarray(b), units, method),
+        )
+
+    def unit(self, name: str) -> str:
+        """The unit symbol of property ``name`` in these units, e.g. "kJ/kg"."""
+        return _SYMBOLS[name][self.units.value]
+
+    def in_units(self, units: Any) -> StateArray:
+        """The same states read in other units (solved again from the inputs,
+        which gives the same states bit for bit)."""
+        from ._dispatch import solve
+
+        pair, a, b, in_units, method = self._origin
+        return solve(pair, a, b, in_units, method, "flag", None, units)
+
+    def error_at(self, index: Any) -> Exception | None:
+        """The exception the element at ``index`` raises as a scalar (its
+        message names the quantity, value and valid range), or None if the
+        element is good."""
+        pair, a, b, units, method = self._origin
+        x = np.broadcast_to(a, self.shape)[index]
+        y = np.broadcast_to(b, self.shape)[index]
+        if np.ndim(x) != 0:
+            raise IndexError("error_at takes the index of one element")
+        try:
+            _native.raise_element(pair, float(x), float(y), units, method, f"element {index}")
+        except _native.SteamError as error:
+            return error
+        return None
+
+    def as_dict(self) -> dict[str, np.ndarray]:
+        """Every property, ``region``, ``phase`` and ``status`` as arrays, for
+        ``pandas.DataFrame(states.as_dict(), index=...)``."""
+        out = {name: self._columns[k] for k, name in enumerate(_NAMES)}
+        out.update(region=self.region, phase=self.phase, status=self.status)
+        return out
+
+    def __repr__(self) -> str:
+        flagged = self.size - int(np.count_nonzero(self.ok))
+        head = f"StateArray(shape={self.shape}, units={self.units.value!r}, {self.size - flagged} ok, {flagged} flagged)"
+        lines = [head]
+        for name in ("p", "t", "h", "s", "x"):
+            values = np.array2string(self._columns[_INDEX[name]], threshold=6, edgeitems=2, precision=6, max_line_width=10**6)
+            unit = self.unit(name)
+            lines.append(f"  {name} [{unit}]: {values}" if unit else f"  {name}: {values}")
+        return "\n".join(lines)
+
+    def __reduce__(self) -> tuple:
+        return (_rebuild_states, (self._columns, self.region, self.phase, self.status, self.units.value, self._origin))
+
+
+for _k, (_name, _doc, _symbols) in enumerate(_native.PROPERTIES):
+    setattr(StateArray, _name, _column(_k, _doc))
+
+
+def _rebuild_states(columns, region, phase, status, units, origin):  # type: ignore[no-untyped-def]
+    return StateArray._make(columns, region, phase, status, units, origin)
+
+
+class SaturationArray:
+    """Saturation points, one per element of the input array.
+
+    ``p`` and ``t`` are ndarrays in ``units``; ``liquid`` and ``vapour`` are
+    ``StateArray`` results (x = 0 and x = 1); ``status`` and ``ok`` are
+    shared by both. ``mixture(x)`` gives wet steam of quality x (broadcast).
+    """
+
+    __slots__ = ("liquid", "vapour", "_by", "_value", "_units")
+
+    liquid: StateArray
+    vapour: StateArray
+
+    def __init__(self) -> None:
+        raise TypeError("SaturationArray results come from Saturation.at_pressure / at_temperature")
+
+    @classmethod
+    def _make(cls, liquid: StateArray, vapour: StateArray, by: int, value: np.ndarray, units: Units) -> SaturationArray:
+        self = object.__new__(cls)
+        self.liquid, self.vapour = liquid, vapour
+        self._by, self._value, self._units = by, value, units
+        return self
+
+    @property
+    def p(self) -> np.ndarray:
+        """Saturation pressure: MPa (native), Pa (si), bar (metric), psia (us)."""
+        return self.liquid.p  # type: ignore[attr-defined, no-any-return]
+
+    @property
+    def t(self) -> np.ndarray:
+        """Saturation temperature: K (native, si), °C (metric), °F (us)."""
+        return self.liquid.t  # type: ignore[attr-defined, no-any-return]
+
+    @property
+    def status(self) -> np.ndarray:
+        return self.liquid.status
+
+    @property
+    def ok(self) -> np.ndarray:
+        return self.liquid.ok
+
+    @property
+    def units(self) -> Units:
+        return self.liquid.units
+
+    @property
+    def shape(self) -> tuple[int, ...]:
+        return self.liquid.shape
+
+    def __len__(self) -> int:
+        return len(self.liquid)
+
+    def mixture(self, x: Any, *, errors: Any = None, threads: Any = None) -> StateArray:
+        """Wet steam of vapour quality ``x`` (0 ≤ x ≤ 1), broadcast against
+        the saturation points."""
+        from ._dispatch import _QUALITY_PAIR, solve
+
+        return solve(_QUALITY_PAIR[self._by], self._value, x, self._units, None, "flag" if errors is None else errors, threads, self.units)  # type: ignore[no-any-return]
+
+    def __repr__(self) -> str:
+        flagged = self.liquid.size - int(np.count_nonzero(self.ok))
+        return (
+            f"SaturationArray(shape={self.shape}, units={self.units.value!r}, {self.liquid.size - flagged} ok, {flagged} flagged)\n"
+            f"  p [{self.liquid.unit('p')}]: {np.array2string(self.p, threshold=6, edgeitems=2, precision=6)}\n"
+            f"  t [{self.liquid.unit('t')}]: {np.array2string(self.t, threshold=6, edgeitems=2, precision=6)}"
+        )
+
+    def __reduce__(self) -> tuple:
+        return (_rebuild_saturation, (self.liquid, self.vapour, self._by, self._value, self._units.value))
+
+
+def _rebuild_saturation(liquid, vapour, by, value, units):  # type: ignore[no-untyped-def]
+    return SaturationArray._make(liquid, vapour, by, value, Units(units))

@@ -1,0 +1,149 @@
+"""The array path of the constructors, and the unpicklers.
+
+The native constructors solve two Python numbers themselves; everything
+else comes here: inputs become float64 arrays (pandas missing values become
+NaN, and so a NOT_FINITE status), broadcast against each other, and go to
+the native kernel in one call.
+"""
+
+from __future__ import annotations
+
+from typing import Any
+
+import numpy as np
+
+from . import _native
+from ._arrays import SaturationArray, StateArray, element_label
+from ._enums import Method, Units
+
+_PAIRS = dict(_native.INPUT_PAIRS)
+_COLUMNS = len(_native.PROPERTIES)
+_QUALITY_PAIR = {1: _PAIRS["px"], 2: _PAIRS["tx"]}  # saturation by pressure, by temperature
+
+
+def units_of(units: Any) -> Units:
+    """The ``Units`` member named by ``units`` (None: native)."""
+    if units is None:
+        return Units.NATIVE
+    try:
+        return Units(units)
+    except ValueError:
+        raise ValueError(
+            f"unknown unit system {units!r}: use 'native' (MPa, K, kJ/kg), 'si' (Pa, K, J/kg), "
+            "'metric' (bar, °C, kJ/kg), 'us' (psia, °F, Btu/lbm) or an ebullio.Units member"
+        ) from None
+
+
+def _method_of(method: Any) -> Method:
+    if method is None:
+        return Method.EXACT
+    try:
+        return Method(method)
+    except ValueError:
+        raise ValueError(
+            f"unknown method {method!r}: use 'exact' or 'backward', or an ebullio.Method member"
+        ) from None
+
+
+def _errors_of(errors: Any) -> str | None:
+    if errors is None or errors in ("raise", "flag"):
+        return errors
+    raise ValueError(
+        f"unknown error mode {errors!r}: use 'raise' or 'flag' (or None: scalars raise, arrays flag)"
+    )
+
+
+def _threads_of(threads: Any) -> int | None:
+    if threads is None:
+        return None
+    if isinstance(threads, (bool, np.bool_)) or not isinstance(threads, (int, np.integer)) or threads < 1:
+        raise ValueError(f"threads must be a whole number of at least 1, or None for every core; got {threads!r}")
+    return int(threads)
+
+
+def floats(x: Any) -> np.ndarray:
+    """``x`` as a float64 array; pandas' missing values become NaN."""
+    if not isinstance(x, np.ndarray):
+        to_numpy = getattr(x, "to_numpy", None)
+        if callable(to_numpy):
+            try:
+                return np.asarray(to_numpy(dtype=np.float64, na_value=np.nan))
+            except TypeError:
+                pass
+    return np.asarray(x, dtype=np.float64)
+
+
+def _broadcast(a: np.ndarray, b: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    try:
+        return np.broadcast_arrays(a, b)
+    except ValueError:
+        raise ValueError(
+            f"the two inputs do not broadcast together: shapes {a.shape} and {b.shape}"
+        ) from None
+
+
+def solve(pair: int, a: Any, b: Any, units: Any, method: Any, errors: Any, threads: Any, read: Any = None) -> Any:
+    """``State.from_*`` for anything but two Python numbers."""
+    units = units_of(units)
+    read = units if read is None else units_of(read)
+    method = _method_of(method)
+    errors = _errors_of(errors)
+    threads = _threads_of(threads)
+    fa, fb = floats(a), floats(b)
+    scalar_inputs = fa.ndim == 0 and fb.ndim == 0 and not isinstance(a, np.ndarray) and not isinstance(b, np.ndarray)
+    if scalar_inputs and errors != "flag":
+        return _native.solve_scalar(pair, float(fa), float(fb), units, method, read)
+    ba, bb = _broadcast(fa, fb)
+    shape = ba.shape
+    flat_a, flat_b = ba.reshape(-1), bb.reshape(-1)
+    values, region, phase, status = _native.solve_many(pair, flat_a, flat_b, units, method, threads, read)
+    if errors == "raise":
+        bad = np.flatnonzero(status)
+        if bad.size:
+            k = int(bad[0])
+            _native.raise_element(pair, float(flat_a[k]), float(flat_b[k]), units, method, element_label(k, shape))
+    return StateArray._make(
+        values.reshape((_COLUMNS,) + shape),
+        region.reshape(shape),
+        phase.reshape(shape),
+        status.reshape(shape),
+        read,
+        (pair, fa, fb, units, method),
+    )
+
+
+def saturation(by: int, value: Any, units: Any, errors: Any, threads: Any, read: Any = None) -> Any:
+    """``Saturation.at_*`` for anything but a Python number."""
+    units = units_of(units)
+    read = units if read is None else units_of(read)
+    errors = _errors_of(errors)
+    threads = _threads_of(threads)
+    fv = floats(value)
+    if fv.ndim == 0 and not isinstance(value, np.ndarray) and errors != "flag":
+        return _native.saturation_scalar(by, float(fv), units, read)
+    shape = fv.shape
+    flat = fv.reshape(-1)
+    values, region, phase, status = _native.saturation_many(by, flat, units, threads, read)
+    if errors == "raise":
+        bad = np.flatnonzero(status)
+        if bad.size:
+            k = int(bad[0])
+            _native.raise_saturation_element(by, float(flat[k]), units, element_label(k, shape))
+    values = values.reshape((2, _COLUMNS) + shape)
+    region = region.reshape((2,) + shape)
+    phase = phase.reshape((2,) + shape)
+    status = status.reshape(shape)
+    pair = _QUALITY_PAIR[by]
+    liquid = StateArray._make(values[0], region[0], phase[0], status, read, (pair, fv, np.float64(0.0), units, Method.EXACT))
+    vapour = StateArray._make(values[1], region[1], phase[1], status, read, (pair, fv, np.float64(1.0), units, Method.EXACT))
+    return SaturationArray._make(liquid, vapour, by, fv, units)
+
+
+def restore_state(pair: int, a: float, b: float, units: str, method: str, read: str) -> Any:
+    """Unpickles a ``State``: the call that made it, made again."""
+    return _native.solve_scalar(pair, a, b, units, method, read)
+
+
+def restore_saturation(by: int, value: float, units: str, read: str) -> Any:
+    """Unpickles a ``Saturation``: the call that made it, made again."""
+    return _native.saturation_scalar(by, value, units, read)

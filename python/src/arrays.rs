@@ -1,0 +1,287 @@
+//! The array kernel: the same core call once per element, over every core,
+//! with the GIL released.
+//!
+//! Inputs arrive as 1-D float64 views (any strides, so a broadcast scalar
+//! costs no copy); outputs are owned column-major buffers handed to numpy
+//! without a copy. Elements are independent, so splitting them over
+//! threads cannot change a single bit: each element is exactly the scalar
+//! core call on its inputs.
+
+use ebullio::{Error, State, Units};
+use numpy::{PyArray1, PyReadonlyArray1};
+use pyo3::exceptions::PyValueError;
+use pyo3::prelude::*;
+use rayon::prelude::*;
+
+use crate::columns::{COLUMNS, COUNT};
+use crate::errors::{status, to_py};
+use crate::names;
+use crate::saturation::By;
+
+/// Elements per work item: large enough that scheduling is noise, small
+/// enough that slow elements (region 3, wet steam) balance over threads.
+const CHUNK: usize = 2048;
+
+/// Below this many elements one thread does the work: waking the pool
+/// costs more than it saves.
+const PARALLEL_FROM: usize = 8192;
+
+/// How many threads an array call may use.
+#[derive(Clone, Copy)]
+enum Threads {
+    /// rayon's global pool: one thread per core.
+    All,
+    /// This calling thread only.
+    One,
+    /// A pool of this many threads, built for the call.
+    Exactly(usize),
+}
+
+fn threads(value: Option<usize>) -> PyResult<Threads> {
+    match value {
+        None => Ok(Threads::All),
+        Some(0) => Err(PyValueError::new_err(
+            "threads must be at least 1 (or None: every core)",
+        )),
+        Some(1) => Ok(Threads::One),
+        Some(n) => Ok(Threads::Exactly(n)),
+    }
+}
+
+/// The results of `M` states per element, column-major: for state `m` and
+/// column `c`, `values[(m * COUNT + c) * n ..][.. n]`.
+struct Outputs {
+    values: Vec<f64>,
+    region: Vec<u8>,
+    phase: Vec<u8>,
+    status: Vec<u8>,
+}
+
+/// One work item: the element range `start..start + len` and its slices of
+/// every output column.
+struct Job<'a> {
+    start: usize,
+    values: Vec<&'a mut [f64]>,
+    region: Vec<&'a mut [u8]>,
+    phase: Vec<&'a mut [u8]>,
+    status: &'a mut [u8],
+}
+
+impl Job<'_> {
+    fn run<const M: usize>(
+        &mut self,
+        element: &(impl Fn(usize) -> Result<[State; M], Error> + Sync),
+    ) {
+        for i in 0..self.status.len() {
+            match element(self.start + i) {
+                Ok(states) => {
+                    for (m, state) in states.iter().enumerate() {
+                        for (c, column) in COLUMNS.iter().enumerate() {
+                            self.values[m * COUNT + c][i] =
+                                state.get(column.property).unwrap_or(f64::NAN);
+                        }
+                        self.region[m][i] = state.region().number() as u8;
+                        self.phase[m][i] = state.phase() as u8;
+                    }
+                    self.status[i] = status::OK;
+                }
+                Err(error) => {
+                    for column in self.values.iter_mut() {
+                        column[i] = f64::NAN;
+                    }
+                    for m in 0..M {
+                        self.region[m][i] = 0;
+                        self.phase[m][i] = 0;
+                    }
+                    self.status[i] = crate::errors::status_of(&error);
+                }
+            }
+        }
+    }
+}
+
+/// Splits `column` (length `n`) into work-item slices.
+fn split<T>(column: &mut [T]) -> std::slice::ChunksMut<'_, T> {
+    column.chunks_mut(CHUNK)
+}
+
+/// Runs `element` for every index below `n`, `M` states each.
+fn fill<const M: usize>(
+    n: usize,
+    threads: Threads,
+    element: impl Fn(usize) -> Result<[State; M], Error> + Sync,
+) -> Result<Outputs, rayon::ThreadPoolBuildError> {
+    let mut out = Outputs {
+        values: vec![0.0; M * COUNT * n],
+        region: vec![0; M * n],
+        phase: vec![0; M * n],
+        status: vec![0; n],
+    };
+    if n == 0 {
+        return Ok(out);
+    }
+    let mut values: Vec<_> = out.values.chunks_mut(n).map(split).collect();
+    let mut region: Vec<_> = out.region.chunks_mut(n).map(split).collect();
+    let mut phase: Vec<_> = out.phase.chunks_mut(n).map(split).collect();
+    let mut jobs: Vec<Job<'_>> = split(&mut out.status)
+        .enumerate()
+        .map(|(k, status)| Job {
+            start: k * CHUNK,
+            values: values.iter_mut().filter_map(Iterator::next).collect(),
+            region: region.iter_mut().filter_map(Iterator::next).collect(),
+            phase: phase.iter_mut().filter_map(Iterator::next).collect(),
+            status,
+        })
+        .collect();
+    let serial = n < PARALLEL_FROM;
+    match threads {
+        Threads::One => jobs.iter_mut().for_each(|job| job.run(&element)),
+        _ if serial => jobs.iter_mut().for_each(|job| job.run(&element)),
+        Threads::All => jobs.par_iter_mut().for_each(|job| job.run(&element)),
+        Threads::Exactly(k) => rayon::ThreadPoolBuilder::new()
+            .num_threads(k)
+            .build()?
+            .install(|| jobs.par_iter_mut().for_each(|job| job.run(&element))),
+    }
+    Ok(out)
+}
+
+type Arrays<'py> = (
+    Bound<'py, PyArray1<f64>>,
+    Bound<'py, PyArray1<u8>>,
+    Bound<'py, PyArray1<u8>>,
+    Bound<'py, PyArray1<u8>>,
+);
+
+fn hand_over(py: Python<'_>, out: Outputs) -> Arrays<'_> {
+    (
+        PyArray1::from_vec(py, out.values),
+        PyArray1::from_vec(py, out.region),
+        PyArray1::from_vec(py, out.phase),
+        PyArray1::from_vec(py, out.status),
+    )
+}
+
+/// The units results are read in: `read`, or the input units.
+fn read_units(read: Option<&Bound<'_, PyAny>>, units: Units) -> PyResult<Units> {
+    match read {
+        Some(read) if !read.is_none() => names::units(Some(read)),
+        _ => Ok(units),
+    }
+}
+
+fn pool_error(error: rayon::ThreadPoolBuildError) -> PyErr {
+    pyo3::exceptions::PyRuntimeError::new_err(format!("could not start the threads: {error}"))
+}
+
+/// States from pair number `pair` at (`a[i]`, `b[i]`), equal lengths.
+///
+/// Returns flat `values` (15 columns of n, column-major), `region`, `phase`
+/// and `status` (0 = computed); bad elements are NaN with region and phase 0.
+#[pyfunction]
+#[pyo3(signature = (pair, a, b, units=None, method=None, threads=None, read=None))]
+#[allow(clippy::too_many_arguments)]
+pub(crate) fn solve_many<'py>(
+    py: Python<'py>,
+    pair: u32,
+    a: PyReadonlyArray1<'py, f64>,
+    b: PyReadonlyArray1<'py, f64>,
+    units: Option<&Bound<'py, PyAny>>,
+    method: Option<&Bound<'py, PyAny>>,
+    threads: Option<usize>,
+    read: Option<&Bound<'py, PyAny>>,
+) -> PyResult<Arrays<'py>> {
+    let pair = names::pair(pair)?;
+    let units = names::units(units)?;
+    let read = read_units(read, units)?;
+    let method = names::method(method)?;
+    let threads = self::threads(threads)?;
+    let (a, b) = (a.as_array(), b.as_array());
+    if a.len() != b.len() {
+        return Err(PyValueError::new_err(format!(
+            "the two inputs have {} and {} elements; broadcast them first",
+            a.len(),
+            b.len()
+        )));
+    }
+    let out = py
+        .detach(|| {
+            fill::<1>(a.len(), threads, |i| {
+                State::solve(pair, a[i], b[i], units, method).map(|s| [s.in_units(read)])
+            })
+        })
+        .map_err(pool_error)?;
+    Ok(hand_over(py, out))
+}
+
+/// Saturation points (`by` 1: pressure, 2: temperature) at `values[i]`.
+///
+/// As `solve_many` with two states per element, liquid then vapour:
+/// `values` holds 2 × 15 columns, `region` and `phase` 2 × n.
+#[pyfunction]
+#[pyo3(signature = (by, values, units=None, threads=None, read=None))]
+pub(crate) fn saturation_many<'py>(
+    py: Python<'py>,
+    by: u32,
+    values: PyReadonlyArray1<'py, f64>,
+    units: Option<&Bound<'py, PyAny>>,
+    threads: Option<usize>,
+    read: Option<&Bound<'py, PyAny>>,
+) -> PyResult<Arrays<'py>> {
+    let by = By::from_number(by)?;
+    let units: Units = names::units(units)?;
+    let read = read_units(read, units)?;
+    let threads = self::threads(threads)?;
+    let values = values.as_array();
+    let out = py
+        .detach(|| {
+            fill::<2>(values.len(), threads, |i| {
+                by.solve(values[i], units)
+                    .map(|s| s.in_units(read))
+                    .map(|s| [*s.liquid(), *s.vapour()])
+            })
+        })
+        .map_err(pool_error)?;
+    Ok(hand_over(py, out))
+}
+
+/// Raises the error of one element, `label` naming it ("element 17"):
+/// `errors="raise"` on arrays. Solving it again gives the same error the
+/// array call met. Returns normally if the element is good.
+#[pyfunction]
+#[pyo3(signature = (pair, a, b, units, method, label))]
+pub(crate) fn raise_element(
+    py: Python<'_>,
+    pair: u32,
+    a: f64,
+    b: f64,
+    units: Option<&Bound<'_, PyAny>>,
+    method: Option<&Bound<'_, PyAny>>,
+    label: &str,
+) -> PyResult<()> {
+    let (pair, units, method) = (
+        names::pair(pair)?,
+        names::units(units)?,
+        names::method(method)?,
+    );
+    State::solve(pair, a, b, units, method)
+        .map(|_| ())
+        .map_err(|error| to_py(py, &error, Some(label)))
+}
+
+/// As `raise_element`, for a saturation point (`by` 1: pressure, 2:
+/// temperature) at `value`.
+#[pyfunction]
+#[pyo3(signature = (by, value, units, label))]
+pub(crate) fn raise_saturation_element(
+    py: Python<'_>,
+    by: u32,
+    value: f64,
+    units: Option<&Bound<'_, PyAny>>,
+    label: &str,
+) -> PyResult<()> {
+    By::from_number(by)?
+        .solve(value, names::units(units)?)
+        .map(|_| ())
+        .map_err(|error| to_py(py, &error, Some(label)))
+}

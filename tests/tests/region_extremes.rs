@@ -1,0 +1,88 @@
+//! The extremes of v, ρ and u over regions 1, 3 and 5, which the (v, u)
+//! solver uses to skip regions that cannot hold a state
+//! (`core/src/pair_vu.rs`, `could_hold`). They follow from the basic
+//! equations of IAPWS R7-97(2012); here they are measured along each
+//! region's boundary lines, where the extremes lie (v, ρ and u are monotonic
+//! along isobars and isotherms inside a single-phase region).
+
+use ebullio::saturation_line::saturation_pressure;
+use ebullio::{boundary_b23, Region, Saturation, State, Units};
+
+const N: usize = 4000;
+
+fn states_of(region: Region, points: impl Iterator<Item = (f64, f64)>) -> Vec<State> {
+    points
+        .filter_map(|(p, t)| State::from_pt(p, t, Units::Native).ok())
+        .filter(|s| s.region() == region)
+        .collect()
+}
+
+fn span(k: usize, a: f64, b: f64) -> f64 {
+    a + (b - a) * k as f64 / N as f64
+}
+
+#[test]
+fn region1_is_within_v_0_00175_and_u_1650() {
+    // Its largest v and u lie on the saturation line, at 623.15 K.
+    let line = (0..=N).map(|k| {
+        let t = span(k, 273.15, 623.15);
+        (saturation_pressure(t), t)
+    });
+    let isobar = (0..=N).map(|k| (100.0, span(k, 273.15, 623.15)));
+    for s in states_of(Region::One, line.chain(isobar)) {
+        assert!(
+            s.specific_volume() <= 0.00175 && s.internal_energy() <= 1650.0,
+            "{s:?}"
+        );
+    }
+}
+
+#[test]
+fn region3_is_within_rho_105_to_770_and_u_1400_to_2570() {
+    let b23 = (0..=N).map(|k| {
+        let t = span(k, 623.1501, 863.15);
+        ((boundary_b23::pressure(t) * (1.0 + 1e-12)).min(100.0), t)
+    });
+    let cold = (0..=N).map(|k| (span(k, 16.5292, 100.0), 623.150_000_1));
+    let isobar = (0..=N).map(|k| (100.0, span(k, 623.16, 863.14)));
+    let mut states = states_of(Region::Three, b23.chain(cold).chain(isobar));
+    for k in 0..=N {
+        let sat = Saturation::at_temperature(span(k, 623.16, 647.09), Units::Native).unwrap();
+        states.extend([*sat.liquid(), *sat.vapour()]);
+    }
+    assert!(states.len() > 3 * N);
+    for s in states {
+        let (rho, u) = (s.density(), s.internal_energy());
+        assert!(
+            (105.0..=770.0).contains(&rho) && (1400.0..=2570.0).contains(&u),
+            "{s:?}"
+        );
+    }
+}
+
+#[test]
+fn region5_is_above_v_0_009_and_u_3450() {
+    // Its smallest v and u lie at its coldest, densest corner.
+    let cold = (0..=N).map(|k| (span(k, 1e-6, 50.0), 1_073.150_001));
+    let isobar = (0..=N).map(|k| (50.0, span(k, 1073.16, 2273.15)));
+    for s in states_of(Region::Five, cold.chain(isobar)) {
+        assert!(
+            s.specific_volume() >= 0.009 && s.internal_energy() >= 3450.0,
+            "{s:?}"
+        );
+    }
+}
+
+#[test]
+fn the_dome_divides_used_by_the_pressure_pairs_hold() {
+    // core/src/pair_ph_ps.rs decides the side of the dome from one
+    // saturated phase, relying on h' < 2000 < h'' and s' < 4.5 < s'' along
+    // the whole line up to 623.15 K.
+    for k in 0..=N {
+        let t = span(k, 273.15, 623.15);
+        let sat = Saturation::at_temperature(t, Units::Native).unwrap();
+        let (l, v) = (sat.liquid(), sat.vapour());
+        assert!(l.enthalpy() < 2000.0 && v.enthalpy() > 2000.0, "T = {t}");
+        assert!(l.entropy() < 4.5 && v.entropy() > 4.5, "T = {t}");
+    }
+}
