@@ -5,10 +5,10 @@
 use std::alloc::{GlobalAlloc, Layout, System};
 use std::sync::atomic::{AtomicUsize, Ordering};
 
-use ebullio::backward::{r7_97, sr2_01, sr3_03, sr4_04};
+use ebullio::backward::{r7_97, sr2_01, sr3_03, sr4_04, sr5_05};
 use ebullio::{
     boundary_b23, region1, region2, region2_metastable, region3, region5, saturation_line,
-    Saturation, State, Units,
+    InputPair, Method, Property, Saturation, State, Units,
 };
 
 struct Counting;
@@ -71,6 +71,54 @@ fn exercise_everything() -> f64 {
             sum += read_all(State::from_pt(p(pp), t(tt), units));
             sum += ebullio::enthalpy_from_pt(p(pp), t(tt), units).unwrap_or(0.0);
         }
+        // Every input pair, exact and backward-only, through the dispatch too.
+        for (pp, tt) in [(3.0, 300.0), (0.1, 500.0), (25.0, 650.0), (20.0, 1500.0)] {
+            let Ok(s) = State::from_pt(p(pp), t(tt), units) else {
+                continue;
+            };
+            let (h, en, v, u, rho) = (
+                s.enthalpy(),
+                s.entropy(),
+                s.specific_volume(),
+                s.internal_energy(),
+                s.density(),
+            );
+            for method in [Method::Exact, Method::BackwardOnly] {
+                sum += read_all(State::from_ph_with(s.pressure(), h, units, method));
+                sum += read_all(State::from_ps_with(s.pressure(), en, units, method));
+                sum += read_all(State::from_hs_with(h, en, units, method));
+            }
+            sum += read_all(State::from_ph(s.pressure(), h, units));
+            sum += read_all(State::from_ps(s.pressure(), en, units));
+            sum += read_all(State::from_hs(h, en, units));
+            sum += read_all(State::from_rho_t(rho, s.temperature(), units));
+            sum += read_all(State::from_vt(v, s.temperature(), units));
+            sum += read_all(State::from_vu(v, u, units));
+            for pair in InputPair::ALL {
+                sum += read_all(State::solve(
+                    pair,
+                    s.pressure(),
+                    s.temperature(),
+                    units,
+                    Method::Exact,
+                ));
+            }
+            for property in Property::ALL {
+                sum += s.get(property).unwrap_or(0.0);
+            }
+        }
+        // Wet steam through the inverse pairs, and a pair with no state.
+        if let Ok(w) = State::from_px(p(1.0), 0.4, units) {
+            sum += read_all(State::from_ph(w.pressure(), w.enthalpy(), units));
+            sum += read_all(State::from_hs(w.enthalpy(), w.entropy(), units));
+            sum += read_all(State::from_vu(
+                w.specific_volume(),
+                w.internal_energy(),
+                units,
+            ));
+            sum += read_all(State::from_rho_t(w.density(), w.temperature(), units));
+        }
+        sum += read_all(State::from_vu(1e-9, 1e9, units));
         sum += read_all(State::from_px(p(0.1), 0.3, units));
         sum += read_all(State::from_px(p(20.0), 0.3, units));
         sum += read_all(State::from_tx(t(640.0), 0.7, units));
