@@ -63,6 +63,15 @@ pub enum Error {
         equation: &'static str,
     },
 
+    /// A quantity that does not exist for the state asked of it (a
+    /// derivative along two dependent variables, a transport property of a
+    /// two-phase mixture).
+    #[error("the {what} does not exist for this state")]
+    Undefined {
+        /// What was asked for.
+        what: &'static str,
+    },
+
     /// An iteration did not reach the formulation's precision within its
     /// bound; no approximate state is returned.
     #[error("the {what} iteration did not converge")]

@@ -6,24 +6,17 @@
 //!
 //! The Jacobian needs nothing beyond the properties one evaluation already
 //! gives (v, T, cp, cv, αv, κT): the partial derivatives of p, T, v, ρ, u,
-//! h and s with respect to either pair of variables follow from them by the
-//! standard relations (Maxwell's, and dh = T ds + v dp).
+//! h, s, g and f with respect to either pair of variables follow from them
+//! by the standard relations (Maxwell's, and dh = T ds + v dp); the (p, T)
+//! ones live with [`Variable`].
 
 use crate::error::Error;
 use crate::free_energy::{Properties, ReducedGibbs};
+use crate::variable::Variable;
 use crate::{region1, region2, region3, region5};
 
 /// A property that can be prescribed as one half of an input pair.
-#[derive(Clone, Copy, Debug, PartialEq, Eq)]
-pub(crate) enum Given {
-    Pressure,
-    Temperature,
-    Density,
-    SpecificVolume,
-    InternalEnergy,
-    Enthalpy,
-    Entropy,
-}
+pub(crate) type Given = Variable;
 
 /// The basic equation a state is refined on, which fixes its variables.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -64,15 +57,7 @@ impl Equation {
 /// The value of `given` at a state.
 #[inline]
 pub(crate) fn value(given: Given, props: &Properties) -> f64 {
-    match given {
-        Given::Pressure => props.p,
-        Given::Temperature => props.t,
-        Given::Density => 1.0 / props.v,
-        Given::SpecificVolume => props.v,
-        Given::InternalEnergy => props.u,
-        Given::Enthalpy => props.h,
-        Given::Entropy => props.s,
-    }
+    given.of(props)
 }
 
 /// (∂z/∂x, ∂z/∂T) of `given` = z, where x is p (Gibbs) or ρ (Helmholtz).
@@ -91,20 +76,13 @@ fn partials(equation: Equation, given: Given, s: &Properties) -> (f64, f64) {
                 Given::InternalEnergy => (v2k * (s.p * kappa - t * alpha), s.cv),
                 Given::Enthalpy => (v2k * (1.0 - t * alpha), s.cv + 1e3 * v * alpha / kappa),
                 Given::Entropy => (-v2k * alpha, s.cv / t),
+                // g = f + pv: (∂g/∂ρ)_T = v·(∂p/∂ρ)_T, (∂g/∂T)_ρ = −s + v·(∂p/∂T)_ρ.
+                Given::GibbsEnergy => (v2k, -s.s + 1e3 * v * alpha / kappa),
+                // (∂f/∂ρ)_T = p/ρ², (∂f/∂T)_ρ = −s.
+                Given::HelmholtzEnergy => (1e3 * s.p * v * v, -s.s),
             }
         }
-        _ => match given {
-            Given::Pressure => (1.0, 0.0),
-            Given::Temperature => (0.0, 1.0),
-            Given::Density => (kappa / v, -alpha / v),
-            Given::SpecificVolume => (-v * kappa, v * alpha),
-            Given::InternalEnergy => (
-                1e3 * v * (s.p * kappa - t * alpha),
-                s.cp - 1e3 * s.p * v * alpha,
-            ),
-            Given::Enthalpy => (1e3 * v * (1.0 - t * alpha), s.cp),
-            Given::Entropy => (-1e3 * v * alpha, s.cp / t),
-        },
+        _ => given.pt_partials(s),
     }
 }
 

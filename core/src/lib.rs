@@ -24,6 +24,7 @@ mod series;
 pub mod backward;
 pub mod boundary_b23;
 pub mod constants;
+mod derivatives;
 mod error;
 pub mod free_energy;
 mod gibbs_parts;
@@ -48,6 +49,7 @@ mod saturation;
 pub mod saturation_line;
 mod state;
 pub mod units;
+mod variable;
 
 pub use error::Error;
 pub use input_pair::InputPair;
@@ -57,6 +59,7 @@ pub use property::Property;
 pub use saturation::{min_saturation_pressure, Saturation};
 pub use state::{Phase, Region, State};
 pub use units::{Quantity, Units};
+pub use variable::Variable;
 
 /// The README's Rust example, compiled and run as a doctest.
 #[cfg(doctest)]

@@ -8,7 +8,7 @@ use std::sync::atomic::{AtomicUsize, Ordering};
 use ebullio::backward::{r7_97, sr2_01, sr3_03, sr4_04, sr5_05};
 use ebullio::{
     boundary_b23, region1, region2, region2_metastable, region3, region5, saturation_line,
-    InputPair, Method, Property, Saturation, State, Units,
+    InputPair, Method, Property, Saturation, State, Units, Variable,
 };
 
 struct Counting;
@@ -106,6 +106,16 @@ fn exercise_everything() -> f64 {
             for property in Property::ALL {
                 sum += s.get(property).unwrap_or(0.0);
             }
+            for z in Variable::ALL {
+                for x in Variable::ALL {
+                    sum += s.derivative(z, x, Variable::Entropy).unwrap_or(0.0);
+                }
+            }
+            sum += s.isentropic_exponent().unwrap_or(0.0)
+                + s.joule_thomson_coefficient().unwrap_or(0.0);
+            sum += s.isothermal_throttling_coefficient().unwrap_or(0.0);
+            sum += s.relative_pressure_coefficient().unwrap_or(0.0)
+                + s.isothermal_stress_coefficient().unwrap_or(0.0);
         }
         // Wet steam through the inverse pairs, and a pair with no state.
         if let Ok(w) = State::from_px(p(1.0), 0.4, units) {
@@ -117,6 +127,14 @@ fn exercise_everything() -> f64 {
                 units,
             ));
             sum += read_all(State::from_rho_t(w.density(), w.temperature(), units));
+            sum += w
+                .derivative(Variable::Density, Variable::Pressure, Variable::Enthalpy)
+                .unwrap_or(0.0);
+            if let Ok(sat) = Saturation::at_pressure(w.pressure(), units) {
+                sum += sat.pressure_slope()
+                    + sat.liquid_slope(Variable::Enthalpy)
+                    + sat.vapour_slope(Variable::Entropy);
+            }
         }
         sum += read_all(State::from_vu(1e-9, 1e9, units));
         sum += read_all(State::from_px(p(0.1), 0.3, units));

@@ -161,6 +161,7 @@ impl From<&Error> for EbullioStatus {
             Error::NoStateInRange { .. } => EbullioStatus::NoStateInRange,
             Error::BackwardEquationOutOfRange { .. } => EbullioStatus::BackwardEquationOutOfRange,
             Error::NotConverged { .. } => EbullioStatus::NotConverged,
+            Error::Undefined { .. } => EbullioStatus::PropertyUndefined,
             // `ebullio::Error` is non-exhaustive: a variant added to the
             // core before this crate names it is a defect to report, not a
             // crash.

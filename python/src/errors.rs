@@ -56,6 +56,7 @@ pub(crate) mod status {
     pub const NO_STATE_IN_RANGE: u8 = 4;
     pub const BACKWARD_EQUATION_OUT_OF_RANGE: u8 = 5;
     pub const NOT_CONVERGED: u8 = 6;
+    pub const UNDEFINED: u8 = 7;
     /// A kind of error this build of the binding does not know yet.
     pub const OTHER: u8 = 255;
 }
@@ -69,6 +70,7 @@ pub(crate) fn status_of(error: &Error) -> u8 {
         Error::NoStateInRange { .. } => status::NO_STATE_IN_RANGE,
         Error::BackwardEquationOutOfRange { .. } => status::BACKWARD_EQUATION_OUT_OF_RANGE,
         Error::NotConverged { .. } => status::NOT_CONVERGED,
+        Error::Undefined { .. } => status::UNDEFINED,
         _ => status::OTHER,
     }
 }
@@ -89,6 +91,7 @@ pub(crate) fn status_table(py: Python<'_>) -> PyResult<Bound<'_, PyTuple>> {
                 BACKWARD_EQUATION_OUT_OF_RANGE,
             ),
             ("NOT_CONVERGED", NOT_CONVERGED),
+            ("UNDEFINED", UNDEFINED),
             ("OTHER", OTHER),
         ],
     )

@@ -37,6 +37,7 @@ class Status(enum.IntEnum):
     NO_STATE_IN_RANGE = 4
     BACKWARD_EQUATION_OUT_OF_RANGE = 5
     NOT_CONVERGED = 6
+    UNDEFINED = 7
     OTHER = 255
 
 class SteamError(ValueError):

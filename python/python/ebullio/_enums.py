@@ -77,7 +77,8 @@ class Status(enum.IntEnum):
     The codes match the exception raised for the same input as a scalar:
     NOT_FINITE -> NotFiniteError; OUT_OF_RANGE, NO_STATE_IN_RANGE and
     BACKWARD_EQUATION_OUT_OF_RANGE -> OutOfRangeError; QUALITY_OUT_OF_RANGE
-    -> QualityOutOfRangeError; NOT_CONVERGED -> NotConvergedError.
+    -> QualityOutOfRangeError; NOT_CONVERGED -> NotConvergedError;
+    UNDEFINED (a quantity the state does not have) -> SteamError.
     """
 
     OK = 0
@@ -87,4 +88,5 @@ class Status(enum.IntEnum):
     NO_STATE_IN_RANGE = 4
     BACKWARD_EQUATION_OUT_OF_RANGE = 5
     NOT_CONVERGED = 6
+    UNDEFINED = 7
     OTHER = 255
