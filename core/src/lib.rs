@@ -48,8 +48,12 @@ mod saturated_density_estimate;
 mod saturation;
 pub mod saturation_line;
 mod state;
+pub mod surface_tension;
+pub mod thermal_conductivity;
+mod transport;
 pub mod units;
 mod variable;
+pub mod viscosity;
 
 pub use error::Error;
 pub use input_pair::InputPair;

@@ -60,3 +60,8 @@ pub(crate) fn powi(x: f64, n: i32) -> f64 {
         result
     }
 }
+
+#[inline]
+pub(crate) fn atan(x: f64) -> f64 {
+    libm::atan(x)
+}

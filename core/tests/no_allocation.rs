@@ -114,6 +114,9 @@ fn exercise_everything() -> f64 {
             sum += s.isentropic_exponent().unwrap_or(0.0)
                 + s.joule_thomson_coefficient().unwrap_or(0.0);
             sum += s.isothermal_throttling_coefficient().unwrap_or(0.0);
+            sum += s.viscosity().unwrap_or(0.0) + s.thermal_conductivity().unwrap_or(0.0);
+            sum += s.kinematic_viscosity().unwrap_or(0.0) + s.thermal_diffusivity().unwrap_or(0.0);
+            sum += s.prandtl_number().unwrap_or(0.0);
             sum += s.relative_pressure_coefficient().unwrap_or(0.0)
                 + s.isothermal_stress_coefficient().unwrap_or(0.0);
         }
@@ -134,6 +137,7 @@ fn exercise_everything() -> f64 {
                 sum += sat.pressure_slope()
                     + sat.liquid_slope(Variable::Enthalpy)
                     + sat.vapour_slope(Variable::Entropy);
+                sum += sat.surface_tension() + w.viscosity().unwrap_or(0.0);
             }
         }
         sum += read_all(State::from_vu(1e-9, 1e9, units));

@@ -538,6 +538,19 @@ impl PyState {
         })
     }
 
+    /// The partial derivative (∂z/∂x) at constant y, in the state's units
+    /// (z's unit per x's unit, temperatures as differences). ``z``, ``x``,
+    /// ``y`` are among ``"p" "t" "v" "rho" "u" "h" "s" "g" "f"``; wet steam
+    /// gives the homogeneous-mixture derivative, e.g.
+    /// ``state.derivative("rho", "p", "h")``. Raises ``SteamError`` where
+    /// the derivative does not exist (x and y not independent).
+    fn derivative(&self, py: Python<'_>, z: &str, x: &str, y: &str) -> PyResult<f64> {
+        let (z, x, y) = (variable(z)?, variable(x)?, variable(y)?);
+        self.inner
+            .derivative(z, x, y)
+            .map_err(|e| to_py(py, &e, None))
+    }
+
     /// Every property as a dict of floats (``None`` where it does not exist),
     /// with ``region`` and ``phase``.
     fn as_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
@@ -624,4 +637,25 @@ pub(crate) fn solve_scalar(
         method: names::method(method)?,
     };
     PyState::solve(py, origin, read)
+}
+
+/// A thermodynamic variable by the attribute name it has on a state.
+fn variable(name: &str) -> PyResult<ebullio::Variable> {
+    use ebullio::Variable::*;
+    Ok(match name {
+        "p" => Pressure,
+        "t" => Temperature,
+        "v" => SpecificVolume,
+        "rho" => Density,
+        "u" => InternalEnergy,
+        "h" => Enthalpy,
+        "s" => Entropy,
+        "g" => GibbsEnergy,
+        "f" => HelmholtzEnergy,
+        other => {
+            return Err(pyo3::exceptions::PyValueError::new_err(format!(
+                "unknown variable {other:?}: use one of p, t, v, rho, u, h, s, g, f"
+            )))
+        }
+    })
 }

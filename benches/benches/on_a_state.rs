@@ -1,7 +1,8 @@
-//! An arbitrary partial derivative on top of an existing state, single
-//! phase and wet steam (the state is solved once, outside the timing).
+//! What is computed on top of an existing state (solved once, outside the
+//! timing): an arbitrary partial derivative, single phase and wet steam,
+//! and the transport properties.
 //!
-//! Run with `cargo bench -p ebullio-benches --bench derivatives`.
+//! Run with `cargo bench -p ebullio-benches --bench on_a_state`.
 
 use std::hint::black_box;
 use std::time::Duration;
@@ -10,7 +11,7 @@ use criterion::{criterion_group, criterion_main, Criterion, Throughput};
 use ebullio::{State, Units, Variable};
 use ebullio_benches::states;
 
-fn derivatives(c: &mut Criterion) {
+fn on_a_state(c: &mut Criterion) {
     let mut group = c.benchmark_group("derivatives");
     let single: Vec<State> = states::REGION1
         .iter()
@@ -46,6 +47,31 @@ fn derivatives(c: &mut Criterion) {
         })
     });
     group.finish();
+
+    let mut group = c.benchmark_group("transport");
+    group.throughput(Throughput::Elements(single.len() as u64));
+    group.bench_function("viscosity", |b| {
+        b.iter(|| {
+            for s in black_box(&single) {
+                black_box(s.viscosity()).ok();
+            }
+        })
+    });
+    group.bench_function("thermal_conductivity", |b| {
+        b.iter(|| {
+            for s in black_box(&single) {
+                black_box(s.thermal_conductivity()).ok();
+            }
+        })
+    });
+    group.bench_function("prandtl_number", |b| {
+        b.iter(|| {
+            for s in black_box(&single) {
+                black_box(s.prandtl_number()).ok();
+            }
+        })
+    });
+    group.finish();
 }
 
 criterion_group! {
@@ -54,6 +80,6 @@ criterion_group! {
         .warm_up_time(Duration::from_millis(500))
         .measurement_time(Duration::from_secs(1))
         .sample_size(20);
-    targets = derivatives
+    targets = on_a_state
 }
 criterion_main!(benches);
