@@ -3,8 +3,9 @@
 //! the quantities derived from them, and the surface tension of a
 //! saturation point (IAPWS R1-76(2014)).
 //!
-//! Every value is returned in **native units** whatever the state's unit
-//! system: Pa·s, W/(m·K), m²/s, N/m (the Prandtl number is dimensionless).
+//! Values are in the state's unit system: Pa·s, W/(m·K), m²/s and N/m in
+//! the metric ones, lbm/(ft·s), Btu/(h·ft·°F), ft²/s and lbf/ft in US
+//! customary (the Prandtl number is dimensionless).
 //! Wet steam has no transport properties as a mixture: ask each saturated
 //! phase ([`crate::Saturation::liquid`], [`crate::Saturation::vapour`]).
 
@@ -37,33 +38,40 @@ impl State {
         Ok((1.0 / props.v, props.t))
     }
 
-    /// Dynamic viscosity μ, Pa·s (IAPWS R12-08, industrial form μ̄2 = 1).
+    /// A native transport value in the state's units.
+    fn read_as(&self, quantity: Quantity, value: f64) -> f64 {
+        self.units().from_native(quantity, value)
+    }
+
+    /// Dynamic viscosity μ (IAPWS R12-08, industrial form μ̄2 = 1).
     /// An error for wet steam and above 1173.15 K (the release's range).
     pub fn viscosity(&self) -> Result<f64, Error> {
         let (rho, t) = self.transport_point()?;
-        Ok(viscosity::viscosity(rho, t))
+        Ok(self.read_as(Quantity::DynamicViscosity, viscosity::viscosity(rho, t)))
     }
 
-    /// Thermal conductivity λ, W/(m·K) (IAPWS R15-11 with its critical
+    /// Thermal conductivity λ (IAPWS R15-11 with its critical
     /// enhancement in the industrial form). An error for wet steam and
     /// above 1173.15 K.
     pub fn thermal_conductivity(&self) -> Result<f64, Error> {
         self.transport_point()?;
-        Ok(thermal_conductivity::thermal_conductivity(self.native()))
+        let lambda = thermal_conductivity::thermal_conductivity(self.native());
+        Ok(self.read_as(Quantity::ThermalConductivity, lambda))
     }
 
-    /// Kinematic viscosity ν = μ/ρ, m²/s.
+    /// Kinematic viscosity ν = μ/ρ.
     pub fn kinematic_viscosity(&self) -> Result<f64, Error> {
         let (rho, t) = self.transport_point()?;
-        Ok(viscosity::viscosity(rho, t) / rho)
+        Ok(self.read_as(Quantity::Diffusivity, viscosity::viscosity(rho, t) / rho))
     }
 
-    /// Thermal diffusivity a = λ/(ρ cp), m²/s.
+    /// Thermal diffusivity a = λ/(ρ cp).
     pub fn thermal_diffusivity(&self) -> Result<f64, Error> {
         let (rho, _) = self.transport_point()?;
         let props = self.native();
         // cp in kJ/(kg·K) → J/(kg·K).
-        Ok(thermal_conductivity::thermal_conductivity(props) / (rho * 1e3 * props.cp))
+        let a = thermal_conductivity::thermal_conductivity(props) / (rho * 1e3 * props.cp);
+        Ok(self.read_as(Quantity::Diffusivity, a))
     }
 
     /// Prandtl number Pr = μ cp / λ, dimensionless.
@@ -78,11 +86,14 @@ impl State {
 }
 
 impl Saturation {
-    /// Surface tension σ between the saturated liquid and vapour, N/m
-    /// (IAPWS R1-76(2014)); zero at the critical point. Every saturation
+    /// Surface tension σ between the saturated liquid and vapour, in these
+    /// units (IAPWS R1-76(2014)); zero at the critical point. Every saturation
     /// point of IF97 (273.15 K to Tc) lies in the accepted range, so this
     /// cannot fail.
     pub fn surface_tension(&self) -> f64 {
-        surface_tension::surface_tension(self.liquid().native().t)
+        let sigma = surface_tension::surface_tension(self.liquid().native().t);
+        self.liquid()
+            .units()
+            .from_native(Quantity::SurfaceTension, sigma)
     }
 }

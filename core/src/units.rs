@@ -52,6 +52,14 @@ pub enum Quantity {
     ExpansionCoefficient,
     /// Isothermal compressibility, 1/MPa natively.
     Compressibility,
+    /// Dynamic viscosity, Pa·s natively.
+    DynamicViscosity,
+    /// Thermal conductivity, W/(m·K) natively.
+    ThermalConductivity,
+    /// Kinematic viscosity and thermal diffusivity, m²/s natively.
+    Diffusivity,
+    /// Surface tension, N/m natively.
+    SurfaceTension,
     /// Vapour mass fraction of wet steam; the same in every system.
     Quality,
 }
@@ -73,6 +81,10 @@ impl Quantity {
             Quantity::Speed => "speed",
             Quantity::ExpansionCoefficient => "expansion coefficient",
             Quantity::Compressibility => "compressibility",
+            Quantity::DynamicViscosity => "viscosity",
+            Quantity::ThermalConductivity => "thermal conductivity",
+            Quantity::Diffusivity => "diffusivity",
+            Quantity::SurfaceTension => "surface tension",
             Quantity::Quality => "quality",
         }
     }
@@ -92,6 +104,10 @@ enum UnitKind {
     Speed,
     ExpansionCoefficient,
     Compressibility,
+    DynamicViscosity,
+    ThermalConductivity,
+    Diffusivity,
+    SurfaceTension,
     Dimensionless,
 }
 
@@ -110,6 +126,10 @@ impl Quantity {
             Quantity::Speed => UnitKind::Speed,
             Quantity::ExpansionCoefficient => UnitKind::ExpansionCoefficient,
             Quantity::Compressibility => UnitKind::Compressibility,
+            Quantity::DynamicViscosity => UnitKind::DynamicViscosity,
+            Quantity::ThermalConductivity => UnitKind::ThermalConductivity,
+            Quantity::Diffusivity => UnitKind::Diffusivity,
+            Quantity::SurfaceTension => UnitKind::SurfaceTension,
             Quantity::Quality => UnitKind::Dimensionless,
         }
     }
@@ -145,6 +165,19 @@ pub const FAHRENHEIT_OFFSET: f64 = 459.67;
 /// Offset of the Celsius scale from the kelvin scale, K (SP 811, B.8).
 pub const CELSIUS_OFFSET: f64 = 273.15;
 
+/// British thermal unit (IT) in kJ, exact: 2.326 kJ/kg per Btu/lb times
+/// the pound (SP 811, B.8: 1.055 056 E+03 J).
+pub const BTU_KJ: f64 = BTU_PER_LBM_KJ_PER_KG * POUND_MASS_KG;
+/// Pound per foot second in Pa·s (SP 811, B.8 prints 1.488 164 E+00).
+pub const LBM_PER_FT_S_PA_S: f64 = POUND_MASS_KG / FOOT_M;
+/// Btu (IT) per hour foot degree Fahrenheit in W/(m·K) (SP 811, B.8 prints
+/// 1.730 735 E+00).
+pub const BTU_PER_H_FT_F_W_PER_M_K: f64 = BTU_KJ * 1e3 * RANKINE_PER_KELVIN / (3600.0 * FOOT_M);
+/// Square foot per second in m²/s, exact (SP 811, B.8: 9.290 304 E−02).
+pub const FT2_PER_S_M2_PER_S: f64 = FOOT_M * FOOT_M;
+/// Pound-force per foot in N/m (SP 811, B.8 prints 1.459 390 E+01).
+pub const LBF_PER_FT_N_PER_M: f64 = POUND_MASS_KG * STANDARD_GRAVITY / FOOT_M;
+
 /// How many caller units make one native unit, for the quantities that
 /// convert by a factor alone.
 fn units_per_native(units: Units, quantity: Quantity) -> f64 {
@@ -166,6 +199,10 @@ fn units_per_native(units: Units, quantity: Quantity) -> f64 {
         (Units::UsCustomary, Q::SpecificEnergy) => 1.0 / BTU_PER_LBM_KJ_PER_KG,
         (Units::UsCustomary, Q::SpecificEntropy) => 1.0 / BTU_PER_LBM_R_KJ_PER_KG_K,
         (Units::UsCustomary, Q::Speed) => 1.0 / FOOT_M,
+        (Units::UsCustomary, Q::DynamicViscosity) => 1.0 / LBM_PER_FT_S_PA_S,
+        (Units::UsCustomary, Q::ThermalConductivity) => 1.0 / BTU_PER_H_FT_F_W_PER_M_K,
+        (Units::UsCustomary, Q::Diffusivity) => 1.0 / FT2_PER_S_M2_PER_S,
+        (Units::UsCustomary, Q::SurfaceTension) => 1.0 / LBF_PER_FT_N_PER_M,
     }
 }
 
@@ -224,6 +261,14 @@ impl Units {
             (Units::SiBase, Q::Compressibility) => "1/Pa",
             (Units::MetricEngineering, Q::Compressibility) => "1/bar",
             (Units::UsCustomary, Q::Compressibility) => "1/psi",
+            (Units::UsCustomary, Q::DynamicViscosity) => "lbm/(ft·s)",
+            (_, Q::DynamicViscosity) => "Pa·s",
+            (Units::UsCustomary, Q::ThermalConductivity) => "Btu/(h·ft·°F)",
+            (_, Q::ThermalConductivity) => "W/(m·K)",
+            (Units::UsCustomary, Q::Diffusivity) => "ft²/s",
+            (_, Q::Diffusivity) => "m²/s",
+            (Units::UsCustomary, Q::SurfaceTension) => "lbf/ft",
+            (_, Q::SurfaceTension) => "N/m",
         }
     }
 

@@ -211,6 +211,14 @@ enum EbullioQuantity
   EBULLIO_QUANTITY_COMPRESSIBILITY = 13,
   // Vapour quality.
   EBULLIO_QUANTITY_QUALITY = 14,
+  // Dynamic viscosity.
+  EBULLIO_QUANTITY_DYNAMIC_VISCOSITY = 15,
+  // Thermal conductivity.
+  EBULLIO_QUANTITY_THERMAL_CONDUCTIVITY = 16,
+  // Kinematic viscosity or thermal diffusivity.
+  EBULLIO_QUANTITY_DIFFUSIVITY = 17,
+  // Surface tension.
+  EBULLIO_QUANTITY_SURFACE_TENSION = 18,
 };
 #ifndef __cplusplus
 #if __STDC_VERSION__ >= 202311L

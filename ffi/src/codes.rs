@@ -166,6 +166,14 @@ pub enum EbullioQuantity {
     Compressibility = 13,
     /// Vapour quality.
     Quality = 14,
+    /// Dynamic viscosity.
+    DynamicViscosity = 15,
+    /// Thermal conductivity.
+    ThermalConductivity = 16,
+    /// Kinematic viscosity or thermal diffusivity.
+    Diffusivity = 17,
+    /// Surface tension.
+    SurfaceTension = 18,
 }
 
 /// Decodes an input pair number.
@@ -243,6 +251,10 @@ pub(crate) fn c_quantity(q: Quantity) -> EbullioQuantity {
         Quantity::ExpansionCoefficient => EbullioQuantity::ExpansionCoefficient,
         Quantity::Compressibility => EbullioQuantity::Compressibility,
         Quantity::Quality => EbullioQuantity::Quality,
+        Quantity::DynamicViscosity => EbullioQuantity::DynamicViscosity,
+        Quantity::ThermalConductivity => EbullioQuantity::ThermalConductivity,
+        Quantity::Diffusivity => EbullioQuantity::Diffusivity,
+        Quantity::SurfaceTension => EbullioQuantity::SurfaceTension,
     }
 }
 

@@ -192,10 +192,21 @@ fn prandtl_number_of_water_at_20_c_is_about_7() {
     assert_relative("ν = μ/ρ", nu, mu / rho, 1e-15);
     assert_relative("a = λ/(ρ cp)", a, lambda / (rho * n.cp * 1e3), 1e-15);
     assert_relative("Pr = μ cp/λ", pr, mu * n.cp * 1e3 / lambda, 1e-15);
-    // Native units whatever the state's system.
+    // Read in the state's units: lbm/(ft·s) and Btu/(h·ft·°F) in US
+    // customary (factors from NIST SP 811, tested in units_sp811.rs).
     let us = water.in_units(Units::UsCustomary);
-    assert_eq!(us.viscosity().unwrap(), mu);
-    assert_eq!(us.thermal_conductivity().unwrap(), lambda);
+    assert_relative(
+        "μ in lbm/(ft·s)",
+        us.viscosity().unwrap() * ebullio::units::LBM_PER_FT_S_PA_S,
+        mu,
+        1e-14,
+    );
+    assert_relative(
+        "λ in Btu/(h·ft·°F)",
+        us.thermal_conductivity().unwrap() * ebullio::units::BTU_PER_H_FT_F_W_PER_M_K,
+        lambda,
+        1e-14,
+    );
 }
 
 /// μ and λ of two states on either side of a region boundary agree: μ

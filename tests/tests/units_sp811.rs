@@ -92,3 +92,37 @@ fn a_state_reads_the_same_in_every_system() {
         );
     }
 }
+
+#[test]
+fn transport_factors_match_nist_sp_811_appendix_b8() {
+    // recalled from NIST SP 811 (2008), Appendix B.8
+    assert_printed("lb/(ft·s) → Pa·s", LBM_PER_FT_S_PA_S, "1.488164e0");
+    assert_printed(
+        "Btu_IT/(h·ft·°F) → W/(m·K)",
+        BTU_PER_H_FT_F_W_PER_M_K,
+        "1.730735e0",
+    );
+    assert_printed("ft²/s → m²/s", FT2_PER_S_M2_PER_S, "9.290304e-2");
+    assert_printed("lbf/ft → N/m", LBF_PER_FT_N_PER_M, "1.459390e1");
+    assert_printed("Btu_IT → J", BTU_KJ * 1e3, "1.055056e3");
+}
+
+#[test]
+fn transport_properties_read_in_the_states_units() {
+    let native = State::from_pt(1.0, 400.0, Units::Native).unwrap();
+    let us = native.in_units(Units::UsCustomary);
+    let mu = native.viscosity().unwrap();
+    assert!((us.viscosity().unwrap() * LBM_PER_FT_S_PA_S / mu - 1.0).abs() < 1e-14);
+    let lambda = native.thermal_conductivity().unwrap();
+    assert!(
+        (us.thermal_conductivity().unwrap() * BTU_PER_H_FT_F_W_PER_M_K / lambda - 1.0).abs()
+            < 1e-14
+    );
+    assert_eq!(
+        us.prandtl_number().unwrap(),
+        native.prandtl_number().unwrap()
+    );
+    let sat = ebullio::Saturation::at_temperature(373.15, Units::Native).unwrap();
+    let sigma_us = sat.in_units(Units::UsCustomary).surface_tension();
+    assert!((sigma_us * LBF_PER_FT_N_PER_M / sat.surface_tension() - 1.0).abs() < 1e-14);
+}
