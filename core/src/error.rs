@@ -79,6 +79,26 @@ pub enum Error {
         /// Which iteration.
         what: &'static str,
     },
+
+    /// A plant description that cannot be solved as given: an efficiency
+    /// outside (0, 1], heaters out of pressure order, a heater whose
+    /// temperatures leave no heat to transfer.
+    #[error("the plant description is not valid: {what}")]
+    InvalidPlant {
+        /// What is wrong with it.
+        what: &'static str,
+    },
+
+    /// Measurements that do not fix a state: a turbine exhaust read as
+    /// (p,T) at or below saturation is wet, and p and T then do not fix
+    /// its enthalpy.
+    #[error("{what}; {needs}")]
+    NotFixedByMeasurement {
+        /// What the measurements leave open.
+        what: &'static str,
+        /// The extra measurement or balance that would fix it.
+        needs: &'static str,
+    },
 }
 
 impl Error {

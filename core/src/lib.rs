@@ -36,6 +36,7 @@ mod pair_ph_ps;
 mod pair_pt;
 mod pair_rho_t;
 mod pair_vu;
+pub mod plant;
 mod property;
 pub mod region1;
 pub mod region2;

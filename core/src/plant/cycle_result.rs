@@ -1,0 +1,252 @@
+//! What a cycle solve returns: the state points, every component's
+//! streams and balances, and the cycle's performance figures.
+
+use super::cycle_spec::{MAX_CASINGS, MAX_HEATERS};
+use crate::{State, Units};
+
+/// The most state points a result holds.
+pub const MAX_POINTS: usize = 4 + MAX_CASINGS + 7 * MAX_HEATERS;
+/// The most components a result holds.
+pub const MAX_COMPONENTS: usize = 4 + MAX_CASINGS + 6 * MAX_HEATERS;
+/// The most inlet (or outlet) streams of one component.
+pub const MAX_STREAMS: usize = 3;
+
+/// What a state point is.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+#[repr(u32)]
+pub enum PointRole {
+    /// Throttle steam, at the first casing's inlet.
+    Throttle = 1,
+    /// A casing's exhaust (the last one's is the condenser inlet).
+    CasingExhaust = 2,
+    /// Hot reheat, at the second casing's inlet.
+    HotReheat = 3,
+    /// Steam at a turbine extraction point.
+    Extraction = 4,
+    /// Extraction steam at the heater, after the line's pressure loss.
+    HeaterSteam = 5,
+    /// Feedwater leaving a heater (an open heater's saturated outlet).
+    FeedwaterOut = 6,
+    /// Drain leaving a closed heater's shell.
+    Drain = 7,
+    /// A drain after its drain pump.
+    DrainPumped = 8,
+    /// Feedwater after a pumped-forward drain has joined it.
+    FeedwaterMixed = 9,
+    /// Water leaving the pump that follows an open heater.
+    PumpOutlet = 10,
+    /// Condensate leaving the condenser hotwell.
+    Hotwell = 11,
+    /// Water leaving the condensate pump.
+    CondensatePumpOutlet = 12,
+    /// Feedwater entering the boiler.
+    BoilerInlet = 13,
+}
+
+impl PointRole {
+    /// The role in words, for tables.
+    pub const fn name(self) -> &'static str {
+        match self {
+            PointRole::Throttle => "throttle",
+            PointRole::CasingExhaust => "casing exhaust",
+            PointRole::HotReheat => "hot reheat",
+            PointRole::Extraction => "extraction",
+            PointRole::HeaterSteam => "steam at heater",
+            PointRole::FeedwaterOut => "feedwater out",
+            PointRole::Drain => "drain",
+            PointRole::DrainPumped => "drain pumped",
+            PointRole::FeedwaterMixed => "feedwater mixed",
+            PointRole::PumpOutlet => "pump outlet",
+            PointRole::Hotwell => "hotwell",
+            PointRole::CondensatePumpOutlet => "condensate pump outlet",
+            PointRole::BoilerInlet => "boiler inlet",
+        }
+    }
+}
+
+/// A point's role and the number of its casing or heater (1-based, in
+/// the description's order; 0 where neither applies).
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub struct PointLabel {
+    /// What the point is.
+    pub role: PointRole,
+    /// Its casing or heater number, or 0.
+    pub number: u8,
+}
+
+/// A named state point with its mass flow per unit throttle flow.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct StatePoint {
+    /// What and where it is.
+    pub label: PointLabel,
+    /// Mass flow per unit throttle flow.
+    pub flow: f64,
+    /// Its state, in the cycle's units.
+    pub state: State,
+}
+
+/// What kind of component.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+#[repr(u32)]
+pub enum ComponentKind {
+    /// A stage group of a turbine casing (numbered by casing).
+    StageGroup = 1,
+    /// An extraction line, a throttle (numbered by heater).
+    ExtractionLine = 2,
+    /// A closed feedwater heater (numbered by heater).
+    ClosedHeater = 3,
+    /// An open feedwater heater (numbered by heater).
+    OpenHeater = 4,
+    /// A drain pump (numbered by heater).
+    DrainPump = 5,
+    /// The mixing of a pumped drain into the feedwater (by heater).
+    MixingPoint = 6,
+    /// The pump after an open heater (numbered by heater).
+    Pump = 7,
+    /// The condensate pump.
+    CondensatePump = 8,
+    /// The boiler, from feedwater to throttle steam.
+    Boiler = 9,
+    /// The reheater.
+    Reheater = 10,
+    /// The condenser.
+    Condenser = 11,
+}
+
+impl ComponentKind {
+    /// The kind in words, for tables.
+    pub const fn name(self) -> &'static str {
+        match self {
+            ComponentKind::StageGroup => "stage group",
+            ComponentKind::ExtractionLine => "extraction line",
+            ComponentKind::ClosedHeater => "closed heater",
+            ComponentKind::OpenHeater => "open heater",
+            ComponentKind::DrainPump => "drain pump",
+            ComponentKind::MixingPoint => "mixing point",
+            ComponentKind::Pump => "pump",
+            ComponentKind::CondensatePump => "condensate pump",
+            ComponentKind::Boiler => "boiler",
+            ComponentKind::Reheater => "reheater",
+            ComponentKind::Condenser => "condenser",
+        }
+    }
+}
+
+/// A stream entering or leaving a component, per unit throttle flow, in
+/// the cycle's units.
+#[derive(Clone, Copy, Debug, PartialEq, Default)]
+pub struct Stream {
+    /// Mass flow per unit throttle flow.
+    pub flow: f64,
+    /// Specific enthalpy.
+    pub enthalpy: f64,
+    /// Specific entropy.
+    pub entropy: f64,
+}
+
+/// One component's streams and balances, per unit throttle flow, in the
+/// cycle's units. Its energy balance is
+/// Σ inlets flow·h + heat_in = Σ outlets flow·h + work_out.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct Component {
+    /// What it is.
+    pub kind: ComponentKind,
+    /// Its casing or heater number, or 0.
+    pub number: u8,
+    /// Streams in; the first `inlet_count` are used.
+    pub inlets: [Stream; MAX_STREAMS],
+    /// How many streams enter.
+    pub inlet_count: usize,
+    /// Streams out; the first `outlet_count` are used.
+    pub outlets: [Stream; MAX_STREAMS],
+    /// How many streams leave.
+    pub outlet_count: usize,
+    /// Heat added to the water (negative for the condenser).
+    pub heat_in: f64,
+    /// Work delivered by the water (negative for pumps).
+    pub work_out: f64,
+    /// Entropy generated, Σ out flow·s − Σ in flow·s − heat_in / T_b,
+    /// with T_b the hottest cycle temperature for heat added and the
+    /// hotwell temperature for heat rejected (the Carnot reservoirs).
+    pub entropy_generation: f64,
+}
+
+impl Component {
+    /// The streams in.
+    pub fn inlets(&self) -> &[Stream] {
+        &self.inlets[..self.inlet_count]
+    }
+
+    /// The streams out.
+    pub fn outlets(&self) -> &[Stream] {
+        &self.outlets[..self.outlet_count]
+    }
+}
+
+/// A solved cycle. Specific values are per unit mass of throttle steam,
+/// in the cycle's units (kJ/kg or Btu/lbm).
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct CycleResult {
+    /// The unit system of every number here.
+    pub units: Units,
+    pub(crate) points: [StatePoint; MAX_POINTS],
+    pub(crate) point_count: usize,
+    pub(crate) components: [Component; MAX_COMPONENTS],
+    pub(crate) component_count: usize,
+    pub(crate) extraction_fractions: [f64; MAX_HEATERS],
+    pub(crate) heater_count: usize,
+    /// Work of all turbine casings.
+    pub turbine_work: f64,
+    /// Work absorbed by all pumps.
+    pub pump_work: f64,
+    /// Turbine work − pump work.
+    pub net_work: f64,
+    /// Heat added in the boiler.
+    pub boiler_heat: f64,
+    /// Heat added in the reheater (0 without reheat).
+    pub reheat_heat: f64,
+    /// Boiler and reheater heat together.
+    pub heat_input: f64,
+    /// Heat rejected in the condenser.
+    pub condenser_duty: f64,
+    /// Cycle thermal efficiency, net work / heat input.
+    pub thermal_efficiency: f64,
+    /// Heat rate, kJ of heat input per kWh of net work.
+    pub heat_rate_kj_per_kwh: f64,
+    /// Heat rate, Btu (IT) of heat input per kWh of net work.
+    pub heat_rate_btu_per_kwh: f64,
+    /// Steam rate, kg of throttle steam per kWh of net work.
+    pub steam_rate_kg_per_kwh: f64,
+    /// Steam rate, lbm of throttle steam per kWh of net work.
+    pub steam_rate_lbm_per_kwh: f64,
+    /// Pump work / turbine work.
+    pub back_work_ratio: f64,
+    /// 1 − T_hotwell / T_hottest: the Carnot efficiency between the
+    /// cycle's temperature extremes.
+    pub carnot_efficiency: f64,
+}
+
+impl CycleResult {
+    /// The state points, in flow order.
+    pub fn points(&self) -> &[StatePoint] {
+        &self.points[..self.point_count]
+    }
+
+    /// The components, in flow order.
+    pub fn components(&self) -> &[Component] {
+        &self.components[..self.component_count]
+    }
+
+    /// Extraction flow of each heater per unit throttle flow, in the
+    /// description's order.
+    pub fn extraction_fractions(&self) -> &[f64] {
+        &self.extraction_fractions[..self.heater_count]
+    }
+
+    /// The first point with this role and number.
+    pub fn point(&self, role: PointRole, number: u8) -> Option<&StatePoint> {
+        self.points()
+            .iter()
+            .find(|p| p.label.role == role && p.label.number == number)
+    }
+}

@@ -1,0 +1,65 @@
+//! The plant layer: the components of a steam cycle and a solver for
+//! regenerative reheat Rankine cycles, on the exact property core.
+//!
+//! Every component takes [`State`](crate::State)s and numbers in the unit
+//! system of its inlet state and answers in the same system; flows are in
+//! any mass-flow unit the caller likes (or fractions of the throttle
+//! flow), and duties and powers come out in that flow unit times the
+//! specific energy unit (kg/s × kJ/kg = kW). Nothing allocates.
+//!
+//! Two efficiencies appear here and never mean the same thing: a turbine
+//! section's or pump's **isentropic efficiency** compares one machine
+//! with its ideal; a cycle's **thermal efficiency** is net work over heat
+//! input of the whole cycle.
+
+mod attemperator;
+mod closed_heater;
+mod cycle;
+mod cycle_result;
+mod cycle_spec;
+mod heat_transfer;
+mod mixing;
+mod open_heater;
+mod pump;
+mod turbine;
+
+pub use attemperator::{spray_for_temperature, Spray};
+pub use closed_heater::{closed_heater, ClosedHeater, HeaterApproach};
+pub use cycle::solve_cycle;
+pub use cycle_result::{
+    Component, ComponentKind, CycleResult, PointLabel, PointRole, StatePoint, Stream,
+    MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
+};
+pub use cycle_spec::{
+    Casing, CycleSpec, Drains, Heater, HeaterKind, Reheat, Supply, MAX_CASINGS, MAX_HEATERS,
+};
+pub use heat_transfer::{condensate, heat_duty};
+pub use mixing::{mix, throttle};
+pub use open_heater::{open_heater, OpenHeater};
+pub use pump::{compress, Compression};
+pub use turbine::{expand, section_efficiency, section_efficiency_between, Expansion};
+
+use crate::{Error, Quantity, Units};
+
+/// An isentropic efficiency must lie in (0, 1]: 1 is the ideal machine.
+pub(crate) fn check_efficiency(efficiency: f64) -> Result<f64, Error> {
+    if !efficiency.is_finite() {
+        return Err(Error::NotFinite {
+            quantity: Quantity::Quality,
+        });
+    }
+    if efficiency <= 0.0 || efficiency > 1.0 {
+        return Err(Error::InvalidPlant {
+            what: "an isentropic efficiency lies outside (0, 1]",
+        });
+    }
+    Ok(efficiency)
+}
+
+/// A finite input in the caller's units, converted to native units.
+pub(crate) fn native(quantity: Quantity, value: f64, units: Units) -> Result<f64, Error> {
+    if !value.is_finite() {
+        return Err(Error::NotFinite { quantity });
+    }
+    Ok(units.to_native(quantity, value))
+}
