@@ -63,8 +63,8 @@ pub fn compress(
         State::from_ph(p_out, a.h + isentropic_work / efficiency, Units::Native)?
     };
     let b = outlet.native();
-    // MPa · m³/kg = kJ/kg.
-    let incompressible_work = a.v * (p_out - a.p);
+    // MPa · m³/kg = MJ/kg: a thousand kJ/kg.
+    let incompressible_work = 1e3 * a.v * (p_out - a.p);
     let energy = |x| units.from_native(Quantity::Enthalpy, x);
     Ok(Compression {
         inlet: *inlet,
