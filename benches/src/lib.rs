@@ -2,7 +2,9 @@
 //!
 //! [`baseline`] is the yardstick the criterion benchmarks in
 //! `benches/properties.rs` compare the core against; [`states`] holds the
-//! representative states both use.
+//! representative states both use; [`cycles`] the cycle descriptions of
+//! `benches/plant.rs`.
 
 pub mod baseline;
+pub mod cycles;
 pub mod states;

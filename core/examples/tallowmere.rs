@@ -167,10 +167,13 @@ fn print_sections(result: &CycleResult, plant: &Plant, throttle_flow: f64) {
     }
 }
 
+/// A summary line: its name, how to read it off a result, its decimals.
+type SummaryRow = (&'static str, fn(&CycleResult) -> f64, usize);
+
 fn print_summary(actual: &CycleResult, ideal: &CycleResult, units: Units) {
     let e = units.symbol(Quantity::Enthalpy);
     println!("  {:<34} {:>12} {:>12}", "", "actual", "isentropic");
-    let rows: [(&str, fn(&CycleResult) -> f64, usize); 8] = [
+    let rows: [SummaryRow; 8] = [
         ("net work", |r| r.net_work, 2),
         ("heat input", |r| r.heat_input, 2),
         ("thermal efficiency", |r| r.thermal_efficiency, 5),

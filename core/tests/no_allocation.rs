@@ -180,7 +180,83 @@ fn exercise_everything() -> f64 {
     sum +=
         sr4_04::pressure_region3_hs(1800.0, 4.0) + sr4_04::saturation_temperature_hs(2400.0, 6.0);
     sum += sr5_05::specific_volume(25.0, 650.0).unwrap_or(0.0);
-    sum
+    sum + exercise_plant()
+}
+
+/// The plant layer: a cycle with every kind of heater, its ideal twin, a
+/// refused description, and each component.
+fn exercise_plant() -> f64 {
+    use ebullio::plant::*;
+    let n = Units::Native;
+    let mut spec = CycleSpec::new(
+        n,
+        Supply::Superheated {
+            pressure: 16.5,
+            temperature: 813.15,
+        },
+    );
+    spec.reheat = Some(Reheat {
+        pressure: 3.6,
+        temperature: 813.15,
+    });
+    spec.feed_pump_efficiency = 0.83;
+    for (exhaust, eta) in [(4.0, 0.86), (0.007, 0.88)] {
+        let _ = spec.push_casing(Casing {
+            exhaust_pressure: exhaust,
+            isentropic_efficiency: eta,
+        });
+    }
+    let approach = HeaterApproach {
+        terminal_temperature_difference: 2.8,
+        drain_cooler_approach: Some(5.6),
+    };
+    for (pressure, kind) in [
+        (
+            4.0,
+            HeaterKind::Closed {
+                approach,
+                drains: Drains::CascadeBackward,
+            },
+        ),
+        (1.0, HeaterKind::Open),
+        (
+            0.3,
+            HeaterKind::Closed {
+                approach,
+                drains: Drains::PumpForward,
+            },
+        ),
+    ] {
+        let _ = spec.push_heater(Heater {
+            extraction_pressure: pressure,
+            extraction_line_loss: 0.03,
+            kind,
+        });
+    }
+    let mut sum = 0.0;
+    for cycle in [spec, spec.ideal()] {
+        if let Ok(r) = solve_cycle(&cycle) {
+            sum += r.thermal_efficiency + r.points().len() as f64 + r.components().len() as f64;
+        }
+    }
+    let mut bad = spec;
+    bad.feed_pump_efficiency = 2.0;
+    sum += f64::from(u8::from(solve_cycle(&bad).is_err()));
+    let inlet = State::from_pt(16.5, 813.15, n).unwrap();
+    sum += expand(&inlet, 0.007, 0.86).map_or(0.0, |x| x.work);
+    sum += section_efficiency(16.5, 813.15, 4.0, 620.0, n).map_or(0.0, |x| x.work);
+    sum += section_efficiency(16.5, 813.15, 0.1, 372.0, n).map_or(1.0, |x| x.work);
+    let liquid = condensate(0.007, 1.0, n).unwrap();
+    sum += compress(&liquid, 1.2, 0.78).map_or(0.0, |x| x.work);
+    let shell = State::from_ph(0.4, 2950.0, n).unwrap();
+    let fw = State::from_pt(1.5, 390.0, n).unwrap();
+    sum += closed_heater(&shell, &fw, 1.0, None, approach).map_or(0.0, |h| h.duty);
+    sum += open_heater(&shell, &fw, 1.0, None).map_or(0.0, |h| h.extraction_flow);
+    let spray = State::from_pt(19.0, 520.0, n).unwrap();
+    sum += spray_for_temperature(&inlet, 1.0, &spray, 800.0).map_or(0.0, |s| s.spray_flow);
+    sum += throttle(&shell, 0.3).map_or(0.0, |s| s.enthalpy());
+    sum += mix(&[(1.0, &fw), (0.5, &liquid)], 1.0, n).map_or(0.0, |(m, _)| m);
+    sum + heat_duty(1.0, &fw, &shell)
 }
 
 fn main() {

@@ -1,0 +1,67 @@
+//! The plant layer: one cycle solve (seven heaters with cascaded drains,
+//! the same with two pumped-forward drains, a plain Rankine cycle) and
+//! the single components a performance calculation calls per sample.
+//!
+//! Run with `cargo bench -p ebullio-benches --bench plant`.
+
+use std::hint::black_box;
+use std::time::Duration;
+
+use criterion::{criterion_group, criterion_main, Criterion};
+use ebullio::plant::{compress, expand, section_efficiency, solve_cycle, Drains};
+use ebullio::{Saturation, State, Units};
+use ebullio_benches::cycles;
+
+fn plant(c: &mut Criterion) {
+    let mut group = c.benchmark_group("cycle");
+    let cascaded = cycles::seven_heaters(Drains::CascadeBackward);
+    let pumped = cycles::seven_heaters(Drains::PumpForward);
+    let plain = cycles::plain_rankine();
+    group.bench_function("seven_heaters_cascaded", |b| {
+        b.iter(|| solve_cycle(black_box(&cascaded)).map(|r| r.thermal_efficiency))
+    });
+    group.bench_function("seven_heaters_two_pumped_forward", |b| {
+        b.iter(|| solve_cycle(black_box(&pumped)).map(|r| r.thermal_efficiency))
+    });
+    group.bench_function("plain_rankine", |b| {
+        b.iter(|| solve_cycle(black_box(&plain)).map(|r| r.thermal_efficiency))
+    });
+    group.finish();
+
+    let mut group = c.benchmark_group("components");
+    let inlet = State::from_pt(16.5, 813.15, Units::Native).unwrap();
+    group.bench_function("expand_to_superheated", |b| {
+        b.iter(|| expand(black_box(&inlet), black_box(4.0), 0.86).map(|x| x.work))
+    });
+    group.bench_function("expand_to_wet", |b| {
+        b.iter(|| expand(black_box(&inlet), black_box(0.007), 0.86).map(|x| x.work))
+    });
+    group.bench_function("section_efficiency_from_pt", |b| {
+        b.iter(|| {
+            section_efficiency(
+                black_box(16.5),
+                black_box(813.15),
+                black_box(4.0),
+                black_box(620.0),
+                Units::Native,
+            )
+            .map(|x| x.isentropic_efficiency)
+        })
+    });
+    let hotwell = *Saturation::at_pressure(0.007, Units::Native)
+        .unwrap()
+        .liquid();
+    group.bench_function("compress", |b| {
+        b.iter(|| compress(black_box(&hotwell), black_box(1.2), 0.78).map(|x| x.work))
+    });
+    group.finish();
+}
+
+criterion_group! {
+    name = benches;
+    config = Criterion::default()
+        .warm_up_time(Duration::from_secs(1))
+        .measurement_time(Duration::from_secs(3));
+    targets = plant
+}
+criterion_main!(benches);
