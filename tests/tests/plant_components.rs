@@ -24,8 +24,18 @@ fn a_turbine_section_meets_its_efficiency_and_ends_wet_where_it_must() {
     let inlet = State::from_pt(3.7, 811.15, N).unwrap();
     for (p_out, eta) in [(0.95, 0.90), (0.0068, 0.88), (0.0068, 1.0)] {
         let x = expand(&inlet, p_out, eta).unwrap();
-        close("work / isentropic work", x.work / x.isentropic_work, eta, 1e-12);
-        close("isentropic end entropy", x.isentropic_exhaust.entropy(), inlet.entropy(), 1e-10);
+        close(
+            "work / isentropic work",
+            x.work / x.isentropic_work,
+            eta,
+            1e-12,
+        );
+        close(
+            "isentropic end entropy",
+            x.isentropic_exhaust.entropy(),
+            inlet.entropy(),
+            1e-10,
+        );
         close("exhaust pressure", x.exhaust.pressure(), p_out, 1e-12);
         assert!(x.entropy_generation >= -1e-12);
         if p_out < 0.01 {
@@ -41,7 +51,12 @@ fn a_measured_section_efficiency_is_recovered_and_a_wet_exhaust_is_refused() {
     let inlet = State::from_pt(16.7, 811.15, N).unwrap();
     let x = expand(&inlet, 4.1, 0.86).unwrap();
     let measured = section_efficiency(16.7, 811.15, 4.1, x.exhaust.temperature(), N).unwrap();
-    close("recovered efficiency", measured.isentropic_efficiency, 0.86, 1e-9);
+    close(
+        "recovered efficiency",
+        measured.isentropic_efficiency,
+        0.86,
+        1e-9,
+    );
     // A wet exhaust: p and T lie on the saturation line and fix nothing.
     let wet = expand(&inlet, 0.2, 0.86).unwrap();
     assert_eq!(wet.exhaust.phase(), Phase::WetSteam);
@@ -50,7 +65,12 @@ fn a_measured_section_efficiency_is_recovered_and_a_wet_exhaust_is_refused() {
     // With the exhaust enthalpy from a heat balance it is fixed again.
     let exhaust = State::from_ph(0.2, wet.exhaust.enthalpy(), N).unwrap();
     let balanced = section_efficiency_between(&inlet, &exhaust).unwrap();
-    close("from a balanced enthalpy", balanced.isentropic_efficiency, 0.86, 1e-9);
+    close(
+        "from a balanced enthalpy",
+        balanced.isentropic_efficiency,
+        0.86,
+        1e-9,
+    );
 }
 
 #[test]
@@ -63,12 +83,22 @@ fn a_pump_compresses_on_the_basic_equations_and_reports_the_shortcut() {
     // The work is a small difference of enthalpies (~1 kJ/kg out of
     // ~160), each exact to 1e-13 relative: 1e-9 on the ratio.
     close("efficiency", cold.isentropic_efficiency, 0.75, 1e-9);
-    close("v dp estimate", cold.incompressible_work, cold.isentropic_work, 1e-2);
+    close(
+        "v dp estimate",
+        cold.incompressible_work,
+        cold.isentropic_work,
+        1e-2,
+    );
     assert!(cold.work > cold.isentropic_work && cold.temperature_rise > 0.0);
     let deaerator = *Saturation::at_pressure(0.95, N).unwrap().liquid();
     let feed = compress(&deaerator, 19.0, 0.83).unwrap();
     close("outlet pressure", feed.outlet.pressure(), 19.0, 1e-12);
-    close("isentropic end", feed.isentropic_outlet.entropy(), deaerator.entropy(), 1e-10);
+    close(
+        "isentropic end",
+        feed.isentropic_outlet.entropy(),
+        deaerator.entropy(),
+        1e-10,
+    );
     assert!(feed.entropy_generation > 0.0);
     let steam = *Saturation::at_pressure(0.95, N).unwrap().vapour();
     assert!(matches!(
@@ -89,11 +119,21 @@ fn a_closed_heater_keeps_its_approaches_and_its_balance() {
     let h = closed_heater(&shell, &fw_in, 0.8, Some((0.05, &drains_in)), approach).unwrap();
     let t_sat = Saturation::at_pressure(0.40, N).unwrap().temperature();
     close("TTD", t_sat - h.feedwater_out.temperature(), 2.8, 1e-9);
-    close("DCA", h.drain_out.temperature() - fw_in.temperature(), 5.6, 1e-9);
+    close(
+        "DCA",
+        h.drain_out.temperature() - fw_in.temperature(),
+        5.6,
+        1e-9,
+    );
     let heat_in = h.extraction_flow * (shell.enthalpy() - h.drain_out.enthalpy())
         + 0.05 * (drains_in.enthalpy() - h.drain_out.enthalpy());
     close("energy balance", heat_in, h.duty, 1e-12);
-    close("duty", h.duty, heat_duty(0.8, &fw_in, &h.feedwater_out), 1e-12);
+    close(
+        "duty",
+        h.duty,
+        heat_duty(0.8, &fw_in, &h.feedwater_out),
+        1e-12,
+    );
     assert!(h.entropy_generation > 0.0);
 }
 
@@ -104,7 +144,12 @@ fn an_open_heater_delivers_saturated_liquid_and_balances() {
     let drains = *Saturation::at_pressure(1.9, N).unwrap().liquid();
     let h = open_heater(&steam, &fw_in, 1.0, Some((0.12, &drains))).unwrap();
     assert_eq!(h.outlet.phase(), Phase::SaturatedLiquid);
-    close("mass", h.extraction_flow + h.feedwater_flow + 0.12, 1.0, 1e-15);
+    close(
+        "mass",
+        h.extraction_flow + h.feedwater_flow + 0.12,
+        1.0,
+        1e-15,
+    );
     let e_in = h.extraction_flow * steam.enthalpy()
         + h.feedwater_flow * fw_in.enthalpy()
         + 0.12 * drains.enthalpy();
@@ -138,7 +183,12 @@ fn throttling_keeps_enthalpy_mixing_keeps_energy_and_condensate_is_subcooled() {
     let b = State::from_pt(19.5, 500.0, N).unwrap();
     let (flow, m) = mix(&[(0.9, &a), (0.1, &b)], 19.0, N).unwrap();
     close("flow", flow, 1.0, 1e-15);
-    close("enthalpy", m.enthalpy(), 0.9 * a.enthalpy() + 0.1 * b.enthalpy(), 1e-12);
+    close(
+        "enthalpy",
+        m.enthalpy(),
+        0.9 * a.enthalpy() + 0.1 * b.enthalpy(),
+        1e-12,
+    );
     let c = condensate(0.0068, 1.5, N).unwrap();
     let t_sat = Saturation::at_pressure(0.0068, N).unwrap().temperature();
     close("subcooling", t_sat - c.temperature(), 1.5, 1e-9);
