@@ -83,6 +83,22 @@ impl State {
             + thermal_conductivity::critical_enhancement(props, mu);
         Ok(mu * 1e3 * props.cp / lambda)
     }
+
+    /// Surface tension σ of a state on the saturation line (a saturated
+    /// phase or wet steam), at its temperature (IAPWS R1-76(2014)); the
+    /// same value as [`Saturation::surface_tension`]. Off the line there is
+    /// no interface: an error.
+    pub fn surface_tension(&self) -> Result<f64, Error> {
+        match self.phase() {
+            Phase::WetSteam | Phase::SaturatedLiquid | Phase::SaturatedVapour => {
+                let sigma = surface_tension::surface_tension(self.native().t);
+                Ok(self.read_as(Quantity::SurfaceTension, sigma))
+            }
+            _ => Err(Error::Undefined {
+                what: "surface tension off the saturation line",
+            }),
+        }
+    }
 }
 
 impl Saturation {

@@ -116,6 +116,7 @@ fn exercise_everything() -> f64 {
             sum += s.isothermal_throttling_coefficient().unwrap_or(0.0);
             sum += s.viscosity().unwrap_or(0.0) + s.thermal_conductivity().unwrap_or(0.0);
             sum += s.kinematic_viscosity().unwrap_or(0.0) + s.thermal_diffusivity().unwrap_or(0.0);
+            sum += s.surface_tension().unwrap_or(0.0);
             sum += s.prandtl_number().unwrap_or(0.0);
             sum += s.relative_pressure_coefficient().unwrap_or(0.0)
                 + s.isothermal_stress_coefficient().unwrap_or(0.0);

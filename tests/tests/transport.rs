@@ -100,6 +100,19 @@ fn surface_tension_of_a_saturation_point() {
     // R1-76(2014): σ vanishes at the critical point.
     let critical = Saturation::at_temperature(647.096, Units::Native).unwrap();
     assert_eq!(critical.surface_tension(), 0.0);
+    // Each state on the line carries the same value; off it there is none.
+    for state in [*sat.liquid(), *sat.vapour(), sat.mixture(0.3).unwrap()] {
+        assert_printed(
+            "σ of a state on the line, mN/m",
+            state.surface_tension().unwrap() * 1e3,
+            "58.91",
+        );
+    }
+    let superheated = State::from_pt(1.0, 150.0, Units::MetricEngineering).unwrap();
+    assert!(matches!(
+        superheated.surface_tension(),
+        Err(Error::Undefined { .. })
+    ));
 }
 
 /// The scientific critical-region table of R15-11 (IAPWS-95 properties,
