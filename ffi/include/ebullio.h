@@ -37,6 +37,21 @@
 // (`package.metadata.ebullio.abi-version`), and tested against it.
 #define EBULLIO_ABI_VERSION 1
 
+// The most state points a result holds (`EbullioCycleResult.points`).
+#define EBULLIO_MAX_POINTS 92
+
+// The most components a result holds (`EbullioCycleResult.components`).
+#define EBULLIO_MAX_COMPONENTS 80
+
+// The most inlet (or outlet) streams of one component.
+#define EBULLIO_MAX_STREAMS 3
+
+// The most turbine casings a description holds (`EbullioCycleSpec.casings`).
+#define EBULLIO_MAX_CASINGS 4
+
+// The most feedwater heaters a description holds (`EbullioCycleSpec.heaters`).
+#define EBULLIO_MAX_HEATERS 12
+
 // The outcome of a call. `EBULLIO_STATUS_OK` (0) is success; see
 // `ebullio_status_message` for a static description of each code.
 enum EbullioStatus
@@ -62,6 +77,11 @@ enum EbullioStatus
   // The `size` field of a size-prefixed struct is smaller than the
   // first published version of that struct.
   EBULLIO_STATUS_BAD_STRUCT_SIZE = 106,
+  // A variable number is not one of `EbullioVariable`.
+  EBULLIO_STATUS_UNKNOWN_VARIABLE = 107,
+  // A plant description's code (supply kind, heater kind, drains, a
+  // yes/no flag, a reserved field) is not one of its values.
+  EBULLIO_STATUS_UNKNOWN_PLANT_CODE = 108,
   // An input value was NaN or infinite.
   EBULLIO_STATUS_NOT_FINITE = 200,
   // An input lies outside the formulation's range of validity.
@@ -76,6 +96,13 @@ enum EbullioStatus
   // The property does not exist for this state (cp of wet steam, the
   // quality of a single-phase state).
   EBULLIO_STATUS_PROPERTY_UNDEFINED = 205,
+  // A plant description that cannot be solved as given (an efficiency
+  // outside (0, 1], heaters out of pressure order, a heater whose
+  // temperatures leave no heat to transfer); the detail says what.
+  EBULLIO_STATUS_INVALID_PLANT = 206,
+  // Measurements that do not fix a state (a turbine exhaust read as
+  // (p, T) at or below saturation); the detail says what would.
+  EBULLIO_STATUS_NOT_FIXED_BY_MEASUREMENT = 207,
   // An iteration did not reach the formulation's precision.
   EBULLIO_STATUS_NOT_CONVERGED = 300,
   // Some elements of an array call failed; their outputs are NaN and
@@ -117,60 +144,6 @@ enum EbullioUnits
 typedef enum EbullioUnits EbullioUnits;
 #else
 typedef uint32_t EbullioUnits;
-#endif // __STDC_VERSION__ >= 202311L
-#endif // __cplusplus
-
-// The IF97 region whose equation produced a state; wet steam is region 4.
-enum EbullioRegion
-#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
-  : uint32_t
-#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
- {
-  // Region 1: compressed liquid.
-  EBULLIO_REGION_ONE = 1,
-  // Region 2: vapour.
-  EBULLIO_REGION_TWO = 2,
-  // Region 3: around the critical point.
-  EBULLIO_REGION_THREE = 3,
-  // Region 4: the saturation line (wet steam).
-  EBULLIO_REGION_FOUR = 4,
-  // Region 5: high-temperature steam.
-  EBULLIO_REGION_FIVE = 5,
-};
-#ifndef __cplusplus
-#if __STDC_VERSION__ >= 202311L
-typedef enum EbullioRegion EbullioRegion;
-#else
-typedef uint32_t EbullioRegion;
-#endif // __STDC_VERSION__ >= 202311L
-#endif // __cplusplus
-
-// The physical phase of a state.
-enum EbullioPhase
-#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
-  : uint32_t
-#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
- {
-  // Liquid below the critical temperature, above its saturation pressure.
-  EBULLIO_PHASE_COMPRESSED_LIQUID = 1,
-  // Vapour, or gas above the critical temperature below the critical pressure.
-  EBULLIO_PHASE_SUPERHEATED_VAPOUR = 2,
-  // Above both the critical temperature and the critical pressure.
-  EBULLIO_PHASE_SUPERCRITICAL_FLUID = 3,
-  // A two-phase mixture, 0 < x < 1.
-  EBULLIO_PHASE_WET_STEAM = 4,
-  // Liquid on the saturation line, x = 0.
-  EBULLIO_PHASE_SATURATED_LIQUID = 5,
-  // Vapour on the saturation line, x = 1.
-  EBULLIO_PHASE_SATURATED_VAPOUR = 6,
-  // Supercooled vapour from the metastable-vapour equation.
-  EBULLIO_PHASE_METASTABLE_VAPOUR = 7,
-};
-#ifndef __cplusplus
-#if __STDC_VERSION__ >= 202311L
-typedef enum EbullioPhase EbullioPhase;
-#else
-typedef uint32_t EbullioPhase;
 #endif // __STDC_VERSION__ >= 202311L
 #endif // __cplusplus
 
@@ -225,6 +198,60 @@ enum EbullioQuantity
 typedef enum EbullioQuantity EbullioQuantity;
 #else
 typedef uint32_t EbullioQuantity;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// The IF97 region whose equation produced a state; wet steam is region 4.
+enum EbullioRegion
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // Region 1: compressed liquid.
+  EBULLIO_REGION_ONE = 1,
+  // Region 2: vapour.
+  EBULLIO_REGION_TWO = 2,
+  // Region 3: around the critical point.
+  EBULLIO_REGION_THREE = 3,
+  // Region 4: the saturation line (wet steam).
+  EBULLIO_REGION_FOUR = 4,
+  // Region 5: high-temperature steam.
+  EBULLIO_REGION_FIVE = 5,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioRegion EbullioRegion;
+#else
+typedef uint32_t EbullioRegion;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// The physical phase of a state.
+enum EbullioPhase
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // Liquid below the critical temperature, above its saturation pressure.
+  EBULLIO_PHASE_COMPRESSED_LIQUID = 1,
+  // Vapour, or gas above the critical temperature below the critical pressure.
+  EBULLIO_PHASE_SUPERHEATED_VAPOUR = 2,
+  // Above both the critical temperature and the critical pressure.
+  EBULLIO_PHASE_SUPERCRITICAL_FLUID = 3,
+  // A two-phase mixture, 0 < x < 1.
+  EBULLIO_PHASE_WET_STEAM = 4,
+  // Liquid on the saturation line, x = 0.
+  EBULLIO_PHASE_SATURATED_LIQUID = 5,
+  // Vapour on the saturation line, x = 1.
+  EBULLIO_PHASE_SATURATED_VAPOUR = 6,
+  // Supercooled vapour from the metastable-vapour equation.
+  EBULLIO_PHASE_METASTABLE_VAPOUR = 7,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioPhase EbullioPhase;
+#else
+typedef uint32_t EbullioPhase;
 #endif // __STDC_VERSION__ >= 202311L
 #endif // __cplusplus
 
@@ -316,6 +343,29 @@ enum EbullioProperty
   EBULLIO_PROPERTY_GIBBS_ENERGY = 14,
   // Specific Helmholtz free energy.
   EBULLIO_PROPERTY_HELMHOLTZ_ENERGY = 15,
+  // Dynamic viscosity (IAPWS R12-08); single phase, T up to 1173.15 K.
+  EBULLIO_PROPERTY_VISCOSITY = 16,
+  // Thermal conductivity (IAPWS R15-11); single phase, T up to 1173.15 K.
+  EBULLIO_PROPERTY_THERMAL_CONDUCTIVITY = 17,
+  // Kinematic viscosity; single phase, T up to 1173.15 K.
+  EBULLIO_PROPERTY_KINEMATIC_VISCOSITY = 18,
+  // Thermal diffusivity; single phase, T up to 1173.15 K.
+  EBULLIO_PROPERTY_THERMAL_DIFFUSIVITY = 19,
+  // Prandtl number (dimensionless); single phase, T up to 1173.15 K.
+  EBULLIO_PROPERTY_PRANDTL_NUMBER = 20,
+  // Surface tension (IAPWS R1-76) at the state's saturation temperature;
+  // saturation line and wet steam only.
+  EBULLIO_PROPERTY_SURFACE_TENSION = 21,
+  // Isentropic exponent -(v/p)(dp/dv)_s, dimensionless.
+  EBULLIO_PROPERTY_ISENTROPIC_EXPONENT = 22,
+  // Joule-Thomson coefficient (dT/dp)_h.
+  EBULLIO_PROPERTY_JOULE_THOMSON_COEFFICIENT = 23,
+  // Isothermal throttling coefficient (dh/dp)_T.
+  EBULLIO_PROPERTY_ISOTHERMAL_THROTTLING_COEFFICIENT = 24,
+  // Relative pressure coefficient (1/p)(dp/dT)_v.
+  EBULLIO_PROPERTY_RELATIVE_PRESSURE_COEFFICIENT = 25,
+  // Isothermal stress coefficient -(1/p)(dp/dv)_T.
+  EBULLIO_PROPERTY_ISOTHERMAL_STRESS_COEFFICIENT = 26,
 };
 #ifndef __cplusplus
 #if __STDC_VERSION__ >= 202311L
@@ -324,6 +374,419 @@ typedef enum EbullioProperty EbullioProperty;
 typedef uint32_t EbullioProperty;
 #endif // __STDC_VERSION__ >= 202311L
 #endif // __cplusplus
+
+// A thermodynamic variable of a partial derivative (dz/dx)_y
+// (`ebullio_derivative`).
+enum EbullioVariable
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // Pressure p.
+  EBULLIO_VARIABLE_PRESSURE = 1,
+  // Temperature T (differentiated as a temperature difference).
+  EBULLIO_VARIABLE_TEMPERATURE = 2,
+  // Specific volume v.
+  EBULLIO_VARIABLE_SPECIFIC_VOLUME = 3,
+  // Density rho.
+  EBULLIO_VARIABLE_DENSITY = 4,
+  // Specific internal energy u.
+  EBULLIO_VARIABLE_INTERNAL_ENERGY = 5,
+  // Specific enthalpy h.
+  EBULLIO_VARIABLE_ENTHALPY = 6,
+  // Specific entropy s.
+  EBULLIO_VARIABLE_ENTROPY = 7,
+  // Specific Gibbs free energy g.
+  EBULLIO_VARIABLE_GIBBS_ENERGY = 8,
+  // Specific Helmholtz free energy f.
+  EBULLIO_VARIABLE_HELMHOLTZ_ENERGY = 9,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioVariable EbullioVariable;
+#else
+typedef uint32_t EbullioVariable;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// What the boiler delivers to the turbine throttle
+// (`EbullioCycleSpec.supply_kind`).
+enum EbullioSupplyKind
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // Superheated (or supercritical) steam at `supply_pressure` and
+  // `supply_temperature`.
+  EBULLIO_SUPPLY_KIND_SUPERHEATED = 1,
+  // Saturated vapour at `supply_pressure`; `supply_temperature` is not read.
+  EBULLIO_SUPPLY_KIND_SATURATED_VAPOUR = 2,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioSupplyKind EbullioSupplyKind;
+#else
+typedef uint32_t EbullioSupplyKind;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// What kind of feedwater heater (`EbullioHeater.kind`).
+enum EbullioHeaterKind
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // A closed (shell-and-tube) heater with a terminal temperature
+  // difference, an optional drain cooler approach and its drains.
+  EBULLIO_HEATER_KIND_CLOSED = 1,
+  // An open (direct-contact) heater or deaerator; a pump follows it.
+  // Its drains, TTD and DCA fields are not read.
+  EBULLIO_HEATER_KIND_OPEN = 2,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioHeaterKind EbullioHeaterKind;
+#else
+typedef uint32_t EbullioHeaterKind;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// Where a closed heater's drains go (`EbullioHeater.drains`).
+enum EbullioDrains
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // Through a trap into the next lower-pressure heater's shell (the
+  // condenser from the lowest heater).
+  EBULLIO_DRAINS_CASCADE_BACKWARD = 1,
+  // Pumped forward into the feedwater line just after the heater.
+  EBULLIO_DRAINS_PUMP_FORWARD = 2,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioDrains EbullioDrains;
+#else
+typedef uint32_t EbullioDrains;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// What a state point is (`EbullioCyclePoint.role`). Numbered as the
+// core's `PointRole`.
+enum EbullioPointRole
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // Throttle steam, at the first casing's inlet.
+  EBULLIO_POINT_ROLE_THROTTLE = 1,
+  // A casing's exhaust (the last one's is the condenser inlet).
+  EBULLIO_POINT_ROLE_CASING_EXHAUST = 2,
+  // Hot reheat, at the second casing's inlet.
+  EBULLIO_POINT_ROLE_HOT_REHEAT = 3,
+  // Steam at a turbine extraction point.
+  EBULLIO_POINT_ROLE_EXTRACTION = 4,
+  // Extraction steam at the heater, after the line's pressure loss.
+  EBULLIO_POINT_ROLE_HEATER_STEAM = 5,
+  // Feedwater leaving a heater (an open heater's saturated outlet).
+  EBULLIO_POINT_ROLE_FEEDWATER_OUT = 6,
+  // Drain leaving a closed heater's shell.
+  EBULLIO_POINT_ROLE_DRAIN = 7,
+  // A drain after its drain pump.
+  EBULLIO_POINT_ROLE_DRAIN_PUMPED = 8,
+  // Feedwater after a pumped-forward drain has joined it.
+  EBULLIO_POINT_ROLE_FEEDWATER_MIXED = 9,
+  // Water leaving the pump that follows an open heater.
+  EBULLIO_POINT_ROLE_PUMP_OUTLET = 10,
+  // Condensate leaving the condenser hotwell.
+  EBULLIO_POINT_ROLE_HOTWELL = 11,
+  // Water leaving the condensate pump.
+  EBULLIO_POINT_ROLE_CONDENSATE_PUMP_OUTLET = 12,
+  // Feedwater entering the boiler.
+  EBULLIO_POINT_ROLE_BOILER_INLET = 13,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioPointRole EbullioPointRole;
+#else
+typedef uint32_t EbullioPointRole;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// What kind of component (`EbullioCycleComponent.kind`). Numbered as the
+// core's `ComponentKind`.
+enum EbullioComponentKind
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // A stage group of a turbine casing (numbered by casing).
+  EBULLIO_COMPONENT_KIND_STAGE_GROUP = 1,
+  // An extraction line, a throttle (numbered by heater).
+  EBULLIO_COMPONENT_KIND_EXTRACTION_LINE = 2,
+  // A closed feedwater heater (numbered by heater).
+  EBULLIO_COMPONENT_KIND_CLOSED_HEATER = 3,
+  // An open feedwater heater (numbered by heater).
+  EBULLIO_COMPONENT_KIND_OPEN_HEATER = 4,
+  // A drain pump (numbered by heater).
+  EBULLIO_COMPONENT_KIND_DRAIN_PUMP = 5,
+  // The mixing of a pumped drain into the feedwater (by heater).
+  EBULLIO_COMPONENT_KIND_MIXING_POINT = 6,
+  // The pump after an open heater (numbered by heater).
+  EBULLIO_COMPONENT_KIND_PUMP = 7,
+  // The condensate pump.
+  EBULLIO_COMPONENT_KIND_CONDENSATE_PUMP = 8,
+  // The boiler, from feedwater to throttle steam.
+  EBULLIO_COMPONENT_KIND_BOILER = 9,
+  // The reheater.
+  EBULLIO_COMPONENT_KIND_REHEATER = 10,
+  // The condenser.
+  EBULLIO_COMPONENT_KIND_CONDENSER = 11,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioComponentKind EbullioComponentKind;
+#else
+typedef uint32_t EbullioComponentKind;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// A turbine casing: a group of stages expanding to an exhaust pressure,
+// each stage group between extractions at the casing's efficiency.
+typedef struct {
+  // Exhaust pressure; the last casing's is the condenser pressure.
+  double exhaust_pressure;
+  // Isentropic efficiency of each stage group, in (0, 1].
+  double isentropic_efficiency;
+} EbullioCasing;
+
+// A feedwater heater and its extraction. Frozen: never changes layout
+// (it sits in an array); new per-heater fields would come as a new
+// array at the end of `EbullioCycleSpec`.
+typedef struct {
+  // An `EbullioHeaterKind`.
+  uint32_t kind;
+  // An `EbullioDrains` (closed heaters only).
+  uint32_t drains;
+  // 1 if the heater has a drain cooler (`drain_cooler_approach` is
+  // read), 0 if not (the drain leaves as saturated liquid).
+  uint32_t has_drain_cooler;
+  // Reserved; must be 0.
+  uint32_t reserved;
+  // Pressure at the turbine extraction point.
+  double extraction_pressure;
+  // Fractional pressure loss of the extraction line, in [0, 1): the
+  // shell works at extraction_pressure * (1 - loss).
+  double extraction_line_loss;
+  // Terminal temperature difference T_sat(shell) - T_feedwater,out, a
+  // temperature difference (negative with a desuperheating zone).
+  double terminal_temperature_difference;
+  // Drain cooler approach T_drain - T_feedwater,in, a temperature
+  // difference (read when `has_drain_cooler` is 1).
+  double drain_cooler_approach;
+} EbullioHeater;
+
+// A whole cycle, filled in by the caller: set `size =
+// sizeof(EbullioCycleSpec)`, then every field. Every number is in the
+// unit system `units` (an `EbullioUnits`); temperature differences
+// (subcooling, TTD, DCA) convert without the offset. Heaters are listed
+// from the highest extraction pressure down and are numbered 1, 2, ... in
+// that order in the result; casings from the throttle to the condenser.
+// Fields are only ever added at the end.
+typedef struct {
+  // `sizeof(EbullioCycleSpec)` as the caller's header declares it.
+  uint32_t size;
+  // An `EbullioUnits`: the unit system of every number here and in the result.
+  uint32_t units;
+  // An `EbullioSupplyKind`.
+  uint32_t supply_kind;
+  // 1 if the first casing's exhaust is reheated (`reheat_*` are read), else 0.
+  uint32_t has_reheat;
+  // 1 if `feed_pressure` is read, 0 for a feed pump that discharges at
+  // the throttle pressure (a boiler without pressure loss).
+  uint32_t has_feed_pressure;
+  // How many entries of `casings` are used, 1 to `EBULLIO_MAX_CASINGS`.
+  uint32_t casing_count;
+  // How many entries of `heaters` are used, 0 to `EBULLIO_MAX_HEATERS`.
+  uint32_t heater_count;
+  // Reserved; must be 0.
+  uint32_t reserved;
+  // Throttle pressure.
+  double supply_pressure;
+  // Throttle temperature (superheated supply only).
+  double supply_temperature;
+  // Hot reheat pressure, at the second casing's inlet.
+  double reheat_pressure;
+  // Hot reheat temperature.
+  double reheat_temperature;
+  // Boiler feed pump discharge pressure (when `has_feed_pressure` is 1).
+  double feed_pressure;
+  // Isentropic efficiency of the pump that discharges to the boiler, in (0, 1].
+  double feed_pump_efficiency;
+  // Isentropic efficiency of every other pump (condensate, booster, drain), in (0, 1].
+  double condensate_pump_efficiency;
+  // Condensate subcooling below the condenser saturation temperature,
+  // a temperature difference (0 for saturated liquid).
+  double condensate_subcooling;
+  // The turbine casings; the first `casing_count` are read.
+  EbullioCasing casings[EBULLIO_MAX_CASINGS];
+  // The feedwater heaters; the first `heater_count` are read.
+  EbullioHeater heaters[EBULLIO_MAX_HEATERS];
+} EbullioCycleSpec;
+
+// One state point of a solved cycle. Frozen (it sits in an array).
+typedef struct {
+  // An `EbullioPointRole`; 0 in unused entries.
+  uint32_t role;
+  // Its casing or heater number (1-based, in the description's order),
+  // or 0 where neither applies.
+  uint32_t number;
+  // An `EbullioPhase` of the state; 0 in unused entries.
+  uint32_t phase;
+  // An `EbullioRegion` of the state; 0 in unused entries.
+  uint32_t region;
+  // Mass flow per unit throttle flow.
+  double flow;
+  // Pressure.
+  double pressure;
+  // Temperature.
+  double temperature;
+  // Specific enthalpy.
+  double enthalpy;
+  // Specific entropy.
+  double entropy;
+  // Vapour quality; NaN for a single-phase state.
+  double quality;
+} EbullioCyclePoint;
+
+// A stream entering or leaving a component, per unit throttle flow.
+typedef struct {
+  // Mass flow per unit throttle flow.
+  double flow;
+  // Specific enthalpy.
+  double enthalpy;
+  // Specific entropy.
+  double entropy;
+} EbullioStream;
+
+// One component of a solved cycle, per unit throttle flow. Its energy
+// balance is sum(inlets flow*h) + heat_in = sum(outlets flow*h) + work_out.
+// Frozen (it sits in an array).
+typedef struct {
+  // An `EbullioComponentKind`; 0 in unused entries.
+  uint32_t kind;
+  // Its casing or heater number, or 0.
+  uint32_t number;
+  // How many entries of `inlets` are used.
+  uint32_t inlet_count;
+  // How many entries of `outlets` are used.
+  uint32_t outlet_count;
+  // Heat added to the water (negative for the condenser).
+  double heat_in;
+  // Work delivered by the water (negative for pumps).
+  double work_out;
+  // Entropy generated: sum(out flow*s) - sum(in flow*s) - heat_in/T_b, with
+  // T_b the hottest cycle temperature for heat added and the hotwell
+  // temperature for heat rejected.
+  double entropy_generation;
+  // Streams in.
+  EbullioStream inlets[EBULLIO_MAX_STREAMS];
+  // Streams out.
+  EbullioStream outlets[EBULLIO_MAX_STREAMS];
+} EbullioCycleComponent;
+
+// A solved cycle, written by `ebullio_cycle_solve`. Set `size =
+// sizeof(EbullioCycleResult)` before the call. Specific values are per
+// unit mass of throttle steam in the description's units (kJ/kg or
+// Btu/lbm; J/kg in SI base units); heat and steam rates are in the units
+// their names say, whatever `units` is. Entries past the counts are zero.
+// Fields are only ever added at the end.
+typedef struct {
+  // `sizeof(EbullioCycleResult)` as the caller's header declares it.
+  uint32_t size;
+  // The unit system of every value below (the description's).
+  EbullioUnits units;
+  // How many entries of `points` are used.
+  uint32_t point_count;
+  // How many entries of `components` are used.
+  uint32_t component_count;
+  // Work of all turbine casings.
+  double turbine_work;
+  // Work absorbed by all pumps.
+  double pump_work;
+  // Turbine work - pump work.
+  double net_work;
+  // Heat added in the boiler.
+  double boiler_heat;
+  // Heat added in the reheater (0 without reheat).
+  double reheat_heat;
+  // Boiler and reheater heat together.
+  double heat_input;
+  // Heat rejected in the condenser.
+  double condenser_duty;
+  // Cycle thermal efficiency, net work / heat input.
+  double thermal_efficiency;
+  // Heat rate, kJ of heat input per kWh of net work.
+  double heat_rate_kj_per_kwh;
+  // Heat rate, Btu (IT) of heat input per kWh of net work.
+  double heat_rate_btu_per_kwh;
+  // Steam rate, kg of throttle steam per kWh of net work.
+  double steam_rate_kg_per_kwh;
+  // Steam rate, lbm of throttle steam per kWh of net work.
+  double steam_rate_lbm_per_kwh;
+  // Pump work / turbine work.
+  double back_work_ratio;
+  // 1 - T_hotwell / T_hottest, the Carnot efficiency between the
+  // cycle's temperature extremes.
+  double carnot_efficiency;
+  // Extraction flow of each heater per unit throttle flow, in the
+  // description's order (the first `heater_count` of the description).
+  double extraction_fractions[EBULLIO_MAX_HEATERS];
+  // The state points, in flow order.
+  EbullioCyclePoint points[EBULLIO_MAX_POINTS];
+  // The components, in flow order.
+  EbullioCycleComponent components[EBULLIO_MAX_COMPONENTS];
+} EbullioCycleResult;
+
+// Why a call failed. Set `size = sizeof(EbullioErrorDetail)` before the
+// call; it is written only when the call fails, and never its `size`.
+typedef struct {
+  // `sizeof(EbullioErrorDetail)` as the caller's header declares it.
+  uint32_t size;
+  // The status the call returned.
+  EbullioStatus status;
+  // The quantity the error is about, or `EBULLIO_QUANTITY_NONE`.
+  EbullioQuantity quantity;
+  // The unit system of `value`, `min` and `max` (the call's own).
+  EbullioUnits units;
+  // The offending input value, or NaN when there is none.
+  double value;
+  // The lowest valid value of `quantity` for this state, or NaN.
+  double min;
+  // The highest valid value of `quantity` for this state, or NaN.
+  double max;
+  // The full message, UTF-8, NUL-terminated, cut at a character
+  // boundary if it were ever longer than the buffer.
+  char message[EBULLIO_MESSAGE_CAPACITY];
+} EbullioErrorDetail;
+
+// The figures of one expansion through a turbine section, per unit mass,
+// in the call's units. Set `size = sizeof(EbullioExpansion)` before the
+// call. Fields are only ever added at the end.
+typedef struct {
+  // `sizeof(EbullioExpansion)` as the caller's header declares it.
+  uint32_t size;
+  // The unit system of every value below (the call's own).
+  EbullioUnits units;
+  // Specific work delivered, h_in - h_out.
+  double work;
+  // Specific work of the isentropic expansion to the same pressure.
+  double isentropic_work;
+  // The section's isentropic efficiency, work / isentropic work.
+  double isentropic_efficiency;
+  // Specific entropy generated, s_out - s_in.
+  double entropy_generation;
+} EbullioExpansion;
 
 // Every property of one state. Set `size = sizeof(EbullioState)` before
 // the call; the library fills the fields it and the caller both know and
@@ -371,27 +834,28 @@ typedef struct {
   double helmholtz_energy;
 } EbullioState;
 
-// Why a call failed. Set `size = sizeof(EbullioErrorDetail)` before the
-// call; it is written only when the call fails, and never its `size`.
+// The figures of one compression through a pump, per unit mass, in the
+// call's units. Set `size = sizeof(EbullioCompression)` before the call.
+// Fields are only ever added at the end.
 typedef struct {
-  // `sizeof(EbullioErrorDetail)` as the caller's header declares it.
+  // `sizeof(EbullioCompression)` as the caller's header declares it.
   uint32_t size;
-  // The status the call returned.
-  EbullioStatus status;
-  // The quantity the error is about, or `EBULLIO_QUANTITY_NONE`.
-  EbullioQuantity quantity;
-  // The unit system of `value`, `min` and `max` (the call's own).
+  // The unit system of every value below (the call's own).
   EbullioUnits units;
-  // The offending input value, or NaN when there is none.
-  double value;
-  // The lowest valid value of `quantity` for this state, or NaN.
-  double min;
-  // The highest valid value of `quantity` for this state, or NaN.
-  double max;
-  // The full message, UTF-8, NUL-terminated, cut at a character
-  // boundary if it were ever longer than the buffer.
-  char message[EBULLIO_MESSAGE_CAPACITY];
-} EbullioErrorDetail;
+  // Specific work absorbed, h_out - h_in.
+  double work;
+  // Specific work of the isentropic compression to the same pressure.
+  double isentropic_work;
+  // The incompressible estimate v_in * (p_out - p_in) of the isentropic
+  // work, for comparison only.
+  double incompressible_work;
+  // The pump's isentropic efficiency, isentropic work / work.
+  double isentropic_efficiency;
+  // Temperature rise across the pump, a temperature difference.
+  double temperature_rise;
+  // Specific entropy generated, s_out - s_in.
+  double entropy_generation;
+} EbullioCompression;
 
 #ifdef __cplusplus
 extern "C" {
@@ -438,7 +902,8 @@ EbullioStatus ebullio_property_array(uint32_t property,
 // is property k of state i), each solved once.
 //
 // `statuses[i]` is the first failure of state i: a state that exists but
-// lacks one property (cp of wet steam) gets `EBULLIO_STATUS_PROPERTY_UNDEFINED`
+// lacks one property (cp of wet steam) gets `EBULLIO_STATUS_PROPERTY_UNDEFINED`,
+// one above a transport property's range `EBULLIO_STATUS_OUT_OF_RANGE`,
 // with its other values filled. Otherwise as `ebullio_property_array`;
 // `n_properties` must be at least 1.
 //
@@ -456,6 +921,175 @@ EbullioStatus ebullio_properties_array(const uint32_t *properties,
                                        uint32_t method,
                                        double *out,
                                        EbullioStatus *statuses);
+
+// The partial derivative (∂z/∂x) at constant y of the state given by
+// `pair`, `a`, `b`, in `units`: z's unit per x's unit, temperatures as
+// differences (K, or °R in US customary units). Wet steam gives the
+// homogeneous-mixture derivative. Returns NaN on any failure; `status`,
+// if not null, receives the status: `EBULLIO_STATUS_UNKNOWN_VARIABLE` for
+// a number that is not an `EbullioVariable`,
+// `EBULLIO_STATUS_PROPERTY_UNDEFINED` for a derivative that does not
+// exist (y the same as x, or (∂h/∂p)_T of wet steam, where p and T are
+// not independent).
+//
+// `z`, `x`, `y` are `EbullioVariable`s; `pair`, `units`, `method` as for
+// `ebullio_property`.
+//
+// # Safety
+// `status`, if not null, must point to a writable `EbullioStatus`.
+double ebullio_derivative(uint32_t z,
+                          uint32_t x,
+                          uint32_t y,
+                          uint32_t pair,
+                          double a,
+                          double b,
+                          uint32_t units,
+                          uint32_t method,
+                          EbullioStatus *status);
+
+// (∂z/∂x)_y for each of `n` states given by `a[i]`, `b[i]`; `out[i]` the
+// value or NaN, `statuses[i]` (if not null) why element i failed. As
+// `ebullio_property_array` otherwise, `out` may be `a` or `b`.
+//
+// # Safety
+// `a`, `b` and `out` must each be valid for `n` doubles; `statuses`, if
+// not null, for `n` `EbullioStatus` values.
+EbullioStatus ebullio_derivative_array(uint32_t z,
+                                       uint32_t x,
+                                       uint32_t y,
+                                       uint32_t pair,
+                                       const double *a,
+                                       const double *b,
+                                       size_t n,
+                                       uint32_t units,
+                                       uint32_t method,
+                                       double *out,
+                                       EbullioStatus *statuses);
+
+// Several derivatives for each of `n` states, each state solved once:
+// `variables` holds `3 × n_derivatives` `EbullioVariable` numbers, z, x,
+// y for each derivative in turn, and `out` receives `n × n_derivatives`
+// values, state by state (`out[i * n_derivatives + k]` is derivative k of
+// state i). `statuses[i]` is the first failure of state i, its other
+// values filled. `n_derivatives` must be at least 1; otherwise as
+// `ebullio_properties_array`.
+//
+// # Safety
+// `variables` valid for `3 × n_derivatives` values; `a`, `b` for `n`
+// doubles; `out` for `n × n_derivatives` doubles; `statuses`, if not
+// null, for `n` `EbullioStatus` values.
+EbullioStatus ebullio_derivatives_array(const uint32_t *variables,
+                                        size_t n_derivatives,
+                                        uint32_t pair,
+                                        const double *a,
+                                        const double *b,
+                                        size_t n,
+                                        uint32_t units,
+                                        uint32_t method,
+                                        double *out,
+                                        EbullioStatus *statuses);
+
+// Solves the cycle `*spec` describes into `*out`: every state point, the
+// streams and balances of every component, and the cycle's totals, per
+// unit mass of throttle steam in the description's units.
+//
+// `spec` and `out` must not be null, and their `size` fields must be set
+// (`sizeof(EbullioCycleSpec)`, `sizeof(EbullioCycleResult)`). `detail`
+// may be null; when it is not (its `size` set), it is filled if the call
+// fails, with the core's reason (e.g. which heater balance failed).
+// `*out` is written only on success.
+//
+// Statuses beside the usual ones: `EBULLIO_STATUS_UNKNOWN_PLANT_CODE`
+// for a kind, drains or flag value that is none of its values (or a
+// reserved field that is not 0), `EBULLIO_STATUS_BAD_LENGTH` for a casing
+// or heater count above its array, `EBULLIO_STATUS_INVALID_PLANT` for a
+// description the solver refuses.
+//
+// # Safety
+// `spec` must point to a readable `EbullioCycleSpec` of at least the
+// `size` it declares; `out` to a writable `EbullioCycleResult` of at
+// least the `size` it declares; `detail`, if not null, to an
+// `EbullioErrorDetail`.
+EbullioStatus ebullio_cycle_solve(const EbullioCycleSpec *spec,
+                                  EbullioCycleResult *out,
+                                  EbullioErrorDetail *detail);
+
+// Expands steam through a turbine section at an isentropic efficiency
+// in (0, 1] (1 is the isentropic expansion): from the inlet given by
+// `inlet_pair` (an `EbullioInputPair`, usually
+// `EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE`) with values `a` and `b`
+// (exact method), to `exhaust_pressure`, every number in `units` (an
+// `EbullioUnits`).
+//
+// `out` must not be null (its `size` set). `exhaust` and
+// `isentropic_exhaust` may be null; when not (sizes set), they receive
+// the exhaust state and the end of the isentropic expansion. `detail` may
+// be null. Outputs are written only on success.
+//
+// # Safety
+// `out` must point to a writable `EbullioExpansion` of at least the
+// `size` it declares; `exhaust`, `isentropic_exhaust` and `detail`, if
+// not null, likewise to an `EbullioState` or `EbullioErrorDetail`.
+EbullioStatus ebullio_turbine_expansion(uint32_t inlet_pair,
+                                        double a,
+                                        double b,
+                                        double exhaust_pressure,
+                                        double isentropic_efficiency,
+                                        uint32_t units,
+                                        EbullioExpansion *out,
+                                        EbullioState *exhaust,
+                                        EbullioState *isentropic_exhaust,
+                                        EbullioErrorDetail *detail);
+
+// The isentropic efficiency of a turbine section from its measured inlet
+// and exhaust pressures and temperatures (a performance test), every
+// number in `units` (an `EbullioUnits`).
+//
+// Either end at or below its saturation temperature may be wet steam,
+// whose enthalpy p and T do not fix: the call then returns
+// `EBULLIO_STATUS_NOT_FIXED_BY_MEASUREMENT` (the detail says which end
+// and what would fix it). `out`, `exhaust`, `isentropic_exhaust` and
+// `detail` as for `ebullio_turbine_expansion`.
+//
+// # Safety
+// As for `ebullio_turbine_expansion`.
+EbullioStatus ebullio_section_efficiency(double inlet_pressure,
+                                         double inlet_temperature,
+                                         double exhaust_pressure,
+                                         double exhaust_temperature,
+                                         uint32_t units,
+                                         EbullioExpansion *out,
+                                         EbullioState *exhaust,
+                                         EbullioState *isentropic_exhaust,
+                                         EbullioErrorDetail *detail);
+
+// Compresses liquid water through a pump at an isentropic efficiency in
+// (0, 1]: from the inlet given by `inlet_pair` (an `EbullioInputPair`;
+// saturated liquid is `EBULLIO_INPUT_PAIR_PRESSURE_QUALITY` with quality
+// 0) with values `a` and `b` (exact method), to `outlet_pressure`, every
+// number in `units` (an `EbullioUnits`). The work is computed on the
+// basic equations; the incompressible estimate is reported beside it.
+//
+// `out` must not be null (its `size` set). `outlet` and
+// `isentropic_outlet` may be null; when not (sizes set), they receive the
+// outlet state and the end of the isentropic compression. `detail` may be
+// null. Outputs are written only on success. An inlet that is not liquid
+// is `EBULLIO_STATUS_INVALID_PLANT`.
+//
+// # Safety
+// `out` must point to a writable `EbullioCompression` of at least the
+// `size` it declares; `outlet`, `isentropic_outlet` and `detail`, if not
+// null, likewise to an `EbullioState` or `EbullioErrorDetail`.
+EbullioStatus ebullio_pump_compression(uint32_t inlet_pair,
+                                       double a,
+                                       double b,
+                                       double outlet_pressure,
+                                       double isentropic_efficiency,
+                                       uint32_t units,
+                                       EbullioCompression *out,
+                                       EbullioState *outlet,
+                                       EbullioState *isentropic_outlet,
+                                       EbullioErrorDetail *detail);
 
 // Solves the state given by `pair` with values `a` and `b` (in the
 // pair's order, in `units`) and fills `*out`.
@@ -483,7 +1117,11 @@ EbullioStatus ebullio_solve(uint32_t pair,
 // success); `status` may be null for callers that test for NaN.
 //
 // `property` is an `EbullioProperty`, `pair` an `EbullioInputPair`,
-// `units` an `EbullioUnits`, `method` an `EbullioMethod`.
+// `units` an `EbullioUnits`, `method` an `EbullioMethod`. A property that
+// does not exist for the state (cp of wet steam, a transport property of
+// wet steam, the surface tension off the saturation line) gives
+// `EBULLIO_STATUS_PROPERTY_UNDEFINED`; a transport property above
+// 1173.15 K (the releases' range) `EBULLIO_STATUS_OUT_OF_RANGE`.
 //
 // # Safety
 // `status`, if not null, must point to a writable `EbullioStatus`.

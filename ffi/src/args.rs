@@ -46,6 +46,10 @@ impl<T: Copy> InArray<T> {
         Ok(InArray { ptr, len })
     }
 
+    pub(crate) fn len(&self) -> usize {
+        self.len
+    }
+
     pub(crate) fn get(&self, i: usize) -> T {
         assert!(i < self.len, "index {i} past caller array of {}", self.len);
         // SAFETY: `i < len`, and `new`'s contract makes `ptr` valid for
@@ -168,6 +172,43 @@ impl<T: SizePrefixed> OutStruct<T> {
             )
         }
     }
+}
+
+/// A size-prefixed struct the caller fills in and the library reads (a
+/// plant description).
+///
+/// # Safety
+/// Implementors are [`SizePrefixed`], and every bit pattern of every
+/// field is a valid value (only integers and floats, no enums or `bool`),
+/// so bytes copied from the caller always make a valid `T`.
+pub(crate) unsafe trait PlainInput: SizePrefixed + Copy {}
+
+/// Reads a caller's input struct: the fields both sides know come from the
+/// caller, any later fields keep the values of `defaults`.
+///
+/// # Safety
+/// If `ptr` is not null, its first four bytes must be readable, and it
+/// must be valid for reading as many bytes as that size field declares
+/// (or `size_of::<T>()`, whichever is less).
+pub(crate) unsafe fn read_in_struct<T: PlainInput>(
+    ptr: *const T,
+    defaults: T,
+) -> Result<T, EbullioStatus> {
+    non_null(ptr)?;
+    // SAFETY: the contract makes the first four bytes readable; the read
+    // is unaligned so no alignment is assumed.
+    let declared = unsafe { ptr.cast::<u32>().read_unaligned() };
+    if declared < T::FIRST_SIZE {
+        return Err(EbullioStatus::BadStructSize);
+    }
+    let len = (declared as usize).min(size_of::<T>());
+    let mut value = defaults;
+    // SAFETY: the contract makes `len` bytes of the source readable; the
+    // destination is a whole local `T` of at least `len` bytes, which
+    // cannot overlap caller memory; `PlainInput` makes any bytes a valid
+    // `T`. Bytes are copied, so alignment is moot.
+    unsafe { ptr::copy_nonoverlapping(ptr.cast::<u8>(), (&mut value as *mut T).cast::<u8>(), len) };
+    Ok(value)
 }
 
 #[cfg(test)]

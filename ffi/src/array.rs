@@ -1,12 +1,52 @@
 //! Array calls for historian batches: n states in, n (or n × k) values
 //! out, an optional per-element status array, and the good elements
 //! computed even when others are bad (their values NaN).
+//!
+//! One kernel serves every array call; what it reads off each state (k
+//! property numbers, or k derivatives) is a [`Columns`].
+
+use ebullio::State;
 
 use crate::args::{check_len, InArray, OutArray};
 use crate::boundary::boundary;
 use crate::codes;
 use crate::state::Choice;
 use crate::status::EbullioStatus;
+
+/// What an array call reads off each state: `count()` values.
+pub(crate) trait Columns {
+    /// How many values per state.
+    fn count(&self) -> usize;
+    /// Every code is decoded before anything is written.
+    fn check(&self) -> Result<(), EbullioStatus>;
+    /// The only value of the state (`count() == 1`), from the inputs.
+    fn single(&self, choice: Choice, a: f64, b: f64) -> Result<f64, EbullioStatus> {
+        self.read(&choice.solved(a, b)?, 0)
+    }
+    /// Value `k` of a solved state.
+    fn read(&self, state: &State, k: usize) -> Result<f64, EbullioStatus>;
+}
+
+/// `EbullioProperty` numbers.
+struct Properties(InArray<u32>);
+
+impl Columns for Properties {
+    fn count(&self) -> usize {
+        self.0.len()
+    }
+
+    fn check(&self) -> Result<(), EbullioStatus> {
+        (0..self.count()).try_for_each(|k| codes::property(self.0.get(k)).map(|_| ()))
+    }
+
+    fn single(&self, choice: Choice, a: f64, b: f64) -> Result<f64, EbullioStatus> {
+        choice.property(codes::property(self.0.get(0))?, a, b)
+    }
+
+    fn read(&self, state: &State, k: usize) -> Result<f64, EbullioStatus> {
+        codes::property(self.0.get(k))?.of(state)
+    }
+}
 
 /// One property for each of `n` states given by `a[i]`, `b[i]`.
 ///
@@ -35,9 +75,13 @@ pub unsafe extern "C" fn ebullio_property_array(
 ) -> EbullioStatus {
     boundary!(EbullioStatus::Panic => {
         let one = [property];
-        // SAFETY: this function's contract, forwarded; `one` is a valid
-        // array of one property number.
-        let r = unsafe { kernel(one.as_ptr(), 1, pair, a, b, n, units, method, out, statuses) };
+        // SAFETY: `one` is a valid array of one property number.
+        let columns = match unsafe { InArray::new(one.as_ptr(), 1) } {
+            Ok(p) => Properties(p),
+            Err(status) => return status,
+        };
+        // SAFETY: this function's contract, forwarded.
+        let r = unsafe { kernel(&columns, pair, a, b, n, units, method, out, statuses) };
         r.unwrap_or_else(|status| status)
     })
 }
@@ -48,7 +92,8 @@ pub unsafe extern "C" fn ebullio_property_array(
 /// is property k of state i), each solved once.
 ///
 /// `statuses[i]` is the first failure of state i: a state that exists but
-/// lacks one property (cp of wet steam) gets `EBULLIO_STATUS_PROPERTY_UNDEFINED`
+/// lacks one property (cp of wet steam) gets `EBULLIO_STATUS_PROPERTY_UNDEFINED`,
+/// one above a transport property's range `EBULLIO_STATUS_OUT_OF_RANGE`,
 /// with its other values filled. Otherwise as `ebullio_property_array`;
 /// `n_properties` must be at least 1.
 ///
@@ -73,24 +118,27 @@ pub unsafe extern "C" fn ebullio_properties_array(
         if properties.is_null() {
             return EbullioStatus::NullPointer;
         }
-        // SAFETY: this function's contract, forwarded; `properties` is
-        // not null.
-        let r = unsafe {
-            kernel(properties, n_properties, pair, a, b, n, units, method, out, statuses)
+        // SAFETY: this function's contract: `properties` is not null and
+        // valid for `n_properties` reads.
+        let columns = match unsafe { InArray::new(properties, n_properties) } {
+            Ok(p) => Properties(p),
+            Err(status) => return status,
         };
+        // SAFETY: this function's contract, forwarded.
+        let r = unsafe { kernel(&columns, pair, a, b, n, units, method, out, statuses) };
         r.unwrap_or_else(|status| status)
     })
 }
 
-/// The kernel of both array calls: argument statuses come back as `Err`
+/// The kernel of every array call: argument statuses come back as `Err`
 /// (nothing written), the batch outcome as `Ok`.
 ///
 /// # Safety
-/// As `ebullio_properties_array`; `properties` not null.
+/// `a`, `b` valid for `n` doubles; `out` for `n × columns.count()`
+/// doubles; `statuses`, if not null, for `n` `EbullioStatus` values.
 #[allow(clippy::too_many_arguments)]
-unsafe fn kernel(
-    properties: *const u32,
-    n_properties: usize,
+pub(crate) unsafe fn kernel(
+    columns: &impl Columns,
     pair: u32,
     a: *const f64,
     b: *const f64,
@@ -100,19 +148,16 @@ unsafe fn kernel(
     out: *mut f64,
     statuses: *mut EbullioStatus,
 ) -> Result<EbullioStatus, EbullioStatus> {
-    if n_properties == 0 {
+    let k = columns.count();
+    if k == 0 {
         return Err(EbullioStatus::BadLength);
     }
-    let n_out = n
-        .checked_mul(n_properties)
-        .ok_or(EbullioStatus::BadLength)?;
+    let n_out = n.checked_mul(k).ok_or(EbullioStatus::BadLength)?;
     check_len::<f64>(n_out)?;
-    // SAFETY: this function's contract: `properties` is not null and valid
-    // for `n_properties` reads; `a`, `b` for `n`, `out` for `n_out`,
-    // `statuses` (if not null) for `n`.
-    let (props, a, b, out, statuses) = unsafe {
+    // SAFETY: this function's contract: `a`, `b` for `n` reads, `out` for
+    // `n_out` writes, `statuses` (if not null) for `n`.
+    let (a, b, out, statuses) = unsafe {
         (
-            InArray::new(properties, n_properties)?,
             InArray::new(a, n)?,
             InArray::new(b, n)?,
             OutArray::new(out, n_out)?,
@@ -120,37 +165,33 @@ unsafe fn kernel(
         )
     };
     let choice = Choice::decode(pair, units, method)?;
-    // Every property number is checked before anything is written.
-    for k in 0..n_properties {
-        codes::property(props.get(k))?;
-    }
-    let property_at = |k: usize| codes::property(props.get(k));
+    columns.check()?;
 
     let mut all_good = true;
     for i in 0..n {
         let (x, y) = (a.get(i), b.get(i));
-        let element = if n_properties == 1 {
-            let r = property_at(0).and_then(|p| choice.property(p, x, y));
+        let element = if k == 1 {
+            let r = columns.single(choice, x, y);
             out.set(i, *r.as_ref().unwrap_or(&f64::NAN));
             r.err().unwrap_or(EbullioStatus::Ok)
         } else {
-            match choice.solve(x, y) {
+            match choice.solved(x, y) {
                 Ok(state) => {
                     let mut first = EbullioStatus::Ok;
-                    for k in 0..n_properties {
-                        let v = property_at(k).ok().and_then(|p| state.get(p));
-                        if v.is_none() && first == EbullioStatus::Ok {
-                            first = EbullioStatus::PropertyUndefined;
+                    for c in 0..k {
+                        let r = columns.read(&state, c);
+                        if let (Err(status), EbullioStatus::Ok) = (r, first) {
+                            first = status;
                         }
-                        out.set(i * n_properties + k, v.unwrap_or(f64::NAN));
+                        out.set(i * k + c, r.unwrap_or(f64::NAN));
                     }
                     first
                 }
-                Err(e) => {
-                    for k in 0..n_properties {
-                        out.set(i * n_properties + k, f64::NAN);
+                Err(status) => {
+                    for c in 0..k {
+                        out.set(i * k + c, f64::NAN);
                     }
-                    EbullioStatus::from(&e)
+                    status
                 }
             }
         };

@@ -7,8 +7,9 @@
 //! caller can pass any number, and an out-of-range value in a Rust enum
 //! would be undefined behaviour.
 
-use ebullio::{InputPair, Method, Phase, Property, Quantity, Region, Units};
+use ebullio::{InputPair, Method, Phase, Quantity, Region, Units, Variable};
 
+use crate::reading::Reading;
 use crate::status::EbullioStatus;
 
 /// The two properties a state is solved from (values in this order).
@@ -93,6 +94,54 @@ pub enum EbullioProperty {
     GibbsEnergy = 14,
     /// Specific Helmholtz free energy.
     HelmholtzEnergy = 15,
+    /// Dynamic viscosity (IAPWS R12-08); single phase, T up to 1173.15 K.
+    Viscosity = 16,
+    /// Thermal conductivity (IAPWS R15-11); single phase, T up to 1173.15 K.
+    ThermalConductivity = 17,
+    /// Kinematic viscosity; single phase, T up to 1173.15 K.
+    KinematicViscosity = 18,
+    /// Thermal diffusivity; single phase, T up to 1173.15 K.
+    ThermalDiffusivity = 19,
+    /// Prandtl number (dimensionless); single phase, T up to 1173.15 K.
+    PrandtlNumber = 20,
+    /// Surface tension (IAPWS R1-76) at the state's saturation temperature;
+    /// saturation line and wet steam only.
+    SurfaceTension = 21,
+    /// Isentropic exponent -(v/p)(dp/dv)_s, dimensionless.
+    IsentropicExponent = 22,
+    /// Joule-Thomson coefficient (dT/dp)_h.
+    JouleThomsonCoefficient = 23,
+    /// Isothermal throttling coefficient (dh/dp)_T.
+    IsothermalThrottlingCoefficient = 24,
+    /// Relative pressure coefficient (1/p)(dp/dT)_v.
+    RelativePressureCoefficient = 25,
+    /// Isothermal stress coefficient -(1/p)(dp/dv)_T.
+    IsothermalStressCoefficient = 26,
+}
+
+/// A thermodynamic variable of a partial derivative (dz/dx)_y
+/// (`ebullio_derivative`).
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+#[repr(u32)]
+pub enum EbullioVariable {
+    /// Pressure p.
+    Pressure = 1,
+    /// Temperature T (differentiated as a temperature difference).
+    Temperature = 2,
+    /// Specific volume v.
+    SpecificVolume = 3,
+    /// Density rho.
+    Density = 4,
+    /// Specific internal energy u.
+    InternalEnergy = 5,
+    /// Specific enthalpy h.
+    Enthalpy = 6,
+    /// Specific entropy s.
+    Entropy = 7,
+    /// Specific Gibbs free energy g.
+    GibbsEnergy = 8,
+    /// Specific Helmholtz free energy f.
+    HelmholtzEnergy = 9,
 }
 
 /// The IF97 region whose equation produced a state; wet steam is region 4.
@@ -200,8 +249,18 @@ pub(crate) fn method(n: u32) -> Result<Method, EbullioStatus> {
 }
 
 /// Decodes a property number.
-pub(crate) fn property(n: u32) -> Result<Property, EbullioStatus> {
-    Property::from_number(n).ok_or(EbullioStatus::UnknownProperty)
+pub(crate) fn property(n: u32) -> Result<Reading, EbullioStatus> {
+    Reading::from_number(n).ok_or(EbullioStatus::UnknownProperty)
+}
+
+/// Decodes a variable number.
+pub(crate) fn variable(n: u32) -> Result<Variable, EbullioStatus> {
+    Variable::from_number(n).ok_or(EbullioStatus::UnknownVariable)
+}
+
+/// Decodes the three variables of (dz/dx)_y.
+pub(crate) fn derivative(z: u32, x: u32, y: u32) -> Result<[Variable; 3], EbullioStatus> {
+    Ok([variable(z)?, variable(x)?, variable(y)?])
 }
 
 pub(crate) fn c_units(u: Units) -> EbullioUnits {
@@ -261,6 +320,7 @@ pub(crate) fn c_quantity(q: Quantity) -> EbullioQuantity {
 #[cfg(test)]
 mod tests {
     use super::*;
+    use ebullio::Property;
 
     #[test]
     fn input_pairs_mirror_the_core_numbers() {
@@ -310,10 +370,68 @@ mod tests {
         for (c, core) in c.iter().zip(Property::ALL) {
             assert_eq!(*c as u32, core as u32, "{c:?} vs {core:?}");
             assert_eq!(format!("{c:?}"), format!("{core:?}"));
-            assert_eq!(property(*c as u32), Ok(core));
+            assert_eq!(property(*c as u32), Ok(Reading::Thermodynamic(core)));
         }
         assert_eq!(property(0), Err(EbullioStatus::UnknownProperty));
-        assert_eq!(property(16), Err(EbullioStatus::UnknownProperty));
+        assert_eq!(property(27), Err(EbullioStatus::UnknownProperty));
+    }
+
+    #[test]
+    fn properties_past_the_core_decode_to_the_calls_of_the_same_name() {
+        use EbullioProperty as C;
+        let c = [
+            (C::Viscosity, Reading::Viscosity),
+            (C::ThermalConductivity, Reading::ThermalConductivity),
+            (C::KinematicViscosity, Reading::KinematicViscosity),
+            (C::ThermalDiffusivity, Reading::ThermalDiffusivity),
+            (C::PrandtlNumber, Reading::PrandtlNumber),
+            (C::SurfaceTension, Reading::SurfaceTension),
+            (C::IsentropicExponent, Reading::IsentropicExponent),
+            (C::JouleThomsonCoefficient, Reading::JouleThomsonCoefficient),
+            (
+                C::IsothermalThrottlingCoefficient,
+                Reading::IsothermalThrottlingCoefficient,
+            ),
+            (
+                C::RelativePressureCoefficient,
+                Reading::RelativePressureCoefficient,
+            ),
+            (
+                C::IsothermalStressCoefficient,
+                Reading::IsothermalStressCoefficient,
+            ),
+        ];
+        for (k, (c, reading)) in c.iter().enumerate() {
+            // Numbered on from the core's last property, without gaps.
+            assert_eq!(*c as usize, Property::ALL.len() + 1 + k);
+            assert_eq!(format!("{c:?}"), format!("{reading:?}"));
+            assert_eq!(property(*c as u32), Ok(*reading));
+        }
+    }
+
+    #[test]
+    fn variables_mirror_the_core_numbers() {
+        use EbullioVariable as C;
+        let c = [
+            C::Pressure,
+            C::Temperature,
+            C::SpecificVolume,
+            C::Density,
+            C::InternalEnergy,
+            C::Enthalpy,
+            C::Entropy,
+            C::GibbsEnergy,
+            C::HelmholtzEnergy,
+        ];
+        assert_eq!(c.len(), Variable::ALL.len());
+        for (c, core) in c.iter().zip(Variable::ALL) {
+            assert_eq!(*c as u32, core as u32, "{c:?} vs {core:?}");
+            assert_eq!(format!("{c:?}"), format!("{core:?}"));
+            assert_eq!(variable(*c as u32), Ok(core));
+        }
+        assert_eq!(variable(0), Err(EbullioStatus::UnknownVariable));
+        assert_eq!(variable(10), Err(EbullioStatus::UnknownVariable));
+        assert_eq!(derivative(6, 1, 99), Err(EbullioStatus::UnknownVariable));
     }
 
     #[test]

@@ -17,8 +17,9 @@
 //!   returns only pointers to static strings.
 //!
 //! The plumbing (status codes, the panic boundary, argument checks, the
-//! version) lives in its own modules; the domain calls in `state` and
-//! `array`. Every number comes from the core crate's own functions, so C
+//! version) lives in its own modules; the domain calls in `state`,
+//! `array` and `derivative`, with `reading` naming what a property number
+//! reads off a state. Every number comes from the core crate's own functions, so C
 //! gets the bits Rust gets.
 #![deny(unsafe_op_in_unsafe_fn)]
 #![warn(missing_docs)]
@@ -31,6 +32,9 @@ mod status;
 mod version;
 
 mod array;
+mod derivative;
+mod plant;
+mod reading;
 mod state;
 
 #[cfg(test)]
@@ -39,9 +43,18 @@ mod abi_tests;
 pub use array::{ebullio_properties_array, ebullio_property_array};
 pub use codes::{
     EbullioInputPair, EbullioMethod, EbullioPhase, EbullioProperty, EbullioQuantity, EbullioRegion,
-    EbullioUnits,
+    EbullioUnits, EbullioVariable,
 };
+pub use derivative::{ebullio_derivative, ebullio_derivative_array, ebullio_derivatives_array};
 pub use detail::{EbullioErrorDetail, EBULLIO_MESSAGE_CAPACITY};
+pub use plant::{
+    ebullio_cycle_solve, ebullio_pump_compression, ebullio_section_efficiency,
+    ebullio_turbine_expansion, EbullioCasing, EbullioComponentKind, EbullioCompression,
+    EbullioCycleComponent, EbullioCyclePoint, EbullioCycleResult, EbullioCycleSpec, EbullioDrains,
+    EbullioExpansion, EbullioHeater, EbullioHeaterKind, EbullioPointRole, EbullioStream,
+    EbullioSupplyKind, EBULLIO_MAX_CASINGS, EBULLIO_MAX_COMPONENTS, EBULLIO_MAX_HEATERS,
+    EBULLIO_MAX_POINTS, EBULLIO_MAX_STREAMS,
+};
 pub use state::{
     ebullio_property, ebullio_saturation_at_pressure, ebullio_saturation_at_temperature,
     ebullio_solve, EbullioState,

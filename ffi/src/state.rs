@@ -9,6 +9,7 @@ use crate::args::{OutStruct, SizePrefixed};
 use crate::boundary::boundary;
 use crate::codes::{self, c_phase, c_region, c_units, EbullioPhase, EbullioRegion, EbullioUnits};
 use crate::detail::{report, EbullioErrorDetail};
+use crate::reading::Reading;
 use crate::status::EbullioStatus;
 
 /// Every property of one state. Set `size = sizeof(EbullioState)` before
@@ -126,12 +127,18 @@ impl Choice {
 
     /// One property; enthalpy from (p, T) takes the core's cheap path,
     /// which gives the same bits as the full state.
-    pub(crate) fn property(self, property: Property, a: f64, b: f64) -> Result<f64, EbullioStatus> {
-        if property == Property::Enthalpy && self.pair == InputPair::PressureTemperature {
+    pub(crate) fn property(self, reading: Reading, a: f64, b: f64) -> Result<f64, EbullioStatus> {
+        if reading == Reading::Thermodynamic(Property::Enthalpy)
+            && self.pair == InputPair::PressureTemperature
+        {
             return ebullio::enthalpy_from_pt(a, b, self.units).map_err(|e| (&e).into());
         }
-        let state = self.solve(a, b).map_err(|e| EbullioStatus::from(&e))?;
-        state.get(property).ok_or(EbullioStatus::PropertyUndefined)
+        reading.of(&self.solved(a, b)?)
+    }
+
+    /// The state, or the status of the core's error.
+    pub(crate) fn solved(self, a: f64, b: f64) -> Result<State, EbullioStatus> {
+        self.solve(a, b).map_err(|e| EbullioStatus::from(&e))
     }
 }
 
@@ -200,7 +207,11 @@ pub unsafe extern "C" fn ebullio_solve(
 /// success); `status` may be null for callers that test for NaN.
 ///
 /// `property` is an `EbullioProperty`, `pair` an `EbullioInputPair`,
-/// `units` an `EbullioUnits`, `method` an `EbullioMethod`.
+/// `units` an `EbullioUnits`, `method` an `EbullioMethod`. A property that
+/// does not exist for the state (cp of wet steam, a transport property of
+/// wet steam, the surface tension off the saturation line) gives
+/// `EBULLIO_STATUS_PROPERTY_UNDEFINED`; a transport property above
+/// 1173.15 K (the releases' range) `EBULLIO_STATUS_OUT_OF_RANGE`.
 ///
 /// # Safety
 /// `status`, if not null, must point to a writable `EbullioStatus`.

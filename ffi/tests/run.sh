@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # The C ABI from the languages that call it: C99 (dynamic and static link),
-# C++, Fortran, Python ctypes, valgrind memcheck and several threads at once.
+# C++, Fortran, Python ctypes, valgrind memcheck, several threads at once, and
+# the plant calls against the Rust core's own numbers.
 # Builds `cargo build --release -p ebullio-ffi` and uses
 # $CARGO_TARGET_DIR/release (default target/release) libebullio_c.{so,a}.
 # Prints one line per step and a final "ffi: N passed, M failed"; exits
@@ -69,14 +70,14 @@ rpath=(-Wl,-rpath,"$lib")
 c_dynamic() {
     gcc "${c99[@]}" "${cflags[@]}" "${expect[@]}" "$here/c/test_ebullio.c" \
         -o "$work/c_dynamic" "${libs[@]}" "${rpath[@]}" -lm &&
-        ldd "$work/c_dynamic" | grep -q 'libebullio_c\.so' &&
+        ldd "$work/c_dynamic" | grep 'libebullio_c\.so' >/dev/null &&
         "$work/c_dynamic"
 }
 
 c_static() {
     gcc "${c99[@]}" "${cflags[@]}" "${expect[@]}" "$here/c/test_ebullio.c" \
         -o "$work/c_static" "${static_libs[@]}" &&
-        ! ldd "$work/c_static" | grep -q libebullio_c &&
+        ! ldd "$work/c_static" | grep libebullio_c >/dev/null &&
         "$work/c_static"
 }
 
@@ -104,6 +105,26 @@ valgrind_memcheck() {
         valgrind --error-exitcode=1 --leak-check=full --quiet "$work/c_valgrind"
 }
 
+# The Rust core's own numbers for the plant steps (ffi/examples/plant_reference.rs).
+plant_reference() {
+    [ -f "$work/plant_reference.txt" ] ||
+        cargo run --release --quiet -p ebullio-ffi --example plant_reference >"$work/plant_reference.txt"
+}
+
+plant_c() {
+    plant_reference &&
+        gcc "${c99[@]}" "${cflags[@]}" "$here/c/test_plant.c" \
+            -o "$work/plant_c" "${libs[@]}" "${rpath[@]}" -lm &&
+        "$work/plant_c" "$work/plant_reference.txt" &&
+        valgrind --error-exitcode=1 --leak-check=full --quiet \
+            "$work/plant_c" "$work/plant_reference.txt"
+}
+
+plant_ctypes() {
+    plant_reference &&
+        python3 "$here/python/test_plant_ctypes.py" "$lib/libebullio_c.so" "$work/plant_reference.txt"
+}
+
 threads() {
     gcc "${c99[@]}" -pthread "${cflags[@]}" "$here/c/test_threads.c" \
         -o "$work/threads" "${libs[@]}" "${rpath[@]}" &&
@@ -112,7 +133,8 @@ threads() {
 
 passed=0
 failed=0
-for step in c_dynamic c_static cxx_header fortran python_ctypes valgrind_memcheck threads; do
+for step in c_dynamic c_static cxx_header fortran python_ctypes valgrind_memcheck threads \
+    plant_c plant_ctypes; do
     if "$step" >"$work/$step.log" 2>&1; then
         passed=$((passed + 1))
         echo "ok   $step: $(tail -n 1 "$work/$step.log")"

@@ -285,3 +285,176 @@ pub(crate) fn raise_saturation_element(
         .map(|_| ())
         .map_err(|error| to_py(py, &error, Some(label)))
 }
+
+/// `K` values per element, column-major (`values[c * n + i]`), and a
+/// status per element: what the transport, derivative and surface-tension
+/// arrays return. A failed element is NaN in every column.
+fn fill_values<const K: usize>(
+    n: usize,
+    threads: Threads,
+    element: impl Fn(usize) -> Result<[f64; K], Error> + Sync,
+) -> Result<(Vec<f64>, Vec<u8>), rayon::ThreadPoolBuildError> {
+    let mut rows = vec![[f64::NAN; K]; n];
+    let mut status = vec![status::OK; n];
+    let run = |k: usize, rows: &mut [[f64; K]], status: &mut [u8]| {
+        for (j, (row, st)) in rows.iter_mut().zip(status.iter_mut()).enumerate() {
+            match element(k * CHUNK + j) {
+                Ok(values) => *row = values,
+                Err(error) => *st = crate::errors::status_of(&error),
+            }
+        }
+    };
+    let jobs = rows.chunks_mut(CHUNK).zip(status.chunks_mut(CHUNK));
+    match threads {
+        _ if n < PARALLEL_FROM => jobs.enumerate().for_each(|(k, (r, s))| run(k, r, s)),
+        Threads::One => jobs.enumerate().for_each(|(k, (r, s))| run(k, r, s)),
+        Threads::All => rows
+            .par_chunks_mut(CHUNK)
+            .zip(status.par_chunks_mut(CHUNK))
+            .enumerate()
+            .for_each(|(k, (r, s))| run(k, r, s)),
+        Threads::Exactly(t) => rayon::ThreadPoolBuilder::new()
+            .num_threads(t)
+            .build()?
+            .install(|| {
+                rows.par_chunks_mut(CHUNK)
+                    .zip(status.par_chunks_mut(CHUNK))
+                    .enumerate()
+                    .for_each(|(k, (r, s))| run(k, r, s))
+            }),
+    }
+    let mut values = vec![0.0; K * n];
+    for (i, row) in rows.iter().enumerate() {
+        for (c, v) in row.iter().enumerate() {
+            values[c * n + i] = *v;
+        }
+    }
+    Ok((values, status))
+}
+
+type Values<'py> = (Bound<'py, PyArray1<f64>>, Bound<'py, PyArray1<u8>>);
+
+fn same_length(a: usize, b: usize) -> PyResult<()> {
+    if a != b {
+        return Err(PyValueError::new_err(format!(
+            "the two inputs have {a} and {b} elements; broadcast them first"
+        )));
+    }
+    Ok(())
+}
+
+/// The transport properties of the states from pair number `pair` at
+/// (`a[i]`, `b[i]`), read in `read`: flat `values` (the five columns of
+/// [`crate::columns::TRANSPORT`], n each) and `status` (0 = computed; the
+/// state's error, or the transport call's: undefined for wet steam, out
+/// of range above 1173.15 K).
+#[pyfunction]
+#[pyo3(signature = (pair, a, b, units=None, method=None, threads=None, read=None))]
+#[allow(clippy::too_many_arguments)]
+pub(crate) fn transport_many<'py>(
+    py: Python<'py>,
+    pair: u32,
+    a: PyReadonlyArray1<'py, f64>,
+    b: PyReadonlyArray1<'py, f64>,
+    units: Option<&Bound<'py, PyAny>>,
+    method: Option<&Bound<'py, PyAny>>,
+    threads: Option<usize>,
+    read: Option<&Bound<'py, PyAny>>,
+) -> PyResult<Values<'py>> {
+    let pair = names::pair(pair)?;
+    let units = names::units(units)?;
+    let read = read_units(read, units)?;
+    let method = names::method(method)?;
+    let threads = self::threads(threads)?;
+    let (a, b) = (a.as_array(), b.as_array());
+    same_length(a.len(), b.len())?;
+    let (values, status) = py
+        .detach(|| {
+            fill_values::<5>(a.len(), threads, |i| {
+                let s = State::solve(pair, a[i], b[i], units, method)?.in_units(read);
+                Ok([
+                    s.viscosity()?,
+                    s.thermal_conductivity()?,
+                    s.kinematic_viscosity()?,
+                    s.thermal_diffusivity()?,
+                    s.prandtl_number()?,
+                ])
+            })
+        })
+        .map_err(pool_error)?;
+    Ok((
+        PyArray1::from_vec(py, values),
+        PyArray1::from_vec(py, status),
+    ))
+}
+
+/// (∂z/∂x)_y of the states from pair number `pair` at (`a[i]`, `b[i]`),
+/// read in `read`; `z`, `x`, `y` as `State.derivative` names them.
+#[pyfunction]
+#[pyo3(signature = (pair, a, b, z, x, y, units=None, method=None, threads=None, read=None))]
+#[allow(clippy::too_many_arguments)]
+pub(crate) fn derivative_many<'py>(
+    py: Python<'py>,
+    pair: u32,
+    a: PyReadonlyArray1<'py, f64>,
+    b: PyReadonlyArray1<'py, f64>,
+    z: &str,
+    x: &str,
+    y: &str,
+    units: Option<&Bound<'py, PyAny>>,
+    method: Option<&Bound<'py, PyAny>>,
+    threads: Option<usize>,
+    read: Option<&Bound<'py, PyAny>>,
+) -> PyResult<Values<'py>> {
+    let (z, x, y) = (
+        names::variable(z)?,
+        names::variable(x)?,
+        names::variable(y)?,
+    );
+    let pair = names::pair(pair)?;
+    let units = names::units(units)?;
+    let read = read_units(read, units)?;
+    let method = names::method(method)?;
+    let threads = self::threads(threads)?;
+    let (a, b) = (a.as_array(), b.as_array());
+    same_length(a.len(), b.len())?;
+    let (values, status) = py
+        .detach(|| {
+            fill_values::<1>(a.len(), threads, |i| {
+                let s = State::solve(pair, a[i], b[i], units, method)?.in_units(read);
+                Ok([s.derivative(z, x, y)?])
+            })
+        })
+        .map_err(pool_error)?;
+    Ok((
+        PyArray1::from_vec(py, values),
+        PyArray1::from_vec(py, status),
+    ))
+}
+
+/// The surface tension of saturation points (`by` 1: pressure, 2:
+/// temperature) at `values[i]`, read in `read`.
+#[pyfunction]
+#[pyo3(signature = (by, values, units=None, threads=None, read=None))]
+pub(crate) fn surface_tension_many<'py>(
+    py: Python<'py>,
+    by: u32,
+    values: PyReadonlyArray1<'py, f64>,
+    units: Option<&Bound<'py, PyAny>>,
+    threads: Option<usize>,
+    read: Option<&Bound<'py, PyAny>>,
+) -> PyResult<Values<'py>> {
+    let by = By::from_number(by)?;
+    let units: Units = names::units(units)?;
+    let read = read_units(read, units)?;
+    let threads = self::threads(threads)?;
+    let values = values.as_array();
+    let (out, status) = py
+        .detach(|| {
+            fill_values::<1>(values.len(), threads, |i| {
+                Ok([by.solve(values[i], units)?.in_units(read).surface_tension()])
+            })
+        })
+        .map_err(pool_error)?;
+    Ok((PyArray1::from_vec(py, out), PyArray1::from_vec(py, status)))
+}

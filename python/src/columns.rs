@@ -122,3 +122,51 @@ fn capitalise(text: &str) -> String {
         None => String::new(),
     }
 }
+
+/// The columns of a transport array result (`arrays::transport_many`), in
+/// order: the attribute name, what it is, and its quantity (`None`:
+/// dimensionless). The names are the `State` attributes'.
+pub(crate) const TRANSPORT: [(&str, &str, Option<Quantity>); 5] = [
+    (
+        "viscosity",
+        "dynamic viscosity (IAPWS R12-08)",
+        Some(Quantity::DynamicViscosity),
+    ),
+    (
+        "thermal_conductivity",
+        "thermal conductivity (IAPWS R15-11)",
+        Some(Quantity::ThermalConductivity),
+    ),
+    (
+        "kinematic_viscosity",
+        "kinematic viscosity",
+        Some(Quantity::Diffusivity),
+    ),
+    (
+        "thermal_diffusivity",
+        "thermal diffusivity",
+        Some(Quantity::Diffusivity),
+    ),
+    ("prandtl_number", "Prandtl number", None),
+];
+
+/// `((name, description with units, (symbol per unit system)), ...)` of
+/// [`TRANSPORT`], as [`table`] for the properties.
+pub(crate) fn transport_table(py: Python<'_>) -> PyResult<Bound<'_, PyTuple>> {
+    let rows: Vec<(&str, String, [&str; 4])> = TRANSPORT
+        .iter()
+        .map(|&(name, what, quantity)| match quantity {
+            Some(q) => (
+                name,
+                format!("{}; {}.", capitalise(what), units_text(q)),
+                Units::ALL.map(|u| u.symbol(q)),
+            ),
+            None => (
+                name,
+                format!("{}; dimensionless.", capitalise(what)),
+                [""; 4],
+            ),
+        })
+        .collect();
+    PyTuple::new(py, rows)
+}

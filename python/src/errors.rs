@@ -46,6 +46,22 @@ create_exception!(
      returned."
 );
 
+create_exception!(
+    ebullio,
+    InvalidPlantError,
+    SteamError,
+    "A plant description or component call that cannot be solved as given: an efficiency \
+     outside (0, 1], heaters out of pressure order, a heater whose temperatures leave no heat \
+     to transfer. The message says what."
+);
+create_exception!(
+    ebullio,
+    NotFixedByMeasurementError,
+    SteamError,
+    "Measurements that do not fix a state, such as a turbine exhaust read as (p, T) at or \
+     below saturation (wet steam); `needs` says what would fix it."
+);
+
 /// Per-element status codes of array results. Never renumbered; the
 /// `ebullio.Status` enum mirrors them (a test checks).
 pub(crate) mod status {
@@ -57,6 +73,8 @@ pub(crate) mod status {
     pub const BACKWARD_EQUATION_OUT_OF_RANGE: u8 = 5;
     pub const NOT_CONVERGED: u8 = 6;
     pub const UNDEFINED: u8 = 7;
+    pub const INVALID_PLANT: u8 = 8;
+    pub const NOT_FIXED_BY_MEASUREMENT: u8 = 9;
     /// A kind of error this build of the binding does not know yet.
     pub const OTHER: u8 = 255;
 }
@@ -71,6 +89,8 @@ pub(crate) fn status_of(error: &Error) -> u8 {
         Error::BackwardEquationOutOfRange { .. } => status::BACKWARD_EQUATION_OUT_OF_RANGE,
         Error::NotConverged { .. } => status::NOT_CONVERGED,
         Error::Undefined { .. } => status::UNDEFINED,
+        Error::InvalidPlant { .. } => status::INVALID_PLANT,
+        Error::NotFixedByMeasurement { .. } => status::NOT_FIXED_BY_MEASUREMENT,
         _ => status::OTHER,
     }
 }
@@ -92,6 +112,8 @@ pub(crate) fn status_table(py: Python<'_>) -> PyResult<Bound<'_, PyTuple>> {
             ),
             ("NOT_CONVERGED", NOT_CONVERGED),
             ("UNDEFINED", UNDEFINED),
+            ("INVALID_PLANT", INVALID_PLANT),
+            ("NOT_FIXED_BY_MEASUREMENT", NOT_FIXED_BY_MEASUREMENT),
             ("OTHER", OTHER),
         ],
     )
@@ -111,6 +133,8 @@ pub(crate) fn to_py(py: Python<'_>, error: &Error, context: Option<&str>) -> PyE
         | Error::NoStateInRange { .. }
         | Error::BackwardEquationOutOfRange { .. } => OutOfRangeError::new_err(message),
         Error::NotConverged { .. } => NotConvergedError::new_err(message),
+        Error::InvalidPlant { .. } => InvalidPlantError::new_err(message),
+        Error::NotFixedByMeasurement { .. } => NotFixedByMeasurementError::new_err(message),
         _ => SteamError::new_err(message),
     };
     if let Err(failed) = annotate(py, &err, error) {
@@ -145,6 +169,7 @@ fn annotate(py: Python<'_>, err: &PyErr, error: &Error) -> PyResult<()> {
             value.setattr("max", 1.0)?;
             value.setattr("unit", "")?;
         }
+        Error::NotFixedByMeasurement { needs, .. } => value.setattr("needs", needs)?,
         _ => {}
     }
     Ok(())
@@ -161,5 +186,10 @@ pub(crate) fn register(m: &Bound<'_, PyModule>) -> PyResult<()> {
     )?;
     m.add("NotFiniteError", py.get_type::<NotFiniteError>())?;
     m.add("NotConvergedError", py.get_type::<NotConvergedError>())?;
+    m.add("InvalidPlantError", py.get_type::<InvalidPlantError>())?;
+    m.add(
+        "NotFixedByMeasurementError",
+        py.get_type::<NotFixedByMeasurementError>(),
+    )?;
     Ok(())
 }

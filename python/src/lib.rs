@@ -19,6 +19,7 @@ mod arrays;
 mod columns;
 mod errors;
 mod names;
+mod plant;
 mod saturation;
 mod state;
 
@@ -28,13 +29,18 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_class::<state::PyState>()?;
     m.add_class::<saturation::PySaturation>()?;
     errors::register(m)?;
+    plant::register(m)?;
     m.add_function(wrap_pyfunction!(state::solve_scalar, m)?)?;
     m.add_function(wrap_pyfunction!(saturation::saturation_scalar, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::solve_many, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::saturation_many, m)?)?;
+    m.add_function(wrap_pyfunction!(arrays::transport_many, m)?)?;
+    m.add_function(wrap_pyfunction!(arrays::derivative_many, m)?)?;
+    m.add_function(wrap_pyfunction!(arrays::surface_tension_many, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::raise_element, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::raise_saturation_element, m)?)?;
     m.add("PROPERTIES", columns::table(m.py())?)?;
+    m.add("TRANSPORT", columns::transport_table(m.py())?)?;
     m.add("STATUS_CODES", errors::status_table(m.py())?)?;
     m.add("INPUT_PAIRS", names::pair_table(m.py())?)?;
     Ok(())

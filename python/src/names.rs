@@ -119,3 +119,24 @@ pub(crate) fn pair_table(py: Python<'_>) -> PyResult<Bound<'_, PyTuple>> {
     .map(|(name, pair)| (name, pair as u32));
     PyTuple::new(py, rows)
 }
+
+/// A thermodynamic variable by the attribute name it has on a state.
+pub(crate) fn variable(name: &str) -> PyResult<ebullio::Variable> {
+    use ebullio::Variable::*;
+    Ok(match name {
+        "p" => Pressure,
+        "t" => Temperature,
+        "v" => SpecificVolume,
+        "rho" => Density,
+        "u" => InternalEnergy,
+        "h" => Enthalpy,
+        "s" => Entropy,
+        "g" => GibbsEnergy,
+        "f" => HelmholtzEnergy,
+        other => {
+            return Err(pyo3::exceptions::PyValueError::new_err(format!(
+                "unknown variable {other:?}: use one of p, t, v, rho, u, h, s, g, f"
+            )))
+        }
+    })
+}

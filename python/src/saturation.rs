@@ -168,6 +168,33 @@ impl PySaturation {
         units_member(py, self.inner.liquid().units())
     }
 
+    /// Surface tension between the saturated phases (IAPWS R1-76(2014)):
+    /// N/m (native, si, metric), lbf/ft (us); zero at the critical point.
+    #[getter]
+    fn surface_tension(&self) -> f64 {
+        self.inner.surface_tension()
+    }
+
+    /// The slope of the saturation line dpsat/dT (Clapeyron), pressure per
+    /// temperature difference: MPa/K (native), Pa/K (si), bar/°C (metric),
+    /// psi/°F (us).
+    #[getter]
+    fn pressure_slope(&self) -> f64 {
+        self.inner.pressure_slope()
+    }
+
+    /// dz'/dT: how the saturated liquid's ``z`` (one of ``"p" "t" "v" "rho"
+    /// "u" "h" "s" "g" "f"``) changes along the line, per temperature
+    /// difference, in these units.
+    fn liquid_slope(&self, z: &str) -> PyResult<f64> {
+        Ok(self.inner.liquid_slope(names::variable(z)?))
+    }
+
+    /// dz''/dT: as ``liquid_slope``, for the saturated vapour.
+    fn vapour_slope(&self, z: &str) -> PyResult<f64> {
+        Ok(self.inner.vapour_slope(names::variable(z)?))
+    }
+
     /// Wet steam of vapour quality ``x`` (0 ≤ x ≤ 1) at this point, by the
     /// lever rule; an array of qualities gives a ``StateArray``.
     #[pyo3(signature = (x, *, errors=None, threads=None))]

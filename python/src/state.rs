@@ -510,6 +510,79 @@ impl PyState {
         self.inner.helmholtz_energy()
     }
 
+    /// Dynamic viscosity (IAPWS R12-08): Pa·s (native, si, metric),
+    /// lbm/(ft·s) (us); ``None`` for wet steam (each saturated phase has
+    /// its own); raises ``OutOfRangeError`` above 1173.15 K.
+    #[getter]
+    fn viscosity(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.viscosity())
+    }
+
+    /// Thermal conductivity (IAPWS R15-11): W/(m·K) (native, si, metric),
+    /// Btu/(h·ft·°F) (us); ``None`` for wet steam; raises
+    /// ``OutOfRangeError`` above 1173.15 K.
+    #[getter]
+    fn thermal_conductivity(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.thermal_conductivity())
+    }
+
+    /// Kinematic viscosity μ/ρ: m²/s (native, si, metric), ft²/s (us); as
+    /// ``viscosity`` for wet steam and above 1173.15 K.
+    #[getter]
+    fn kinematic_viscosity(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.kinematic_viscosity())
+    }
+
+    /// Thermal diffusivity λ/(ρ cp): m²/s (native, si, metric), ft²/s (us);
+    /// as ``viscosity`` for wet steam and above 1173.15 K.
+    #[getter]
+    fn thermal_diffusivity(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.thermal_diffusivity())
+    }
+
+    /// Prandtl number μ cp/λ, dimensionless; as ``viscosity`` for wet steam
+    /// and above 1173.15 K.
+    #[getter]
+    fn prandtl_number(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.prandtl_number())
+    }
+
+    /// Isentropic exponent −(v/p)(∂p/∂v)_s, dimensionless (wet steam: the
+    /// homogeneous mixture's).
+    #[getter]
+    fn isentropic_exponent(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.isentropic_exponent())
+    }
+
+    /// Joule–Thomson coefficient (∂T/∂p)_h: K/MPa (native), K/Pa (si),
+    /// °C/bar (metric, a difference), °F/psi (us).
+    #[getter]
+    fn joule_thomson_coefficient(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.joule_thomson_coefficient())
+    }
+
+    /// Isothermal throttling coefficient (∂h/∂p)_T, units of ``h`` per
+    /// units of ``p``; ``None`` for wet steam (T is fixed by p there).
+    #[getter]
+    fn isothermal_throttling_coefficient(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.isothermal_throttling_coefficient())
+    }
+
+    /// Relative pressure coefficient (1/p)(∂p/∂T)_v, per temperature
+    /// difference: 1/K (native, si), 1/°C (metric), 1/°F (us).
+    #[getter]
+    fn relative_pressure_coefficient(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.relative_pressure_coefficient())
+    }
+
+    /// Isothermal stress coefficient −(1/p)(∂p/∂v)_T, in density units:
+    /// kg/m³ (native, si, metric), lbm/ft³ (us); zero for wet steam (p is
+    /// fixed by T there).
+    #[getter]
+    fn isothermal_stress_coefficient(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+        optional(py, self.inner.isothermal_stress_coefficient())
+    }
+
     /// The IF97 region of the equation that produced the state, 1 to 5
     /// (4: wet steam).
     #[getter]
@@ -545,7 +618,11 @@ impl PyState {
     /// ``state.derivative("rho", "p", "h")``. Raises ``SteamError`` where
     /// the derivative does not exist (x and y not independent).
     fn derivative(&self, py: Python<'_>, z: &str, x: &str, y: &str) -> PyResult<f64> {
-        let (z, x, y) = (variable(z)?, variable(x)?, variable(y)?);
+        let (z, x, y) = (
+            names::variable(z)?,
+            names::variable(x)?,
+            names::variable(y)?,
+        );
         self.inner
             .derivative(z, x, y)
             .map_err(|e| to_py(py, &e, None))
@@ -639,23 +716,15 @@ pub(crate) fn solve_scalar(
     PyState::solve(py, origin, read)
 }
 
-/// A thermodynamic variable by the attribute name it has on a state.
-fn variable(name: &str) -> PyResult<ebullio::Variable> {
-    use ebullio::Variable::*;
-    Ok(match name {
-        "p" => Pressure,
-        "t" => Temperature,
-        "v" => SpecificVolume,
-        "rho" => Density,
-        "u" => InternalEnergy,
-        "h" => Enthalpy,
-        "s" => Entropy,
-        "g" => GibbsEnergy,
-        "f" => HelmholtzEnergy,
-        other => {
-            return Err(pyo3::exceptions::PyValueError::new_err(format!(
-                "unknown variable {other:?}: use one of p, t, v, rho, u, h, s, g, f"
-            )))
-        }
-    })
+/// A value the core may not have for a state: ``None`` where it does not
+/// exist (`Error::Undefined`, as cp of wet steam), the exception otherwise.
+pub(crate) fn optional(
+    py: Python<'_>,
+    value: Result<f64, ebullio::Error>,
+) -> PyResult<Option<f64>> {
+    match value {
+        Ok(v) => Ok(Some(v)),
+        Err(ebullio::Error::Undefined { .. }) => Ok(None),
+        Err(error) => Err(to_py(py, &error, None)),
+    }
 }

@@ -74,8 +74,9 @@ pub fn section_efficiency(
         inlet_temperature,
         units,
         Error::NotFixedByMeasurement {
-            what: "the section inlet is at or below its saturation temperature, so it may be wet and p and T do not fix its enthalpy",
-            needs: "give its quality or enthalpy and use section_efficiency_between",
+            what:
+                "the section inlet is at or below saturation: its p and T do not fix its enthalpy",
+            needs: "give its quality or enthalpy instead",
         },
     )?;
     let exhaust = measured_superheated(
@@ -83,8 +84,8 @@ pub fn section_efficiency(
         exhaust_temperature,
         units,
         Error::NotFixedByMeasurement {
-            what: "the section exhaust is at or below its saturation temperature, so it is wet and p and T do not fix its enthalpy",
-            needs: "find its enthalpy from an energy balance on the equipment it feeds (or its quality) and use section_efficiency_between",
+            what: "the section exhaust is wet (at or below saturation): its p and T do not fix its enthalpy",
+            needs: "find its enthalpy by an energy balance on what it feeds, or its quality",
         },
     )?;
     section_efficiency_between(&inlet, &exhaust)

@@ -323,6 +323,267 @@ static void arrays(void) {
                  EBULLIO_STATUS_OK);
 }
 
+/* |a - b| <= rel * |b| */
+static void check_relative(const char *what, double a, double b, double rel) {
+    ++checks;
+    if (!(fabs(a - b) <= rel * fabs(b))) {
+        ++failures;
+        fprintf(stderr, "%s: %.15e vs %.15e (relative %.1e allowed)\n", what, a, b, rel);
+    }
+}
+
+#define TRANSPORT_CELL(prop, pair, a_, b_, units)                          \
+    ebullio_property((prop), (pair), (a_), (b_), (units), EBULLIO_METHOD_EXACT, &st)
+
+static void transport(void) {
+    /* recalled from IAPWS R12-08, Table 4 (T in K, rho in kg/m3, mu in
+       micro-Pa s), the points inside IF97's range, each state from (rho, T). */
+    static const struct {
+        double t, rho;
+        const char *mu;
+    } table4[] = {
+        {298.15, 998.0, "889.735100"}, {433.15, 1.0, "14.538324"},
+        {873.15, 1.0, "32.619287"},    {873.15, 100.0, "35.802262"},
+        {1173.15, 1.0, "44.217245"},
+    };
+    EbullioStatus st = EBULLIO_STATUS_PANIC;
+    EbullioStatus sts[3];
+    EbullioState s = fresh_state();
+    char what[96];
+    double v, mu, lambda, a_rho[3] = {998.0, 1.0, 100.0}, b_t[3] = {298.15, 1500.0, 873.15};
+    double three[3 * 3];
+    uint32_t props[3] = {EBULLIO_PROPERTY_VISCOSITY, EBULLIO_PROPERTY_DENSITY,
+                         EBULLIO_PROPERTY_THERMAL_CONDUCTIVITY};
+    size_t i;
+
+    for (i = 0; i < sizeof table4 / sizeof table4[0]; ++i) {
+        v = TRANSPORT_CELL(EBULLIO_PROPERTY_VISCOSITY, EBULLIO_INPUT_PAIR_DENSITY_TEMPERATURE,
+                           table4[i].rho, table4[i].t, EBULLIO_UNITS_NATIVE);
+        CHECK_STATUS(st, EBULLIO_STATUS_OK);
+        sprintf(what, "R12-08 Table 4 mu(%g K, %g kg/m3) uPa s", table4[i].t, table4[i].rho);
+        check_printed(what, v * 1e6, table4[i].mu);
+    }
+    /* recalled from IAPWS R15-11, Table 5 (without the critical enhancement):
+       607.712868 mW/(m K) at 298.15 K, 998 kg/m3. The enhancement is zero
+       in cold liquid (R15-11, Eq. (21); tests/tests/transport.rs), so the
+       full lambda is this value. */
+    v = TRANSPORT_CELL(EBULLIO_PROPERTY_THERMAL_CONDUCTIVITY,
+                       EBULLIO_INPUT_PAIR_DENSITY_TEMPERATURE, 998.0, 298.15, EBULLIO_UNITS_NATIVE);
+    CHECK_STATUS(st, EBULLIO_STATUS_OK);
+    check_printed("R15-11 Table 5 lambda(298.15 K, 998 kg/m3) mW/(m K)", v * 1e3, "607.712868");
+
+    /* recalled from IAPWS R1-76(2014): sigma(100 degC) = 58.91 mN/m, for the
+       saturated liquid, the vapour and wet steam alike (metric: N/m). */
+    for (i = 0; i < 3; ++i) {
+        v = TRANSPORT_CELL(EBULLIO_PROPERTY_SURFACE_TENSION, EBULLIO_INPUT_PAIR_TEMPERATURE_QUALITY,
+                           100.0, 0.5 * (double)i, EBULLIO_UNITS_METRIC_ENGINEERING);
+        CHECK_STATUS(st, EBULLIO_STATUS_OK);
+        check_printed("R1-76 sigma(100 degC) mN/m", v * 1e3, "58.91");
+    }
+    /* Off the saturation line there is no interface. */
+    v = TRANSPORT_CELL(EBULLIO_PROPERTY_SURFACE_TENSION, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE,
+                       3.0, 300.0, EBULLIO_UNITS_NATIVE);
+    CHECK_STATUS(st, EBULLIO_STATUS_PROPERTY_UNDEFINED);
+    CHECK(isnan(v));
+    /* Wet steam has no viscosity as a mixture; its saturated liquid has. */
+    v = TRANSPORT_CELL(EBULLIO_PROPERTY_VISCOSITY, EBULLIO_INPUT_PAIR_PRESSURE_QUALITY, 0.1, 0.5,
+                       EBULLIO_UNITS_NATIVE);
+    CHECK_STATUS(st, EBULLIO_STATUS_PROPERTY_UNDEFINED);
+    CHECK(isnan(v));
+    v = TRANSPORT_CELL(EBULLIO_PROPERTY_VISCOSITY, EBULLIO_INPUT_PAIR_PRESSURE_QUALITY, 0.1, 0.0,
+                       EBULLIO_UNITS_NATIVE);
+    CHECK_STATUS(st, EBULLIO_STATUS_OK);
+    CHECK(v > 0.0);
+    /* R12-08 and R15-11 end at 1173.15 K; IF97 region 5 goes further. */
+    v = TRANSPORT_CELL(EBULLIO_PROPERTY_PRANDTL_NUMBER, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE,
+                       30.0, 1500.0, EBULLIO_UNITS_NATIVE);
+    CHECK_STATUS(st, EBULLIO_STATUS_OUT_OF_RANGE);
+    CHECK(isnan(v));
+
+    /* The derived quantities are their definitions, in SI: nu = mu/rho,
+       a = lambda/(rho cp), Pr = mu cp/lambda (R7-97 Table 15 state). */
+    CHECK_STATUS(ebullio_solve(EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, 3.5e3, 700.0,
+                               EBULLIO_UNITS_SI_BASE, EBULLIO_METHOD_EXACT, &s, NULL),
+                 EBULLIO_STATUS_OK);
+    mu = TRANSPORT_CELL(EBULLIO_PROPERTY_VISCOSITY, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, 3.5e3,
+                        700.0, EBULLIO_UNITS_SI_BASE);
+    lambda = TRANSPORT_CELL(EBULLIO_PROPERTY_THERMAL_CONDUCTIVITY,
+                            EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, 3.5e3, 700.0,
+                            EBULLIO_UNITS_SI_BASE);
+    v = TRANSPORT_CELL(EBULLIO_PROPERTY_KINEMATIC_VISCOSITY, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE,
+                       3.5e3, 700.0, EBULLIO_UNITS_SI_BASE);
+    check_relative("nu = mu/rho", v, mu / s.density, 1e-14);
+    v = TRANSPORT_CELL(EBULLIO_PROPERTY_THERMAL_DIFFUSIVITY, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE,
+                       3.5e3, 700.0, EBULLIO_UNITS_SI_BASE);
+    check_relative("a = lambda/(rho cp)", v, lambda / (s.density * s.isobaric_heat_capacity), 1e-14);
+    v = TRANSPORT_CELL(EBULLIO_PROPERTY_PRANDTL_NUMBER, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE,
+                       3.5e3, 700.0, EBULLIO_UNITS_SI_BASE);
+    check_relative("Pr = mu cp/lambda", v, mu * s.isobaric_heat_capacity / lambda, 1e-14);
+    CHECK_STATUS(st, EBULLIO_STATUS_OK);
+
+    /* A batch from (rho, T): good, above 1173.15 K, good; the density is
+       filled even where the transport properties are out of range. */
+    CHECK_STATUS(ebullio_properties_array(props, 3, EBULLIO_INPUT_PAIR_DENSITY_TEMPERATURE, a_rho,
+                                          b_t, 3, EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT,
+                                          three, sts),
+                 EBULLIO_STATUS_SOME_ELEMENTS_FAILED);
+    CHECK_STATUS(sts[0], EBULLIO_STATUS_OK);
+    CHECK_STATUS(sts[1], EBULLIO_STATUS_OUT_OF_RANGE);
+    CHECK_STATUS(sts[2], EBULLIO_STATUS_OK);
+    check_printed("batch R12-08 Table 4 mu(298.15 K, 998) uPa s", three[0] * 1e6, "889.735100");
+    check_printed("batch R15-11 Table 5 lambda(298.15 K, 998) mW/(m K)", three[2] * 1e3,
+                  "607.712868");
+    CHECK(isnan(three[3]) && isnan(three[5]) && fabs(three[4] - 1.0) < 1e-9);
+    check_printed("batch R12-08 Table 4 mu(873.15 K, 100) uPa s", three[6] * 1e6, "35.802262");
+    CHECK_STATUS(ebullio_property_array(EBULLIO_PROPERTY_VISCOSITY,
+                                        EBULLIO_INPUT_PAIR_DENSITY_TEMPERATURE, a_rho, b_t, 3,
+                                        EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, a_rho, sts),
+                 EBULLIO_STATUS_SOME_ELEMENTS_FAILED);
+    CHECK(a_rho[0] == three[0] && isnan(a_rho[1]) && a_rho[2] == three[6]);
+}
+
+#define D(z, x, y, pair, a_, b_, units)                                    \
+    ebullio_derivative(EBULLIO_VARIABLE_##z, EBULLIO_VARIABLE_##x,          \
+                       EBULLIO_VARIABLE_##y, (pair), (a_), (b_), (units),   \
+                       EBULLIO_METHOD_EXACT, &st)
+
+static void derivatives(void) {
+    EbullioStatus st = EBULLIO_STATUS_PANIC;
+    EbullioStatus sts[3];
+    EbullioState s = fresh_state();
+    const uint32_t pt = EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE;
+    const uint32_t si = EBULLIO_UNITS_SI_BASE;
+    double v, w, hi, lo, dp;
+    double p[3] = {0.0035, NAN, 30.0}, t[3] = {700.0, 700.0, 700.0};
+    double one[3], two[3 * 2];
+    uint32_t jacobian[2 * 3] = {EBULLIO_VARIABLE_ENTHALPY, EBULLIO_VARIABLE_TEMPERATURE,
+                                EBULLIO_VARIABLE_PRESSURE, EBULLIO_VARIABLE_DENSITY,
+                                EBULLIO_VARIABLE_PRESSURE, EBULLIO_VARIABLE_ENTROPY};
+    uint32_t bad[3] = {EBULLIO_VARIABLE_ENTHALPY, EBULLIO_VARIABLE_PRESSURE, 10};
+    size_t i;
+
+    /* recalled from IAPWS R7-97(2012), Table 15, 0.0035 MPa and 700 K:
+       cp = (dh/dT)_p and w^2 = (dp/drho)_s (native: MPa, so 1e6). */
+    v = D(ENTHALPY, TEMPERATURE, PRESSURE, pt, 0.0035, 700.0, EBULLIO_UNITS_NATIVE);
+    CHECK_STATUS(st, EBULLIO_STATUS_OK);
+    check_printed("R7-97 Table 15 cp = (dh/dT)_p", v, "0.208141274e1");
+    v = D(PRESSURE, DENSITY, ENTROPY, pt, 0.0035, 700.0, EBULLIO_UNITS_NATIVE);
+    check_printed("R7-97 Table 15 w = sqrt((dp/drho)_s)", sqrt(v * 1e6), "0.644289068e3");
+
+    /* Identities (IAPWS AN3-07), in SI, against the solved state. */
+    CHECK_STATUS(ebullio_solve(pt, 3.0e7, 700.0, si, EBULLIO_METHOD_EXACT, &s, NULL),
+                 EBULLIO_STATUS_OK);
+    check_relative("(dg/dp)_T = v", D(GIBBS_ENERGY, PRESSURE, TEMPERATURE, pt, 3e7, 700.0, si),
+                   s.specific_volume, 1e-12);
+    check_relative("(dh/dT)_p = cp", D(ENTHALPY, TEMPERATURE, PRESSURE, pt, 3e7, 700.0, si),
+                   s.isobaric_heat_capacity, 1e-12);
+    check_relative("(du/dT)_v = cv", D(INTERNAL_ENERGY, TEMPERATURE, SPECIFIC_VOLUME, pt, 3e7, 700.0, si),
+                   s.isochoric_heat_capacity, 1e-9);
+    check_relative("Maxwell (ds/dp)_T = -(dv/dT)_p",
+                   D(ENTROPY, PRESSURE, TEMPERATURE, pt, 3e7, 700.0, si),
+                   -D(SPECIFIC_VOLUME, TEMPERATURE, PRESSURE, pt, 3e7, 700.0, si), 1e-9);
+    w = s.speed_of_sound;
+    v = ebullio_property(EBULLIO_PROPERTY_ISENTROPIC_EXPONENT, pt, 3e7, 700.0, si,
+                         EBULLIO_METHOD_EXACT, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_OK);
+    check_relative("isentropic exponent = rho w^2 / p", v, s.density * w * w / s.pressure, 1e-9);
+    v = ebullio_property(EBULLIO_PROPERTY_JOULE_THOMSON_COEFFICIENT, pt, 3e7, 700.0, si,
+                         EBULLIO_METHOD_EXACT, &st);
+    check_relative("Joule-Thomson = v (T alpha_v - 1) / cp", v,
+                   s.specific_volume * (s.temperature * s.expansion_coefficient - 1.0) /
+                       s.isobaric_heat_capacity,
+                   1e-9);
+    v = ebullio_property(EBULLIO_PROPERTY_ISOTHERMAL_THROTTLING_COEFFICIENT, pt, 3e7, 700.0, si,
+                         EBULLIO_METHOD_EXACT, &st);
+    check_relative("isothermal throttling = v (1 - T alpha_v)", v,
+                   s.specific_volume * (1.0 - s.temperature * s.expansion_coefficient), 1e-9);
+    v = ebullio_property(EBULLIO_PROPERTY_RELATIVE_PRESSURE_COEFFICIENT, pt, 3e7, 700.0, si,
+                         EBULLIO_METHOD_EXACT, &st);
+    check_relative("relative pressure = alpha_v / (p kappa_T)", v,
+                   s.expansion_coefficient / (s.pressure * s.compressibility), 1e-9);
+    v = ebullio_property(EBULLIO_PROPERTY_ISOTHERMAL_STRESS_COEFFICIENT, pt, 3e7, 700.0, si,
+                         EBULLIO_METHOD_EXACT, &st);
+    check_relative("isothermal stress = 1 / (p v kappa_T)", v,
+                   1.0 / (s.pressure * s.specific_volume * s.compressibility), 1e-9);
+    CHECK_STATUS(st, EBULLIO_STATUS_OK);
+
+    /* Wet steam: (drho/dp)_h, homogeneous, against a central difference of
+       densities from (p, h); (dh/dp)_T does not exist (T is fixed by p). */
+    v = D(DENSITY, PRESSURE, ENTHALPY, EBULLIO_INPUT_PAIR_PRESSURE_QUALITY, 1e6, 0.5, si);
+    CHECK_STATUS(st, EBULLIO_STATUS_OK);
+    w = ebullio_property(EBULLIO_PROPERTY_ENTHALPY, EBULLIO_INPUT_PAIR_PRESSURE_QUALITY, 1e6, 0.5,
+                         si, EBULLIO_METHOD_EXACT, &st);
+    dp = 1.0;
+    hi = ebullio_property(EBULLIO_PROPERTY_DENSITY, EBULLIO_INPUT_PAIR_PRESSURE_ENTHALPY, 1e6 + dp,
+                          w, si, EBULLIO_METHOD_EXACT, &st);
+    lo = ebullio_property(EBULLIO_PROPERTY_DENSITY, EBULLIO_INPUT_PAIR_PRESSURE_ENTHALPY, 1e6 - dp,
+                          w, si, EBULLIO_METHOD_EXACT, &st);
+    check_relative("wet (drho/dp)_h vs difference", v, (hi - lo) / (2 * dp), 1e-5);
+    v = D(ENTHALPY, PRESSURE, TEMPERATURE, EBULLIO_INPUT_PAIR_PRESSURE_QUALITY, 1e6, 0.5, si);
+    CHECK_STATUS(st, EBULLIO_STATUS_PROPERTY_UNDEFINED);
+    CHECK(isnan(v));
+    v = D(ENTHALPY, PRESSURE, PRESSURE, pt, 3e7, 700.0, si);
+    CHECK_STATUS(st, EBULLIO_STATUS_PROPERTY_UNDEFINED);
+    CHECK(isnan(v));
+
+    /* Unknown variable numbers, bad enums, out of range. */
+    v = ebullio_derivative(0, 1, 2, pt, 3.0, 300.0, 0, 0, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_UNKNOWN_VARIABLE);
+    CHECK(isnan(v));
+    v = ebullio_derivative(6, 1, 10, pt, 3.0, 300.0, 0, 0, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_UNKNOWN_VARIABLE);
+    v = ebullio_derivative(6, 2, 1, 99, 3.0, 300.0, 0, 0, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_UNKNOWN_INPUT_PAIR);
+    v = ebullio_derivative(6, 2, 1, pt, 300.0, 300.0, 0, 0, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_OUT_OF_RANGE);
+    CHECK(isnan(v));
+    v = ebullio_derivative(6, 2, 1, pt, 0.0035, 700.0, 0, 0, NULL); /* null status is allowed */
+    check_printed("cp with a null status pointer", v, "0.208141274e1");
+
+    /* Arrays: each element is the scalar call, bit for bit; a bad reading
+       in the middle. */
+    CHECK_STATUS(ebullio_derivative_array(EBULLIO_VARIABLE_ENTHALPY, EBULLIO_VARIABLE_TEMPERATURE,
+                                          EBULLIO_VARIABLE_PRESSURE, pt, p, t, 3,
+                                          EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, one, sts),
+                 EBULLIO_STATUS_SOME_ELEMENTS_FAILED);
+    CHECK_STATUS(sts[0], EBULLIO_STATUS_OK);
+    CHECK_STATUS(sts[1], EBULLIO_STATUS_NOT_FINITE);
+    CHECK_STATUS(sts[2], EBULLIO_STATUS_OK);
+    /* recalled from IAPWS R7-97(2012), Table 15: cp at 0.0035 and 30 MPa, 700 K */
+    check_printed("array cp(0.0035 MPa, 700 K)", one[0], "0.208141274e1");
+    check_printed("array cp(30 MPa, 700 K)", one[2], "0.103505092e2");
+    CHECK(isnan(one[1]));
+    CHECK_STATUS(ebullio_derivatives_array(jacobian, 2, pt, p, t, 3, EBULLIO_UNITS_NATIVE,
+                                           EBULLIO_METHOD_EXACT, two, NULL),
+                 EBULLIO_STATUS_SOME_ELEMENTS_FAILED);
+    for (i = 0; i < 3; ++i) {
+        double d0 = D(ENTHALPY, TEMPERATURE, PRESSURE, pt, p[i], t[i], EBULLIO_UNITS_NATIVE);
+        double d1 = D(DENSITY, PRESSURE, ENTROPY, pt, p[i], t[i], EBULLIO_UNITS_NATIVE);
+        CHECK(memcmp(&two[2 * i], &d0, sizeof d0) == 0);
+        CHECK(memcmp(&two[2 * i + 1], &d1, sizeof d1) == 0);
+    }
+    /* Argument errors write nothing. */
+    one[0] = -1.0;
+    sts[0] = EBULLIO_STATUS_PANIC;
+    CHECK_STATUS(ebullio_derivatives_array(NULL, 1, pt, p, t, 3, 0, 0, one, sts),
+                 EBULLIO_STATUS_NULL_POINTER);
+    CHECK_STATUS(ebullio_derivatives_array(bad, 0, pt, p, t, 3, 0, 0, one, sts),
+                 EBULLIO_STATUS_BAD_LENGTH);
+    CHECK_STATUS(ebullio_derivatives_array(bad, SIZE_MAX / 2, pt, p, t, 3, 0, 0, one, sts),
+                 EBULLIO_STATUS_BAD_LENGTH);
+    CHECK_STATUS(ebullio_derivatives_array(bad, 1, pt, p, t, 3, 0, 0, one, sts),
+                 EBULLIO_STATUS_UNKNOWN_VARIABLE);
+    CHECK_STATUS(ebullio_derivative_array(6, 2, 1, pt, NULL, t, 3, 0, 0, one, sts),
+                 EBULLIO_STATUS_NULL_POINTER);
+    CHECK_STATUS(ebullio_derivative_array(6, 2, 1, pt, p, t, 3, 7, 0, one, sts),
+                 EBULLIO_STATUS_UNKNOWN_UNITS);
+    CHECK(one[0] == -1.0 && sts[0] == EBULLIO_STATUS_PANIC);
+    CHECK_STATUS(ebullio_derivative_array(6, 2, 1, pt, NULL, NULL, 0, 0, 0, NULL, NULL),
+                 EBULLIO_STATUS_OK);
+}
+#undef D
+#undef TRANSPORT_CELL
+
 static void error_paths(void) {
     EbullioState s = fresh_state(), before;
     EbullioState vapour = fresh_state();
@@ -371,7 +632,7 @@ static void error_paths(void) {
     v = ebullio_property(0, 1, 3.0, 300.0, 0, 0, &st);
     CHECK_STATUS(st, EBULLIO_STATUS_UNKNOWN_PROPERTY);
     CHECK(isnan(v));
-    v = ebullio_property(16, 1, 3.0, 300.0, 0, 0, &st);
+    v = ebullio_property(27, 1, 3.0, 300.0, 0, 0, &st);
     CHECK_STATUS(st, EBULLIO_STATUS_UNKNOWN_PROPERTY);
     v = ebullio_property(6, 77, 3.0, 300.0, 0, 0, &st);
     CHECK_STATUS(st, EBULLIO_STATUS_UNKNOWN_INPUT_PAIR);
@@ -450,8 +711,8 @@ static void error_paths(void) {
 }
 
 static void messages(void) {
-    static const int32_t codes[] = {0,   100, 101, 102, 103, 104, 105, 106, 200, 201,
-                                    202, 203, 204, 205, 300, 400, 900, 901};
+    static const int32_t codes[] = {0,   100, 101, 102, 103, 104, 105, 106, 107, 200,
+                                    201, 202, 203, 204, 205, 300, 400, 900, 901};
     size_t i, j;
     for (i = 0; i < sizeof codes / sizeof codes[0]; ++i) {
         const char *m = ebullio_status_message(codes[i]);
@@ -463,7 +724,7 @@ static void messages(void) {
     }
     CHECK(strcmp(ebullio_status_message(0), "success") == 0);
     CHECK(strcmp(ebullio_status_message(-1), "unknown status code") == 0);
-    CHECK(strcmp(ebullio_status_message(107), "unknown status code") == 0);
+    CHECK(strcmp(ebullio_status_message(12345), "unknown status code") == 0);
     CHECK(EBULLIO_STATUS_OK == 0);
 }
 
@@ -475,6 +736,8 @@ int main(void) {
     region5_table42();
     saturation_tables35_36();
     arrays();
+    transport();
+    derivatives();
     error_paths();
     messages();
     printf("c: %d checks, %d failed\n", checks, failures);

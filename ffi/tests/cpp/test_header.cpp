@@ -15,6 +15,8 @@ static_assert(std::is_same<std::underlying_type<EbullioStatus>::type, int32_t>::
               "statuses are 32-bit signed");
 static_assert(std::is_same<std::underlying_type<EbullioProperty>::type, uint32_t>::value,
               "properties are 32-bit unsigned");
+static_assert(std::is_same<std::underlying_type<EbullioVariable>::type, uint32_t>::value,
+              "variables are 32-bit unsigned");
 static_assert(EBULLIO_STATUS_OK == 0, "0 is success");
 
 int main() {
@@ -30,6 +32,13 @@ int main() {
     double v = ebullio_property(EBULLIO_PROPERTY_ENTHALPY, 99, 3.0, 300.0,
                                 EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, &bad);
     ok = ok && bad == EBULLIO_STATUS_UNKNOWN_INPUT_PAIR && std::isnan(v);
+    // recalled from IAPWS R7-97(2012), Table 5: cp(3 MPa, 300 K) = 0.417301218e1 kJ/(kg K),
+    // as the derivative (dh/dT)_p through the typed variable enum.
+    double cp = ebullio_derivative(EBULLIO_VARIABLE_ENTHALPY, EBULLIO_VARIABLE_TEMPERATURE,
+                                   EBULLIO_VARIABLE_PRESSURE,
+                                   EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, 3.0, 300.0,
+                                   EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, &bad);
+    ok = ok && bad == EBULLIO_STATUS_OK && std::fabs(cp - 4.17301218) <= 5e-9;
     std::printf("c++: header compiles; h = %.9g kJ/kg, %s\n", s.enthalpy, ok ? "ok" : "WRONG");
     return ok ? 0 : 1;
 }

@@ -14,12 +14,16 @@ module ebullio
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_UNKNOWN_PROPERTY = 104
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_BAD_LENGTH = 105
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_BAD_STRUCT_SIZE = 106
+  integer(c_int32_t), parameter, public :: EBULLIO_STATUS_UNKNOWN_VARIABLE = 107
+  integer(c_int32_t), parameter, public :: EBULLIO_STATUS_UNKNOWN_PLANT_CODE = 108
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_NOT_FINITE = 200
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_OUT_OF_RANGE = 201
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_QUALITY_OUT_OF_RANGE = 202
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_NO_STATE_IN_RANGE = 203
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_BACKWARD_EQUATION_OUT_OF_RANGE = 204
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_PROPERTY_UNDEFINED = 205
+  integer(c_int32_t), parameter, public :: EBULLIO_STATUS_INVALID_PLANT = 206
+  integer(c_int32_t), parameter, public :: EBULLIO_STATUS_NOT_FIXED_BY_MEASUREMENT = 207
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_NOT_CONVERGED = 300
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_SOME_ELEMENTS_FAILED = 400
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_PANIC = 900
@@ -60,6 +64,28 @@ module ebullio
   integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_COMPRESSIBILITY = 13
   integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_GIBBS_ENERGY = 14
   integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_HELMHOLTZ_ENERGY = 15
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_VISCOSITY = 16
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_THERMAL_CONDUCTIVITY = 17
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_KINEMATIC_VISCOSITY = 18
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_THERMAL_DIFFUSIVITY = 19
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_PRANDTL_NUMBER = 20
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_SURFACE_TENSION = 21
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_ISENTROPIC_EXPONENT = 22
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_JOULE_THOMSON_COEFFICIENT = 23
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_ISOTHERMAL_THROTTLING_COEFFICIENT = 24
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_RELATIVE_PRESSURE_COEFFICIENT = 25
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_ISOTHERMAL_STRESS_COEFFICIENT = 26
+
+  ! EbullioVariable (of a derivative (dz/dx)_y)
+  integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_PRESSURE = 1
+  integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_TEMPERATURE = 2
+  integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_SPECIFIC_VOLUME = 3
+  integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_DENSITY = 4
+  integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_INTERNAL_ENERGY = 5
+  integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_ENTHALPY = 6
+  integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_ENTROPY = 7
+  integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_GIBBS_ENERGY = 8
+  integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_HELMHOLTZ_ENERGY = 9
 
   ! EbullioState, version 1 (136 bytes). Set size = c_sizeof(state) first.
   type, bind(c), public :: ebullio_state
@@ -86,6 +112,15 @@ module ebullio
         bind(c, name="ebullio_property") result(v)
       import :: c_int32_t, c_double
       integer(c_int32_t), value :: property, pair, units, method
+      real(c_double), value :: a, b
+      integer(c_int32_t), intent(out) :: status
+      real(c_double) :: v
+    end function
+
+    function ebullio_derivative(z, x, y, pair, a, b, units, method, status) &
+        bind(c, name="ebullio_derivative") result(v)
+      import :: c_int32_t, c_double
+      integer(c_int32_t), value :: z, x, y, pair, units, method
       real(c_double), value :: a, b
       integer(c_int32_t), intent(out) :: status
       real(c_double) :: v
@@ -121,8 +156,20 @@ module ebullio
       integer(c_int32_t), intent(out) :: statuses(*)
       integer(c_int32_t) :: status
     end function
+
+    function ebullio_derivative_array(z, x, y, pair, a, b, n, units, method, out, statuses) &
+        bind(c, name="ebullio_derivative_array") result(status)
+      import :: c_int32_t, c_double, c_size_t
+      integer(c_int32_t), value :: z, x, y, pair, units, method
+      real(c_double), intent(in) :: a(*), b(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t), intent(out) :: statuses(*)
+      integer(c_int32_t) :: status
+    end function
   end interface
 
   public :: ebullio_abi_version, ebullio_property, ebullio_solve
   public :: ebullio_saturation_at_pressure, ebullio_property_array
+  public :: ebullio_derivative, ebullio_derivative_array
 end module ebullio

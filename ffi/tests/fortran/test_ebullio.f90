@@ -52,6 +52,44 @@ program test_ebullio
   ! recalled from IAPWS R7-97(2012), Table 5, 80 MPa and 300 K
   call printed(out(3), 0.184142828e3_c_double, 0.5e-6_c_double, "Table 5 h (80 MPa)")
 
+  ! recalled from IAPWS R12-08, Table 4: viscosity 889.735100 uPa s at
+  ! 298.15 K and 998 kg/m3, the state given by (rho, T)
+  h = ebullio_property(EBULLIO_PROPERTY_VISCOSITY, EBULLIO_INPUT_PAIR_DENSITY_TEMPERATURE, &
+                       998.0_c_double, 298.15_c_double, EBULLIO_UNITS_NATIVE, &
+                       EBULLIO_METHOD_EXACT, status)
+  call check(status == EBULLIO_STATUS_OK, "viscosity status")
+  call printed(h * 1e6_c_double, 889.735100_c_double, 0.5e-6_c_double, "R12-08 Table 4 mu")
+  ! Wet steam has no viscosity as a mixture.
+  h = ebullio_property(EBULLIO_PROPERTY_VISCOSITY, EBULLIO_INPUT_PAIR_PRESSURE_QUALITY, &
+                       0.1_c_double, 0.5_c_double, EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, status)
+  call check(status == EBULLIO_STATUS_PROPERTY_UNDEFINED .and. ieee_is_nan(h), "wet viscosity")
+
+  ! recalled from IAPWS R7-97(2012), Table 15, 0.0035 MPa and 700 K:
+  ! cp = 0.208141274e1 kJ/(kg K) as the derivative (dh/dT)_p
+  h = ebullio_derivative(EBULLIO_VARIABLE_ENTHALPY, EBULLIO_VARIABLE_TEMPERATURE, &
+                         EBULLIO_VARIABLE_PRESSURE, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, &
+                         0.0035_c_double, 700.0_c_double, EBULLIO_UNITS_NATIVE, &
+                         EBULLIO_METHOD_EXACT, status)
+  call check(status == EBULLIO_STATUS_OK, "derivative status")
+  call printed(h, 0.208141274e1_c_double, 0.5e-8_c_double, "Table 15 cp = (dh/dT)_p")
+  h = ebullio_derivative(EBULLIO_VARIABLE_ENTHALPY, EBULLIO_VARIABLE_TEMPERATURE, 0_c_int32_t, &
+                         EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, 0.0035_c_double, &
+                         700.0_c_double, EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, status)
+  call check(status == EBULLIO_STATUS_UNKNOWN_VARIABLE .and. ieee_is_nan(h), "unknown variable")
+  ! The same cp for a batch with an out-of-range reading in the middle;
+  ! recalled from IAPWS R7-97(2012), Table 15: cp(30 MPa, 700 K) = 0.103505092e2
+  a = [0.0035_c_double, 200.0_c_double, 30.0_c_double]
+  b = [700.0_c_double, 700.0_c_double, 700.0_c_double]
+  status = ebullio_derivative_array(EBULLIO_VARIABLE_ENTHALPY, EBULLIO_VARIABLE_TEMPERATURE, &
+                                    EBULLIO_VARIABLE_PRESSURE, &
+                                    EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, a, b, 3_c_size_t, &
+                                    EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, out, statuses)
+  call check(status == EBULLIO_STATUS_SOME_ELEMENTS_FAILED, "derivative array status")
+  call check(statuses(2) == EBULLIO_STATUS_OUT_OF_RANGE .and. ieee_is_nan(out(2)), &
+             "derivative element 2")
+  call printed(out(1), 0.208141274e1_c_double, 0.5e-8_c_double, "array cp (0.0035 MPa)")
+  call printed(out(3), 0.103505092e2_c_double, 0.5e-7_c_double, "array cp (30 MPa)")
+
   ! Error statuses.
   h = ebullio_property(EBULLIO_PROPERTY_ENTHALPY, 42_c_int32_t, 3.0_c_double, &
                        300.0_c_double, EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, status)

@@ -16,6 +16,13 @@ prop.argtypes = [ctypes.c_uint32, ctypes.c_uint32, ctypes.c_double, ctypes.c_dou
                  ctypes.c_uint32, ctypes.c_uint32, ctypes.POINTER(ctypes.c_int32)]
 prop.restype = ctypes.c_double
 
+# double ebullio_derivative(uint32 z, uint32 x, uint32 y, uint32 pair, double a,
+#                           double b, uint32 units, uint32 method, int32 *status)
+deriv = lib.ebullio_derivative
+deriv.argtypes = [ctypes.c_uint32] * 4 + [ctypes.c_double] * 2 + [ctypes.c_uint32] * 2 + [
+    ctypes.POINTER(ctypes.c_int32)]
+deriv.restype = ctypes.c_double
+
 message = lib.ebullio_status_message
 message.argtypes = [ctypes.c_int32]
 message.restype = ctypes.c_char_p
@@ -24,9 +31,11 @@ lib.ebullio_abi_version.restype = ctypes.c_uint32
 lib.ebullio_version.restype = ctypes.c_char_p
 
 # Numbers as a macro module would declare them as constants.
-PT, PH, PX = 1, 2, 8
+PT, PH, RHO_T, PX, TX = 1, 2, 5, 8, 9
 NATIVE, SI, METRIC, US = 0, 1, 2, 3
 T_, H, S, CP, W = 2, 6, 7, 8, 10
+VISCOSITY, CONDUCTIVITY, SURFACE_TENSION, JOULE_THOMSON = 16, 17, 21, 23
+V_P, V_T, V_RHO, V_H, V_S = 1, 2, 4, 6, 7
 
 checks = failures = 0
 
@@ -76,6 +85,44 @@ check(abs(h_us - 115.331273 / 2.326) < 1e-6, f"US h {h_us}")
 # recalled from IAPWS R7-97(2012), Table 36: Tsat(0.1 MPa)
 tsat, status = cell(T_, PX, 0.1, 1.0)
 printed(tsat, "0.372755919e3", "Tsat(0.1 MPa)")
+
+# Transport cells. recalled from IAPWS R12-08, Table 4: 14.538324 uPa s at
+# 433.15 K and 1 kg/m3; recalled from IAPWS R15-11, Table 5: 607.712868
+# mW/(m K) at 298.15 K and 998 kg/m3 (no critical enhancement in cold liquid,
+# R15-11 Eq. (21)); recalled from IAPWS R1-76(2014): 58.91 mN/m at 100 degC.
+value, status = cell(VISCOSITY, RHO_T, 1.0, 433.15)
+check(status == 0, "viscosity status")
+printed(value * 1e6, "14.538324", "R12-08 Table 4 mu(433.15 K, 1 kg/m3)")
+value, status = cell(CONDUCTIVITY, RHO_T, 998.0, 298.15)
+printed(value * 1e3, "607.712868", "R15-11 Table 5 lambda(298.15 K, 998 kg/m3)")
+value, status = cell(SURFACE_TENSION, TX, 100.0, 0.0, METRIC)
+printed(value * 1e3, "58.91", "R1-76 sigma(100 degC)")
+value, status = cell(VISCOSITY, PT, 30.0, 1500.0)
+check(math.isnan(value) and status == 201, "viscosity above 1173.15 K")
+
+
+def derivative(z, x, y, pair, a, b, units=NATIVE):
+    status = ctypes.c_int32(-1)
+    value = deriv(z, x, y, pair, a, b, units, 0, ctypes.byref(status))
+    return value, status.value
+
+
+# recalled from IAPWS R7-97(2012), Table 15 (0.0035 MPa, 700 K): cp = (dh/dT)_p,
+# and w = 0.644289068e3 m/s from (dp/drho)_s (MPa, so 1e6).
+value, status = derivative(V_H, V_T, V_P, PT, 0.0035, 700.0)
+check(status == 0, "derivative status")
+printed(value, "0.208141274e1", "(dh/dT)_p = cp")
+value, status = derivative(V_P, V_RHO, V_S, PT, 0.0035, 700.0)
+printed(math.sqrt(value * 1e6), "0.644289068e3", "w from (dp/drho)_s")
+# The Joule-Thomson cell is the derivative (dT/dp)_h, bit for bit.
+jt, status = cell(JOULE_THOMSON, PT, 0.0035, 700.0)
+value, _ = derivative(V_T, V_P, V_H, PT, 0.0035, 700.0)
+check(status == 0 and jt == value, "Joule-Thomson cell is (dT/dp)_h")
+value, status = derivative(V_H, V_P, V_T, PX, 1.0, 0.5)
+check(math.isnan(value) and status == 205, "(dh/dp)_T of wet steam")
+value, status = derivative(V_H, V_P, 42, PT, 3.0, 300.0)
+check(math.isnan(value) and status == 107, "unknown variable")
+check(b"variable" in message(107), "message for 107")
 
 # Errors come back as NaN and a status, as a worksheet cell shows them.
 value, status = cell(H, PT, 200.0, 300.0)

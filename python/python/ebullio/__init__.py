@@ -11,7 +11,8 @@ pandas column at once, over every core.
 
 Constructors, one per input pair: ``State.from_pt, from_ph, from_ps,
 from_hs, from_rho_t, from_vt, from_vu, from_px, from_tx``; the saturation
-line: ``Saturation.at_pressure, at_temperature``. Each takes ``units=``
+line: ``Saturation.at_pressure, at_temperature``; steam cycles and their
+components: ``ebullio.plant`` (charts of them: ``ebullio.charts``). Each takes ``units=``
 ("native", "si", "metric", "us", or an ``ebullio.Units`` member). Arrays
 give a ``StateArray`` with a status per element; bad scalar input raises a
 ``SteamError`` (a ``ValueError``) naming the quantity, its value and the
@@ -23,6 +24,8 @@ judgement of a licensed engineer.
 """
 
 from ._native import (
+    InvalidPlantError,
+    NotFixedByMeasurementError,
     NotConvergedError,
     NotFiniteError,
     OutOfRangeError,
@@ -34,7 +37,8 @@ from ._native import (
 )
 from ._native import PROPERTIES as _PROPERTY_TABLE
 from ._enums import Method, Phase, Status, Units
-from ._arrays import SaturationArray, StateArray
+from ._arrays import DerivativeArray, SaturationArray, StateArray, TransportArray
+from . import plant
 
 #: The names of the properties every state carries, in array-column order.
 PROPERTIES = tuple(row[0] for row in _PROPERTY_TABLE)
@@ -44,6 +48,8 @@ __all__ = [
     "StateArray",
     "Saturation",
     "SaturationArray",
+    "TransportArray",
+    "DerivativeArray",
     "Units",
     "Method",
     "Phase",
@@ -53,6 +59,9 @@ __all__ = [
     "QualityOutOfRangeError",
     "NotFiniteError",
     "NotConvergedError",
+    "InvalidPlantError",
+    "NotFixedByMeasurementError",
+    "plant",
     "PROPERTIES",
     "__version__",
 ]

@@ -136,6 +136,37 @@ class StateArray:
             return error
         return None
 
+    def _inputs(self) -> tuple[int, np.ndarray, np.ndarray, Units, Any]:
+        """The flat inputs the states were solved from, broadcast."""
+        pair, a, b, units, method = self._origin
+        flat_a = np.broadcast_to(a, self.shape).reshape(-1)
+        flat_b = np.broadcast_to(b, self.shape).reshape(-1)
+        return pair, flat_a, flat_b, units, method
+
+    def transport(self, *, threads: Any = None) -> TransportArray:
+        """The transport properties of every element, a ``TransportArray``
+        in these units. The states are solved again from their inputs (the
+        same bits); an element whose state failed, is wet steam (each
+        saturated phase has its own transport properties) or lies above
+        1173.15 K (the end of IAPWS R12-08 and R15-11) is NaN with its
+        ``Status``."""
+        from ._dispatch import _threads_of
+
+        pair, a, b, units, method = self._inputs()
+        values, status = _native.transport_many(pair, a, b, units, method, _threads_of(threads), self.units)
+        return TransportArray._make(values.reshape((len(_TRANSPORT),) + self.shape), status.reshape(self.shape), self.units)
+
+    def derivative(self, z: str, x: str, y: str, *, threads: Any = None) -> DerivativeArray:
+        """(∂z/∂x) at constant y for every element, as ``State.derivative``
+        gives it (z, x, y among ``"p" "t" "v" "rho" "u" "h" "s" "g" "f"``),
+        a ``DerivativeArray``: NaN with a ``Status`` where the state failed
+        or the derivative does not exist (``Status.UNDEFINED``)."""
+        from ._dispatch import _threads_of
+
+        pair, a, b, units, method = self._inputs()
+        values, status = _native.derivative_many(pair, a, b, z, x, y, units, method, _threads_of(threads), self.units)
+        return DerivativeArray._make(values.reshape(self.shape), status.reshape(self.shape), self.units)
+
     def as_dict(self) -> dict[str, np.ndarray]:
         """Every property, ``region``, ``phase`` and ``status`` as arrays, for
         ``pandas.DataFrame(states.as_dict(), index=...)``."""
@@ -163,6 +194,122 @@ for _k, (_name, _doc, _symbols) in enumerate(_native.PROPERTIES):
 
 def _rebuild_states(columns, region, phase, status, units, origin):  # type: ignore[no-untyped-def]
     return StateArray._make(columns, region, phase, status, units, origin)
+
+
+_TRANSPORT = tuple(row[0] for row in _native.TRANSPORT)
+_TRANSPORT_SYMBOLS = {row[0]: dict(zip(("native", "si", "metric", "us"), row[2])) for row in _native.TRANSPORT}
+
+
+class _Flagged:
+    """What the derived array results share: ``status``, ``ok``, ``shape``."""
+
+    __slots__ = ("status", "units")
+
+    status: np.ndarray
+    units: Units
+
+    @property
+    def ok(self) -> np.ndarray:
+        """True where the element was computed (``status == Status.OK``)."""
+        return self.status == Status.OK
+
+    @property
+    def shape(self) -> tuple[int, ...]:
+        return self.status.shape
+
+    @property
+    def size(self) -> int:
+        return int(self.status.size)
+
+    def __len__(self) -> int:
+        if not self.shape:
+            raise TypeError(f"len() of a 0-d {type(self).__name__}")
+        return self.shape[0]
+
+
+def _transport_column(k: int, doc: str) -> property:
+    def get(self: TransportArray) -> np.ndarray:
+        return self._columns[k]
+
+    return property(get, doc=f"{doc} NaN where the element is flagged.")
+
+
+class TransportArray(_Flagged):
+    """Transport properties per element (``StateArray.transport()``):
+    ``viscosity, thermal_conductivity, kinematic_viscosity,
+    thermal_diffusivity, prandtl_number`` as float64 arrays of the states'
+    shape in ``units``, and ``status`` / ``ok`` per element."""
+
+    __slots__ = ("_columns",)
+
+    _columns: np.ndarray
+
+    def __init__(self) -> None:
+        raise TypeError("TransportArray results come from StateArray.transport()")
+
+    @classmethod
+    def _make(cls, columns: np.ndarray, status: np.ndarray, units: Units) -> TransportArray:
+        self = object.__new__(cls)
+        self._columns, self.status, self.units = columns, status, Units(units)
+        return self
+
+    def unit(self, name: str) -> str:
+        """The unit symbol of ``name`` in these units, e.g. "Pa·s"."""
+        return _TRANSPORT_SYMBOLS[name][self.units.value]
+
+    def as_dict(self) -> dict[str, np.ndarray]:
+        """Every column and ``status`` as arrays."""
+        out = {name: self._columns[k] for k, name in enumerate(_TRANSPORT)}
+        out["status"] = self.status
+        return out
+
+    def __repr__(self) -> str:
+        flagged = self.size - int(np.count_nonzero(self.ok))
+        return f"TransportArray(shape={self.shape}, units={self.units.value!r}, {self.size - flagged} ok, {flagged} flagged)"
+
+    def __reduce__(self) -> tuple:
+        return (_rebuild_transport, (self._columns, self.status, self.units.value))
+
+
+for _k, (_name, _doc, _symbols) in enumerate(_native.TRANSPORT):
+    setattr(TransportArray, _name, _transport_column(_k, _doc))
+
+
+def _rebuild_transport(columns, status, units):  # type: ignore[no-untyped-def]
+    return TransportArray._make(columns, status, units)
+
+
+class DerivativeArray(_Flagged):
+    """One partial derivative per element (``StateArray.derivative``):
+    ``value``, a float64 array of the states' shape in ``units`` (z's unit
+    per x's unit), and ``status`` / ``ok`` per element."""
+
+    __slots__ = ("value",)
+
+    value: np.ndarray
+
+    def __init__(self) -> None:
+        raise TypeError("DerivativeArray results come from StateArray.derivative()")
+
+    @classmethod
+    def _make(cls, value: np.ndarray, status: np.ndarray, units: Units) -> DerivativeArray:
+        self = object.__new__(cls)
+        self.value, self.status, self.units = value, status, Units(units)
+        return self
+
+    def __array__(self, dtype: Any = None, copy: Any = None) -> np.ndarray:
+        return self.value if dtype is None else self.value.astype(dtype)
+
+    def __repr__(self) -> str:
+        flagged = self.size - int(np.count_nonzero(self.ok))
+        return f"DerivativeArray(shape={self.shape}, units={self.units.value!r}, {self.size - flagged} ok, {flagged} flagged)"
+
+    def __reduce__(self) -> tuple:
+        return (_rebuild_derivative, (self.value, self.status, self.units.value))
+
+
+def _rebuild_derivative(value, status, units):  # type: ignore[no-untyped-def]
+    return DerivativeArray._make(value, status, units)
 
 
 class SaturationArray:
@@ -216,6 +363,14 @@ class SaturationArray:
 
     def __len__(self) -> int:
         return len(self.liquid)
+
+    @property
+    def surface_tension(self) -> np.ndarray:
+        """Surface tension between the saturated phases (IAPWS R1-76(2014)):
+        N/m (native, si, metric), lbf/ft (us); NaN where the point is bad."""
+        flat = np.broadcast_to(self._value, self.shape).reshape(-1)
+        values, _ = _native.surface_tension_many(self._by, flat, self._units, None, self.units)
+        return values.reshape(self.shape)  # type: ignore[no-any-return]
 
     def mixture(self, x: Any, *, errors: Any = None, threads: Any = None) -> StateArray:
         """Wet steam of vapour quality ``x`` (0 ≤ x ≤ 1), broadcast against

@@ -78,7 +78,9 @@ class Status(enum.IntEnum):
     NOT_FINITE -> NotFiniteError; OUT_OF_RANGE, NO_STATE_IN_RANGE and
     BACKWARD_EQUATION_OUT_OF_RANGE -> OutOfRangeError; QUALITY_OUT_OF_RANGE
     -> QualityOutOfRangeError; NOT_CONVERGED -> NotConvergedError;
-    UNDEFINED (a quantity the state does not have) -> SteamError.
+    UNDEFINED (a quantity the state does not have) -> SteamError;
+    INVALID_PLANT -> InvalidPlantError; NOT_FIXED_BY_MEASUREMENT ->
+    NotFixedByMeasurementError.
     """
 
     OK = 0
@@ -89,4 +91,6 @@ class Status(enum.IntEnum):
     BACKWARD_EQUATION_OUT_OF_RANGE = 5
     NOT_CONVERGED = 6
     UNDEFINED = 7
+    INVALID_PLANT = 8
+    NOT_FIXED_BY_MEASUREMENT = 9
     OTHER = 255

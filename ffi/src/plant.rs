@@ -1,0 +1,103 @@
+//! The plant layer through the C ABI: a whole regenerative reheat cycle
+//! from a caller-owned description into a caller-owned result block, and
+//! the turbine section and pump as scalar calls.
+//!
+//! Nothing is computed here: the description is decoded into the core's
+//! `CycleSpec` (`spec`), `ebullio::plant::solve_cycle` solves it, and its
+//! `CycleResult` is copied field by field into the C block (`result`), so
+//! C reads the bits Rust computes. The component calls (`components`) are
+//! one core call each.
+
+mod components;
+mod result;
+mod spec;
+
+#[cfg(test)]
+mod abi_tests;
+
+pub use components::{
+    ebullio_pump_compression, ebullio_section_efficiency, ebullio_turbine_expansion,
+    EbullioCompression, EbullioExpansion,
+};
+pub use result::{
+    EbullioComponentKind, EbullioCycleComponent, EbullioCyclePoint, EbullioCycleResult,
+    EbullioPointRole, EbullioStream, EBULLIO_MAX_COMPONENTS, EBULLIO_MAX_POINTS,
+    EBULLIO_MAX_STREAMS,
+};
+pub use spec::{
+    EbullioCasing, EbullioCycleSpec, EbullioDrains, EbullioHeater, EbullioHeaterKind,
+    EbullioSupplyKind, EBULLIO_MAX_CASINGS, EBULLIO_MAX_HEATERS,
+};
+
+use ebullio::plant::solve_cycle;
+
+use crate::args::{read_in_struct, OutStruct};
+use crate::boundary::boundary;
+use crate::codes;
+use crate::detail::{report, EbullioErrorDetail};
+use crate::status::EbullioStatus;
+
+/// Solves the cycle `*spec` describes into `*out`: every state point, the
+/// streams and balances of every component, and the cycle's totals, per
+/// unit mass of throttle steam in the description's units.
+///
+/// `spec` and `out` must not be null, and their `size` fields must be set
+/// (`sizeof(EbullioCycleSpec)`, `sizeof(EbullioCycleResult)`). `detail`
+/// may be null; when it is not (its `size` set), it is filled if the call
+/// fails, with the core's reason (e.g. which heater balance failed).
+/// `*out` is written only on success.
+///
+/// Statuses beside the usual ones: `EBULLIO_STATUS_UNKNOWN_PLANT_CODE`
+/// for a kind, drains or flag value that is none of its values (or a
+/// reserved field that is not 0), `EBULLIO_STATUS_BAD_LENGTH` for a casing
+/// or heater count above its array, `EBULLIO_STATUS_INVALID_PLANT` for a
+/// description the solver refuses.
+///
+/// # Safety
+/// `spec` must point to a readable `EbullioCycleSpec` of at least the
+/// `size` it declares; `out` to a writable `EbullioCycleResult` of at
+/// least the `size` it declares; `detail`, if not null, to an
+/// `EbullioErrorDetail`.
+#[no_mangle]
+pub unsafe extern "C" fn ebullio_cycle_solve(
+    spec: *const EbullioCycleSpec,
+    out: *mut EbullioCycleResult,
+    detail: *mut EbullioErrorDetail,
+) -> EbullioStatus {
+    boundary!(EbullioStatus::Panic => {
+        // SAFETY: the caller's contract for `detail`, as documented.
+        let detail = match unsafe { OutStruct::optional(detail) } {
+            Ok(d) => d,
+            Err(status) => return status,
+        };
+        let fail = |status: EbullioStatus, units| {
+            report(&detail, || EbullioErrorDetail::of_status(status, units));
+            status
+        };
+        // SAFETY: the caller's contract for `spec`, as documented.
+        let given = match unsafe { read_in_struct(spec, EbullioCycleSpec::zeroed()) } {
+            Ok(s) => s,
+            Err(status) => return fail(status, ebullio::Units::Native),
+        };
+        let units = codes::units(given.units).unwrap_or(ebullio::Units::Native);
+        // SAFETY: the caller's contract for `out`, as documented.
+        let out = match unsafe { OutStruct::new(out) } {
+            Ok(o) => o,
+            Err(status) => return fail(status, units),
+        };
+        let core_spec = match given.decode() {
+            Ok(s) => s,
+            Err(status) => return fail(status, units),
+        };
+        match solve_cycle(&core_spec) {
+            Ok(result) => {
+                out.write(&EbullioCycleResult::of(&result));
+                EbullioStatus::Ok
+            }
+            Err(e) => {
+                report(&detail, || EbullioErrorDetail::of_error(&e, units));
+                EbullioStatus::from(&e)
+            }
+        }
+    })
+}

@@ -1,0 +1,644 @@
+//! The plant calls from Rust, against the core they wrap: the same bits,
+//! the codes mirrored, every refusal with its status, outputs untouched
+//! on failure.
+
+use core::mem::size_of;
+use core::ptr;
+
+use ebullio::plant::{
+    compress, expand, section_efficiency, solve_cycle, Casing, ComponentKind, CycleSpec, Drains,
+    Heater, HeaterApproach, HeaterKind, PointRole, Reheat, Supply,
+};
+use ebullio::{InputPair, Method, Property, State, Units};
+
+use crate::*;
+
+/// The (invented) demo plant, Tallowmere Unit 3, in metric engineering
+/// units (bar, °C), both as the C block and as the core's description.
+/// Numbers beyond DESIGN.md (feed pressure 187 bar, condensate pump 0.80)
+/// are invented for the demo.
+fn tallowmere() -> (EbullioCycleSpec, CycleSpec) {
+    let mut c = EbullioCycleSpec::zeroed();
+    c.units = EbullioUnits::MetricEngineering as u32;
+    c.supply_kind = EbullioSupplyKind::Superheated as u32;
+    c.supply_pressure = 167.0;
+    c.supply_temperature = 538.0;
+    c.has_reheat = 1;
+    c.reheat_pressure = 37.0;
+    c.reheat_temperature = 538.0;
+    c.has_feed_pressure = 1;
+    c.feed_pressure = 187.0;
+    c.feed_pump_efficiency = 0.83;
+    c.condensate_pump_efficiency = 0.80;
+    c.condensate_subcooling = 0.0;
+    let casings = [(41.0, 0.86), (9.5, 0.90), (0.068, 0.88)];
+    c.casing_count = casings.len() as u32;
+    let mut core = CycleSpec::new(
+        Units::MetricEngineering,
+        Supply::Superheated {
+            pressure: 167.0,
+            temperature: 538.0,
+        },
+    );
+    core.reheat = Some(Reheat {
+        pressure: 37.0,
+        temperature: 538.0,
+    });
+    core.feed_pressure = Some(187.0);
+    core.feed_pump_efficiency = 0.83;
+    core.condensate_pump_efficiency = 0.80;
+    for (slot, &(p, eta)) in c.casings.iter_mut().zip(&casings) {
+        slot.exhaust_pressure = p;
+        slot.isentropic_efficiency = eta;
+        core.push_casing(Casing {
+            exhaust_pressure: p,
+            isentropic_efficiency: eta,
+        })
+        .unwrap();
+    }
+    // (extraction bar, open?, TTD K)
+    let heaters = [
+        (62.0, false, -1.0),
+        (41.0, false, 2.8),
+        (19.0, false, 2.8),
+        (9.5, true, 0.0),
+        (4.2, false, 2.8),
+        (1.6, false, 2.8),
+        (0.65, false, 2.8),
+    ];
+    c.heater_count = heaters.len() as u32;
+    for (slot, &(p, open, ttd)) in c.heaters.iter_mut().zip(&heaters) {
+        slot.extraction_pressure = p;
+        slot.extraction_line_loss = 0.03;
+        let kind = if open {
+            slot.kind = EbullioHeaterKind::Open as u32;
+            HeaterKind::Open
+        } else {
+            slot.kind = EbullioHeaterKind::Closed as u32;
+            slot.drains = EbullioDrains::CascadeBackward as u32;
+            slot.has_drain_cooler = 1;
+            slot.terminal_temperature_difference = ttd;
+            slot.drain_cooler_approach = 5.6;
+            HeaterKind::Closed {
+                approach: HeaterApproach {
+                    terminal_temperature_difference: ttd,
+                    drain_cooler_approach: Some(5.6),
+                },
+                drains: Drains::CascadeBackward,
+            }
+        };
+        core.push_heater(Heater {
+            extraction_pressure: p,
+            extraction_line_loss: 0.03,
+            kind,
+        })
+        .unwrap();
+    }
+    (c, core)
+}
+
+/// A result block with every byte set, to show what the call writes.
+fn marked_result() -> Box<EbullioCycleResult> {
+    // SAFETY: every field is an integer, a float or a C enum written below;
+    // the enum field `units` is set to a valid value before any read.
+    let mut r: Box<EbullioCycleResult> = Box::new(unsafe { core::mem::zeroed() });
+    r.size = size_of::<EbullioCycleResult>() as u32;
+    r.units = EbullioUnits::Native;
+    r.turbine_work = -1.0;
+    r
+}
+
+fn solve(spec: &EbullioCycleSpec) -> (EbullioStatus, Box<EbullioCycleResult>) {
+    let mut r = marked_result();
+    // SAFETY: a whole spec and a whole result, sizes set; no detail.
+    let status = unsafe { ebullio_cycle_solve(spec, &mut *r, ptr::null_mut()) };
+    (status, r)
+}
+
+fn same(what: &str, a: f64, b: f64) {
+    assert_eq!(a.to_bits(), b.to_bits(), "{what}: {a} vs {b}");
+}
+
+#[test]
+fn the_cycle_block_holds_the_cores_bits() {
+    let (c, core) = tallowmere();
+    let expected = solve_cycle(&core).unwrap();
+    let (status, r) = solve(&c);
+    assert_eq!(status, EbullioStatus::Ok);
+    assert_eq!(r.units, EbullioUnits::MetricEngineering);
+    for (what, a, b) in [
+        ("turbine work", r.turbine_work, expected.turbine_work),
+        ("pump work", r.pump_work, expected.pump_work),
+        ("net work", r.net_work, expected.net_work),
+        ("boiler heat", r.boiler_heat, expected.boiler_heat),
+        ("reheat heat", r.reheat_heat, expected.reheat_heat),
+        ("heat input", r.heat_input, expected.heat_input),
+        ("condenser duty", r.condenser_duty, expected.condenser_duty),
+        (
+            "efficiency",
+            r.thermal_efficiency,
+            expected.thermal_efficiency,
+        ),
+        (
+            "heat rate kJ",
+            r.heat_rate_kj_per_kwh,
+            expected.heat_rate_kj_per_kwh,
+        ),
+        (
+            "heat rate Btu",
+            r.heat_rate_btu_per_kwh,
+            expected.heat_rate_btu_per_kwh,
+        ),
+        (
+            "steam rate kg",
+            r.steam_rate_kg_per_kwh,
+            expected.steam_rate_kg_per_kwh,
+        ),
+        (
+            "steam rate lbm",
+            r.steam_rate_lbm_per_kwh,
+            expected.steam_rate_lbm_per_kwh,
+        ),
+        ("back work", r.back_work_ratio, expected.back_work_ratio),
+        ("carnot", r.carnot_efficiency, expected.carnot_efficiency),
+    ] {
+        same(what, a, b);
+    }
+    assert_eq!(expected.extraction_fractions().len(), 7);
+    for (i, f) in expected.extraction_fractions().iter().enumerate() {
+        same("fraction", r.extraction_fractions[i], *f);
+    }
+    assert!(r.extraction_fractions[7..].iter().all(|&f| f == 0.0));
+    assert_eq!(r.point_count as usize, expected.points().len());
+    for (c, p) in r.points.iter().zip(expected.points()) {
+        assert_eq!(c.role, p.label.role as u32);
+        assert_eq!(c.number, u32::from(p.label.number));
+        assert_eq!(c.phase, p.state.phase() as u32);
+        assert_eq!(c.region, p.state.region() as u32);
+        same("flow", c.flow, p.flow);
+        for (field, property) in [
+            (c.pressure, Property::Pressure),
+            (c.temperature, Property::Temperature),
+            (c.enthalpy, Property::Enthalpy),
+            (c.entropy, Property::Entropy),
+            (c.quality, Property::Quality),
+        ] {
+            same("point", field, p.state.get(property).unwrap_or(f64::NAN));
+        }
+    }
+    assert!(r.points[r.point_count as usize..]
+        .iter()
+        .all(|p| p.role == 0));
+    assert_eq!(r.component_count as usize, expected.components().len());
+    for (c, k) in r.components.iter().zip(expected.components()) {
+        assert_eq!(c.kind, k.kind as u32);
+        assert_eq!(c.number, u32::from(k.number));
+        same("heat", c.heat_in, k.heat_in);
+        same("work", c.work_out, k.work_out);
+        same(
+            "entropy generation",
+            c.entropy_generation,
+            k.entropy_generation,
+        );
+        assert_eq!(c.inlet_count as usize, k.inlets().len());
+        assert_eq!(c.outlet_count as usize, k.outlets().len());
+        for (ours, theirs) in c
+            .inlets
+            .iter()
+            .zip(k.inlets())
+            .chain(c.outlets.iter().zip(k.outlets()))
+        {
+            same("stream flow", ours.flow, theirs.flow);
+            same("stream h", ours.enthalpy, theirs.enthalpy);
+            same("stream s", ours.entropy, theirs.entropy);
+        }
+    }
+}
+
+#[test]
+fn a_saturated_supply_without_reheat_or_heaters_decodes_as_the_core_builds_it() {
+    // Moran & Shapiro's Example 8.2 arrangement (tests/tests/plant_textbook_cycles.rs).
+    let mut c = EbullioCycleSpec::zeroed();
+    c.units = EbullioUnits::MetricEngineering as u32;
+    c.supply_kind = EbullioSupplyKind::SaturatedVapour as u32;
+    c.supply_pressure = 80.0;
+    c.supply_temperature = f64::NAN; // not read
+    c.casing_count = 1;
+    c.casings[0] = EbullioCasing {
+        exhaust_pressure: 0.08,
+        isentropic_efficiency: 0.85,
+    };
+    c.feed_pump_efficiency = 0.85;
+    c.condensate_pump_efficiency = 1.0;
+    let mut core = CycleSpec::new(
+        Units::MetricEngineering,
+        Supply::SaturatedVapour { pressure: 80.0 },
+    );
+    core.push_casing(Casing {
+        exhaust_pressure: 0.08,
+        isentropic_efficiency: 0.85,
+    })
+    .unwrap();
+    core.feed_pump_efficiency = 0.85;
+    assert_eq!(c.decode(), Ok(core));
+    let (status, r) = solve(&c);
+    assert_eq!(status, EbullioStatus::Ok);
+    same(
+        "efficiency",
+        r.thermal_efficiency,
+        solve_cycle(&core).unwrap().thermal_efficiency,
+    );
+}
+
+#[test]
+fn roles_and_kinds_mirror_the_core_numbers() {
+    use EbullioComponentKind as K;
+    use EbullioPointRole as R;
+    let roles = [
+        (R::Throttle, PointRole::Throttle),
+        (R::CasingExhaust, PointRole::CasingExhaust),
+        (R::HotReheat, PointRole::HotReheat),
+        (R::Extraction, PointRole::Extraction),
+        (R::HeaterSteam, PointRole::HeaterSteam),
+        (R::FeedwaterOut, PointRole::FeedwaterOut),
+        (R::Drain, PointRole::Drain),
+        (R::DrainPumped, PointRole::DrainPumped),
+        (R::FeedwaterMixed, PointRole::FeedwaterMixed),
+        (R::PumpOutlet, PointRole::PumpOutlet),
+        (R::Hotwell, PointRole::Hotwell),
+        (R::CondensatePumpOutlet, PointRole::CondensatePumpOutlet),
+        (R::BoilerInlet, PointRole::BoilerInlet),
+    ];
+    for (k, (c, core)) in roles.iter().enumerate() {
+        assert_eq!(*c as u32, *core as u32);
+        assert_eq!(*c as usize, k + 1);
+        assert_eq!(format!("{c:?}"), format!("{core:?}"));
+        assert_eq!(super::result::role_code(*core), *c);
+    }
+    let kinds = [
+        (K::StageGroup, ComponentKind::StageGroup),
+        (K::ExtractionLine, ComponentKind::ExtractionLine),
+        (K::ClosedHeater, ComponentKind::ClosedHeater),
+        (K::OpenHeater, ComponentKind::OpenHeater),
+        (K::DrainPump, ComponentKind::DrainPump),
+        (K::MixingPoint, ComponentKind::MixingPoint),
+        (K::Pump, ComponentKind::Pump),
+        (K::CondensatePump, ComponentKind::CondensatePump),
+        (K::Boiler, ComponentKind::Boiler),
+        (K::Reheater, ComponentKind::Reheater),
+        (K::Condenser, ComponentKind::Condenser),
+    ];
+    for (k, (c, core)) in kinds.iter().enumerate() {
+        assert_eq!(*c as u32, *core as u32);
+        assert_eq!(*c as usize, k + 1);
+        assert_eq!(format!("{c:?}"), format!("{core:?}"));
+        assert_eq!(super::result::kind_code(*core), *c);
+    }
+}
+
+fn detail_text(d: &EbullioErrorDetail) -> String {
+    let bytes: Vec<u8> = d
+        .message
+        .iter()
+        .take_while(|&&c| c != 0)
+        .map(|&c| c as u8)
+        .collect();
+    String::from_utf8(bytes).unwrap()
+}
+
+fn blank_detail() -> EbullioErrorDetail {
+    EbullioErrorDetail::of_status(EbullioStatus::Panic, Units::Native)
+}
+
+#[test]
+fn every_refusal_has_its_status_and_writes_nothing() {
+    let (good, _) = tallowmere();
+    let refused = |spec: &EbullioCycleSpec, want: EbullioStatus| {
+        let mut r = marked_result();
+        let before = r.clone();
+        let mut d = blank_detail();
+        // SAFETY: whole structs with their sizes set.
+        let status = unsafe { ebullio_cycle_solve(spec, &mut *r, &mut d) };
+        assert_eq!(status, want);
+        assert_eq!(d.status, want);
+        assert_eq!(*r, *before, "the result was written on failure");
+        detail_text(&d)
+    };
+    let mut s = good;
+    s.supply_kind = 3;
+    refused(&s, EbullioStatus::UnknownPlantCode);
+    let mut s = good;
+    s.has_reheat = 2;
+    refused(&s, EbullioStatus::UnknownPlantCode);
+    let mut s = good;
+    s.reserved = 1;
+    refused(&s, EbullioStatus::UnknownPlantCode);
+    let mut s = good;
+    s.heaters[2].drains = 0;
+    refused(&s, EbullioStatus::UnknownPlantCode);
+    let mut s = good;
+    s.heaters[0].kind = 0;
+    refused(&s, EbullioStatus::UnknownPlantCode);
+    let mut s = good;
+    s.units = 9;
+    refused(&s, EbullioStatus::UnknownUnits);
+    let mut s = good;
+    s.heater_count = 13;
+    refused(&s, EbullioStatus::BadLength);
+    let mut s = good;
+    s.casing_count = 5;
+    refused(&s, EbullioStatus::BadLength);
+    let mut s = good;
+    s.size -= 8;
+    refused(&s, EbullioStatus::BadStructSize);
+    // The core's refusals, with its reason in the detail.
+    let mut s = good;
+    s.casings[1].isentropic_efficiency = 1.5;
+    let text = refused(&s, EbullioStatus::InvalidPlant);
+    assert!(text.contains("isentropic efficiency"), "{text}");
+    let mut s = good;
+    s.heaters.swap(0, 1);
+    let text = refused(&s, EbullioStatus::InvalidPlant);
+    assert!(
+        text.starts_with("the plant description is not valid"),
+        "{text}"
+    );
+    let mut s = good;
+    s.casing_count = 0;
+    refused(&s, EbullioStatus::InvalidPlant);
+    let mut s = good;
+    s.supply_pressure = f64::NAN;
+    refused(&s, EbullioStatus::NotFinite);
+
+    // Null pointers and a short result block.
+    let mut r = marked_result();
+    let mut d = blank_detail();
+    // SAFETY: null pointers are refused before any access.
+    unsafe {
+        assert_eq!(
+            ebullio_cycle_solve(ptr::null(), &mut *r, &mut d),
+            EbullioStatus::NullPointer
+        );
+        assert_eq!(d.status, EbullioStatus::NullPointer);
+        assert_eq!(
+            ebullio_cycle_solve(&good, ptr::null_mut(), ptr::null_mut()),
+            EbullioStatus::NullPointer
+        );
+    }
+    r.size = 100;
+    // SAFETY: the size is refused before anything is written.
+    let status = unsafe { ebullio_cycle_solve(&good, &mut *r, ptr::null_mut()) };
+    assert_eq!(status, EbullioStatus::BadStructSize);
+    assert_eq!(r.turbine_work, -1.0);
+}
+
+fn blank_expansion() -> EbullioExpansion {
+    EbullioExpansion {
+        size: size_of::<EbullioExpansion>() as u32,
+        units: EbullioUnits::Native,
+        work: -1.0,
+        isentropic_work: -1.0,
+        isentropic_efficiency: -1.0,
+        entropy_generation: -1.0,
+    }
+}
+
+fn blank_state() -> EbullioState {
+    let mut s = EbullioState::of(&State::from_pt(3.0, 300.0, Units::Native).unwrap());
+    s.pressure = -1.0;
+    s.enthalpy = -1.0;
+    s.quality = -1.0; // not NaN, so that untouched compares equal
+    s
+}
+
+fn same_state(c: &EbullioState, core: &State) {
+    for (field, property) in [
+        (c.pressure, Property::Pressure),
+        (c.temperature, Property::Temperature),
+        (c.enthalpy, Property::Enthalpy),
+        (c.entropy, Property::Entropy),
+        (c.quality, Property::Quality),
+        (c.density, Property::Density),
+    ] {
+        same("state", field, core.get(property).unwrap_or(f64::NAN));
+    }
+}
+
+#[test]
+fn the_turbine_and_pump_calls_give_the_cores_bits() {
+    let units = Units::MetricEngineering;
+    // HP casing of the demo plant.
+    let inlet = State::from_pt(167.0, 538.0, units).unwrap();
+    let core = expand(&inlet, 41.0, 0.86).unwrap();
+    let (mut e, mut out, mut ideal) = (blank_expansion(), blank_state(), blank_state());
+    // SAFETY: whole structs, sizes set; no detail.
+    let status = unsafe {
+        ebullio_turbine_expansion(
+            InputPair::PressureTemperature as u32,
+            167.0,
+            538.0,
+            41.0,
+            0.86,
+            units as u32,
+            &mut e,
+            &mut out,
+            &mut ideal,
+            ptr::null_mut(),
+        )
+    };
+    assert_eq!(status, EbullioStatus::Ok);
+    assert_eq!(e.units, EbullioUnits::MetricEngineering);
+    same("work", e.work, core.work);
+    same("isentropic work", e.isentropic_work, core.isentropic_work);
+    same(
+        "efficiency",
+        e.isentropic_efficiency,
+        core.isentropic_efficiency,
+    );
+    same("generation", e.entropy_generation, core.entropy_generation);
+    same_state(&out, &core.exhaust);
+    same_state(&ideal, &core.isentropic_exhaust);
+
+    // The same section measured at both ends (superheated exhaust).
+    let t_out = core.exhaust.temperature();
+    let measured = section_efficiency(167.0, 538.0, 41.0, t_out, units).unwrap();
+    let mut m = blank_expansion();
+    // SAFETY: as above; optional states null.
+    let status = unsafe {
+        ebullio_section_efficiency(
+            167.0,
+            538.0,
+            41.0,
+            t_out,
+            units as u32,
+            &mut m,
+            ptr::null_mut(),
+            ptr::null_mut(),
+            ptr::null_mut(),
+        )
+    };
+    assert_eq!(status, EbullioStatus::Ok);
+    same(
+        "measured efficiency",
+        m.isentropic_efficiency,
+        measured.isentropic_efficiency,
+    );
+
+    // The boiler feed pump from the deaerator (saturated liquid at 9.215 bar).
+    let water = State::solve(InputPair::PressureQuality, 9.215, 0.0, units, Method::Exact).unwrap();
+    let pump = compress(&water, 187.0, 0.83).unwrap();
+    let mut c = EbullioCompression {
+        size: size_of::<EbullioCompression>() as u32,
+        units: EbullioUnits::Native,
+        work: -1.0,
+        isentropic_work: -1.0,
+        incompressible_work: -1.0,
+        isentropic_efficiency: -1.0,
+        temperature_rise: -1.0,
+        entropy_generation: -1.0,
+    };
+    let mut outlet = blank_state();
+    // SAFETY: as above.
+    let status = unsafe {
+        ebullio_pump_compression(
+            InputPair::PressureQuality as u32,
+            9.215,
+            0.0,
+            187.0,
+            0.83,
+            units as u32,
+            &mut c,
+            &mut outlet,
+            ptr::null_mut(),
+            ptr::null_mut(),
+        )
+    };
+    assert_eq!(status, EbullioStatus::Ok);
+    same("pump work", c.work, pump.work);
+    same(
+        "incompressible",
+        c.incompressible_work,
+        pump.incompressible_work,
+    );
+    same("rise", c.temperature_rise, pump.temperature_rise);
+    same_state(&outlet, &pump.outlet);
+}
+
+#[test]
+fn the_component_calls_refuse_with_statuses_and_write_nothing() {
+    let units = Units::MetricEngineering as u32;
+    // A wet exhaust read as (p, T): 0.068 bar at its saturation temperature.
+    let t_sat = State::solve(
+        InputPair::PressureQuality,
+        0.068,
+        1.0,
+        Units::MetricEngineering,
+        Method::Exact,
+    )
+    .unwrap()
+    .temperature();
+    let (mut e, mut out) = (blank_expansion(), blank_state());
+    let before = (e, out);
+    let mut d = blank_detail();
+    // SAFETY: whole structs, sizes set.
+    let status = unsafe {
+        ebullio_section_efficiency(
+            9.5,
+            350.0,
+            0.068,
+            t_sat,
+            units,
+            &mut e,
+            &mut out,
+            ptr::null_mut(),
+            &mut d,
+        )
+    };
+    assert_eq!(status, EbullioStatus::NotFixedByMeasurement);
+    assert_eq!(d.status, EbullioStatus::NotFixedByMeasurement);
+    // The core's text is longer than the detail's capacity: its start is kept.
+    assert!(detail_text(&d).starts_with("the section exhaust is at or below its saturation"));
+    assert_eq!((e, out), before);
+    // SAFETY: as above.
+    unsafe {
+        let status = ebullio_turbine_expansion(
+            1,
+            167.0,
+            538.0,
+            41.0,
+            1.2,
+            units,
+            &mut e,
+            &mut out,
+            ptr::null_mut(),
+            &mut d,
+        );
+        assert_eq!(status, EbullioStatus::InvalidPlant);
+        let status = ebullio_turbine_expansion(
+            0,
+            167.0,
+            538.0,
+            41.0,
+            0.9,
+            units,
+            &mut e,
+            &mut out,
+            ptr::null_mut(),
+            &mut d,
+        );
+        assert_eq!(status, EbullioStatus::UnknownInputPair);
+        let status = ebullio_turbine_expansion(
+            1,
+            167.0,
+            538.0,
+            41.0,
+            0.9,
+            7,
+            &mut e,
+            ptr::null_mut(),
+            ptr::null_mut(),
+            &mut d,
+        );
+        assert_eq!(status, EbullioStatus::UnknownUnits);
+        let status = ebullio_turbine_expansion(
+            1,
+            167.0,
+            538.0,
+            41.0,
+            0.9,
+            units,
+            ptr::null_mut(),
+            &mut out,
+            ptr::null_mut(),
+            &mut d,
+        );
+        assert_eq!(status, EbullioStatus::NullPointer);
+        assert_eq!(d.status, EbullioStatus::NullPointer);
+        // A pump fed with steam.
+        let mut c = EbullioCompression {
+            size: size_of::<EbullioCompression>() as u32,
+            units: EbullioUnits::Native,
+            work: -1.0,
+            isentropic_work: -1.0,
+            incompressible_work: -1.0,
+            isentropic_efficiency: -1.0,
+            temperature_rise: -1.0,
+            entropy_generation: -1.0,
+        };
+        let status = ebullio_pump_compression(
+            1,
+            9.5,
+            300.0,
+            187.0,
+            0.83,
+            units,
+            &mut c,
+            &mut out,
+            ptr::null_mut(),
+            &mut d,
+        );
+        assert_eq!(status, EbullioStatus::InvalidPlant);
+        assert_eq!(c.work, -1.0);
+    }
+    assert_eq!((e, out), before);
+}

@@ -1,0 +1,305 @@
+/*
+ * The plant calls of the C ABI from C99: the demo plant solved through
+ * ebullio_cycle_solve and compared bit for bit with the Rust core's own
+ * numbers (printed by `cargo run --example plant_reference`, the file
+ * named by argv[1]); a recalled textbook cycle; the turbine and pump
+ * calls; and the refusals. Built by ffi/tests/run.sh with
+ *   -std=c99 -Wall -Wextra -Werror -pedantic
+ */
+#include <inttypes.h>
+#include <math.h>
+#include <stdint.h>
+#include <stdio.h>
+#include <string.h>
+
+#include "ebullio.h"
+
+static int checks = 0;
+static int failures = 0;
+
+#define CHECK(cond)                                                        \
+    do {                                                                   \
+        ++checks;                                                          \
+        if (!(cond)) {                                                     \
+            ++failures;                                                    \
+            fprintf(stderr, "%s:%d: check failed: %s\n", __FILE__,         \
+                    __LINE__, #cond);                                      \
+        }                                                                  \
+    } while (0)
+
+#define CHECK_STATUS(got, want)                                            \
+    do {                                                                   \
+        EbullioStatus got_ = (got);                                        \
+        ++checks;                                                          \
+        if (got_ != (want)) {                                              \
+            ++failures;                                                    \
+            fprintf(stderr, "%s:%d: status %d (%s), expected %s\n",        \
+                    __FILE__, __LINE__, (int)got_,                         \
+                    ebullio_status_message(got_), #want);                  \
+        }                                                                  \
+    } while (0)
+
+/* Large blocks live in static storage, not on the stack. */
+static EbullioCycleSpec spec;
+static EbullioCycleResult result;
+
+/* The demo plant (invented): Tallowmere Unit 3, metric engineering units
+   (bar, degC). Feed pressure 187 bar and condensate pump 0.80 are invented
+   beside DESIGN.md's numbers, as in ffi/examples/plant_reference.rs. */
+static void tallowmere(EbullioCycleSpec *s) {
+    static const double casings[3][2] = {{41.0, 0.86}, {9.5, 0.90}, {0.068, 0.88}};
+    static const double heaters[7][3] = {/* extraction bar, open?, TTD K */
+                                         {62.0, 0, -1.0}, {41.0, 0, 2.8}, {19.0, 0, 2.8},
+                                         {9.5, 1, 0.0},   {4.2, 0, 2.8},  {1.6, 0, 2.8},
+                                         {0.65, 0, 2.8}};
+    unsigned i;
+    memset(s, 0, sizeof *s);
+    s->size = (uint32_t)sizeof *s;
+    s->units = EBULLIO_UNITS_METRIC_ENGINEERING;
+    s->supply_kind = EBULLIO_SUPPLY_KIND_SUPERHEATED;
+    s->supply_pressure = 167.0;
+    s->supply_temperature = 538.0;
+    s->has_reheat = 1;
+    s->reheat_pressure = 37.0;
+    s->reheat_temperature = 538.0;
+    s->has_feed_pressure = 1;
+    s->feed_pressure = 187.0;
+    s->feed_pump_efficiency = 0.83;
+    s->condensate_pump_efficiency = 0.80;
+    s->condensate_subcooling = 0.0;
+    s->casing_count = 3;
+    for (i = 0; i < 3; ++i) {
+        s->casings[i].exhaust_pressure = casings[i][0];
+        s->casings[i].isentropic_efficiency = casings[i][1];
+    }
+    s->heater_count = 7;
+    for (i = 0; i < 7; ++i) {
+        EbullioHeater *h = &s->heaters[i];
+        h->extraction_pressure = heaters[i][0];
+        h->extraction_line_loss = 0.03;
+        if (heaters[i][1] != 0.0) {
+            h->kind = EBULLIO_HEATER_KIND_OPEN;
+        } else {
+            h->kind = EBULLIO_HEATER_KIND_CLOSED;
+            h->drains = EBULLIO_DRAINS_CASCADE_BACKWARD;
+            h->terminal_temperature_difference = heaters[i][2];
+            h->has_drain_cooler = 1;
+            h->drain_cooler_approach = 5.6;
+        }
+    }
+}
+
+static FILE *reference;
+
+/* The next number the Rust core printed, as its bits. */
+static uint64_t next_bits(void) {
+    uint64_t bits = 0;
+    if (fscanf(reference, "%" SCNx64, &bits) != 1) {
+        ++failures;
+        fprintf(stderr, "reference file ended early\n");
+    }
+    return bits;
+}
+
+static void same(const char *what, double value) {
+    uint64_t want = next_bits(), got;
+    memcpy(&got, &value, sizeof got);
+    ++checks;
+    if (got != want) {
+        ++failures;
+        fprintf(stderr, "%s: %.17g has bits %016" PRIx64 ", the core's are %016" PRIx64 "\n",
+                what, value, got, want);
+    }
+}
+
+static void stream(const EbullioStream *s) {
+    same("stream flow", s->flow);
+    same("stream enthalpy", s->enthalpy);
+    same("stream entropy", s->entropy);
+}
+
+static void demo_plant_bit_for_bit(void) {
+    EbullioErrorDetail why;
+    uint32_t i, j;
+    tallowmere(&spec);
+    memset(&why, 0, sizeof why);
+    why.size = (uint32_t)sizeof why;
+    memset(&result, 0, sizeof result);
+    result.size = (uint32_t)sizeof result;
+    CHECK_STATUS(ebullio_cycle_solve(&spec, &result, &why), EBULLIO_STATUS_OK);
+    CHECK(result.units == EBULLIO_UNITS_METRIC_ENGINEERING);
+    CHECK(result.size == sizeof result);
+    same("turbine work", result.turbine_work);
+    same("pump work", result.pump_work);
+    same("net work", result.net_work);
+    same("boiler heat", result.boiler_heat);
+    same("reheat heat", result.reheat_heat);
+    same("heat input", result.heat_input);
+    same("condenser duty", result.condenser_duty);
+    same("thermal efficiency", result.thermal_efficiency);
+    same("heat rate kJ/kWh", result.heat_rate_kj_per_kwh);
+    same("heat rate Btu/kWh", result.heat_rate_btu_per_kwh);
+    same("steam rate kg/kWh", result.steam_rate_kg_per_kwh);
+    same("steam rate lbm/kWh", result.steam_rate_lbm_per_kwh);
+    same("back work ratio", result.back_work_ratio);
+    same("Carnot efficiency", result.carnot_efficiency);
+    same("point count", (double)result.point_count);
+    same("component count", (double)result.component_count);
+    for (i = 0; i < spec.heater_count; ++i) {
+        same("extraction fraction", result.extraction_fractions[i]);
+    }
+    for (i = 0; i < result.point_count; ++i) {
+        const EbullioCyclePoint *p = &result.points[i];
+        same("point flow", p->flow);
+        same("point pressure", p->pressure);
+        same("point temperature", p->temperature);
+        same("point enthalpy", p->enthalpy);
+        same("point entropy", p->entropy);
+        same("point quality", p->quality);
+        CHECK(p->role >= EBULLIO_POINT_ROLE_THROTTLE && p->role <= EBULLIO_POINT_ROLE_BOILER_INLET);
+        CHECK(isnan(p->quality) == (p->phase != EBULLIO_PHASE_WET_STEAM &&
+                                    p->phase != EBULLIO_PHASE_SATURATED_LIQUID &&
+                                    p->phase != EBULLIO_PHASE_SATURATED_VAPOUR));
+    }
+    CHECK(result.points[0].role == EBULLIO_POINT_ROLE_THROTTLE);
+    CHECK(result.points[result.point_count].role == 0);
+    for (i = 0; i < result.component_count; ++i) {
+        const EbullioCycleComponent *c = &result.components[i];
+        same("heat in", c->heat_in);
+        same("work out", c->work_out);
+        same("entropy generation", c->entropy_generation);
+        for (j = 0; j < c->inlet_count; ++j) {
+            stream(&c->inlets[j]);
+        }
+        for (j = 0; j < c->outlet_count; ++j) {
+            stream(&c->outlets[j]);
+        }
+    }
+    {
+        uint64_t extra;
+        CHECK(fscanf(reference, "%" SCNx64, &extra) == EOF); /* every number compared */
+    }
+}
+
+static void textbook_cycle(void) {
+    /* recalled from Cengel & Boles, Thermodynamics: An Engineering Approach,
+       Example 10-1: ideal Rankine cycle, 3 MPa, 350 degC, condenser 75 kPa;
+       thermal efficiency 26.0 %, turbine exhaust quality 0.886. */
+    memset(&spec, 0, sizeof spec);
+    spec.size = (uint32_t)sizeof spec;
+    spec.units = EBULLIO_UNITS_NATIVE;
+    spec.supply_kind = EBULLIO_SUPPLY_KIND_SUPERHEATED;
+    spec.supply_pressure = 3.0;
+    spec.supply_temperature = 623.15;
+    spec.feed_pump_efficiency = 1.0;
+    spec.condensate_pump_efficiency = 1.0;
+    spec.casing_count = 1;
+    spec.casings[0].exhaust_pressure = 0.075;
+    spec.casings[0].isentropic_efficiency = 1.0;
+    memset(&result, 0, sizeof result);
+    result.size = (uint32_t)sizeof result;
+    CHECK_STATUS(ebullio_cycle_solve(&spec, &result, NULL), EBULLIO_STATUS_OK);
+    CHECK(fabs(result.thermal_efficiency - 0.260) <= 0.0015);
+    CHECK(result.points[1].role == EBULLIO_POINT_ROLE_CASING_EXHAUST);
+    CHECK(fabs(result.points[1].quality - 0.886) <= 0.002);
+    CHECK(result.reheat_heat == 0.0);
+}
+
+static void components(void) {
+    EbullioExpansion e;
+    EbullioCompression c;
+    EbullioState exhaust, ideal, before;
+    EbullioErrorDetail why;
+    memset(&e, 0, sizeof e);
+    e.size = (uint32_t)sizeof e;
+    memset(&exhaust, 0, sizeof exhaust);
+    exhaust.size = (uint32_t)sizeof exhaust;
+    ideal = exhaust;
+    memset(&why, 0, sizeof why);
+    why.size = (uint32_t)sizeof why;
+    /* The demo plant's HP casing, 167 bar / 538 degC to 41 bar at 0.86. */
+    CHECK_STATUS(ebullio_turbine_expansion(EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, 167.0, 538.0,
+                                           41.0, 0.86, EBULLIO_UNITS_METRIC_ENGINEERING, &e,
+                                           &exhaust, &ideal, &why),
+                 EBULLIO_STATUS_OK);
+    CHECK(fabs(e.isentropic_efficiency - 0.86) < 1e-12);
+    CHECK(exhaust.pressure == 41.0 && ideal.pressure == 41.0);
+    CHECK(e.work > 0.0 && e.work < e.isentropic_work);
+    CHECK(e.entropy_generation > 0.0);
+    /* The section measured at both ends gives its efficiency back. */
+    CHECK_STATUS(ebullio_section_efficiency(167.0, 538.0, 41.0, exhaust.temperature,
+                                            EBULLIO_UNITS_METRIC_ENGINEERING, &e, NULL, NULL,
+                                            NULL),
+                 EBULLIO_STATUS_OK);
+    CHECK(fabs(e.isentropic_efficiency - 0.86) < 1e-9);
+    /* An LP exhaust read at its saturation temperature is wet: refused. */
+    before = exhaust;
+    CHECK_STATUS(ebullio_section_efficiency(9.5, 350.0, 0.068, 38.0,
+                                            EBULLIO_UNITS_METRIC_ENGINEERING, &e, &exhaust, NULL,
+                                            &why),
+                 EBULLIO_STATUS_NOT_FIXED_BY_MEASUREMENT);
+    CHECK(why.status == EBULLIO_STATUS_NOT_FIXED_BY_MEASUREMENT);
+    CHECK(strstr(why.message, "wet") != NULL);
+    CHECK(memcmp(&exhaust, &before, sizeof exhaust) == 0);
+    /* The boiler feed pump from saturated liquid at 9.215 bar. */
+    memset(&c, 0, sizeof c);
+    c.size = (uint32_t)sizeof c;
+    CHECK_STATUS(ebullio_pump_compression(EBULLIO_INPUT_PAIR_PRESSURE_QUALITY, 9.215, 0.0, 187.0,
+                                          0.83, EBULLIO_UNITS_METRIC_ENGINEERING, &c, &exhaust,
+                                          NULL, NULL),
+                 EBULLIO_STATUS_OK);
+    CHECK(fabs(c.isentropic_efficiency - 0.83) < 1e-12);
+    CHECK(c.work > c.isentropic_work && c.isentropic_work > 0.0);
+    CHECK(exhaust.phase == EBULLIO_PHASE_COMPRESSED_LIQUID);
+    /* Refusals. */
+    CHECK_STATUS(ebullio_turbine_expansion(1, 167.0, 538.0, 41.0, 1.3, 2, &e, NULL, NULL, &why),
+                 EBULLIO_STATUS_INVALID_PLANT);
+    CHECK(why.status == EBULLIO_STATUS_INVALID_PLANT);
+    CHECK_STATUS(ebullio_turbine_expansion(1, 167.0, 538.0, 41.0, 0.9, 2, NULL, NULL, NULL, NULL),
+                 EBULLIO_STATUS_NULL_POINTER);
+    CHECK_STATUS(ebullio_pump_compression(1, 9.5, 300.0, 187.0, 0.83, 2, &c, NULL, NULL, NULL),
+                 EBULLIO_STATUS_INVALID_PLANT);
+}
+
+static void refusals(void) {
+    EbullioErrorDetail why;
+    double marked;
+    memset(&why, 0, sizeof why);
+    why.size = (uint32_t)sizeof why;
+    memset(&result, 0, sizeof result);
+    result.size = (uint32_t)sizeof result;
+    result.turbine_work = -1.0;
+    marked = result.turbine_work;
+    tallowmere(&spec);
+    spec.casings[1].isentropic_efficiency = 1.5;
+    CHECK_STATUS(ebullio_cycle_solve(&spec, &result, &why), EBULLIO_STATUS_INVALID_PLANT);
+    CHECK(why.status == EBULLIO_STATUS_INVALID_PLANT);
+    CHECK(strstr(why.message, "isentropic efficiency") != NULL);
+    tallowmere(&spec);
+    spec.heaters[2].drains = 7;
+    CHECK_STATUS(ebullio_cycle_solve(&spec, &result, NULL), EBULLIO_STATUS_UNKNOWN_PLANT_CODE);
+    tallowmere(&spec);
+    spec.heater_count = EBULLIO_MAX_HEATERS + 1;
+    CHECK_STATUS(ebullio_cycle_solve(&spec, &result, NULL), EBULLIO_STATUS_BAD_LENGTH);
+    tallowmere(&spec);
+    spec.size = 8;
+    CHECK_STATUS(ebullio_cycle_solve(&spec, &result, NULL), EBULLIO_STATUS_BAD_STRUCT_SIZE);
+    tallowmere(&spec);
+    CHECK_STATUS(ebullio_cycle_solve(NULL, &result, &why), EBULLIO_STATUS_NULL_POINTER);
+    CHECK_STATUS(ebullio_cycle_solve(&spec, NULL, NULL), EBULLIO_STATUS_NULL_POINTER);
+    CHECK(result.turbine_work == marked);
+}
+
+int main(int argc, char **argv) {
+    if (argc != 2 || !(reference = fopen(argv[1], "r"))) {
+        fprintf(stderr, "usage: test_plant REFERENCE (from the plant_reference example)\n");
+        return 2;
+    }
+    demo_plant_bit_for_bit();
+    fclose(reference);
+    textbook_cycle();
+    components();
+    refusals();
+    printf("plant: %d checks, %d failed\n", checks, failures);
+    return failures == 0 ? 0 : 1;
+}
