@@ -556,8 +556,10 @@ fn the_component_calls_refuse_with_statuses_and_write_nothing() {
     };
     assert_eq!(status, EbullioStatus::NotFixedByMeasurement);
     assert_eq!(d.status, EbullioStatus::NotFixedByMeasurement);
-    // The core's text is longer than the detail's capacity: its start is kept.
-    assert!(detail_text(&d).starts_with("the section exhaust is at or below its saturation"));
+    // The whole text fits the detail, what is wrong and what would fix it.
+    let text = detail_text(&d);
+    assert!(text.starts_with("the section exhaust is wet"), "{text}");
+    assert!(text.ends_with("or its quality"), "{text}");
     assert_eq!((e, out), before);
     // SAFETY: as above.
     unsafe {
