@@ -98,6 +98,13 @@ fn within(given: Given, actual: f64, target: f64, (relative, absolute): (f64, f6
     (actual - target).abs() <= (relative * target.abs()).max(floor)
 }
 
+/// Whether one given value is reproduced to the aim of the iterations
+/// (relative 1e-13, absolute 1e-12): an iterate that does is final.
+#[inline]
+pub(crate) fn reaches_aim(given: Given, actual: f64, target: f64) -> bool {
+    within(given, actual, target, AIMED)
+}
+
 /// Whether `props` reproduces both given values to the promised precision.
 #[inline]
 pub(crate) fn reproduces_as_promised(props: &Properties, a: (Given, f64), b: (Given, f64)) -> bool {

@@ -86,3 +86,27 @@ fn the_dome_divides_used_by_the_pressure_pairs_hold() {
         assert!(l.entropy() < 4.5 && v.entropy() > 4.5, "T = {t}");
     }
 }
+
+#[test]
+fn isobaric_heat_capacity_of_regions_1_and_2_stays_above_1_8() {
+    // core/src/pair_ph_ps.rs keeps a state refined in its expected region
+    // when its temperature lies 1e-7·T inside the region's span, which
+    // holds z inside the boundary's z because h and s grow with T at the
+    // rate cp and cp/T, with cp ≥ 1.8 kJ/(kg·K). cp is smallest in cold,
+    // rarefied vapour; the grid runs over both regions, edges included.
+    let pressures = (0..=400).map(|k| 10f64.powf(span(k * 10, -9.0, 2.0)));
+    let mut lowest = f64::INFINITY;
+    for p in pressures {
+        for k in 0..=400 {
+            let t = span(k * 10, 273.15, 1073.15);
+            let Ok(s) = State::from_pt(p, t, Units::Native) else {
+                continue;
+            };
+            if matches!(s.region(), Region::One | Region::Two) {
+                lowest = lowest.min(s.isobaric_heat_capacity().unwrap());
+            }
+        }
+    }
+    assert!(lowest >= 1.8, "lowest cp {lowest}");
+    assert!(lowest < 1.9, "the grid missed the cold vapour: {lowest}");
+}

@@ -208,3 +208,70 @@ fn saturation_lines_come_back_as_saturated_phases_or_their_limits() {
         assert!((back.temperature() / t - 1.0).abs() < 1e-9);
     }
 }
+
+/// The state from (p, z), z = h when `enthalpy`, else s, and its z.
+fn from_pz(p: f64, z: f64, enthalpy: bool) -> (State, f64) {
+    if enthalpy {
+        let s = State::from_ph(p, z, Units::Native).unwrap();
+        (s, s.enthalpy())
+    } else {
+        let s = State::from_ps(p, z, Units::Native).unwrap();
+        (s, s.entropy())
+    }
+}
+
+#[test]
+fn the_side_of_a_boundary_is_the_side_of_the_given_value() {
+    // (p, h) and (p, s) from a few ulps to 1e-6 either side of a boundary's
+    // z at p (saturation, 623.15 K, B23) land on the side z itself is on:
+    // the solver's shortcut through the refined temperature must decide as
+    // comparing z would. `None` stands for the dome.
+    use ebullio::Region::{One, Three, Two};
+    let nudges = [-1e6, -1e3, -4.0, -1.0, 1.0, 4.0, 1e3, 1e6];
+    for k in 0..=60 {
+        let p = 10f64.powf(-3.2 + 5.2 * f64::from(k) / 60.0).min(100.0);
+        let at = |t: f64, liquid: bool| {
+            if liquid {
+                ebullio::region1::gibbs(p, t).properties(p, t)
+            } else {
+                ebullio::region2::gibbs(p, t).properties(p, t)
+            }
+        };
+        // (boundary state, the region just below its z, just above).
+        let boundaries = if p <= saturation_pressure(623.15) {
+            let t = saturation_temperature(p);
+            [
+                (at(t, true), Some(One), None),
+                (at(t, false), None, Some(Two)),
+            ]
+        } else {
+            let t = boundary_b23::temperature(p);
+            [
+                (at(623.15, true), Some(One), Some(Three)),
+                (at(t, false), Some(Three), Some(Two)),
+            ]
+        };
+        for (boundary, below, above) in boundaries {
+            for (enthalpy, z_b) in [(true, boundary.h), (false, boundary.s)] {
+                for step in [f64::EPSILON, 1e-12] {
+                    for nudge in nudges {
+                        let z = z_b + nudge * step * z_b.abs().max(1.0);
+                        let (back, z_back) = from_pz(p, z, enthalpy);
+                        let at = format!("{p} MPa, z {z} vs the boundary's {z_b}");
+                        let region = if z < z_b { below } else { above };
+                        let wet = matches!(
+                            back.phase(),
+                            Phase::WetSteam | Phase::SaturatedLiquid | Phase::SaturatedVapour
+                        );
+                        match region {
+                            Some(region) => assert_eq!(back.region(), region, "{at}"),
+                            None => assert!(wet, "{at}: {:?}", back.phase()),
+                        }
+                        let tolerance = (1e-10 * z.abs()).max(1e-9);
+                        assert!((z_back - z).abs() <= tolerance, "{at}: {z_back}");
+                    }
+                }
+            }
+        }
+    }
+}
