@@ -249,24 +249,35 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
     let mut condensate_flow = 1.0;
     let mut to_condenser: Option<(f64, usize)> = None;
     let mut converged = false;
-    for _ in 0..MAX_SWEEPS {
-        // Upward: water states from the hotwell to the boiler.
+    for sweep in 0..MAX_SWEEPS {
+        // Upward: water states from the hotwell to the boiler. A heater
+        // whose inlet water is the same as in the last sweep keeps its
+        // states (only the mixing points move between sweeps), and an
+        // open heater's states never depend on its inlet.
         let mut line = condensate_pump.outlet;
         for j in (0..n).rev() {
             let w = &mut water[j];
+            let unchanged = sweep > 0 && w.feedwater_in == line;
             w.feedwater_in = line;
             match heaters[j].kind {
                 HeaterKind::Closed { drains, .. } => {
-                    let (out, drain) = end_states(&shell[j], &line, approaches[j])?;
-                    w.feedwater_out = out;
-                    w.drain = drain;
-                    line = out;
+                    if !unchanged {
+                        let (out, drain) = end_states(&shell[j], &line, approaches[j])?;
+                        w.feedwater_out = out;
+                        w.drain = drain;
+                        if drains == Drains::PumpForward {
+                            w.drain_pumped =
+                                compress(&drain, above_pressure[j], drain_pump_efficiency)?.outlet;
+                        }
+                    }
+                    line = w.feedwater_out;
                     if drains == Drains::PumpForward {
-                        w.drain_pumped =
-                            compress(&drain, above_pressure[j], drain_pump_efficiency)?.outlet;
                         if w.drain_flow > 0.0 {
                             line = mix(
-                                &[(w.feedwater_flow, &out), (w.drain_flow, &w.drain_pumped)],
+                                &[
+                                    (w.feedwater_flow, &w.feedwater_out),
+                                    (w.drain_flow, &w.drain_pumped),
+                                ],
                                 above_pressure[j],
                                 Units::Native,
                             )?
@@ -276,14 +287,16 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
                     }
                 }
                 HeaterKind::Open => {
-                    w.feedwater_out =
-                        *Saturation::at_pressure(shell[j].native().p, Units::Native)?.liquid();
-                    w.pump_outlet = compress(
-                        &w.feedwater_out,
-                        above_pressure[j],
-                        pump_efficiency(pumps_to_boiler[j])?,
-                    )?
-                    .outlet;
+                    if sweep == 0 {
+                        w.feedwater_out =
+                            *Saturation::at_pressure(shell[j].native().p, Units::Native)?.liquid();
+                        w.pump_outlet = compress(
+                            &w.feedwater_out,
+                            above_pressure[j],
+                            pump_efficiency(pumps_to_boiler[j])?,
+                        )?
+                        .outlet;
+                    }
                     line = w.pump_outlet;
                 }
             }
