@@ -11,6 +11,8 @@ Attribute VB_Name = "EbullioWorksheet"
 ' In a cell:   =SteamProperty(6, 1, 30, 540)          h at 30 bar, 540 degC
 '              =SteamEnthalpyPT(167, 538, 2)          main steam, metric
 '              =SteamMessage(1, 2000, 300, 2)         why a state fails
+'              =SteamProperty(20, 1, 1, 40)           Prandtl number of condensate
+'              =SteamDerivative(4, 1, 6, 2, 5, 2500)  (drho/dp)_h of wet steam
 Option Explicit
 
 ' Enum numbers from ffi/include/ebullio.h; never renumbered.
@@ -29,6 +31,21 @@ Public Const EBULLIO_INPUT_PAIR_TEMPERATURE_QUALITY As Long = 9
 Public Const EBULLIO_PROPERTY_TEMPERATURE As Long = 2
 Public Const EBULLIO_PROPERTY_ENTHALPY As Long = 6
 Public Const EBULLIO_PROPERTY_ENTROPY As Long = 7
+Public Const EBULLIO_PROPERTY_VISCOSITY As Long = 16
+Public Const EBULLIO_PROPERTY_THERMAL_CONDUCTIVITY As Long = 17
+Public Const EBULLIO_PROPERTY_PRANDTL_NUMBER As Long = 20
+Public Const EBULLIO_PROPERTY_SURFACE_TENSION As Long = 21
+
+' Variables of a derivative (dz/dx)_y: p, T, v, rho, u, h, s, g, f.
+Public Const EBULLIO_VARIABLE_PRESSURE As Long = 1
+Public Const EBULLIO_VARIABLE_TEMPERATURE As Long = 2
+Public Const EBULLIO_VARIABLE_SPECIFIC_VOLUME As Long = 3
+Public Const EBULLIO_VARIABLE_DENSITY As Long = 4
+Public Const EBULLIO_VARIABLE_INTERNAL_ENERGY As Long = 5
+Public Const EBULLIO_VARIABLE_ENTHALPY As Long = 6
+Public Const EBULLIO_VARIABLE_ENTROPY As Long = 7
+Public Const EBULLIO_VARIABLE_GIBBS_ENERGY As Long = 8
+Public Const EBULLIO_VARIABLE_HELMHOLTZ_ENERGY As Long = 9
 
 Public Const EBULLIO_METHOD_EXACT As Long = 0
 Public Const EBULLIO_STATUS_OK As Long = 0
@@ -60,6 +77,11 @@ Private Declare PtrSafe Function ebullio_property Lib "ebullio_c.dll" ( _
     ByVal property As Long, ByVal pair As Long, ByVal a As Double, ByVal b As Double, _
     ByVal units As Long, ByVal method As Long, ByRef status As Long) As Double
 
+Private Declare PtrSafe Function ebullio_derivative Lib "ebullio_c.dll" ( _
+    ByVal z As Long, ByVal x As Long, ByVal y As Long, ByVal pair As Long, _
+    ByVal a As Double, ByVal b As Double, ByVal units As Long, ByVal method As Long, _
+    ByRef status As Long) As Double
+
 Private Declare PtrSafe Function ebullio_solve Lib "ebullio_c.dll" ( _
     ByVal pair As Long, ByVal a As Double, ByVal b As Double, ByVal units As Long, _
     ByVal method As Long, ByRef state As EbullioState, ByRef detail As EbullioErrorDetail) As Long
@@ -81,6 +103,17 @@ Public Function SteamProperty(ByVal property As Long, ByVal pair As Long, ByVal 
     Dim value As Double
     value = ebullio_property(property, pair, a, b, units, EBULLIO_METHOD_EXACT, status)
     If status = EBULLIO_STATUS_OK Then SteamProperty = value Else SteamProperty = CVErr(xlErrNum)
+End Function
+
+' A partial derivative (dz/dx) at constant y of any state, z, x, y among
+' the EBULLIO_VARIABLE_ numbers; #NUM! where it does not exist.
+Public Function SteamDerivative(ByVal z As Long, ByVal x As Long, ByVal y As Long, _
+        ByVal pair As Long, ByVal a As Double, ByVal b As Double, _
+        Optional ByVal units As Long = EBULLIO_UNITS_METRIC_ENGINEERING) As Variant
+    Dim status As Long
+    Dim value As Double
+    value = ebullio_derivative(z, x, y, pair, a, b, units, EBULLIO_METHOD_EXACT, status)
+    If status = EBULLIO_STATUS_OK Then SteamDerivative = value Else SteamDerivative = CVErr(xlErrNum)
 End Function
 
 ' Enthalpy from pressure and temperature.

@@ -36,3 +36,29 @@ fn committed_header_matches_a_fresh_generation() {
         );
     }
 }
+
+/// The spreadsheet example's constants are the header's numbers: every
+/// `Public Const EBULLIO_… As Long = N` names an enumerator the header
+/// defines with that value.
+#[test]
+fn worksheet_constants_match_the_header() {
+    let crate_dir = Path::new(env!("CARGO_MANIFEST_DIR"));
+    let header = std::fs::read_to_string(crate_dir.join("include/ebullio.h")).unwrap();
+    let sheet = std::fs::read_to_string(crate_dir.join("examples/ebullio_worksheet.bas")).unwrap();
+    let mut checked = 0;
+    for line in sheet.lines() {
+        let Some(rest) = line.strip_prefix("Public Const ") else {
+            continue;
+        };
+        let (name, value) = rest
+            .split_once(" As Long = ")
+            .expect("Const NAME As Long = N");
+        let defined = format!("  {name} = {value},");
+        assert!(
+            header.lines().any(|l| l == defined),
+            "{name} = {value} is not in ebullio.h"
+        );
+        checked += 1;
+    }
+    assert!(checked >= 20, "only {checked} constants found");
+}
