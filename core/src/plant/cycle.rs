@@ -130,30 +130,18 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
                 );
             }
             if p_extraction < current.native().p {
-                let outlet = expand(&current, p_extraction, efficiency)?.exhaust;
-                groups[group_count] = Group {
-                    casing: c,
-                    inlet: current,
-                    outlet,
-                    extractions_upstream: next,
-                };
+                groups[group_count] = stage_group(c, current, p_extraction, efficiency, next)?;
+                current = groups[group_count].outlet;
                 group_count += 1;
-                current = outlet;
             }
             extraction[next] = current;
             extraction_casing[next] = c;
             next += 1;
         }
         if current.native().p > p_exhaust {
-            let outlet = expand(&current, p_exhaust, efficiency)?.exhaust;
-            groups[group_count] = Group {
-                casing: c,
-                inlet: current,
-                outlet,
-                extractions_upstream: next,
-            };
+            groups[group_count] = stage_group(c, current, p_exhaust, efficiency, next)?;
+            current = groups[group_count].outlet;
             group_count += 1;
-            current = outlet;
         }
         inlet = current;
     }
@@ -583,6 +571,23 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
         reheat_heat,
         condenser_duty,
     }))
+}
+
+/// The stage group of casing `casing` from `inlet` down to `p_out`, with
+/// `extractions_upstream` heaters fed before it.
+fn stage_group(
+    casing: usize,
+    inlet: State,
+    p_out: f64,
+    efficiency: f64,
+    extractions_upstream: usize,
+) -> Result<Group, Error> {
+    Ok(Group {
+        casing,
+        inlet,
+        outlet: expand(&inlet, p_out, efficiency)?.exhaust,
+        extractions_upstream,
+    })
 }
 
 fn invalid<T>(what: &'static str) -> Result<T, Error> {
