@@ -1,4 +1,6 @@
-//! Instruction-count probe: run under callgrind; argument selects the call.
+//! Instruction-count probe: run under callgrind; argument selects the call
+//! (1–8 the basic equations and (p,T) states, 9–12 (p,h) and (p,s) in
+//! regions 1 and 2).
 use std::hint::black_box;
 fn main() {
     let which: u32 = std::env::args()
@@ -25,6 +27,15 @@ fn main() {
         (5.0, 600.0),
         (50.0, 1000.0),
     ];
+    // (p, h) and (p, s) of the same points, for the inverse pairs.
+    let native = ebullio::Units::Native;
+    let caloric = |pts: &[(f64, f64); 8]| {
+        pts.map(|(p, t)| {
+            let s = ebullio::State::from_pt(p, t, native).unwrap();
+            (p, s.enthalpy(), s.entropy())
+        })
+    };
+    let (phs1, phs2) = (caloric(&pts1), caloric(&pts2));
     let n = 100_000;
     let mut acc = 0.0;
     for k in 0..n {
@@ -62,6 +73,15 @@ fn main() {
                 let rho = black_box(300.0 + 30.0 * (k & 7) as f64);
                 let s = ebullio::region3::helmholtz(rho, 700.0).properties(rho, 700.0);
                 s.p + s.h + s.cp + s.w
+            }
+            9..=12 => {
+                let (p, h, s) = black_box(if which <= 10 { phs1 } else { phs2 }[k & 7]);
+                let state = if which % 2 == 1 {
+                    ebullio::State::from_ph(p, h, native)
+                } else {
+                    ebullio::State::from_ps(p, s, native)
+                };
+                state.unwrap().temperature()
             }
             _ => 0.0,
         };

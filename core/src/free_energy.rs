@@ -27,6 +27,20 @@ pub struct ReducedGibbs {
     pub g_pt: f64,
 }
 
+/// γ of a Gibbs region and its reduced τ derivatives up to the third, at
+/// fixed π: what a Halley step along an isobar needs.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub(crate) struct IsobarGibbs {
+    /// γ
+    pub g: f64,
+    /// τ·γ_τ
+    pub g_t: f64,
+    /// τ²·γ_ττ
+    pub g_tt: f64,
+    /// τ³·γ_τττ
+    pub g_ttt: f64,
+}
+
 /// Dimensionless Helmholtz free energy φ = f/(RT) of region 3 and its
 /// reduced derivatives with respect to δ = ρ/ρc and τ = Tc/T.
 #[derive(Clone, Copy, Debug, PartialEq)]

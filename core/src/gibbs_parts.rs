@@ -4,7 +4,7 @@
 //! γ° = ln π + Σ n°ᵢ τ^J°ᵢ and γʳ = Σ nᵢ π^Iᵢ (τ − τ₀)^Jᵢ, R7-97(2012)
 //! Eqs. 16, 17, 33 and 34. Each region supplies its tables and τ₀.
 
-use crate::free_energy::ReducedGibbs;
+use crate::free_energy::{IsobarGibbs, ReducedGibbs};
 use crate::math::ln;
 use crate::series::{Series, Term};
 
@@ -48,6 +48,22 @@ impl GibbsParts {
             g_t: o.y * scale + ty * r.y,
             g_tt: o.yy * scale + ty * ty * r.yy,
             g_pt: ty * r.xy,
+        }
+    }
+
+    /// γ and its τ derivatives up to the third at π, τ.
+    #[inline(always)]
+    pub(crate) fn isobar(&self, pi: f64, tau: f64) -> IsobarGibbs {
+        let (o, tp) = self.ideal.isobar_sums(1.0, tau);
+        let scale = 1.0 / tp;
+        let y = tau - self.tau_shift;
+        let (r, _) = self.residual.isobar_sums(pi, y);
+        let ty = tau / y;
+        IsobarGibbs {
+            g: ln(pi) + o.value * scale + r.value,
+            g_t: o.y * scale + ty * r.y,
+            g_tt: o.yy * scale + ty * ty * r.yy,
+            g_ttt: o.yyy * scale + ty * ty * ty * r.yyy,
         }
     }
 

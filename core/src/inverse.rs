@@ -11,7 +11,7 @@
 //! ones live with [`Variable`].
 
 use crate::error::Error;
-use crate::free_energy::{Properties, ReducedGibbs};
+use crate::free_energy::{IsobarGibbs, Properties, ReducedGibbs};
 use crate::variable::Variable;
 use crate::{region1, region2, region3, region5};
 
@@ -39,6 +39,17 @@ impl Equation {
             Equation::Region2 => region2::gibbs(x, t).properties(x, t),
             Equation::Region5 => region5::gibbs(x, t).properties(x, t),
             Equation::Region3 => region3::helmholtz(x, t).properties(x, t),
+        }
+    }
+
+    /// γ and its τ derivatives up to the third: a Halley step along an
+    /// isobar. Gibbs regions only.
+    #[inline]
+    pub(crate) fn isobar_gibbs(self, p: f64, t: f64) -> IsobarGibbs {
+        match self {
+            Equation::Region1 => region1::isobar(p, t),
+            Equation::Region5 => region5::isobar(p, t),
+            _ => region2::isobar(p, t),
         }
     }
 

@@ -5,7 +5,7 @@
 //! verification values are those of R7-97 Table 5.
 
 use crate::constants::SPECIFIC_GAS_CONSTANT as R;
-use crate::free_energy::ReducedGibbs;
+use crate::free_energy::{IsobarGibbs, ReducedGibbs};
 use crate::series::{Series, Term};
 
 /// Reducing pressure p*, MPa.
@@ -81,6 +81,21 @@ pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
         g_t: ty * s.y * scale,
         g_tt: ty * ty * s.yy * scale,
         g_pt: px * ty * s.xy * scale,
+    }
+}
+
+/// γ and its τ derivatives up to the third at `p` (MPa) and `t` (K).
+#[inline]
+pub(crate) fn isobar(p: f64, t: f64) -> IsobarGibbs {
+    let (_, tau, x, y) = shifted_variables(p, t);
+    let (s, yp) = SERIES.isobar_sums(x, y);
+    let scale = 1.0 / yp;
+    let ty = tau / y;
+    IsobarGibbs {
+        g: s.value * scale,
+        g_t: ty * s.y * scale,
+        g_tt: ty * ty * s.yy * scale,
+        g_ttt: ty * ty * ty * s.yyy * scale,
     }
 }
 

@@ -6,7 +6,7 @@
 //! values: R7-97 Table 42.
 
 use crate::constants::SPECIFIC_GAS_CONSTANT as R;
-use crate::free_energy::ReducedGibbs;
+use crate::free_energy::{IsobarGibbs, ReducedGibbs};
 use crate::gibbs_parts::GibbsParts;
 use crate::series::Term;
 
@@ -43,6 +43,12 @@ const PARTS: GibbsParts = GibbsParts::new(&IDEAL_COEFFICIENTS, 3, &RESIDUAL_COEF
 #[inline]
 pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
     PARTS.gibbs(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
+}
+
+/// γ and its τ derivatives up to the third at `p` (MPa) and `t` (K).
+#[inline]
+pub(crate) fn isobar(p: f64, t: f64) -> IsobarGibbs {
+    PARTS.isobar(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
 }
 
 /// Specific enthalpy alone, kJ/kg, at `p` (MPa) and `t` (K).

@@ -15,6 +15,16 @@
 /// A term `n · x^i · y^j`, exponents and coefficient as the release prints.
 pub(crate) type Term = (i32, i32, f64);
 
+/// Σt, ΣJ·t, ΣJ(J−1)·t, ΣJ(J−1)(J−2)·t: what an iteration along an
+/// isobar needs (x fixed), up to the third derivative in y.
+#[derive(Clone, Copy, Debug, Default)]
+pub(crate) struct IsobarSums {
+    pub value: f64,
+    pub y: f64,
+    pub yy: f64,
+    pub yyy: f64,
+}
+
 /// Σt, ΣI·t, ΣI(I−1)·t, ΣJ·t, ΣJ(J−1)·t, ΣI·J·t for the terms t of a series.
 #[derive(Clone, Copy, Debug, Default)]
 pub(crate) struct SeriesSums {
@@ -120,9 +130,9 @@ impl PowerChain {
 pub(crate) struct Series {
     len: usize,
     /// Per term, in table order (grouped by I): the index of y^(J + shift)
-    /// and (n, n·J, n·J(J−1)).
+    /// and (n, n·J, n·J(J−1), n·J(J−1)(J−2)).
     y_index: [u8; MAX_TERMS],
-    coefficients: [[f64; 3]; MAX_TERMS],
+    coefficients: [[f64; 4]; MAX_TERMS],
     /// Whether the term is the last of its group of equal I, and for such
     /// terms x^I's index and (I, I(I−1)).
     closes_group: [bool; MAX_TERMS],
@@ -180,7 +190,7 @@ impl Series {
         let mut series = Series {
             len,
             y_index: [0; MAX_TERMS],
-            coefficients: [[0.0; 3]; MAX_TERMS],
+            coefficients: [[0.0; 4]; MAX_TERMS],
             closes_group: [false; MAX_TERMS],
             x_index: [0; MAX_TERMS],
             x_weights: [[0.0; 2]; MAX_TERMS],
@@ -204,7 +214,12 @@ impl Series {
             series.x_weights[k] = [i as f64, (i * (i - 1)) as f64];
             series.y_index[k] = (j + y_shift) as u8;
             let jf = j as f64;
-            series.coefficients[k] = [n, n * jf, n * jf * (jf - 1.0)];
+            series.coefficients[k] = [
+                n,
+                n * jf,
+                n * jf * (jf - 1.0),
+                n * jf * (jf - 1.0) * (jf - 2.0),
+            ];
             x_needed[(i + x_shift) as usize] = true;
             y_needed[(j + y_shift) as usize] = true;
             k += 1;
@@ -246,7 +261,7 @@ impl Series {
         unrolled!(K, {
             if K < self.len {
                 let yj = py[self.y_index[K] as usize];
-                let [c0, c1, c2] = self.coefficients[K];
+                let [c0, c1, c2, _] = self.coefficients[K];
                 p += c0 * yj;
                 q += c1 * yj;
                 r += c2 * yj;
@@ -261,6 +276,36 @@ impl Series {
                     s.yy += xi * r;
                     s.xy += wi * xq;
                     (p, q, r) = (0.0, 0.0, 0.0);
+                }
+            }
+        });
+        (s, py[self.y_shift])
+    }
+
+    /// Σt and the y-weighted sums up to the third, at a fixed x: one pass
+    /// for a Halley step along an isobar (no x derivatives).
+    #[allow(unused_assignments)]
+    #[inline(always)]
+    pub(crate) fn isobar_sums(&self, x: f64, y: f64) -> (IsobarSums, f64) {
+        let px = self.x_chain.powers(x);
+        let py = self.y_chain.powers(y);
+        let mut s = IsobarSums::default();
+        let (mut p, mut q, mut r, mut u) = (0.0, 0.0, 0.0, 0.0);
+        unrolled!(K, {
+            if K < self.len {
+                let yj = py[self.y_index[K] as usize];
+                let [c0, c1, c2, c3] = self.coefficients[K];
+                p += c0 * yj;
+                q += c1 * yj;
+                r += c2 * yj;
+                u += c3 * yj;
+                if self.closes_group[K] {
+                    let xi = px[self.x_index[K] as usize];
+                    s.value += xi * p;
+                    s.y += xi * q;
+                    s.yy += xi * r;
+                    s.yyy += xi * u;
+                    (p, q, r, u) = (0.0, 0.0, 0.0, 0.0);
                 }
             }
         });
@@ -340,5 +385,9 @@ mod tests {
         ));
         let (sum_j, _) = SERIES.y_weighted_sum(x, y);
         assert_eq!(sum_j, s.y);
+        // y³ f_yyy = 2·3·2·1·0·… : J(J−1)(J−2) is 0 for J = 2 and −6 for J = −1.
+        let (i, _) = SERIES.isobar_sums(x, y);
+        assert!(close(i.yyy * scale, -30.0 * x / y));
+        assert!(close(i.value * scale, s.value * scale) && close(i.yy * scale, s.yy * scale));
     }
 }
