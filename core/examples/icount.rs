@@ -1,6 +1,6 @@
 //! Instruction-count probe: run under callgrind; argument selects the call
-//! (1–8 the basic equations and (p,T) states, 9–12 (p,h) and (p,s) in
-//! regions 1 and 2).
+//! (1–8 the basic equations and (p,T) states, 9–14 (p,h) and (p,s) in
+//! regions 1, 2 and 5).
 use std::hint::black_box;
 fn main() {
     let which: u32 = std::env::args()
@@ -35,7 +35,17 @@ fn main() {
             (p, s.enthalpy(), s.entropy())
         })
     };
-    let (phs1, phs2) = (caloric(&pts1), caloric(&pts2));
+    let pts5 = [
+        (0.5, 1100.0),
+        (0.5, 2200.0),
+        (30.0, 1500.0),
+        (10.0, 1300.0),
+        (1.0, 1800.0),
+        (45.0, 2000.0),
+        (5.0, 1150.0),
+        (20.0, 2250.0),
+    ];
+    let (phs1, phs2, phs5) = (caloric(&pts1), caloric(&pts2), caloric(&pts5));
     let n = 100_000;
     let mut acc = 0.0;
     for k in 0..n {
@@ -74,8 +84,13 @@ fn main() {
                 let s = ebullio::region3::helmholtz(rho, 700.0).properties(rho, 700.0);
                 s.p + s.h + s.cp + s.w
             }
-            9..=12 => {
-                let (p, h, s) = black_box(if which <= 10 { phs1 } else { phs2 }[k & 7]);
+            9..=14 => {
+                let table = match which {
+                    9 | 10 => phs1,
+                    11 | 12 => phs2,
+                    _ => phs5,
+                };
+                let (p, h, s) = black_box(table[k & 7]);
                 let state = if which % 2 == 1 {
                     ebullio::State::from_ph(p, h, native)
                 } else {
