@@ -61,7 +61,8 @@ impl InputPair {
 impl State {
     /// The state from `pair` with values `a` and `b` (in the pair's order),
     /// in `units`. `method` matters only for the pairs with IAPWS backward
-    /// equations, (p, h), (p, s) and (h, s); the others are always exact.
+    /// equations, (p, h), (p, s), (h, s) and (p, T) in region 3; the others
+    /// are always exact.
     pub fn solve(
         pair: InputPair,
         a: f64,
@@ -70,7 +71,7 @@ impl State {
         method: Method,
     ) -> Result<State, Error> {
         match pair {
-            InputPair::PressureTemperature => State::from_pt(a, b, units),
+            InputPair::PressureTemperature => State::from_pt_with(a, b, units, method),
             InputPair::PressureEnthalpy => State::from_ph_with(a, b, units, method),
             InputPair::PressureEntropy => State::from_ps_with(a, b, units, method),
             InputPair::EnthalpyEntropy => State::from_hs_with(a, b, units, method),

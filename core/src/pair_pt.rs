@@ -1,7 +1,9 @@
 //! States from pressure and temperature, the formulation's own variables:
 //! regions 1, 2 and 5 evaluate directly, region 3 solves for the density.
 
+use crate::backward::sr5_05;
 use crate::error::{native_input, Error};
+use crate::pair_ph_ps::Method;
 use crate::regions::{locate, single_phase, Located};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
@@ -17,12 +19,38 @@ impl State {
     /// compressed liquid; use [`crate::Saturation`] or [`State::from_px`]
     /// for the saturation line itself.
     pub fn from_pt(p: f64, t: f64, units: Units) -> Result<State, Error> {
+        State::from_pt_with(p, t, units, Method::Exact)
+    }
+
+    /// The state at (p, T) by `method`. Regions 1, 2 and 5 are explicit in
+    /// p and T, the same either way. In region 3, [`Method::Exact`] solves
+    /// the basic equation for the density; [`Method::BackwardOnly`] takes
+    /// the density of the IAPWS SR5-05(2016) backward equation v(p,T)
+    /// unrefined, and the state at that (ρ, T), whose pressure differs from
+    /// `p` by the backward equation's error. Subregions 3e, 3h, 3n and 3x
+    /// have no shipped backward equation (their tables could not be
+    /// verified): there the strict call is
+    /// [`Error::BackwardEquationOutOfRange`].
+    pub fn from_pt_with(p: f64, t: f64, units: Units, method: Method) -> Result<State, Error> {
         let p = native_input(units, Quantity::Pressure, p)?;
         let t = native_input(units, Quantity::Temperature, t)?;
         let (props, region, liquid) = match locate(p, t, units)? {
             Located::Region1 => (region1::gibbs(p, t).properties(p, t), Region::One, true),
             Located::Region2 => (region2::gibbs(p, t).properties(p, t), Region::Two, false),
             Located::Region5 => (region5::gibbs(p, t).properties(p, t), Region::Five, false),
+            Located::Region3(branch) if method == Method::BackwardOnly => {
+                let rho = sr5_05::specific_volume(p, t)
+                    .map(|v| 1.0 / v)
+                    .filter(|rho| rho.is_finite() && *rho > 0.0)
+                    .ok_or(Error::BackwardEquationOutOfRange {
+                        equation: "v(p,T) region 3",
+                    })?;
+                (
+                    region3::helmholtz(rho, t).properties(rho, t),
+                    Region::Three,
+                    branch == region3_density::Branch::Liquid,
+                )
+            }
             Located::Region3(branch) => {
                 let rho = region3_density::density(p, t, branch)?;
                 let mut props = region3::helmholtz(rho, t).properties(rho, t);

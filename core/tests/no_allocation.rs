@@ -87,6 +87,12 @@ fn exercise_everything() -> f64 {
                 sum += read_all(State::from_ph_with(s.pressure(), h, units, method));
                 sum += read_all(State::from_ps_with(s.pressure(), en, units, method));
                 sum += read_all(State::from_hs_with(h, en, units, method));
+                sum += read_all(State::from_pt_with(
+                    s.pressure(),
+                    s.temperature(),
+                    units,
+                    method,
+                ));
             }
             sum += read_all(State::from_ph(s.pressure(), h, units));
             sum += read_all(State::from_ps(s.pressure(), en, units));

@@ -1095,8 +1095,8 @@ EbullioStatus ebullio_pump_compression(uint32_t inlet_pair,
 // pair's order, in `units`) and fills `*out`.
 //
 // `pair` is an `EbullioInputPair`, `units` an `EbullioUnits`, `method` an
-// `EbullioMethod` (it matters only for (p,h), (p,s), (h,s)). `out` must
-// not be null and its `size` must be set. `detail` may be null; when it is
+// `EbullioMethod` (it matters only for (p,h), (p,s), (h,s) and for (p,T)
+// in region 3). `out` must not be null and its `size` must be set. `detail` may be null; when it is
 // not (its `size` set), it is filled if the call fails. `*out` is written
 // only on success.
 //

@@ -151,8 +151,8 @@ fn units_or_native(units: u32) -> Units {
 /// pair's order, in `units`) and fills `*out`.
 ///
 /// `pair` is an `EbullioInputPair`, `units` an `EbullioUnits`, `method` an
-/// `EbullioMethod` (it matters only for (p,h), (p,s), (h,s)). `out` must
-/// not be null and its `size` must be set. `detail` may be null; when it is
+/// `EbullioMethod` (it matters only for (p,h), (p,s), (h,s) and for (p,T)
+/// in region 3). `out` must not be null and its `size` must be set. `detail` may be null; when it is
 /// not (its `size` set), it is filled if the call fails. `*out` is written
 /// only on success.
 ///

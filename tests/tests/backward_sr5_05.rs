@@ -182,3 +182,48 @@ fn subregions_without_a_verified_table_give_no_volume() {
         );
     }
 }
+
+#[test]
+fn strict_pt_in_region_3_is_the_backward_volume_unrefined() {
+    use ebullio::{Error, Method, Region, State, Units};
+    // Points of the release's tables for subregions 3a, 3c, 3f, 3k and 3u
+    // (recalled from IAPWS SR5-05(2016), Tables 5 and 13, checked above).
+    // (p, T, bound on |Δv/v| between strict and exact): bounds of ours,
+    // a few times what the fits leave (2e-7 to 2e-6 in these subregions,
+    // 3e-5 in the near-critical 3u).
+    for (p, t, bound) in [
+        (50.0, 630.0, 1e-5),
+        (30.0, 650.0, 1e-5),
+        (26.0, 671.0, 1e-5),
+        (23.0, 660.0, 1e-5),
+        (22.0, 646.1, 1e-4),
+    ] {
+        let strict = State::from_pt_with(p, t, Units::Native, Method::BackwardOnly).unwrap();
+        let exact = State::from_pt(p, t, Units::Native).unwrap();
+        assert_eq!(strict.region(), Region::Three);
+        // The backward v, through ρ = 1/v and back: equal but for the
+        // reciprocal's rounding.
+        let backward = specific_volume(p, t).unwrap();
+        assert!((strict.specific_volume() - backward).abs() <= 2.0 * f64::EPSILON * backward);
+        // Not refined, yet close to the basic equation it was fitted to.
+        let dv = (strict.specific_volume() - exact.specific_volume()).abs();
+        assert!(dv <= bound * exact.specific_volume(), "{p} MPa {t} K");
+        assert_eq!(strict.temperature(), exact.temperature());
+    }
+    // Where no backward equation is shipped, strict mode says so.
+    let in_3e = (640..700)
+        .map(f64::from)
+        .find(|&t| locate(40.0, t) == Subregion::E)
+        .expect("a 3e point at 40 MPa");
+    assert!(matches!(
+        State::from_pt_with(40.0, in_3e, Units::Native, Method::BackwardOnly),
+        Err(Error::BackwardEquationOutOfRange { .. })
+    ));
+    // Outside region 3 the methods agree to the bit.
+    for (p, t) in [(3.0, 300.0), (0.0035, 700.0), (30.0, 1500.0)] {
+        assert_eq!(
+            State::from_pt_with(p, t, Units::Native, Method::BackwardOnly).unwrap(),
+            State::from_pt(p, t, Units::Native).unwrap()
+        );
+    }
+}
