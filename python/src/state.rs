@@ -171,14 +171,19 @@ impl PyState {
     /// Units by ``units``: "native" MPa, K; "si" Pa, K; "metric" bar, °C;
     /// "us" psia, °F. A (p, t) on the saturation line gives the liquid;
     /// use ``from_px`` or ``Saturation`` for the line itself.
+    /// ``method="backward"`` takes region 3's density from the SR5-05
+    /// backward equation v(p,T), unrefined (an error in the subregions it
+    /// does not ship); the other regions are the same either way.
     #[staticmethod]
-    #[pyo3(signature = (p, t, *, units=None, errors=None, threads=None),
-           text_signature = "(p, t, *, units='native', errors=None, threads=None)")]
+    #[pyo3(signature = (p, t, *, units=None, method=None, errors=None, threads=None),
+           text_signature = "(p, t, *, units='native', method='exact', errors=None, threads=None)")]
+    #[allow(clippy::too_many_arguments)]
     fn from_pt<'py>(
         py: Python<'py>,
         p: &Bound<'py, PyAny>,
         t: &Bound<'py, PyAny>,
         units: Option<&Bound<'py, PyAny>>,
+        method: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
@@ -188,7 +193,7 @@ impl PyState {
             p,
             t,
             units,
-            None,
+            method,
             errors,
             threads,
         )

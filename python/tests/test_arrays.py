@@ -183,6 +183,19 @@ def test_backward_method_arrays_match_scalars():
         ebullio.State.from_ph(3.0, 100.0, method="fast")
 
 
+def test_strict_pt_in_region_3_is_the_backward_volume():
+    # 3a and 3c points of IAPWS SR5-05(2016) Table 5 (recalled): v printed
+    # as 1.470853100e-3 and 1.819560617e-3 m³/kg at (50 MPa, 630 K) and
+    # (30 MPa, 650 K); the exact state differs from it by the fit's error.
+    p, t = np.array([50.0, 30.0]), np.array([630.0, 650.0])
+    strict = ebullio.State.from_pt(p, t, method="backward")
+    assert np.allclose(strict.v, [1.470853100e-3, 1.819560617e-3], rtol=1e-9, atol=0)
+    exact = ebullio.State.from_pt(p, t)
+    assert not np.array_equal(strict.v, exact.v)
+    assert np.allclose(strict.v, exact.v, rtol=1e-5, atol=0)
+    assert_same_bits(strict.v, scalar_column(ebullio.State.from_pt, p, t, "v", method="backward"))
+
+
 def test_single_and_multi_threaded_bitwise_equal():
     p, t = mixed_inputs(60_000, seed=7)  # above the size at which the pool is used
     one = ebullio.State.from_pt(p, t, threads=1)

@@ -187,7 +187,9 @@ def test_the_components_as_functions():
     assert water.x == 0.0
     pump = plant.compress(water, 0.9215, 0.80)
     assert pump.work == pump.outlet.h - water.h
-    assert pump.isentropic_efficiency == pytest.approx(0.80, rel=1e-12)
+    # A small difference of enthalpies (~1 kJ/kg out of ~160), each exact
+    # to about 1e-13 relative: 1e-9 on the ratio.
+    assert pump.isentropic_efficiency == pytest.approx(0.80, rel=1e-9)
     assert pump.incompressible_work == pytest.approx(pump.isentropic_work, rel=1e-3)
 
     steam = State.from_pt(0.42, 520.0)
