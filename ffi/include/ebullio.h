@@ -857,6 +857,28 @@ typedef struct {
   double entropy_generation;
 } EbullioCompression;
 
+// A solved heater or attemperator, in the call's units: flows in the
+// unit of the flow given, duty in that flow unit times the specific
+// energy unit. Set `size = sizeof(EbullioHeaterBalance)` before the call.
+// Fields are only ever added at the end.
+typedef struct {
+  // `sizeof(EbullioHeaterBalance)` as the caller's header declares it.
+  uint32_t size;
+  // The unit system of every value below (the call's own).
+  EbullioUnits units;
+  // The flow the energy balance gives: extraction steam (heaters) or
+  // spray water (attemperator).
+  double balancing_flow;
+  // The other inlet flow it implies: the condensate entering an open
+  // heater; the feedwater flow given for a closed heater; the steam
+  // flow given for an attemperator.
+  double through_flow;
+  // Heat given to the feedwater (closed heater); 0 otherwise.
+  double duty;
+  // Entropy generated (flow × specific entropy unit).
+  double entropy_generation;
+} EbullioHeaterBalance;
+
 #ifdef __cplusplus
 extern "C" {
 #endif // __cplusplus
@@ -1090,6 +1112,89 @@ EbullioStatus ebullio_pump_compression(uint32_t inlet_pair,
                                        EbullioState *outlet,
                                        EbullioState *isentropic_outlet,
                                        EbullioErrorDetail *detail);
+
+// A closed feedwater heater: extraction steam at the shell given by its
+// pressure and enthalpy, feedwater in by pressure and temperature with
+// its flow, optional cascaded drains (flow 0 for none) by pressure and
+// enthalpy; the terminal temperature difference and, when
+// `has_drain_cooler` is not 0, the drain cooler approach (temperature
+// differences). Every number in `units` (an `EbullioUnits`).
+//
+// `out` (size set) receives the extraction flow the energy balance needs
+// (`balancing_flow`), the feedwater flow (`through_flow`), the duty and
+// the entropy generated; `feedwater_out` and `drain_out`, if not null
+// (sizes set), the two leaving states. An impossible heater (no
+// temperature rise, a drain above saturation, drains alone over-heating
+// the feedwater) is `EBULLIO_STATUS_INVALID_PLANT`. Outputs are written
+// only on success.
+//
+// # Safety
+// `out` must point to a writable `EbullioHeaterBalance` of at least the
+// `size` it declares; `feedwater_out`, `drain_out` and `detail`, if not
+// null, likewise to an `EbullioState` or `EbullioErrorDetail`.
+EbullioStatus ebullio_closed_heater(double steam_pressure,
+                                    double steam_enthalpy,
+                                    double feedwater_pressure,
+                                    double feedwater_temperature,
+                                    double feedwater_flow,
+                                    double drains_flow,
+                                    double drains_pressure,
+                                    double drains_enthalpy,
+                                    double terminal_temperature_difference,
+                                    uint32_t has_drain_cooler,
+                                    double drain_cooler_approach,
+                                    uint32_t units,
+                                    EbullioHeaterBalance *out,
+                                    EbullioState *feedwater_out,
+                                    EbullioState *drain_out,
+                                    EbullioErrorDetail *detail);
+
+// An open feedwater heater (deaerator) at the pressure of its steam:
+// steam by pressure and enthalpy, condensate in by pressure and
+// temperature, the outlet flow, optional cascaded drains (flow 0 for
+// none) by pressure and enthalpy; every number in `units`.
+//
+// `out` (size set) receives the extraction flow (`balancing_flow`) and
+// the condensate flow (`through_flow`) that deliver `outlet_flow` of
+// saturated liquid, and the entropy generated; `outlet`, if not null
+// (size set), the outlet state. Outputs are written only on success.
+//
+// # Safety
+// `out` must point to a writable `EbullioHeaterBalance` of at least the
+// `size` it declares; `outlet` and `detail`, if not null, likewise to an
+// `EbullioState` or `EbullioErrorDetail`.
+EbullioStatus ebullio_open_heater(double steam_pressure,
+                                  double steam_enthalpy,
+                                  double feedwater_pressure,
+                                  double feedwater_temperature,
+                                  double outlet_flow,
+                                  double drains_flow,
+                                  double drains_pressure,
+                                  double drains_enthalpy,
+                                  uint32_t units,
+                                  EbullioHeaterBalance *out,
+                                  EbullioState *outlet,
+                                  EbullioErrorDetail *detail);
+
+// An attemperator: the spray water flow (`balancing_flow`) that brings
+// `steam_flow` of steam at (p, T) down to `target_temperature` at its
+// pressure, the spray water given by (p, T); every number in `units`.
+// `outlet`, if not null (size set), receives the steam leaving. A target
+// not between saturation and the steam temperature is
+// `EBULLIO_STATUS_INVALID_PLANT`. Outputs are written only on success.
+//
+// # Safety
+// As for `ebullio_open_heater`.
+EbullioStatus ebullio_attemperator_spray(double steam_pressure,
+                                         double steam_temperature,
+                                         double steam_flow,
+                                         double spray_pressure,
+                                         double spray_temperature,
+                                         double target_temperature,
+                                         uint32_t units,
+                                         EbullioHeaterBalance *out,
+                                         EbullioState *outlet,
+                                         EbullioErrorDetail *detail);
 
 // Solves the state given by `pair` with values `a` and `b` (in the
 // pair's order, in `units`) and fills `*out`.

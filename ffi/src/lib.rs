@@ -48,12 +48,13 @@ pub use codes::{
 pub use derivative::{ebullio_derivative, ebullio_derivative_array, ebullio_derivatives_array};
 pub use detail::{EbullioErrorDetail, EBULLIO_MESSAGE_CAPACITY};
 pub use plant::{
-    ebullio_cycle_solve, ebullio_pump_compression, ebullio_section_efficiency,
-    ebullio_turbine_expansion, EbullioCasing, EbullioComponentKind, EbullioCompression,
-    EbullioCycleComponent, EbullioCyclePoint, EbullioCycleResult, EbullioCycleSpec, EbullioDrains,
-    EbullioExpansion, EbullioHeater, EbullioHeaterKind, EbullioPointRole, EbullioStream,
-    EbullioSupplyKind, EBULLIO_MAX_CASINGS, EBULLIO_MAX_COMPONENTS, EBULLIO_MAX_HEATERS,
-    EBULLIO_MAX_POINTS, EBULLIO_MAX_STREAMS,
+    ebullio_attemperator_spray, ebullio_closed_heater, ebullio_cycle_solve, ebullio_open_heater,
+    ebullio_pump_compression, ebullio_section_efficiency, ebullio_turbine_expansion, EbullioCasing,
+    EbullioComponentKind, EbullioCompression, EbullioCycleComponent, EbullioCyclePoint,
+    EbullioCycleResult, EbullioCycleSpec, EbullioDrains, EbullioExpansion, EbullioHeater,
+    EbullioHeaterBalance, EbullioHeaterKind, EbullioPointRole, EbullioStream, EbullioSupplyKind,
+    EBULLIO_MAX_CASINGS, EBULLIO_MAX_COMPONENTS, EBULLIO_MAX_HEATERS, EBULLIO_MAX_POINTS,
+    EBULLIO_MAX_STREAMS,
 };
 pub use state::{
     ebullio_property, ebullio_saturation_at_pressure, ebullio_saturation_at_temperature,

@@ -9,6 +9,7 @@
 //! one core call each.
 
 mod components;
+mod heaters;
 mod result;
 mod spec;
 
@@ -18,6 +19,9 @@ mod abi_tests;
 pub use components::{
     ebullio_pump_compression, ebullio_section_efficiency, ebullio_turbine_expansion,
     EbullioCompression, EbullioExpansion,
+};
+pub use heaters::{
+    ebullio_attemperator_spray, ebullio_closed_heater, ebullio_open_heater, EbullioHeaterBalance,
 };
 pub use result::{
     EbullioComponentKind, EbullioCycleComponent, EbullioCyclePoint, EbullioCycleResult,

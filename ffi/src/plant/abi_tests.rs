@@ -644,3 +644,169 @@ fn the_component_calls_refuse_with_statuses_and_write_nothing() {
     }
     assert_eq!((e, out), before);
 }
+
+fn blank_balance() -> EbullioHeaterBalance {
+    EbullioHeaterBalance {
+        size: size_of::<EbullioHeaterBalance>() as u32,
+        units: EbullioUnits::Native,
+        balancing_flow: -1.0,
+        through_flow: -1.0,
+        duty: -1.0,
+        entropy_generation: -1.0,
+    }
+}
+
+#[test]
+fn the_heater_and_attemperator_calls_give_the_cores_bits() {
+    use ebullio::plant::{closed_heater, open_heater, spray_for_temperature};
+    let units = EbullioUnits::MetricEngineering as u32;
+    let u = Units::MetricEngineering;
+    let (mut b, mut first, mut second) = (blank_balance(), blank_state(), blank_state());
+    // A closed heater at 4.074 bar with drains cascaded from above.
+    // SAFETY: every pointer is to a local of the right type, sizes set.
+    let status = unsafe {
+        ebullio_closed_heater(
+            4.074,
+            2962.65,
+            9.215,
+            109.58,
+            385.47,
+            21.11,
+            18.43,
+            786.84,
+            2.8,
+            1,
+            5.6,
+            units,
+            &mut b,
+            &mut first,
+            &mut second,
+            ptr::null_mut(),
+        )
+    };
+    assert_eq!(status, EbullioStatus::Ok);
+    let steam = State::from_ph(4.074, 2962.65, u).unwrap();
+    let water = State::from_pt(9.215, 109.58, u).unwrap();
+    let drains = State::from_ph(18.43, 786.84, u).unwrap();
+    let approach = HeaterApproach {
+        terminal_temperature_difference: 2.8,
+        drain_cooler_approach: Some(5.6),
+    };
+    let core = closed_heater(&steam, &water, 385.47, Some((21.11, &drains)), approach).unwrap();
+    same("extraction flow", b.balancing_flow, core.extraction_flow);
+    same("feedwater flow", b.through_flow, 385.47);
+    same("duty", b.duty, core.duty);
+    same(
+        "entropy generation",
+        b.entropy_generation,
+        core.entropy_generation,
+    );
+    same_state(&first, &core.feedwater_out);
+    same_state(&second, &core.drain_out);
+    // A deaerator at 9.215 bar without drains.
+    // SAFETY: as above; a null state output is allowed.
+    let status = unsafe {
+        ebullio_open_heater(
+            9.215,
+            3145.88,
+            9.215,
+            141.0,
+            503.22,
+            0.0,
+            0.0,
+            0.0,
+            units,
+            &mut b,
+            &mut first,
+            ptr::null_mut(),
+        )
+    };
+    assert_eq!(status, EbullioStatus::Ok);
+    let steam = State::from_ph(9.215, 3145.88, u).unwrap();
+    let water = State::from_pt(9.215, 141.0, u).unwrap();
+    let core = open_heater(&steam, &water, 503.22, None).unwrap();
+    same("extraction flow", b.balancing_flow, core.extraction_flow);
+    same("condensate flow", b.through_flow, core.feedwater_flow);
+    same(
+        "entropy generation",
+        b.entropy_generation,
+        core.entropy_generation,
+    );
+    same_state(&first, &core.outlet);
+    // Spray from 186 bar, 180 °C feedwater into 167 bar, 560 °C steam.
+    // SAFETY: as above.
+    let status = unsafe {
+        ebullio_attemperator_spray(
+            167.0,
+            560.0,
+            500.0,
+            186.0,
+            180.0,
+            538.0,
+            units,
+            &mut b,
+            &mut first,
+            ptr::null_mut(),
+        )
+    };
+    assert_eq!(status, EbullioStatus::Ok);
+    let steam = State::from_pt(167.0, 560.0, u).unwrap();
+    let spray = State::from_pt(186.0, 180.0, u).unwrap();
+    let core = spray_for_temperature(&steam, 500.0, &spray, 538.0).unwrap();
+    same("spray flow", b.balancing_flow, core.spray_flow);
+    same_state(&first, &core.outlet);
+    // Refusals leave the outputs as they were.
+    let (before_b, before_state) = (blank_balance(), blank_state());
+    let (mut b, mut first) = (blank_balance(), blank_state());
+    let mut d = blank_detail();
+    // SAFETY: as above.
+    let status = unsafe {
+        ebullio_attemperator_spray(
+            167.0, 560.0, 500.0, 186.0, 180.0, 600.0, units, &mut b, &mut first, &mut d,
+        )
+    };
+    assert_eq!(status, EbullioStatus::InvalidPlant);
+    assert_eq!(d.status, EbullioStatus::InvalidPlant);
+    // A TTD that leaves the feedwater no temperature rise.
+    // SAFETY: as above.
+    let status = unsafe {
+        ebullio_closed_heater(
+            4.074,
+            2962.65,
+            9.215,
+            143.0,
+            385.47,
+            0.0,
+            0.0,
+            0.0,
+            2.8,
+            0,
+            0.0,
+            units,
+            &mut b,
+            &mut first,
+            ptr::null_mut(),
+            ptr::null_mut(),
+        )
+    };
+    assert_eq!(status, EbullioStatus::InvalidPlant);
+    // SAFETY: a null `out` is refused before anything is read.
+    let status = unsafe {
+        ebullio_open_heater(
+            9.215,
+            3145.88,
+            9.215,
+            141.0,
+            503.22,
+            0.0,
+            0.0,
+            0.0,
+            units,
+            ptr::null_mut(),
+            &mut first,
+            ptr::null_mut(),
+        )
+    };
+    assert_eq!(status, EbullioStatus::NullPointer);
+    assert_eq!((b, first), (before_b, before_state));
+}

@@ -1,4 +1,5 @@
-//! The turbine section and the pump as scalar calls: one core call each
+//! The turbine section and the pump as scalar calls (the heaters and the
+//! attemperator are in `heaters.rs`, on the same frame): one core call each
 //! (`ebullio::plant::expand`, `section_efficiency`, `compress`), the
 //! figures into a small size-prefixed struct and, when asked, the end
 //! states into `EbullioState`s.
@@ -114,11 +115,12 @@ impl EbullioCompression {
     }
 }
 
-/// The caller's output pointers of a component call, checked.
-struct Outs<T: SizePrefixed> {
-    figures: OutStruct<T>,
-    end: Option<OutStruct<EbullioState>>,
-    isentropic_end: Option<OutStruct<EbullioState>>,
+/// The caller's output pointers of a component call, checked: the
+/// figures and up to two states.
+pub(super) struct Outs<T: SizePrefixed> {
+    pub(super) figures: OutStruct<T>,
+    pub(super) end: Option<OutStruct<EbullioState>>,
+    pub(super) isentropic_end: Option<OutStruct<EbullioState>>,
 }
 
 /// The shared frame of the component calls: checks every pointer and the
@@ -129,7 +131,7 @@ struct Outs<T: SizePrefixed> {
 /// # Safety
 /// As the exported calls document for `figures`, `end`, `isentropic_end`
 /// and `detail`.
-unsafe fn component_call<T: SizePrefixed, R>(
+pub(super) unsafe fn component_call<T: SizePrefixed, R>(
     units: u32,
     figures: *mut T,
     end: *mut EbullioState,
@@ -181,7 +183,7 @@ unsafe fn component_call<T: SizePrefixed, R>(
     }
 }
 
-fn write_state(out: &Option<OutStruct<EbullioState>>, state: &ebullio::State) {
+pub(super) fn write_state(out: &Option<OutStruct<EbullioState>>, state: &ebullio::State) {
     if let Some(out) = out {
         out.write(&EbullioState::of(state));
     }

@@ -263,6 +263,39 @@ static void components(void) {
                  EBULLIO_STATUS_INVALID_PLANT);
 }
 
+/* A closed heater and a deaerator of the demo's kind (invented numbers):
+   the approach temperatures hold and each energy balance closes, from
+   the states the calls return. */
+static void heaters(void) {
+    EbullioHeaterBalance b;
+    EbullioState fw_out, drain;
+    double t_sat, heat_in;
+    memset(&b, 0, sizeof b);
+    b.size = (uint32_t)sizeof b;
+    memset(&fw_out, 0, sizeof fw_out);
+    fw_out.size = (uint32_t)sizeof fw_out;
+    drain = fw_out;
+    CHECK_STATUS(ebullio_closed_heater(4.074, 2962.65, 9.215, 109.58, 385.47, 21.11, 18.43,
+                                       786.84, 2.8, 1, 5.6, EBULLIO_UNITS_METRIC_ENGINEERING, &b,
+                                       &fw_out, &drain, NULL),
+                 EBULLIO_STATUS_OK);
+    t_sat = ebullio_property(EBULLIO_PROPERTY_TEMPERATURE, EBULLIO_INPUT_PAIR_PRESSURE_QUALITY,
+                             4.074, 0.0, EBULLIO_UNITS_METRIC_ENGINEERING, 0, NULL);
+    CHECK(fabs(t_sat - fw_out.temperature - 2.8) < 1e-9);
+    CHECK(fabs(drain.temperature - 109.58 - 5.6) < 1e-9);
+    heat_in = b.balancing_flow * (2962.65 - drain.enthalpy) + 21.11 * (786.84 - drain.enthalpy);
+    CHECK(fabs(heat_in - b.duty) < 1e-9 * b.duty);
+    CHECK(b.entropy_generation > 0.0);
+    CHECK_STATUS(ebullio_open_heater(9.215, 3145.88, 9.215, 141.0, 503.22, 0.0, 0.0, 0.0,
+                                     EBULLIO_UNITS_METRIC_ENGINEERING, &b, &fw_out, NULL),
+                 EBULLIO_STATUS_OK);
+    CHECK(fw_out.phase == EBULLIO_PHASE_SATURATED_LIQUID);
+    CHECK(fabs(b.balancing_flow + b.through_flow - 503.22) < 1e-9);
+    CHECK_STATUS(ebullio_attemperator_spray(167.0, 560.0, 500.0, 186.0, 180.0, 600.0,
+                                            EBULLIO_UNITS_METRIC_ENGINEERING, &b, NULL, NULL),
+                 EBULLIO_STATUS_INVALID_PLANT);
+}
+
 static void refusals(void) {
     EbullioErrorDetail why;
     double marked;
@@ -301,6 +334,7 @@ int main(int argc, char **argv) {
     fclose(reference);
     textbook_cycle();
     components();
+    heaters();
     refusals();
     printf("plant: %d checks, %d failed\n", checks, failures);
     return failures == 0 ? 0 : 1;
