@@ -251,3 +251,24 @@ def test_charts_are_saved_as_png(solved, tmp_path):
         # The state points drawn are the result's.
         offsets = ax.collections[0].get_offsets()
         assert len(offsets) == len(solved.points)
+
+
+def test_the_same_cycle_in_us_customary_units():
+    # One cycle given in bar/°C and in psia/°F (NIST SP 811 factors:
+    # 1 psi = 6894.757293168 Pa, °F = 1.8 °C + 32) has the same thermal
+    # efficiency and heat rate, and its works convert at 2.326 kJ/kg per
+    # Btu/lbm (the IT Btu).
+    psi = 1e5 / 6894.757293168  # psia per bar
+    f = lambda c: 1.8 * c + 32.0
+    def cycle(units, p, t, dt):
+        return plant.Cycle(
+            units=units, supply=plant.Supply(p(100.0), t(500.0)),
+            reheat=plant.Reheat(p(20.0), t(480.0)),
+            casings=[plant.Casing(p(22.0), 0.86), plant.Casing(p(0.08), 0.88)],
+            heaters=[plant.ClosedHeater(p(22.0), ttd=dt(3.0), dca=dt(5.0)), plant.OpenHeater(p(4.0))],
+            feed_pump_efficiency=0.8, condensate_pump_efficiency=0.75)
+    metric = cycle("metric", lambda x: x, lambda x: x, lambda x: x).solve()
+    us = cycle("us", lambda x: x * psi, f, lambda x: 1.8 * x).solve()
+    assert us.thermal_efficiency == pytest.approx(metric.thermal_efficiency, rel=1e-12)
+    assert us.heat_rate_btu_per_kwh == pytest.approx(metric.heat_rate_btu_per_kwh, rel=1e-12)
+    assert us.net_work * 2.326 == pytest.approx(metric.net_work, rel=1e-12)
