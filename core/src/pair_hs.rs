@@ -69,6 +69,19 @@ const S_2BC: f64 = 5.85;
 /// s''(273.15 K), kJ/(kg·K).
 const S_VAPOUR_273: f64 = 9.155_759_395;
 
+// The wet isotherms 273.15 K and 623.15 K in the h–s plane (straight lines
+// between their saturated phases): h'(273.15 K), h''(273.15 K), h'(623.15
+// K), kJ/kg, computed on R7-97 regions 1 and 2 at psat (the module's tests
+// check them); h''(623.15 K) is the low end of `H_B23`. They bracket the
+// wet iteration without evaluating the saturation line there.
+const H_LIQUID_273: f64 = -4.158_782_599e-2;
+const H_VAPOUR_273: f64 = 2_500.892_617_817;
+const H_LIQUID_623: f64 = 1_670.858_218_275;
+/// How far (kJ/kg, kJ/(kg·K)) a point must lie from those lines, or from
+/// the ends of the 273.15 K one, to be placed by the constants: far more
+/// than their rounding and than the lines' own rounding in the lever rule.
+const LINE_MARGIN: f64 = 1e-5;
+
 /// No state of region 5 lies below this enthalpy, kJ/kg: the lowest is at
 /// 50 MPa and 1073.15 K, 3926 kJ/kg (R7-97 region 5, computed), kept with
 /// a margin. Below it the 2/5 split need not be computed.
@@ -201,9 +214,20 @@ fn place_by_boundary_equations(h: f64, s: f64) -> Place {
     }
 }
 
+/// The 1073.15 K isotherm of the region 2 equation: its entropy at
+/// 100 MPa, kJ/(kg·K), and its enthalpy as p → 0, kJ/kg, its highest (h
+/// falls with p along it), both computed on R7-97 region 2 (the module's
+/// tests check them).
+const S_ISOTHERM_1073_AT_100: f64 = 6.040_483_671_712;
+const H_ISOTHERM_1073_HIGHEST: f64 = 4_160.663_690_009;
+
 /// Whether (h, s) lies above the 1073.15 K isotherm of the region 2
 /// equation, i.e. in region 5 rather than region 2.
 fn is_region5(h: f64, s: f64) -> bool {
+    if s > S_ISOTHERM_1073_AT_100 + LINE_MARGIN && h > H_ISOTHERM_1073_HIGHEST + LINE_MARGIN {
+        // Above the isotherm's highest enthalpy, over its whole span of s.
+        return true;
+    }
     let at_100 = Equation::Region2.evaluate(MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
     if s <= at_100.s {
         // The isotherm meets this entropy only above 100 MPa.
@@ -277,7 +301,13 @@ fn gas_start(equation: Equation, h: f64, s: f64) -> Option<(f64, f64)> {
     };
     for _ in 0..8 {
         let props = equation.evaluate(LOW, t);
-        t = (t - (props.h - h) / props.cp).clamp(200.0, 2_500.0);
+        let next = (t - (props.h - h) / props.cp).clamp(200.0, 2_500.0);
+        // Only a start for the Newton iteration below.
+        let settled = (next - t).abs() <= 1e-6 * t;
+        t = next;
+        if settled {
+            break;
+        }
     }
     let at_low = equation.evaluate(LOW, t);
     let mut lnp = (ln(LOW) + (at_low.s - s) / SPECIFIC_GAS_CONSTANT).min(ln(1.2 * MAX_PRESSURE));
@@ -597,54 +627,68 @@ const NOT_CONVERGED: Error = Error::NotConverged {
 
 /// Wet steam at T with entropy s: the saturation point, the quality by the
 /// lever rule on s, the enthalpy that quality gives minus `h`, and the
-/// approximate slope of that difference in T (h'' − h' = T (s'' − s')).
+/// slope of that difference in T. Along the line each phase has
+/// dh = T ds + v dpsat, so the slope is v_mix·dpsat/dT plus a term in
+/// h'' − h' − T (s'' − s'), IF97's tiny inconsistency, left out; v_mix
+/// rather than Clapeyron's (s'' − s')/(v'' − v') keeps the psat
+/// equation's own inconsistency out of it too (Newton stays quadratic).
 fn wet_at(t: f64, h: f64, s: f64) -> Result<(Saturation, f64, f64, f64), Error> {
     let sat = Saturation::at_temperature(t, Units::Native)?;
     let (l, g) = (sat.liquid().native(), sat.vapour().native());
     let x = (s - l.s) / (g.s - l.s);
     let f = l.h + x * (g.h - l.h) - h;
-    let slope = (s - l.s) + 1e3 * l.v * saturation_pressure_slope(t);
+    let slope = 1e3 * (l.v + x * (g.v - l.v)) * saturation_pressure_slope(t);
     Ok((sat, x, f, slope))
+}
+
+/// h − (the lever-rule enthalpy at entropy s on the wet isotherm between
+/// the saturated phases (s', h'), (s'', h'')): positive above the line.
+fn above_line(h: f64, s: f64, (s_l, h_l): (f64, f64), (s_g, h_g): (f64, f64)) -> f64 {
+    h - (h_l + (s - s_l) * (h_g - h_l) / (s_g - s_l))
 }
 
 fn within(f: f64, h: f64, (relative, absolute): (f64, f64)) -> bool {
     f.abs() <= (relative * h.abs()).max(absolute)
 }
 
-/// Wet steam of (h, s), or the side of the saturation line it lies on.
-fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
-    // The quality may leave [0, 1] by what rounding leaves in s.
-    let x_slack = |sat: &Saturation| {
-        let (l, g) = (sat.liquid().native(), sat.vapour().native());
-        1e-12 * s.abs().max(1.0) / (g.s - l.s)
-    };
-    let found = |sat: Saturation, x: f64, t: f64| -> Result<Attempt, Error> {
-        let slack = x_slack(&sat);
-        Ok(if x < -slack {
-            liquid_side(t)
-        } else if x > 1.0 + slack {
-            vapour_side(t)
-        } else {
-            Attempt::Inside(sat.mixture(x.clamp(0.0, 1.0))?)
-        })
-    };
+/// How far the quality may leave [0, 1] by what rounding leaves in s.
+fn x_slack(sat: &Saturation, s: f64) -> f64 {
+    let (l, g) = (sat.liquid().native(), sat.vapour().native());
+    1e-12 * s.abs().max(1.0) / (g.s - l.s)
+}
 
-    let (mut lo, mut hi) = (MIN_TEMPERATURE, WET_MAX_TEMPERATURE);
+/// The attempt's outcome for a root at T of quality x (entropy s).
+fn found(sat: Saturation, x: f64, t: f64, s: f64) -> Result<Attempt, Error> {
+    let slack = x_slack(&sat, s);
+    Ok(if x < -slack {
+        liquid_side(t)
+    } else if x > 1.0 + slack {
+        vapour_side(t)
+    } else {
+        Attempt::Inside(sat.mixture(x.clamp(0.0, 1.0))?)
+    })
+}
+
+/// The 273.15 K end of the wet iteration, evaluated: the outcome if the
+/// point has no wet state above it (or is on it), `None` if that end
+/// brackets the root from below.
+fn wet_edge_at_273(h: f64, s: f64) -> Result<Option<Attempt>, Error> {
+    let lo = MIN_TEMPERATURE;
     let (sat, x, f, _) = wet_at(lo, h, s)?;
-    if x > 1.0 + x_slack(&sat) {
+    if x > 1.0 + x_slack(&sat, s) {
         // Above s''(273.15 K): no wet steam at this entropy.
-        return Ok(vapour_side(lo));
+        return Ok(Some(vapour_side(lo)));
     }
     if x < 0.0 {
         // Below s'(273.15 K): no wet steam at this entropy.
-        return Ok(liquid_side(lo));
+        return Ok(Some(liquid_side(lo)));
     }
     if within(f, h, WET_AIMED) {
-        return found(sat, x, lo);
+        return found(sat, x, lo, s).map(Some);
     }
     if f > 0.0 {
         // Below the 273.15 K isotherm, the lower edge of the wet region.
-        return Ok(Attempt::Beyond(
+        return Ok(Some(Attempt::Beyond(
             (
                 Quantity::Temperature,
                 lo - f / (s - sat.liquid().native().s).max(1e-3),
@@ -652,11 +696,41 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
                 MAX_TEMPERATURE,
             ),
             None,
-        ));
+        )));
     }
-    // Below s'(623.15 K) the state is colder than 623.15 K.
+    Ok(None)
+}
+
+/// Wet steam of (h, s), or the side of the saturation line it lies on.
+fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
+    let (mut lo, mut hi) = (MIN_TEMPERATURE, WET_MAX_TEMPERATURE);
+    // Clearly inside the 273.15 K end (0 < x < 1 there, h above its line),
+    // that end brackets the root from below and need not be evaluated.
+    let clear_of_273 = s > S_LIQUID_273 + LINE_MARGIN
+        && s < S_VAPOUR_273 - LINE_MARGIN
+        && above_line(
+            h,
+            s,
+            (S_LIQUID_273, H_LIQUID_273),
+            (S_VAPOUR_273, H_VAPOUR_273),
+        ) > LINE_MARGIN;
+    if !clear_of_273 {
+        if let Some(edge) = wet_edge_at_273(h, s)? {
+            return Ok(edge);
+        }
+    }
+    // Below s'(623.15 K) the state is colder than 623.15 K; between s' and
+    // s'' of 623.15 K the wet isotherm of 623.15 K divides (isotherms rise
+    // with T at fixed s).
     if s <= S_LIQUID_623 {
         hi = REGION13_TEMPERATURE;
+    } else if s < S_VAPOUR_623 {
+        let by = above_line(h, s, (S_LIQUID_623, H_LIQUID_623), (S_VAPOUR_623, H_B23.0));
+        if by > LINE_MARGIN {
+            lo = REGION13_TEMPERATURE;
+        } else if by < -LINE_MARGIN {
+            hi = REGION13_TEMPERATURE;
+        }
     }
     let tsat = sr4_04::saturation_temperature_hs(h, s);
     let mut t = if (S_VAPOUR_623..=S_VAPOUR_273).contains(&s) && tsat > lo && tsat < hi {
@@ -672,7 +746,7 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
         // touch the liquid line), so T is settled only when the Newton
         // step, not just the difference, is at rounding level.
         if x >= 0.0 && within(f, h, WET_AIMED) && (f / slope).abs() <= 1e-13 * t {
-            return found(sat, x, t);
+            return found(sat, x, t, s);
         }
         if x < 0.0 || f > 0.0 {
             hi = t;
@@ -695,7 +769,7 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // single-phase neighbour, which reproduces its p and T.
     let (sat, x, f, _) = wet_at(t, h, s)?;
     if x >= 0.0 && within(f, h, WET_AIMED) {
-        found(sat, x, t)
+        found(sat, x, t, s)
     } else if x < 0.0 || t < hi {
         // The bracket closed on T_sat(s) from the cold side without a
         // root: h lies above the saturated liquid.
@@ -730,7 +804,7 @@ fn vapour_side(t: f64) -> Attempt {
 }
 
 /// Solves (h, s), native, on the basic equations.
-fn solve_exact(h: f64, s: f64, units: Units) -> Result<State, Error> {
+fn solve_exact(h: f64, s: f64, indicated: Place, units: Units) -> Result<State, Error> {
     // Every place is tried at most once: first the one the boundary
     // equations indicate, then the neighbour each solution points to, and
     // when a solution points nowhere new (or fails), the places not yet
@@ -742,7 +816,7 @@ fn solve_exact(h: f64, s: f64, units: Units) -> Result<State, Error> {
         Place::Three,
         Place::Five,
     ];
-    let mut place = Some(place_by_boundary_equations(h, s));
+    let mut place = Some(indicated);
     let mut tried = 0u8;
     // Solutions outside their place: (place, the neighbour it points to,
     // excess, state), at most one per place.
@@ -886,7 +960,7 @@ fn enthalpy_range(s: f64) -> Option<(f64, f64)> {
 /// they do not apply: region 5, region 2 below psat(273.15 K), wet steam
 /// below s''(623.15 K), and any point where their state misses the given
 /// h or s by more than [`BACKWARD_SANITY_H`] or [`BACKWARD_SANITY_S`] (outside their range).
-fn solve_backward(h: f64, s: f64) -> Option<State> {
+fn solve_backward(h: f64, s: f64, indicated: Place) -> Option<State> {
     let close = |props: &Properties| {
         within(props.h - h, h, BACKWARD_SANITY_H) && within(props.s - s, s, BACKWARD_SANITY_S)
     };
@@ -894,7 +968,7 @@ fn solve_backward(h: f64, s: f64) -> Option<State> {
     let in_range = |p: f64, t: f64, max_t: f64| {
         p > 0.0 && p <= BACKWARD_MAX_PRESSURE && t >= MIN_TEMPERATURE - 0.05 && t <= max_t + 0.05
     };
-    let state = match place_by_boundary_equations(h, s) {
+    let state = match indicated {
         Place::Wet => {
             if !(S_VAPOUR_623..=S_VAPOUR_273).contains(&s) {
                 return None;
@@ -942,20 +1016,21 @@ fn solve_backward(h: f64, s: f64) -> Option<State> {
 
 /// Solves (h, s), native, with the chosen method.
 fn solve(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
+    let indicated = place_by_boundary_equations(h, s);
     if method == Method::BackwardOnly {
-        if let Some(state) = solve_backward(h, s) {
+        if let Some(state) = solve_backward(h, s, indicated) {
             // Near the edge of the range the backward state may lie on
             // either side of it by the equations' own deviation: the exact
             // state decides whether the point is in range, so that both
             // methods refuse the same points.
             let (p, t) = (state.native().p, state.native().t);
             if p >= 0.99 * MAX_PRESSURE || t <= MIN_TEMPERATURE + 0.5 {
-                solve_exact(h, s, units)?;
+                solve_exact(h, s, indicated, units)?;
             }
             return Ok(state.in_units(units));
         }
     }
-    solve_exact(h, s, units)
+    solve_exact(h, s, indicated, units)
 }
 
 impl State {
@@ -1002,5 +1077,85 @@ impl State {
         let h = native_input(units, Quantity::Enthalpy, h)?;
         let s = native_input(units, Quantity::Entropy, s)?;
         solve(h, s, units, method)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// The saturated phases at 273.15 K and 623.15 K that the wet
+    /// iteration's brackets take from constants, against the basic
+    /// equations (well inside `LINE_MARGIN`).
+    #[test]
+    fn the_wet_isotherm_constants_are_the_computed_phases() {
+        for (t, (s_l, h_l), (s_g, h_g)) in [
+            (
+                MIN_TEMPERATURE,
+                (S_LIQUID_273, H_LIQUID_273),
+                (S_VAPOUR_273, H_VAPOUR_273),
+            ),
+            (
+                REGION13_TEMPERATURE,
+                (S_LIQUID_623, H_LIQUID_623),
+                (S_VAPOUR_623, H_B23.0),
+            ),
+        ] {
+            let sat = Saturation::at_temperature(t, Units::Native).unwrap();
+            let (l, g) = (sat.liquid().native(), sat.vapour().native());
+            for (constant, computed) in [(s_l, l.s), (h_l, l.h), (s_g, g.s), (h_g, g.h)] {
+                assert!(
+                    (constant - computed).abs() <= 0.05 * LINE_MARGIN,
+                    "{t} K: {constant} vs {computed}"
+                );
+            }
+        }
+    }
+
+    /// The 1073.15 K isotherm of region 2: its entropy at 100 MPa, and an
+    /// enthalpy that falls with p from its p → 0 limit (the shortcut of
+    /// `is_region5` needs every point below that limit).
+    #[test]
+    fn the_region5_isotherm_constants_bound_the_isotherm() {
+        let t = REGION2_MAX_TEMPERATURE;
+        let at_100 = Equation::Region2.evaluate(MAX_PRESSURE, t);
+        assert!((at_100.s - S_ISOTHERM_1073_AT_100).abs() <= 1e-3 * LINE_MARGIN);
+        let limit = Equation::Region2.evaluate(LOWEST_PRESSURE, t).h;
+        assert!((limit - H_ISOTHERM_1073_HIGHEST).abs() <= 1e-3 * LINE_MARGIN);
+        let mut previous = limit;
+        for k in 0..=2000 {
+            // 1e-20 MPa to 100 MPa, logarithmically.
+            let p = 10f64.powf(-20.0 + 22.0 * f64::from(k) / 2000.0);
+            let h = Equation::Region2.evaluate(p, t).h;
+            assert!(h <= previous, "h rises with p at {p} MPa: {h} > {previous}");
+            previous = h;
+        }
+    }
+
+    /// Points on and a hair off the 273.15 K and 623.15 K lines, their
+    /// ends included, on either side of the constants' margin: a wet state
+    /// found reproduces (h, s), and inside the dome just above the 273.15 K
+    /// line there is one (near x = 0 such a point may be liquid instead).
+    #[test]
+    fn points_near_the_bracketing_lines_solve_as_wet_steam_or_not() {
+        for t in [MIN_TEMPERATURE, REGION13_TEMPERATURE] {
+            let sat = Saturation::at_temperature(t, Units::Native).unwrap();
+            let (l, g) = (*sat.liquid().native(), *sat.vapour().native());
+            for x in [0.0, 1e-9, 0.3, 0.999_999, 1.0] {
+                let (h, s) = (l.h + x * (g.h - l.h), l.s + x * (g.s - l.s));
+                for dh in [-1e-5, -1e-8, 0.0, 1e-8, 1e-5] {
+                    let h = h + dh;
+                    let wet = attempt_wet(h, s);
+                    if let Ok(Attempt::Inside(state)) = wet {
+                        let native = state.native();
+                        let scale = |a: f64| (1e-10 * a.abs()).max(1e-9);
+                        assert!((native.h - h).abs() <= scale(h), "{t} K, x {x}, dh {dh}");
+                        assert!((native.s - s).abs() <= scale(s), "{t} K, x {x}, dh {dh}");
+                    } else if t == MIN_TEMPERATURE && dh > 0.0 && x == 0.3 {
+                        panic!("above the 273.15 K line, x {x}, dh {dh}: not wet");
+                    }
+                }
+            }
+        }
     }
 }

@@ -19,9 +19,11 @@ use crate::constants::*;
 use crate::error::{native_input, Error};
 use crate::free_energy::Properties;
 use crate::inverse::{refine, Bounds, Equation, Given};
+use crate::math::ln;
 use crate::region3_density::Branch;
 use crate::regions::{locate, region3_phase, single_phase, Located};
 use crate::saturation::Saturation;
+use crate::saturation_line::{saturation_pressure, saturation_pressure_slope};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
 
@@ -62,17 +64,91 @@ pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
             Equation::Region1,
         ]
     };
-    for equation in order {
-        if let Some(state) = single_phase_state(equation, v, u, units) {
-            return Ok(state);
+    // Inside the dome the single-phase attempts all fail, at great cost:
+    // where the isochore meets the saturated vapour, u decides first.
+    let edge = if !liquid_like && u < U_VAPOUR_HIGHEST {
+        saturation_edge(v)
+    } else {
+        None
+    };
+    let wet = matches!(edge, Some((_, u_edge)) if u < u_edge * (1.0 - EDGE_MARGIN));
+    if !wet {
+        for equation in order {
+            if let Some(state) = single_phase_state(equation, v, u, units) {
+                return Ok(state);
+            }
+        }
+        if matches!(edge, Some((_, u_edge)) if u > u_edge * (1.0 + EDGE_MARGIN)) {
+            // Above the dew point of its isochore: no wet state either.
+            return Err(NO_STATE);
         }
     }
-    if let Some(state) = wet_state(v, u)? {
+    let t_wet = match edge {
+        Some((t, _)) if wet => t,
+        _ => CRITICAL_TEMPERATURE,
+    };
+    if let Some(state) = wet_state(v, u, t_wet)? {
         return Ok(state.in_units(units));
     }
-    Err(Error::NoStateInRange {
-        pair: "specific volume and internal energy",
-    })
+    Err(NO_STATE)
+}
+
+const NO_STATE: Error = Error::NoStateInRange {
+    pair: "specific volume and internal energy",
+};
+
+/// Above the highest u of the saturated vapour of region 2, kJ/kg
+/// (2603.325 at 509.65 K, computed on R7-97 region 2 at psat; the module's
+/// test checks it), no isochore is wet at its region 2 edge.
+const U_VAPOUR_HIGHEST: f64 = 2_603.4;
+
+/// How far (relative) u must lie from the saturated phase's at the
+/// isochore's edge of the dome to be decided by it; nearer, every region
+/// is tried as for a point off the dome.
+const EDGE_MARGIN: f64 = 1e-9;
+
+/// Where the isochore v meets the saturated vapour of region 2 (at most
+/// 623.15 K): that temperature and the vapour's u there. Below it (in T,
+/// and so in u) the isochore is wet, above it single-phase. `None` where
+/// the isochore meets the line elsewhere (v below v''(623.15 K), where the
+/// region 3 attempts come first, or above v''(273.15 K)) or the iteration
+/// does not settle.
+fn saturation_edge(v: f64) -> Option<(f64, f64)> {
+    let vapour = |t: f64| Equation::Region2.evaluate(saturation_pressure(t), t);
+    // Newton on ln v in 1/T, nearly linear (Clapeyron and ideal gas): first
+    // on the ideal gas v = RT/psat (psat alone is cheap), then on region 2,
+    // where along the line d ln v/dT = αv − κT·dpsat/dT.
+    let mut t: f64 = 400.0;
+    for _ in 0..12 {
+        let p = saturation_pressure(t);
+        let excess = ln(SPECIFIC_GAS_CONSTANT * t / (1e3 * p * v));
+        let slope = 1.0 / t - saturation_pressure_slope(t) / p;
+        let next = 1.0 / (1.0 / t + excess / (t * t * slope));
+        // Far outside the line's span the isochore misses it.
+        if !(next.is_finite() && next > 0.5 * MIN_TEMPERATURE && next < 2.0 * REGION13_TEMPERATURE)
+        {
+            return None;
+        }
+        let settled = (next - t).abs() <= 1e-3 * t;
+        t = next;
+        if settled {
+            break;
+        }
+    }
+    for _ in 0..30 {
+        let props = vapour(t);
+        let excess = ln(props.v / v);
+        let slope = props.alpha_v - props.kappa_t * saturation_pressure_slope(t);
+        let next = 1.0 / (1.0 / t + excess / (t * t * slope));
+        if !(next.is_finite() && (MIN_TEMPERATURE..=REGION13_TEMPERATURE).contains(&next)) {
+            return None;
+        }
+        if (next - t).abs() <= 4.0 * f64::EPSILON * t {
+            return Some((next, vapour(next).u));
+        }
+        t = next;
+    }
+    None
 }
 
 /// The stable state on `equation`, if the pair has one there.
@@ -93,6 +169,18 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
         }
         Equation::Region1 => liquid(v, u)?,
         Equation::Region2 => {
+            // u rises with T along the isochore: above its u at 1073.15 K
+            // the state is region 5's, if any (one isotherm solve, where
+            // the iteration below would exhaust its steps).
+            if could_hold(Equation::Region5, v, u) {
+                let p =
+                    (SPECIFIC_GAS_CONSTANT * REGION2_MAX_TEMPERATURE / (1e3 * v)).min(MAX_PRESSURE);
+                if let Ok(hot) = pressure_on_isotherm(equation, v, REGION2_MAX_TEMPERATURE, p) {
+                    if hot.u < u {
+                        return None;
+                    }
+                }
+            }
             along_isochore(equation, v, u, (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE))?
         }
         Equation::Region5 => {
@@ -310,13 +398,14 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
 
 const WET_STEPS: u32 = 100;
 
-/// Wet steam with this (v, u), if there is such a state.
-fn wet_state(v: f64, u: f64) -> Result<Option<State>, Error> {
+/// Wet steam with this (v, u), if there is such a state at or below
+/// `t_max`.
+fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     // Along the isochore the mixture's u rises with T up to where the
     // isochore leaves the dome (x reaches 0 or 1): a bracket on T, shrunk
     // by regula falsi (Illinois variant) where both ends have a mixture and
     // by bisection where the upper end lies outside the dome.
-    let (mut lo, mut hi) = (MIN_TEMPERATURE, CRITICAL_TEMPERATURE);
+    let (mut lo, mut hi) = (MIN_TEMPERATURE, t_max);
     let (mut f_lo, mut f_hi): (Option<f64>, Option<f64>) = (None, None);
     let mut found = None;
     let mut last_side = 0i8;
@@ -373,4 +462,27 @@ fn wet_state(v: f64, u: f64) -> Result<Option<State>, Error> {
         return Ok(None);
     }
     sat.mixture(x).map(Some)
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// `U_VAPOUR_HIGHEST` lies above u'' of region 2 along the whole
+    /// saturation line up to 623.15 K, and within 0.1 kJ/kg of its peak.
+    #[test]
+    fn the_saturated_vapour_stays_below_u_vapour_highest() {
+        let n = 35_000;
+        let highest = (0..=n)
+            .map(|k| {
+                let t = MIN_TEMPERATURE
+                    + (REGION13_TEMPERATURE - MIN_TEMPERATURE) * f64::from(k) / f64::from(n);
+                Equation::Region2.evaluate(saturation_pressure(t), t).u
+            })
+            .fold(f64::MIN, f64::max);
+        assert!(
+            highest < U_VAPOUR_HIGHEST && highest > U_VAPOUR_HIGHEST - 0.1,
+            "{highest}"
+        );
+    }
 }

@@ -1,0 +1,42 @@
+//! The (v, u) pair, `State::from_vu`, around the dew line, where the
+//! solver decides between wet steam and vapour by the saturated vapour's u
+//! on the isochore: states on the line, a hair inside the dome and a hair
+//! outside it, from (T, x) and (p, T) on the basic equations of IAPWS
+//! R7-97(2012), come back with the same phase and reproduce (v, u)
+//! (relative 1e-10, the promise).
+
+use ebullio::saturation_line::saturation_pressure;
+use ebullio::{Phase, State, Units};
+
+const NATIVE: Units = Units::Native;
+
+#[track_caller]
+fn comes_back(what: &str, a: &State) -> State {
+    let (v, u) = (a.specific_volume(), a.internal_energy());
+    let b = State::from_vu(v, u, NATIVE).unwrap_or_else(|e| panic!("{what}: {e}"));
+    let close = |x: f64, y: f64| (x - y).abs() <= 1e-10 * y.abs();
+    assert!(close(b.specific_volume(), v), "v of {what}: {b:?}");
+    assert!(close(b.internal_energy(), u), "u of {what}: {b:?}");
+    b
+}
+
+#[test]
+fn states_at_the_dew_line_keep_their_side() {
+    for t in [273.2, 300.0, 373.15, 450.0, 509.65, 550.0, 600.0, 623.1] {
+        let on = State::from_tx(t, 1.0, NATIVE).unwrap();
+        let back = comes_back(&format!("x = 1 at {t} K"), &on);
+        assert!((back.temperature() - t).abs() <= 1e-6 * t, "{back:?}");
+        for x in [1.0 - 1e-6, 0.999, 0.5] {
+            let wet = State::from_tx(t, x, NATIVE).unwrap();
+            let back = comes_back(&format!("x = {x} at {t} K"), &wet);
+            assert_eq!(back.phase(), Phase::WetSteam, "x = {x} at {t} K");
+            assert!((back.quality().unwrap() - x).abs() <= 1e-9, "{back:?}");
+        }
+        for dt in [1e-3, 1.0] {
+            let vapour = State::from_pt(saturation_pressure(t), t + dt, NATIVE).unwrap();
+            let back = comes_back(&format!("{dt} K above the dew point at {t} K"), &vapour);
+            assert_eq!(back.phase(), vapour.phase(), "{dt} K above {t} K");
+            assert!((back.temperature() - t - dt).abs() <= 1e-6 * t, "{back:?}");
+        }
+    }
+}
