@@ -9,7 +9,7 @@ Attribute VB_Name = "EbullioWorksheet"
 ' reference) is exercised on Linux by ffi/tests/python/test_ctypes.py.
 '
 ' In a cell:   =SteamProperty(6, 1, 30, 540)          h at 30 bar, 540 degC
-'              =SteamEnthalpyPT(167, 538, 2)          main steam, metric
+'              =EnthalpyAtPressureAndTemperature(167, 538, 2)          main steam, metric
 '              =SteamMessage(1, 2000, 300, 2)         why a state fails
 '              =SteamProperty(20, 1, 1, 40)           Prandtl number of condensate
 '              =SteamDerivative(4, 1, 6, 2, 5, 2500)  (drho/dp)_h of wet steam
@@ -117,21 +117,21 @@ Public Function SteamDerivative(ByVal z As Long, ByVal x As Long, ByVal y As Lon
 End Function
 
 ' Enthalpy from pressure and temperature.
-Public Function SteamEnthalpyPT(ByVal p As Double, ByVal t As Double, _
+Public Function EnthalpyAtPressureAndTemperature(ByVal p As Double, ByVal t As Double, _
         Optional ByVal units As Long = EBULLIO_UNITS_METRIC_ENGINEERING) As Variant
-    SteamEnthalpyPT = SteamProperty(EBULLIO_PROPERTY_ENTHALPY, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, p, t, units)
+    EnthalpyAtPressureAndTemperature = SteamProperty(EBULLIO_PROPERTY_ENTHALPY, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, p, t, units)
 End Function
 
 ' Entropy from pressure and temperature.
-Public Function SteamEntropyPT(ByVal p As Double, ByVal t As Double, _
+Public Function EntropyAtPressureAndTemperature(ByVal p As Double, ByVal t As Double, _
         Optional ByVal units As Long = EBULLIO_UNITS_METRIC_ENGINEERING) As Variant
-    SteamEntropyPT = SteamProperty(EBULLIO_PROPERTY_ENTROPY, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, p, t, units)
+    EntropyAtPressureAndTemperature = SteamProperty(EBULLIO_PROPERTY_ENTROPY, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, p, t, units)
 End Function
 
 ' Temperature from pressure and enthalpy (turbine expansion, heater drains).
-Public Function SteamTemperaturePH(ByVal p As Double, ByVal h As Double, _
+Public Function TemperatureAtPressureAndEnthalpy(ByVal p As Double, ByVal h As Double, _
         Optional ByVal units As Long = EBULLIO_UNITS_METRIC_ENGINEERING) As Variant
-    SteamTemperaturePH = SteamProperty(EBULLIO_PROPERTY_TEMPERATURE, EBULLIO_INPUT_PAIR_PRESSURE_ENTHALPY, p, h, units)
+    TemperatureAtPressureAndEnthalpy = SteamProperty(EBULLIO_PROPERTY_TEMPERATURE, EBULLIO_INPUT_PAIR_PRESSURE_ENTHALPY, p, h, units)
 End Function
 
 ' Saturation temperature at a pressure (quality 0 on the line).
