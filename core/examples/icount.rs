@@ -1,6 +1,7 @@
 //! Instruction-count probe: run under callgrind; argument selects the call
 //! (1–8 the basic equations and (p,T) states, 9–14 (p,h) and (p,s) in
-//! regions 1, 2 and 5).
+//! regions 1, 2 and 5, 15 a region 3 saturation point at 20 MPa, 16–17 wet (h,s) at 0.01 and
+//! 20 MPa).
 use std::hint::black_box;
 fn main() {
     let which: u32 = std::env::args()
@@ -97,6 +98,18 @@ fn main() {
                     ebullio::State::from_ps(p, s, native)
                 };
                 state.unwrap().temperature()
+            }
+            15 => {
+                let p = black_box(20.0 + 1e-3 * (k & 7) as f64);
+                let sat = ebullio::Saturation::at_pressure(p, native).unwrap();
+                sat.liquid().enthalpy() + sat.vapour().enthalpy()
+            }
+            16 | 17 => {
+                let p = if which == 16 { 0.01 } else { 20.0 };
+                let x = 0.1 * f64::from((k & 7) as u32 + 1);
+                let wet = ebullio::State::from_px(p, x, native).unwrap();
+                let (h, s) = black_box((wet.enthalpy(), wet.entropy()));
+                ebullio::State::from_hs(h, s, native).unwrap().temperature()
             }
             _ => 0.0,
         };

@@ -13,7 +13,7 @@
 //! unverified subregions) or its bracket fails, the branch is bracketed
 //! from the saturated-density estimates instead.
 
-use crate::backward::sr5_05;
+use crate::backward::sr5_05::{self, SaturationSide};
 use crate::constants::{CRITICAL_DENSITY, SPECIFIC_GAS_CONSTANT};
 use crate::error::Error;
 use crate::region3::pressure_and_slope;
@@ -49,9 +49,15 @@ pub(crate) fn density(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
 /// The root from the SR5-05 start, if its narrow bracket holds the root of
 /// the wanted branch.
 fn from_backward_start(p: f64, t: f64, branch: Branch) -> Option<f64> {
-    let rho0 = 1.0 / sr5_05::specific_volume(p, t)?;
-    // On the saturation line SR5-05's subregion choice and ours may differ
-    // by a rounding; the liquid root lies above ρc, the vapour root below.
+    // A saturated phase lies on the line between two subregions: the side
+    // is the branch's, not T against T_s(p), which rounding decides.
+    let subregion = match branch {
+        Branch::Liquid => sr5_05::locate_on_side(p, t, SaturationSide::Liquid),
+        Branch::Vapour => sr5_05::locate_on_side(p, t, SaturationSide::Vapour),
+        Branch::Supercritical => sr5_05::locate(p, t),
+    };
+    let rho0 = 1.0 / sr5_05::specific_volume_in(subregion, p, t)?;
+    // The liquid root lies above ρc, the vapour root below.
     let on_branch = match branch {
         Branch::Liquid => rho0 > CRITICAL_DENSITY,
         Branch::Vapour => rho0 < CRITICAL_DENSITY,

@@ -160,6 +160,37 @@ fn the_split_follows_the_release_ranges() {
     side(22.09, t_3wx(22.09), Z, X);
 }
 
+#[test]
+fn a_saturated_phase_is_given_its_own_sides_subregion() {
+    use ebullio::backward::sr5_05::{locate_on_side, SaturationSide};
+    use ebullio::saturation_line::saturation_temperature;
+    use Subregion::*;
+    // IAPWS SR5-05(2016), Table 2 (recalled): along the saturation line the
+    // liquid lies in 3c (below p_3cd) or 3s and the vapour in 3t or 3r;
+    // nearer the critical point the auxiliary 3u/3y and 3x/3z.
+    let cases = [
+        (17.0, C, T),
+        (20.0, S, T),
+        (20.8, S, R),
+        (21.5, U, X),
+        (22.0, Y, Z),
+    ];
+    for (p, liquid, vapour) in cases {
+        let t = saturation_temperature(p);
+        assert_eq!(locate_on_side(p, t, SaturationSide::Liquid), liquid, "{p}");
+        assert_eq!(locate_on_side(p, t, SaturationSide::Vapour), vapour, "{p}");
+        // Off the line the side given agrees with T against T_s(p).
+        assert_eq!(
+            locate_on_side(p, t - 1e-3, SaturationSide::Liquid),
+            locate(p, t - 1e-3)
+        );
+        assert_eq!(
+            locate_on_side(p, t + 1e-3, SaturationSide::Vapour),
+            locate(p, t + 1e-3)
+        );
+    }
+}
+
 // Left out because the recalled coefficients do not reproduce the
 // release's printed values (see the report that came with this file):
 // subregions 3e, 3h, 3n (IAPWS SR5-05(2016), Table 5) and 3x (Table 13),

@@ -28,7 +28,7 @@ mod tables_l_to_t;
 mod tables_u_to_z;
 
 pub use specific_volume::{specific_volume, specific_volume_in};
-pub use subregion::{locate, Subregion};
+pub use subregion::{locate, locate_on_side, SaturationSide, Subregion};
 pub use subregion_boundaries::{
     t_3ab, t_3cd, t_3ef, t_3gh, t_3ij, t_3jk, t_3mn, t_3op, t_3qu, t_3rx, t_3uv, t_3wx,
 };

@@ -147,6 +147,30 @@ const P_WX_SAT: f64 = 21.90096265;
 /// as in the release (T ≤ T_3xy(p)); a pressure on a fixed pressure limit
 /// belongs to the lower-pressure range (p ≤ limit).
 pub fn locate(p: f64, t: f64) -> Subregion {
+    locate_beside_saturation(p, t, || t <= saturation_temperature(p))
+}
+
+/// The side of the saturation line a state is wanted on.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub enum SaturationSide {
+    /// The liquid side: T ≤ T_s(p).
+    Liquid,
+    /// The vapour side: T > T_s(p).
+    Vapour,
+}
+
+/// As [`locate`], with the side of the saturation line given rather than
+/// decided by T against T_s(p): on the line itself (a saturated phase),
+/// where rounding in T_s(p) could put the state on either side, the
+/// subregion of the wanted phase. Above the critical pressure the side
+/// plays no part.
+pub fn locate_on_side(p: f64, t: f64, side: SaturationSide) -> Subregion {
+    locate_beside_saturation(p, t, || side == SaturationSide::Liquid)
+}
+
+/// The subregion tree of the release, with `liquid_side` answering
+/// T ≤ T_s(p) where the tree asks it.
+fn locate_beside_saturation(p: f64, t: f64, liquid_side: impl Fn() -> bool) -> Subregion {
     use Subregion as S;
     if p > 40.0 {
         if t <= t_3ab(p) {
@@ -206,7 +230,7 @@ pub fn locate(p: f64, t: f64) -> Subregion {
         } else if t <= t_3qu(p) {
             S::Q
         } else if t <= t_3rx(p) {
-            near_critical(p, t)
+            near_critical(p, t, liquid_side)
         } else if t <= t_3jk(p) {
             S::R
         } else {
@@ -215,7 +239,7 @@ pub fn locate(p: f64, t: f64) -> Subregion {
     } else if p > 20.5 {
         if t <= t_3cd(p) {
             S::C
-        } else if t <= saturation_temperature(p) {
+        } else if liquid_side() {
             S::S
         } else if t <= t_3jk(p) {
             S::R
@@ -225,12 +249,12 @@ pub fn locate(p: f64, t: f64) -> Subregion {
     } else if p > P_3CD {
         if t <= t_3cd(p) {
             S::C
-        } else if t <= saturation_temperature(p) {
+        } else if liquid_side() {
             S::S
         } else {
             S::T
         }
-    } else if t <= saturation_temperature(p) {
+    } else if liquid_side() {
         S::C
     } else {
         S::T
@@ -239,7 +263,7 @@ pub fn locate(p: f64, t: f64) -> Subregion {
 
 /// The auxiliary subregion 3u … 3z for p_s(643.15 K) < p ≤ 22.5 MPa and
 /// T_3qu(p) < T ≤ T_3rx(p), IAPWS SR5-05(2016), Section 4.2 (recalled).
-fn near_critical(p: f64, t: f64) -> Subregion {
+fn near_critical(p: f64, t: f64, liquid_side: impl Fn() -> bool) -> Subregion {
     use Subregion as S;
     if p > 22.11 {
         if t <= t_3uv(p) {
@@ -261,7 +285,7 @@ fn near_critical(p: f64, t: f64) -> Subregion {
         } else {
             S::X
         }
-    } else if t <= saturation_temperature(p) {
+    } else if liquid_side() {
         if p > P_UV_SAT && t > t_3uv(p) {
             S::Y
         } else {
