@@ -115,26 +115,10 @@ const EDGE_MARGIN: f64 = 1e-9;
 /// does not settle.
 fn saturation_edge(v: f64) -> Option<(f64, f64)> {
     let vapour = |t: f64| Equation::Region2.evaluate(saturation_pressure(t), t);
-    // Newton on ln v in 1/T, nearly linear (Clapeyron and ideal gas): first
-    // on the ideal gas v = RT/psat (psat alone is cheap), then on region 2,
-    // where along the line d ln v/dT = αv − κT·dpsat/dT.
-    let mut t: f64 = 400.0;
-    for _ in 0..12 {
-        let p = saturation_pressure(t);
-        let excess = ln(SPECIFIC_GAS_CONSTANT * t / (1e3 * p * v));
-        let slope = 1.0 / t - saturation_pressure_slope(t) / p;
-        let next = 1.0 / (1.0 / t + excess / (t * t * slope));
-        // Far outside the line's span the isochore misses it.
-        if !(next.is_finite() && next > 0.5 * MIN_TEMPERATURE && next < 2.0 * REGION13_TEMPERATURE)
-        {
-            return None;
-        }
-        let settled = (next - t).abs() <= 1e-3 * t;
-        t = next;
-        if settled {
-            break;
-        }
-    }
+    // Newton on ln v in 1/T, nearly linear (Clapeyron and ideal gas): from
+    // the ideal gas's dew point on region 2, where along the line
+    // d ln v/dT = αv − κT·dpsat/dT.
+    let mut t = ideal_gas_dew_point(v)?;
     for _ in 0..30 {
         let props = vapour(t);
         let excess = ln(props.v / v);
@@ -149,6 +133,29 @@ fn saturation_edge(v: f64) -> Option<(f64, f64)> {
         t = next;
     }
     None
+}
+
+/// Where the isochore v of the ideal gas v = RT/psat(T) meets the
+/// saturation line, to 0.1 %, K (psat alone is cheap): Newton on ln v in
+/// 1/T. `None` far outside the line's span, where the isochore misses it.
+fn ideal_gas_dew_point(v: f64) -> Option<f64> {
+    let mut t: f64 = 400.0;
+    for _ in 0..12 {
+        let p = saturation_pressure(t);
+        let excess = ln(SPECIFIC_GAS_CONSTANT * t / (1e3 * p * v));
+        let slope = 1.0 / t - saturation_pressure_slope(t) / p;
+        let next = 1.0 / (1.0 / t + excess / (t * t * slope));
+        if !(next.is_finite() && next > 0.5 * MIN_TEMPERATURE && next < 2.0 * REGION13_TEMPERATURE)
+        {
+            return None;
+        }
+        let settled = (next - t).abs() <= 1e-3 * t;
+        t = next;
+        if settled {
+            break;
+        }
+    }
+    Some(t)
 }
 
 /// The stable state on `equation`, if the pair has one there.
@@ -181,7 +188,7 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
                     }
                 }
             }
-            along_isochore(equation, v, u, (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE))?
+            vapour(v, u)?
         }
         Equation::Region5 => {
             along_isochore(equation, v, u, (REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE))?
@@ -230,6 +237,50 @@ fn liquid(v: f64, u: f64) -> Option<Properties> {
             )
         })
 }
+
+/// Region 2: Newton in (p, T) together from the ideal gas — T where u
+/// would lie on a straight line from the saturated vapour at the triple
+/// point (2375 kJ/kg) at the low-pressure vapour's mean cv of 1.61
+/// kJ/(kg·K) up to 1073.15 K, but not below the ideal gas's dew point of
+/// the isochore, and p = RT/v — falling back to the isochore where that
+/// start is too far off (dense steam).
+fn vapour(v: f64, u: f64) -> Option<Properties> {
+    let isochore = || {
+        along_isochore(
+            Equation::Region2,
+            v,
+            u,
+            (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE),
+        )
+    };
+    if v < IDEAL_START_MIN_VOLUME {
+        return isochore();
+    }
+    let t_line =
+        (MIN_TEMPERATURE + (u - 2_375.0) / 1.61).clamp(MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE);
+    // The dew point is wanted only where the line's T would be inside the
+    // ideal gas's dome (its saturated vapour there less dense than v).
+    let t0 = if t_line >= REGION13_TEMPERATURE
+        || SPECIFIC_GAS_CONSTANT * t_line / (1e3 * saturation_pressure(t_line)) <= v
+    {
+        t_line
+    } else {
+        ideal_gas_dew_point(v).map_or(t_line, |t_dew| t_line.max(t_dew))
+    };
+    let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, MAX_PRESSURE);
+    let bounds = Bounds {
+        x: (P_FLOOR, P_CEILING),
+        t: (MIN_TEMPERATURE - 1.0, REGION2_MAX_TEMPERATURE + 1.0),
+    };
+    let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
+    refine(Equation::Region2, targets.0, targets.1, (p0, t0), bounds)
+        .ok()
+        .or_else(isochore)
+}
+
+/// Below this specific volume (above 50 kg/m³) steam is too far from the
+/// ideal gas for the (p, T) start to be near, m³/kg.
+const IDEAL_START_MIN_VOLUME: f64 = 0.02;
 
 /// A Gibbs region's state with specific volume `v` and internal energy
 /// `u`: Newton's method in T along the isochore (∂u/∂T at constant v is
