@@ -203,14 +203,17 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
 /// them): region 1 has v ≤ 0.00174 m³/kg and u ≤ 1642.1 kJ/kg (both at
 /// 623.15 K on the saturation line); region 3 has 113.6 ≤ ρ ≤ 762.4 kg/m³
 /// and 1422.7 ≤ u ≤ 2554.5 kJ/kg; region 5 has v ≥ 0.00907 m³/kg and
-/// u ≥ 3472 kJ/kg (at 1073.15 K, 50 MPa). Skipping a region that cannot
-/// hold the state saves a failing iteration.
+/// u ≥ 3472 kJ/kg (at 1073.15 K, 50 MPa); region 2 steam denser than
+/// its saturated vapour at 623.15 K (v < 0.0088009 m³/kg) has
+/// u ≥ 2418.12 kJ/kg, that vapour's. Skipping a region that cannot hold the
+/// state saves a failing iteration (for wet steam in region 3's part of the
+/// dome, most of the cost).
 fn could_hold(equation: Equation, v: f64, u: f64) -> bool {
     match equation {
         Equation::Region1 => v <= 0.00175 && u <= 1650.0,
         Equation::Region3 => (105.0..=770.0).contains(&(1.0 / v)) && (1400.0..=2570.0).contains(&u),
         Equation::Region5 => v >= 0.009 && u >= 3450.0,
-        Equation::Region2 => true,
+        Equation::Region2 => v >= 0.0088 || u >= 2418.0,
     }
 }
 
@@ -453,31 +456,25 @@ const WET_STEPS: u32 = 100;
 /// `t_max`.
 fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     // Along the isochore the mixture's u rises with T up to where the
-    // isochore leaves the dome (x reaches 0 or 1): a bracket on T, shrunk
-    // by regula falsi (Illinois variant) where both ends have a mixture and
-    // by bisection where the upper end lies outside the dome.
+    // isochore leaves the dome (x reaches 0 or 1): Newton's method in T
+    // with the exact slope, kept inside a bracket that bisection shrinks
+    // where a step would leave it or the upper end lies outside the dome.
+    // The start is the upper end, where the isochore leaves the dome at
+    // its dew point when that is known.
     let (mut lo, mut hi) = (MIN_TEMPERATURE, t_max);
-    let (mut f_lo, mut f_hi): (Option<f64>, Option<f64>) = (None, None);
+    let mut t = if t_max < CRITICAL_TEMPERATURE {
+        t_max
+    } else {
+        0.5 * (lo + hi)
+    };
     let mut found = None;
-    let mut last_side = 0i8;
     for _ in 0..WET_STEPS {
-        let t = match (f_lo, f_hi) {
-            (Some(a), Some(b)) if b > a => {
-                let secant = lo + (hi - lo) * (-a) / (b - a);
-                if secant > lo && secant < hi {
-                    secant
-                } else {
-                    0.5 * (lo + hi)
-                }
-            }
-            _ => 0.5 * (lo + hi),
-        };
         let sat = Saturation::at_temperature(t, Units::Native)?;
         let (l, g) = (sat.liquid().native(), sat.vapour().native());
         let x = (v - l.v) / (g.v - l.v);
+        let mut newton = f64::NAN;
         if !(0.0..=1.0).contains(&x) {
             hi = t;
-            f_hi = None;
         } else {
             let u_mix = (1.0 - x) * l.u + x * g.u;
             let f = u_mix - u;
@@ -487,21 +484,16 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
             }
             if f < 0.0 {
                 lo = t;
-                f_lo = Some(f);
-                // Illinois: halve the stale end's value when one end repeats.
-                if last_side == -1 {
-                    f_hi = f_hi.map(|b| 0.5 * b);
-                }
-                last_side = -1;
             } else {
                 hi = t;
-                f_hi = Some(f);
-                if last_side == 1 {
-                    f_lo = f_lo.map(|a| 0.5 * a);
-                }
-                last_side = 1;
             }
+            newton = quality_match_step(l, g, v, u);
         }
+        t = if newton > lo && newton < hi {
+            newton
+        } else {
+            0.5 * (lo + hi)
+        };
         if hi - lo <= 4.0 * f64::EPSILON * hi {
             break;
         }
@@ -513,6 +505,36 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
         return Ok(None);
     }
     sat.mixture(x).map(Some)
+}
+
+/// The next temperature of Newton's method on
+/// F = ln x_v − ln x_u, the logarithms of the qualities the lever rule
+/// gives from v and from u, in the variable 1/T: ln x_v ≈ ln v − ln v''
+/// is nearly linear in 1/T (Clausius–Clapeyron, ideal vapour) and ln x_u
+/// changes slowly, so the steps stay good far from the root, where u_mix − u
+/// itself is nearly exponential in 1/T. NaN where either quality is not
+/// positive. Along the line each phase moves by dv/dT = v(αv − κT·p'),
+/// dh/dT = cp + v(1 − Tαv)·p' and du/dT = dh/dT − p·dv/dT − v·p'
+/// (p' = dpsat/dT).
+fn quality_match_step(l: &Properties, g: &Properties, v: f64, u: f64) -> f64 {
+    let t = l.t;
+    let x_v = (v - l.v) / (g.v - l.v);
+    let x_u = (u - l.u) / (g.u - l.u);
+    if !(x_v > 0.0 && x_u > 0.0) {
+        return f64::NAN;
+    }
+    let dp = saturation_pressure_slope(t);
+    let along = |phase: &Properties| {
+        let dv = phase.v * (phase.alpha_v - phase.kappa_t * dp);
+        let dh = phase.cp + 1e3 * phase.v * (1.0 - phase.t * phase.alpha_v) * dp;
+        (dv, dh - 1e3 * (phase.p * dv + phase.v * dp))
+    };
+    let ((dv_l, du_l), (dv_g, du_g)) = (along(l), along(g));
+    let dx_v = -(dv_l + x_v * (dv_g - dv_l)) / (g.v - l.v);
+    let dx_u = -(du_l + x_u * (du_g - du_l)) / (g.u - l.u);
+    let f = ln(x_v) - ln(x_u);
+    let slope = dx_v / x_v - dx_u / x_u;
+    1.0 / (1.0 / t + f / (t * t * slope))
 }
 
 #[cfg(test)]

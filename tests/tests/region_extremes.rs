@@ -1,4 +1,5 @@
-//! The extremes of v, ρ and u over regions 1, 3 and 5, which the (v, u)
+//! The extremes of v, ρ and u over regions 1, 3 and 5 (and of u over
+//! region 2's densest steam), which the (v, u)
 //! solver uses to skip regions that cannot hold a state
 //! (`core/src/pair_vu.rs`, `could_hold`). They follow from the basic
 //! equations of IAPWS R7-97(2012); here they are measured along each
@@ -57,6 +58,33 @@ fn region3_is_within_rho_105_to_770_and_u_1400_to_2570() {
             (105.0..=770.0).contains(&rho) && (1400.0..=2570.0).contains(&u),
             "{s:?}"
         );
+    }
+}
+
+#[test]
+fn region2_denser_than_0_0088_is_above_u_2418() {
+    // Denser than the saturated vapour at 623.15 K, region 2 lies beyond
+    // B23; u rises with T along isobars and falls with p along isotherms,
+    // so the extreme is on B23 (measured at its 623.15 K end, 2418.12
+    // kJ/kg). A grid over the whole of that part of the region as well.
+    let b23 = (0..=N).map(|k| {
+        let t = span(k, 623.15, 863.15);
+        ((boundary_b23::pressure(t) * (1.0 - 1e-12)).min(100.0), t)
+    });
+    let grid = (0..=N).map(|k| {
+        let (i, j) = (k % 64, k / 64);
+        (
+            16.5 + 83.5 * i as f64 / 63.0,
+            623.15 + 450.0 * j as f64 / 62.0,
+        )
+    });
+    let dense: Vec<State> = states_of(Region::Two, b23.chain(grid))
+        .into_iter()
+        .filter(|s| s.specific_volume() < 0.0088)
+        .collect();
+    assert!(dense.len() > N / 2, "{}", dense.len());
+    for s in dense {
+        assert!(s.internal_energy() >= 2418.0, "{s:?}");
     }
 }
 
