@@ -9,6 +9,7 @@
 //! one core call each.
 
 mod components;
+mod figures;
 mod heaters;
 mod result;
 mod spec;

@@ -403,6 +403,19 @@ fn blank_expansion() -> EbullioExpansion {
     }
 }
 
+fn blank_compression() -> EbullioCompression {
+    EbullioCompression {
+        size: size_of::<EbullioCompression>() as u32,
+        units: EbullioUnits::Native,
+        work: -1.0,
+        isentropic_work: -1.0,
+        incompressible_work: -1.0,
+        isentropic_efficiency: -1.0,
+        temperature_rise: -1.0,
+        entropy_generation: -1.0,
+    }
+}
+
 fn blank_state() -> EbullioState {
     let mut s = EbullioState::of(&State::from_pt(3.0, 300.0, Units::Native).unwrap());
     s.pressure = -1.0;
@@ -487,16 +500,7 @@ fn the_turbine_and_pump_calls_give_the_cores_bits() {
     // The boiler feed pump from the deaerator (saturated liquid at 9.215 bar).
     let water = State::solve(InputPair::PressureQuality, 9.215, 0.0, units, Method::Exact).unwrap();
     let pump = compress(&water, 187.0, 0.83).unwrap();
-    let mut c = EbullioCompression {
-        size: size_of::<EbullioCompression>() as u32,
-        units: EbullioUnits::Native,
-        work: -1.0,
-        isentropic_work: -1.0,
-        incompressible_work: -1.0,
-        isentropic_efficiency: -1.0,
-        temperature_rise: -1.0,
-        entropy_generation: -1.0,
-    };
+    let mut c = blank_compression();
     let mut outlet = blank_state();
     // SAFETY: as above.
     let status = unsafe {
@@ -617,16 +621,7 @@ fn the_component_calls_refuse_with_statuses_and_write_nothing() {
         assert_eq!(status, EbullioStatus::NullPointer);
         assert_eq!(d.status, EbullioStatus::NullPointer);
         // A pump fed with steam.
-        let mut c = EbullioCompression {
-            size: size_of::<EbullioCompression>() as u32,
-            units: EbullioUnits::Native,
-            work: -1.0,
-            isentropic_work: -1.0,
-            incompressible_work: -1.0,
-            isentropic_efficiency: -1.0,
-            temperature_rise: -1.0,
-            entropy_generation: -1.0,
-        };
+        let mut c = blank_compression();
         let status = ebullio_pump_compression(
             1,
             9.5,
@@ -645,14 +640,40 @@ fn the_component_calls_refuse_with_statuses_and_write_nothing() {
     assert_eq!((e, out), before);
 }
 
-fn blank_balance() -> EbullioHeaterBalance {
-    EbullioHeaterBalance {
-        size: size_of::<EbullioHeaterBalance>() as u32,
-        units: EbullioUnits::Native,
-        balancing_flow: -1.0,
-        through_flow: -1.0,
-        duty: -1.0,
-        entropy_generation: -1.0,
+/// The outputs of one heater call, blank (figures -1, as `blank_state`)
+/// so that what the call writes, and what a refusal leaves, shows.
+#[derive(Debug, PartialEq)]
+struct HeaterOutputs {
+    balance: EbullioHeaterBalance,
+    first: EbullioState,
+    second: EbullioState,
+}
+
+impl HeaterOutputs {
+    fn blank() -> HeaterOutputs {
+        HeaterOutputs {
+            balance: EbullioHeaterBalance {
+                size: size_of::<EbullioHeaterBalance>() as u32,
+                units: EbullioUnits::Native,
+                balancing_flow: -1.0,
+                through_flow: -1.0,
+                duty: -1.0,
+                entropy_generation: -1.0,
+            },
+            first: blank_state(),
+            second: blank_state(),
+        }
+    }
+
+    /// The balance holds the core's figures, bit for bit, in the test's
+    /// units (metric engineering).
+    fn same_balance(&self, balancing_flow: f64, through_flow: f64, duty: f64, generation: f64) {
+        let b = &self.balance;
+        assert_eq!(b.units, EbullioUnits::MetricEngineering);
+        same("balancing flow", b.balancing_flow, balancing_flow);
+        same("through flow", b.through_flow, through_flow);
+        same("duty", b.duty, duty);
+        same("entropy generation", b.entropy_generation, generation);
     }
 }
 
@@ -661,7 +682,7 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
     use ebullio::plant::{closed_heater, open_heater, spray_for_temperature};
     let units = EbullioUnits::MetricEngineering as u32;
     let u = Units::MetricEngineering;
-    let (mut b, mut first, mut second) = (blank_balance(), blank_state(), blank_state());
+    let mut o = HeaterOutputs::blank();
     // A closed heater at 4.074 bar with drains cascaded from above.
     // SAFETY: every pointer is to a local of the right type, sizes set.
     let status = unsafe {
@@ -678,9 +699,9 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
             1,
             5.6,
             units,
-            &mut b,
-            &mut first,
-            &mut second,
+            &mut o.balance,
+            &mut o.first,
+            &mut o.second,
             ptr::null_mut(),
         )
     };
@@ -693,17 +714,16 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
         drain_cooler_approach: Some(5.6),
     };
     let core = closed_heater(&steam, &water, 385.47, Some((21.11, &drains)), approach).unwrap();
-    same("extraction flow", b.balancing_flow, core.extraction_flow);
-    same("feedwater flow", b.through_flow, 385.47);
-    same("duty", b.duty, core.duty);
-    same(
-        "entropy generation",
-        b.entropy_generation,
+    o.same_balance(
+        core.extraction_flow,
+        385.47,
+        core.duty,
         core.entropy_generation,
     );
-    same_state(&first, &core.feedwater_out);
-    same_state(&second, &core.drain_out);
+    same_state(&o.first, &core.feedwater_out);
+    same_state(&o.second, &core.drain_out);
     // A deaerator at 9.215 bar without drains.
+    let mut o = HeaterOutputs::blank();
     // SAFETY: as above; a null state output is allowed.
     let status = unsafe {
         ebullio_open_heater(
@@ -716,8 +736,8 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
             0.0,
             0.0,
             units,
-            &mut b,
-            &mut first,
+            &mut o.balance,
+            &mut o.first,
             ptr::null_mut(),
         )
     };
@@ -725,15 +745,15 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
     let steam = State::from_ph(9.215, 3145.88, u).unwrap();
     let water = State::from_pt(9.215, 141.0, u).unwrap();
     let core = open_heater(&steam, &water, 503.22, None).unwrap();
-    same("extraction flow", b.balancing_flow, core.extraction_flow);
-    same("condensate flow", b.through_flow, core.feedwater_flow);
-    same(
-        "entropy generation",
-        b.entropy_generation,
+    o.same_balance(
+        core.extraction_flow,
+        core.feedwater_flow,
+        0.0,
         core.entropy_generation,
     );
-    same_state(&first, &core.outlet);
+    same_state(&o.first, &core.outlet);
     // Spray from 186 bar, 180 °C feedwater into 167 bar, 560 °C steam.
+    let mut o = HeaterOutputs::blank();
     // SAFETY: as above.
     let status = unsafe {
         ebullio_attemperator_spray(
@@ -744,8 +764,8 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
             180.0,
             538.0,
             units,
-            &mut b,
-            &mut first,
+            &mut o.balance,
+            &mut o.first,
             ptr::null_mut(),
         )
     };
@@ -753,16 +773,24 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
     let steam = State::from_pt(167.0, 560.0, u).unwrap();
     let spray = State::from_pt(186.0, 180.0, u).unwrap();
     let core = spray_for_temperature(&steam, 500.0, &spray, 538.0).unwrap();
-    same("spray flow", b.balancing_flow, core.spray_flow);
-    same_state(&first, &core.outlet);
+    o.same_balance(core.spray_flow, 500.0, 0.0, core.entropy_generation);
+    same_state(&o.first, &core.outlet);
     // Refusals leave the outputs as they were.
-    let (before_b, before_state) = (blank_balance(), blank_state());
-    let (mut b, mut first) = (blank_balance(), blank_state());
+    let mut o = HeaterOutputs::blank();
     let mut d = blank_detail();
     // SAFETY: as above.
     let status = unsafe {
         ebullio_attemperator_spray(
-            167.0, 560.0, 500.0, 186.0, 180.0, 600.0, units, &mut b, &mut first, &mut d,
+            167.0,
+            560.0,
+            500.0,
+            186.0,
+            180.0,
+            600.0,
+            units,
+            &mut o.balance,
+            &mut o.first,
+            &mut d,
         )
     };
     assert_eq!(status, EbullioStatus::InvalidPlant);
@@ -783,8 +811,8 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
             0,
             0.0,
             units,
-            &mut b,
-            &mut first,
+            &mut o.balance,
+            &mut o.first,
             ptr::null_mut(),
             ptr::null_mut(),
         )
@@ -803,10 +831,10 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
             0.0,
             units,
             ptr::null_mut(),
-            &mut first,
+            &mut o.first,
             ptr::null_mut(),
         )
     };
     assert_eq!(status, EbullioStatus::NullPointer);
-    assert_eq!((b, first), (before_b, before_state));
+    assert_eq!(o, HeaterOutputs::blank());
 }

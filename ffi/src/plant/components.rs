@@ -4,11 +4,12 @@
 //! figures into a small size-prefixed struct and, when asked, the end
 //! states into `EbullioState`s.
 
-use core::mem::{offset_of, size_of};
+use core::mem::size_of;
 
 use ebullio::plant::{compress, expand, section_efficiency, Compression, Expansion};
-use ebullio::{Error, Units};
+use ebullio::{Error, State, Units};
 
+use super::figures::figures_layout;
 use crate::args::{OutStruct, SizePrefixed};
 use crate::boundary::boundary;
 use crate::codes::{self, c_units, EbullioUnits};
@@ -36,18 +37,7 @@ pub struct EbullioExpansion {
     pub entropy_generation: f64,
 }
 
-const EXPANSION_V1_SIZE: usize = 8 + 4 * 8;
-
-const _: () = {
-    assert!(offset_of!(EbullioExpansion, work) == 8);
-    assert!(size_of::<EbullioExpansion>() == EXPANSION_V1_SIZE);
-};
-
-// SAFETY: `#[repr(C)]`, starts with `size: u32`, and the const asserts show
-// no padding: two 4-byte fields, then doubles.
-unsafe impl SizePrefixed for EbullioExpansion {
-    const FIRST_SIZE: u32 = EXPANSION_V1_SIZE as u32;
-}
+figures_layout!(EbullioExpansion, work, 4);
 
 /// The figures of one compression through a pump, per unit mass, in the
 /// call's units. Set `size = sizeof(EbullioCompression)` before the call.
@@ -74,18 +64,7 @@ pub struct EbullioCompression {
     pub entropy_generation: f64,
 }
 
-const COMPRESSION_V1_SIZE: usize = 8 + 6 * 8;
-
-const _: () = {
-    assert!(offset_of!(EbullioCompression, work) == 8);
-    assert!(size_of::<EbullioCompression>() == COMPRESSION_V1_SIZE);
-};
-
-// SAFETY: `#[repr(C)]`, starts with `size: u32`, and the const asserts show
-// no padding: two 4-byte fields, then doubles.
-unsafe impl SizePrefixed for EbullioCompression {
-    const FIRST_SIZE: u32 = COMPRESSION_V1_SIZE as u32;
-}
+figures_layout!(EbullioCompression, work, 6);
 
 impl EbullioExpansion {
     fn of(e: &Expansion) -> EbullioExpansion {
@@ -118,9 +97,23 @@ impl EbullioCompression {
 /// The caller's output pointers of a component call, checked: the
 /// figures and up to two states.
 pub(super) struct Outs<T: SizePrefixed> {
-    pub(super) figures: OutStruct<T>,
-    pub(super) end: Option<OutStruct<EbullioState>>,
-    pub(super) isentropic_end: Option<OutStruct<EbullioState>>,
+    figures: OutStruct<T>,
+    first: Option<OutStruct<EbullioState>>,
+    second: Option<OutStruct<EbullioState>>,
+}
+
+impl<T: SizePrefixed> Outs<T> {
+    /// Writes the figures, then each state whose output the caller gave
+    /// (`second` is `None` for a call with one state output).
+    pub(super) fn write(&self, figures: &T, first: &State, second: Option<&State>) {
+        self.figures.write(figures);
+        if let Some(out) = &self.first {
+            out.write(&EbullioState::of(first));
+        }
+        if let (Some(out), Some(state)) = (&self.second, second) {
+            out.write(&EbullioState::of(state));
+        }
+    }
 }
 
 /// The shared frame of the component calls: checks every pointer and the
@@ -129,13 +122,13 @@ pub(super) struct Outs<T: SizePrefixed> {
 /// the detail only on failure.
 ///
 /// # Safety
-/// As the exported calls document for `figures`, `end`, `isentropic_end`
-/// and `detail`.
+/// As the exported calls document for `figures`, the two states (`first`,
+/// `second`) and `detail`.
 pub(super) unsafe fn component_call<T: SizePrefixed, R>(
     units: u32,
     figures: *mut T,
-    end: *mut EbullioState,
-    isentropic_end: *mut EbullioState,
+    first: *mut EbullioState,
+    second: *mut EbullioState,
     detail: *mut EbullioErrorDetail,
     compute: impl FnOnce(Units) -> Result<Result<R, Error>, EbullioStatus>,
     write: impl FnOnce(&Outs<T>, &R),
@@ -154,15 +147,15 @@ pub(super) unsafe fn component_call<T: SizePrefixed, R>(
     let outs = unsafe {
         (
             OutStruct::new(figures),
-            OutStruct::optional(end),
-            OutStruct::optional(isentropic_end),
+            OutStruct::optional(first),
+            OutStruct::optional(second),
         )
     };
     let outs = match outs {
-        (Ok(figures), Ok(end), Ok(isentropic_end)) => Outs {
+        (Ok(figures), Ok(first), Ok(second)) => Outs {
             figures,
-            end,
-            isentropic_end,
+            first,
+            second,
         },
         (Err(status), _, _) | (_, Err(status), _) | (_, _, Err(status)) => return fail(status),
     };
@@ -183,16 +176,12 @@ pub(super) unsafe fn component_call<T: SizePrefixed, R>(
     }
 }
 
-pub(super) fn write_state(out: &Option<OutStruct<EbullioState>>, state: &ebullio::State) {
-    if let Some(out) = out {
-        out.write(&EbullioState::of(state));
-    }
-}
-
 fn write_expansion(outs: &Outs<EbullioExpansion>, e: &Expansion) {
-    outs.figures.write(&EbullioExpansion::of(e));
-    write_state(&outs.end, &e.exhaust);
-    write_state(&outs.isentropic_end, &e.isentropic_exhaust);
+    outs.write(
+        &EbullioExpansion::of(e),
+        &e.exhaust,
+        Some(&e.isentropic_exhaust),
+    );
 }
 
 /// Expands steam through a turbine section at an isentropic efficiency
@@ -334,9 +323,7 @@ pub unsafe extern "C" fn ebullio_pump_compression(
                     .and_then(|inlet| compress(&inlet, outlet_pressure, isentropic_efficiency)))
             },
             |outs, c: &Compression| {
-                outs.figures.write(&EbullioCompression::of(c));
-                write_state(&outs.end, &c.outlet);
-                write_state(&outs.isentropic_end, &c.isentropic_outlet);
+                outs.write(&EbullioCompression::of(c), &c.outlet, Some(&c.isentropic_outlet));
             },
         )
     })

@@ -3,7 +3,7 @@
 //! (p, T), as a heat balance or a test log has them; one core call each
 //! (`ebullio::plant::closed_heater`, `open_heater`, `spray_for_temperature`).
 
-use core::mem::{offset_of, size_of};
+use core::mem::size_of;
 
 use ebullio::plant::{
     closed_heater, open_heater, spray_for_temperature, ClosedHeater, HeaterApproach, OpenHeater,
@@ -11,8 +11,8 @@ use ebullio::plant::{
 };
 use ebullio::{Error, State, Units};
 
-use super::components::{component_call, write_state};
-use crate::args::SizePrefixed;
+use super::components::component_call;
+use super::figures::figures_layout;
 use crate::boundary::boundary;
 use crate::codes::{c_units, EbullioUnits};
 use crate::detail::EbullioErrorDetail;
@@ -43,18 +43,7 @@ pub struct EbullioHeaterBalance {
     pub entropy_generation: f64,
 }
 
-const BALANCE_V1_SIZE: usize = 8 + 4 * 8;
-
-const _: () = {
-    assert!(offset_of!(EbullioHeaterBalance, balancing_flow) == 8);
-    assert!(size_of::<EbullioHeaterBalance>() == BALANCE_V1_SIZE);
-};
-
-// SAFETY: `#[repr(C)]`, starts with `size: u32`, and the const asserts show
-// no padding: two 4-byte fields, then doubles.
-unsafe impl SizePrefixed for EbullioHeaterBalance {
-    const FIRST_SIZE: u32 = BALANCE_V1_SIZE as u32;
-}
+figures_layout!(EbullioHeaterBalance, balancing_flow, 4);
 
 fn balance(
     units: Units,
@@ -139,21 +128,18 @@ pub unsafe extern "C" fn ebullio_closed_heater(
                             .then_some(drain_cooler_approach),
                     };
                     let cascaded = cascaded.as_ref().map(|(m, s)| (*m, s));
-                    let h = closed_heater(&steam, &water, feedwater_flow, cascaded, approach)?;
-                    Ok((h, feedwater_flow))
+                    closed_heater(&steam, &water, feedwater_flow, cascaded, approach)
                 })())
             },
-            |outs, (h, flow): &(ClosedHeater, f64)| {
-                let units = h.feedwater_out.units();
-                outs.figures.write(&balance(
-                    units,
+            |outs, h: &ClosedHeater| {
+                let figures = balance(
+                    h.feedwater_out.units(),
                     h.extraction_flow,
-                    *flow,
+                    feedwater_flow,
                     h.duty,
                     h.entropy_generation,
-                ));
-                write_state(&outs.end, &h.feedwater_out);
-                write_state(&outs.isentropic_end, &h.drain_out);
+                );
+                outs.write(&figures, &h.feedwater_out, Some(&h.drain_out));
             },
         )
     })
@@ -207,14 +193,14 @@ pub unsafe extern "C" fn ebullio_open_heater(
                 })())
             },
             |outs, h: &OpenHeater| {
-                outs.figures.write(&balance(
+                let figures = balance(
                     h.outlet.units(),
                     h.extraction_flow,
                     h.feedwater_flow,
                     0.0,
                     h.entropy_generation,
-                ));
-                write_state(&outs.end, &h.outlet);
+                );
+                outs.write(&figures, &h.outlet, None);
             },
         )
     })
@@ -255,19 +241,13 @@ pub unsafe extern "C" fn ebullio_attemperator_spray(
                 Ok((|| {
                     let steam = State::from_pt(steam_pressure, steam_temperature, units)?;
                     let water = State::from_pt(spray_pressure, spray_temperature, units)?;
-                    let spray = spray_for_temperature(&steam, steam_flow, &water, target_temperature)?;
-                    Ok((spray, steam_flow))
+                    spray_for_temperature(&steam, steam_flow, &water, target_temperature)
                 })())
             },
-            |outs, (s, flow): &(Spray, f64)| {
-                outs.figures.write(&balance(
-                    s.outlet.units(),
-                    s.spray_flow,
-                    *flow,
-                    0.0,
-                    s.entropy_generation,
-                ));
-                write_state(&outs.end, &s.outlet);
+            |outs, s: &Spray| {
+                let figures =
+                    balance(s.outlet.units(), s.spray_flow, steam_flow, 0.0, s.entropy_generation);
+                outs.write(&figures, &s.outlet, None);
             },
         )
     })

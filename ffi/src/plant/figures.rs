@@ -1,0 +1,31 @@
+//! The layout the component calls' figures structs share
+//! (`EbullioExpansion`, `EbullioCompression`, `EbullioHeaterBalance`):
+//! `uint32_t size`, the `EbullioUnits` of the values, then doubles. The
+//! structs stay written out beside their calls, where cbindgen reads them;
+//! `figures_layout!` only checks the layout and makes the padding argument
+//! for `SizePrefixed` once.
+
+/// `figures_layout!(Struct, first_double, doubles)`: asserts at compile
+/// time that `Struct` has `size` at 0, `units` at 4 and `doubles` doubles
+/// from `first_double` at 8 to its end, and declares that whole layout its
+/// version-1 size. Only for a struct still at its version-1 layout: one
+/// that grows keeps its `FIRST_SIZE` and so needs its impl written out.
+macro_rules! figures_layout {
+    ($t:ty, $first:ident, $doubles:literal) => {
+        const _: () = {
+            assert!(::core::mem::offset_of!($t, size) == 0);
+            assert!(::core::mem::offset_of!($t, units) == 4);
+            assert!(::core::mem::offset_of!($t, $first) == 8);
+            assert!(::core::mem::size_of::<$t>() == 8 + $doubles * 8);
+        };
+
+        // SAFETY: each figures struct is `#[repr(C)]` with `size: u32`,
+        // `units` (a `#[repr(u32)]` enum), then only `f64` fields; the
+        // asserts above place them without padding.
+        unsafe impl $crate::args::SizePrefixed for $t {
+            const FIRST_SIZE: u32 = (8 + $doubles * 8) as u32;
+        }
+    };
+}
+
+pub(super) use figures_layout;
