@@ -55,6 +55,7 @@ mod transport;
 pub mod units;
 mod variable;
 pub mod viscosity;
+mod wet_hs_start;
 
 pub use error::Error;
 pub use input_pair::InputPair;

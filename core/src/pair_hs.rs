@@ -33,7 +33,9 @@
 //! steam solves h = h'(T) + x (h'' − h'), s = s'(T) + x (s'' − s') for
 //! T (x eliminated by the lever rule on s) by a safeguarded Newton and
 //! bisection iteration on [273.15 K, Tc], starting from SR4-04's
-//! Tsat(h,s) where that equation is valid (s ≥ s''(623.15 K)).
+//! Tsat(h,s) where that equation is valid (s ≥ s''(623.15 K)) and below
+//! it from the backward equations' wet isotherm through the point
+//! ([`crate::wet_hs_start`]).
 
 use crate::backward::{r7_97, sr2_01, sr3_03, sr4_04};
 use crate::boundary_b23;
@@ -48,16 +50,17 @@ use crate::saturation::{min_saturation_pressure, Saturation};
 use crate::saturation_line::{saturation_pressure, saturation_pressure_slope};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
+use crate::wet_hs_start::wet_temperature_start;
 
 // Entropies and enthalpies that bound the ranges of the SR4-04 boundary
 // equations, all computed by the release from the basic equations of
 // R7-97 (recalled from IAPWS SR4-04(2014), the ranges of Eqs. 3 to 8).
 /// s'(273.15 K), kJ/(kg·K).
-const S_LIQUID_273: f64 = -1.545_495_919e-4;
+pub(crate) const S_LIQUID_273: f64 = -1.545_495_919e-4;
 /// s(100 MPa, 623.15 K), kJ/(kg·K): the 1/3 boundary's low end.
 const S_13_100MPA: f64 = 3.397_782_955;
 /// s'(623.15 K), kJ/(kg·K).
-const S_LIQUID_623: f64 = 3.778_281_340;
+pub(crate) const S_LIQUID_623: f64 = 3.778_281_340;
 /// s''(623.15 K), kJ/(kg·K): the low end of Tsat(h,s).
 const S_VAPOUR_623: f64 = 5.210_887_825;
 /// The entropy range of T_B23(h,s), kJ/(kg·K).
@@ -732,11 +735,16 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
             hi = REGION13_TEMPERATURE;
         }
     }
-    let tsat = sr4_04::saturation_temperature_hs(h, s);
-    let mut t = if (S_VAPOUR_623..=S_VAPOUR_273).contains(&s) && tsat > lo && tsat < hi {
-        tsat
+    // The start: SR4-04's Tsat(h,s) where it is valid, below that entropy
+    // the backward equations' wet isotherm through (h, s).
+    let start = if (S_VAPOUR_623..=S_VAPOUR_273).contains(&s) {
+        Some(sr4_04::saturation_temperature_hs(h, s))
     } else {
-        0.5 * (lo + hi)
+        wet_temperature_start(h, s)
+    };
+    let mut t = match start {
+        Some(t0) if t0 > lo && t0 < hi => t0,
+        _ => 0.5 * (lo + hi),
     };
     // On [273.15 K, T_sat(s)] the difference rises with T; above T_sat(s)
     // (quality below 0, liquid side) it counts as "too hot".
