@@ -635,8 +635,19 @@ const NOT_CONVERGED: Error = Error::NotConverged {
 /// h'' − h' − T (s'' − s'), IF97's tiny inconsistency, left out; v_mix
 /// rather than Clapeyron's (s'' − s')/(v'' − v') keeps the psat
 /// equation's own inconsistency out of it too (Newton stays quadratic).
-fn wet_at(t: f64, h: f64, s: f64) -> Result<(Saturation, f64, f64, f64), Error> {
-    let sat = Saturation::at_temperature(t, Units::Native)?;
+///
+/// `near`, the previous point of the iteration, starts region 3's density
+/// iterations.
+fn wet_at(
+    t: f64,
+    h: f64,
+    s: f64,
+    near: Option<&Saturation>,
+) -> Result<(Saturation, f64, f64, f64), Error> {
+    let sat = match near {
+        Some(near) => Saturation::at_temperature_near(t, near)?,
+        None => Saturation::at_temperature(t, Units::Native)?,
+    };
     let (l, g) = (sat.liquid().native(), sat.vapour().native());
     let x = (s - l.s) / (g.s - l.s);
     let f = l.h + x * (g.h - l.h) - h;
@@ -677,7 +688,7 @@ fn found(sat: Saturation, x: f64, t: f64, s: f64) -> Result<Attempt, Error> {
 /// brackets the root from below.
 fn wet_edge_at_273(h: f64, s: f64) -> Result<Option<Attempt>, Error> {
     let lo = MIN_TEMPERATURE;
-    let (sat, x, f, _) = wet_at(lo, h, s)?;
+    let (sat, x, f, _) = wet_at(lo, h, s, None)?;
     if x > 1.0 + x_slack(&sat, s) {
         // Above s''(273.15 K): no wet steam at this entropy.
         return Ok(Some(vapour_side(lo)));
@@ -748,8 +759,10 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     };
     // On [273.15 K, T_sat(s)] the difference rises with T; above T_sat(s)
     // (quality below 0, liquid side) it counts as "too hot".
+    let mut previous = None;
     for _ in 0..100 {
-        let (sat, x, f, slope) = wet_at(t, h, s)?;
+        let (sat, x, f, slope) = wet_at(t, h, s, previous.as_ref())?;
+        previous = Some(sat);
         // Near x = 0 the difference hardly depends on T (all wet isobars
         // touch the liquid line), so T is settled only when the Newton
         // step, not just the difference, is at rounding level.
@@ -775,7 +788,7 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // less than the promise (compressed liquid at low pressure barely
     // differs from the saturated liquid in h and s) belongs to the
     // single-phase neighbour, which reproduces its p and T.
-    let (sat, x, f, _) = wet_at(t, h, s)?;
+    let (sat, x, f, _) = wet_at(t, h, s, previous.as_ref())?;
     if x >= 0.0 && within(f, h, WET_AIMED) {
         found(sat, x, t, s)
     } else if x < 0.0 || t < hi {

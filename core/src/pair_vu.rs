@@ -9,11 +9,16 @@
 //! the stable one — its (p, T) lies in the region, and in region 3 the
 //! (p, T) state has the same density. Otherwise the state is wet steam: the
 //! temperature where the lever rules on v and on u give the same quality,
-//! found by bisection along the saturation line (where, at constant v, u
-//! rises with T).
+//! found by Newton's method on the logarithms of the two qualities, kept
+//! inside a bisection bracket along the saturation line (where, at
+//! constant v, u rises with T).
 //!
-//! Valid wherever a (p, T) state is. This pair costs more than the others
-//! (microseconds for wet steam); see the benchmarks.
+//! Valid wherever a (p, T) state is. Within millikelvins of 623.15 K on
+//! the saturation line, where the saturated phases of regions 1/2 and of
+//! region 3 differ by the formulation's inconsistency, wet steam can have
+//! a root on each side; the one at or below 623.15 K is returned. This
+//! pair costs more than the others (microseconds for wet steam); see the
+//! benchmarks.
 
 use crate::constants::*;
 use crate::error::{native_input, Error};
@@ -460,16 +465,26 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     // with the exact slope, kept inside a bracket that bisection shrinks
     // where a step would leave it or the upper end lies outside the dome.
     // The start is the upper end, where the isochore leaves the dome at
-    // its dew point when that is known.
+    // its dew point when that is known. A bracket across 623.15 K is first
+    // split there, on the region 1 and 2 side: the saturated phases jump
+    // by the formulation's inconsistency at that line, and a point within
+    // it may have a root on each side (millikelvins apart); this way the
+    // root below wins, whichever way the steps would have gone.
     let (mut lo, mut hi) = (MIN_TEMPERATURE, t_max);
-    let mut t = if t_max < CRITICAL_TEMPERATURE {
-        t_max
+    let mut t = if t_max > REGION13_TEMPERATURE {
+        REGION13_TEMPERATURE
     } else {
-        0.5 * (lo + hi)
+        t_max
     };
     let mut found = None;
+    let mut previous: Option<Saturation> = None;
     for _ in 0..WET_STEPS {
-        let sat = Saturation::at_temperature(t, Units::Native)?;
+        // The previous point starts region 3's density iterations.
+        let sat = match &previous {
+            Some(near) => Saturation::at_temperature_near(t, near)?,
+            None => Saturation::at_temperature(t, Units::Native)?,
+        };
+        previous = Some(sat);
         let (l, g) = (sat.liquid().native(), sat.vapour().native());
         let x = (v - l.v) / (g.v - l.v);
         let mut newton = f64::NAN;

@@ -5,13 +5,16 @@
 //! three roots at pressures near saturation: the liquid, an unstable middle
 //! one and the vapour. Each branch is bracketed on its own side of the loop
 //! (the brackets are verified by the sign of p − p_target, never assumed)
-//! and the root is polished by Newton's method kept inside the bracket, to
-//! the last bit of the density.
+//! and the root is polished by Newton's method kept inside the bracket,
+//! until a step would move the density by less than 1e-13 of itself: the
+//! pressure's own rounding (the liquid's terms cancel to about 1e-13 of p)
+//! moves the root by about that much, so tighter only jitters.
 //!
-//! The start is the SR5-05(2016) backward equation v(p, T), with a narrow
-//! bracket around it verified by sign; where that equation is missing (its
-//! unverified subregions) or its bracket fails, the branch is bracketed
-//! from the saturated-density estimates instead.
+//! The start is the SR5-05(2016) backward equation v(p, T), iterated
+//! inside a narrow window around it and accepted only if it settles there
+//! on a rising stretch of the isotherm; where that equation is missing (its
+//! unverified subregions) or the window fails, the branch is bracketed
+//! (by sign) from the saturated-density estimates instead.
 
 use crate::backward::sr5_05::{self, SaturationSide};
 use crate::constants::{CRITICAL_DENSITY, SPECIFIC_GAS_CONSTANT};
@@ -32,7 +35,11 @@ pub(crate) enum Branch {
 
 /// Bound on bracket-widening steps and on Newton steps.
 const MAX_BRACKET_STEPS: u32 = 60;
-const MAX_NEWTON_STEPS: u32 = 100;
+const MAX_NEWTON_STEPS: u32 = 200;
+
+/// A Newton step smaller than this, relative to the density, ends the
+/// iteration (see the module's note on rounding).
+const SETTLED: f64 = 1e-13;
 
 /// Relative half-width of the bracket around the backward equation's
 /// density: far wider than SR5-05's stated accuracy.
@@ -46,8 +53,18 @@ pub(crate) fn density(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
     bracketed(p, t, branch)
 }
 
-/// The root from the SR5-05 start, if its narrow bracket holds the root of
-/// the wanted branch.
+/// The density as [`density`] gives it, started from `guess` instead of
+/// the backward equation: a root of the same branch at a nearby (p, T),
+/// as an iteration along the saturation line has from its previous step.
+pub(crate) fn density_near(p: f64, t: f64, branch: Branch, guess: f64) -> Result<f64, Error> {
+    if let Some(rho) = in_window(p, t, branch, guess) {
+        return Ok(rho);
+    }
+    density(p, t, branch)
+}
+
+/// The root from the SR5-05 start, if it settles near that start on the
+/// wanted branch.
 fn from_backward_start(p: f64, t: f64, branch: Branch) -> Option<f64> {
     // A saturated phase lies on the line between two subregions: the side
     // is the branch's, not T against T_s(p), which rounding decides.
@@ -56,7 +73,17 @@ fn from_backward_start(p: f64, t: f64, branch: Branch) -> Option<f64> {
         Branch::Vapour => sr5_05::locate_on_side(p, t, SaturationSide::Vapour),
         Branch::Supercritical => sr5_05::locate(p, t),
     };
-    let rho0 = 1.0 / sr5_05::specific_volume_in(subregion, p, t)?;
+    in_window(
+        p,
+        t,
+        branch,
+        1.0 / sr5_05::specific_volume_in(subregion, p, t)?,
+    )
+}
+
+/// Newton's method from `rho0` inside a window of ±[`BACKWARD_BRACKET`]
+/// around it: the root, if it settles there on the wanted branch.
+fn in_window(p: f64, t: f64, branch: Branch, rho0: f64) -> Option<f64> {
     // The liquid root lies above ρc, the vapour root below.
     let on_branch = match branch {
         Branch::Liquid => rho0 > CRITICAL_DENSITY,
@@ -70,13 +97,15 @@ fn from_backward_start(p: f64, t: f64, branch: Branch) -> Option<f64> {
         rho0 * (1.0 - BACKWARD_BRACKET),
         rho0 * (1.0 + BACKWARD_BRACKET),
     );
-    let (p_lo, slope_lo) = pressure_and_slope(lo, t);
-    let (p_hi, slope_hi) = pressure_and_slope(hi, t);
-    // The bracket must hold the root on a rising stretch of the isotherm.
-    if !(p_lo <= p && p <= p_hi && slope_lo > 0.0 && slope_hi > 0.0) {
-        return None;
-    }
-    newton_in_bracket(p, t, lo, hi, rho0)
+    // The window is not checked for a sign change first (two evaluations):
+    // the iteration is accepted only if Newton's steps settled strictly
+    // inside it on a rising stretch of the isotherm, on a root — the other
+    // branch's root lies far outside the window and the unstable one falls.
+    let root = newton_in_bracket(p, t, lo, hi, rho0)?;
+    let inside = root.rho > lo && root.rho < hi;
+    let rises = root.slope > 0.0;
+    let settled = root.excess.abs() <= 1e-10 * p.abs();
+    (inside && rises && settled).then_some(root.rho)
 }
 
 /// The root by bracketing the branch from the saturated-density estimates.
@@ -91,7 +120,14 @@ fn bracketed(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
             // unstable middle root: steps shrink with the distance to ρc.
             let mut lo = estimate::liquid(t).max(CRITICAL_DENSITY);
             let mut steps = 0;
+            let mut rising = lo;
             while excess(lo) > 0.0 {
+                if pressure_and_slope(lo, t).1 > 0.0 {
+                    rising = lo;
+                } else if lo < rising {
+                    // Past the branch's turning point without reaching p.
+                    return turning_point_within_reach(p, t, rising, lo).ok_or(not_converged);
+                }
                 lo = CRITICAL_DENSITY + 0.9 * (lo - CRITICAL_DENSITY);
                 steps += 1;
                 if steps > MAX_BRACKET_STEPS {
@@ -104,7 +140,13 @@ fn bracketed(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
         Branch::Vapour => {
             let mut hi = estimate::vapour(t).min(CRITICAL_DENSITY);
             let mut steps = 0;
+            let mut rising = hi;
             while excess(hi) < 0.0 {
+                if pressure_and_slope(hi, t).1 > 0.0 {
+                    rising = hi;
+                } else if hi > rising {
+                    return turning_point_within_reach(p, t, rising, hi).ok_or(not_converged);
+                }
                 hi = CRITICAL_DENSITY - 0.9 * (CRITICAL_DENSITY - hi);
                 steps += 1;
                 if steps > MAX_BRACKET_STEPS {
@@ -127,7 +169,37 @@ fn bracketed(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
             (lo, hi, start)
         }
     };
-    newton_in_bracket(p, t, lo, hi, start).ok_or(not_converged)
+    newton_in_bracket(p, t, lo, hi, start)
+        .map(|root| root.rho)
+        .ok_or(not_converged)
+}
+
+/// How far (relative) a branch's turning point may fall short of the
+/// target pressure and still stand for that branch's phase.
+const TURNING_POINT_REACH: f64 = 1e-9;
+
+/// Within about 1e-5 MPa of the critical pressure the isotherm's loop is
+/// lower (about 1e-9 MPa) than the difference between the region 4
+/// saturation pressure and region 3's own: a branch's turning point (its
+/// spinodal) can fall just short of psat, and that branch has no root. Its
+/// turning point, found by bisection on the sign of ∂p/∂ρ between `rising`
+/// (positive) and `past` (not), then stands for the phase if it misses
+/// the target by at most [`TURNING_POINT_REACH`]; the two phases are then
+/// a fraction of a kg/m³ apart, either side of ρc.
+fn turning_point_within_reach(p: f64, t: f64, mut rising: f64, mut past: f64) -> Option<f64> {
+    for _ in 0..MAX_NEWTON_STEPS {
+        let mid = 0.5 * (rising + past);
+        if mid == rising || mid == past {
+            break;
+        }
+        if pressure_and_slope(mid, t).1 > 0.0 {
+            rising = mid;
+        } else {
+            past = mid;
+        }
+    }
+    let (pressure, _) = pressure_and_slope(rising, t);
+    ((pressure - p).abs() <= TURNING_POINT_REACH * p).then_some(rising)
 }
 
 /// From `lo` (where p < target) upward to a density where p ≥ target.
@@ -154,29 +226,47 @@ fn widen_down(hi: f64, excess: &impl Fn(f64) -> f64) -> Option<f64> {
     None
 }
 
+/// Where Newton's method stopped: the density, and p − target and ∂p/∂ρ
+/// at the last density evaluated (the same, or one settling step away).
+struct Root {
+    rho: f64,
+    excess: f64,
+    slope: f64,
+}
+
 /// Newton's method on p(ρ) = p, falling back to bisection whenever a step
 /// would leave the bracket [lo, hi] that holds the root.
-fn newton_in_bracket(p: f64, t: f64, mut lo: f64, mut hi: f64, start: f64) -> Option<f64> {
+fn newton_in_bracket(p: f64, t: f64, mut lo: f64, mut hi: f64, start: f64) -> Option<Root> {
     let mut rho = start;
+    let mut last_excess = f64::INFINITY;
     for _ in 0..MAX_NEWTON_STEPS {
         let (pressure, slope) = pressure_and_slope(rho, t);
         let excess = pressure - p;
         if excess == 0.0 {
-            return Some(rho);
+            return Some(Root { rho, excess, slope });
         }
         if excess > 0.0 {
             hi = hi.min(rho);
         } else {
             lo = lo.max(rho);
         }
+        // Beside the critical point the isotherm is nearly flat and Newton
+        // crawls: a step that did not halve the excess is followed by a
+        // bisection, so the bracket shrinks at least every other step.
+        let crawling = excess.abs() > 0.5 * last_excess;
+        last_excess = excess.abs();
         let newton = rho - excess / slope;
-        let next = if slope > 0.0 && newton > lo && newton < hi {
+        let next = if slope > 0.0 && newton > lo && newton < hi && !crawling {
             newton
         } else {
             0.5 * (lo + hi)
         };
-        if (next - rho).abs() <= 2.0 * f64::EPSILON * rho || hi - lo <= 2.0 * f64::EPSILON * hi {
-            return Some(next);
+        if (next - rho).abs() <= SETTLED * rho || hi - lo <= 2.0 * f64::EPSILON * hi {
+            return Some(Root {
+                rho: next,
+                excess,
+                slope,
+            });
         }
         rho = next;
     }

@@ -119,3 +119,44 @@ fn saturation_slope_matches_a_central_difference() {
         );
     }
 }
+
+#[test]
+fn saturation_is_found_up_to_the_critical_point() {
+    // Within about 1e-5 MPa of pc the region 3 isotherm's loop is lower
+    // than the difference between the region 4 psat(T) and region 3's own
+    // coexistence pressure, so a branch may have no root at psat; its
+    // turning point stands for it (module region3_density). Both phases must
+    // still come out, on their own sides of ρc = 322 kg/m³ (R7-97 Eq. (4))
+    // and within a few kg/m³ of it, each reproducing psat to relative 1e-9,
+    // all the way to T = Tc (a property-test run found 22.0639959 MPa
+    // failing before).
+    let by_pressure = [
+        22.0639,
+        22.063_995_857_885_88,
+        22.063_999,
+        22.063_999_99,
+        22.063_999_999_9,
+    ];
+    let by_temperature = [1e-3, 1e-5, 1e-7, 1e-9, 1e-11].map(|dt| 647.096 - dt);
+    let states = by_pressure
+        .iter()
+        .map(|&p| Saturation::at_pressure(p, Units::Native))
+        .chain(
+            by_temperature
+                .iter()
+                .map(|&t| Saturation::at_temperature(t, Units::Native)),
+        );
+    for sat in states {
+        let sat = sat.unwrap();
+        let t = sat.temperature();
+        let (l, v) = (sat.liquid(), sat.vapour());
+        assert!(l.density() > 322.0 && l.density() < 326.0, "{t}: {l:?}");
+        assert!(v.density() < 322.0 && v.density() > 318.0, "{t}: {v:?}");
+        for phase in [l, v] {
+            let p = region3::helmholtz(phase.density(), t)
+                .properties(phase.density(), t)
+                .p;
+            assert!((p / sat.pressure() - 1.0).abs() <= 1e-9, "{t}: p {p}");
+        }
+    }
+}

@@ -128,6 +128,15 @@ proptest! {
             ("(h,s)", State::from_hs(a.enthalpy(), a.entropy(), Units::Native)),
         ] {
             let b = b.unwrap();
+            // Within the seam at 623.15 K, where regions 1/2 and region 3
+            // give saturated phases that differ by the formulation's
+            // inconsistency, a root on the other side (millikelvins away)
+            // reproduces the pair as well.
+            let seam = |t: f64| (t - 623.15).abs() <= 0.01;
+            if seam(t) && seam(b.temperature()) && (b.temperature() - 623.15) * (t - 623.15) < 0.0 {
+                prop_assert!((b.quality().unwrap_or(x) - x).abs() <= 1e-4, "{pair} T {t} x {x}: {:?}", b.quality());
+                continue;
+            }
             prop_assert!((b.temperature() / t - 1.0).abs() <= 1e-9, "{pair} T {t} x {x}: {}", b.temperature());
             prop_assert!((b.pressure() / p - 1.0).abs() <= 1e-9, "{pair} T {t} x {x}: p {}", b.pressure());
             // Exactly on a saturation line a single-phase answer is also right.
