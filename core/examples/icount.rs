@@ -1,7 +1,7 @@
 //! Instruction-count probe: run under callgrind; argument selects the call
 //! (1–8 the basic equations and (p,T) states, 9–14 (p,h) and (p,s) in
 //! regions 1, 2 and 5, 15 a region 3 saturation point at 20 MPa, 16–17 wet (h,s) at 0.01 and
-//! 20 MPa).
+//! 20 MPa, 18–19 wet (v,u) at 1 and 20 MPa).
 use std::hint::black_box;
 fn main() {
     let which: u32 = std::env::args()
@@ -110,6 +110,13 @@ fn main() {
                 let wet = ebullio::State::from_px(p, x, native).unwrap();
                 let (h, s) = black_box((wet.enthalpy(), wet.entropy()));
                 ebullio::State::from_hs(h, s, native).unwrap().temperature()
+            }
+            18 | 19 => {
+                let p = if which == 18 { 1.0 } else { 20.0 };
+                let x = 0.1 * f64::from((k & 7) as u32 + 1);
+                let wet = ebullio::State::from_px(p, x, native).unwrap();
+                let (v, u) = black_box((wet.specific_volume(), wet.internal_energy()));
+                ebullio::State::from_vu(v, u, native).unwrap().temperature()
             }
             _ => 0.0,
         };
