@@ -195,9 +195,7 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
             }
             vapour(v, u)?
         }
-        Equation::Region5 => {
-            along_isochore(equation, v, u, (REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE))?
-        }
+        Equation::Region5 => hot_gas(v, u)?,
     };
     accept(equation, &props, units)
 }
@@ -284,6 +282,32 @@ fn vapour(v: f64, u: f64) -> Option<Properties> {
     refine(Equation::Region2, targets.0, targets.1, (p0, t0), bounds)
         .ok()
         .or_else(isochore)
+}
+
+/// Region 5, nearly an ideal gas: Newton in (p, T) together from T where
+/// u would lie on the straight line through the region 5 equation's u at
+/// 1 kPa and 1073.15 K (3665.4 kJ/kg) and 2273.15 K (6327.9 kJ/kg), and
+/// p = RT/v; the isochore as the fallback.
+fn hot_gas(v: f64, u: f64) -> Option<Properties> {
+    let cv = (6_327.9 - 3_665.4) / (MAX_TEMPERATURE - REGION2_MAX_TEMPERATURE);
+    let t0 = (REGION2_MAX_TEMPERATURE + (u - 3_665.4) / cv)
+        .clamp(REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE);
+    let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, REGION5_MAX_PRESSURE);
+    let bounds = Bounds {
+        x: (P_FLOOR, P_CEILING),
+        t: (REGION2_MAX_TEMPERATURE - 1.0, MAX_TEMPERATURE + 1.0),
+    };
+    let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
+    refine(Equation::Region5, targets.0, targets.1, (p0, t0), bounds)
+        .ok()
+        .or_else(|| {
+            along_isochore(
+                Equation::Region5,
+                v,
+                u,
+                (REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE),
+            )
+        })
 }
 
 /// Below this specific volume (above 50 kg/m³) steam is too far from the
