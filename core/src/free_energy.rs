@@ -3,7 +3,7 @@
 //! The derivatives are kept "reduced": each is multiplied by its variables
 //! (π·γ_π, π²·γ_ππ, τ·γ_τ, …), which makes them dimensionless, keeps them
 //! finite at every state the formulation covers, and lets the series of
-//! [`crate::series`] produce them as weighted sums. The relations are those
+//! `series.rs` produce them as weighted sums. The relations are those
 //! of IAPWS R7-97(2012), Tables 3, 12, 31 and 39, written in this form.
 
 use crate::constants::SPECIFIC_GAS_CONSTANT as R;

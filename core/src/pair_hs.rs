@@ -31,7 +31,7 @@
 //! only; below that pressure, and in region 5, the start is an ideal-gas
 //! like Newton iteration in (ln p, T) on the region's own equation. Wet
 //! steam solves h = h'(T) + x (h'' − h'), s = s'(T) + x (s'' − s') for
-//! T (x eliminated by the lever rule on s) by a safeguarded Newton and
+//! T (x eliminated by the lever rule on s) by a safeguarded Halley and
 //! bisection iteration on [273.15 K, Tc], starting from SR4-04's
 //! Tsat(h,s) where that equation is valid (s ≥ s''(623.15 K)) and below
 //! it from the backward equations' wet isotherm through the point

@@ -491,8 +491,9 @@ const WET_STEPS: u32 = 100;
 /// `t_max`.
 fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     // Along the isochore the mixture's u rises with T up to where the
-    // isochore leaves the dome (x reaches 0 or 1): Newton's method in T
-    // with the exact slope, kept inside a bracket that bisection shrinks
+    // isochore leaves the dome (x reaches 0 or 1): Newton's method on
+    // ln x_v − ln x_u in 1/T ([`quality_match_step`]), kept inside a
+    // bracket on the sign of u_mix − u that bisection shrinks
     // where a step would leave it or the upper end lies outside the dome.
     // The start is the upper end, where the isochore leaves the dome at
     // its dew point when that is known. A bracket across 623.15 K is first

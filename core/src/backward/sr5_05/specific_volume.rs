@@ -3,8 +3,8 @@
 //! near-critical subregions 3u … 3z.
 //!
 //! IAPWS SR5-05(2016), Eq. (4) (and Eq. (5) for 3n), with the parameters
-//! and coefficient tables in [`super::tables_a_to_k`],
-//! [`super::tables_l_to_t`] and [`super::tables_u_to_z`].
+//! and coefficient tables in the files `tables_a_to_k.rs`,
+//! `tables_l_to_t.rs` and `tables_u_to_z.rs` beside this one.
 //!
 //! Validity: region 3 of IAPWS-IF97, 623.15 K ≤ T ≤ T_B23(p),
 //! p_B23(T) ≤ p ≤ 100 MPa; nothing is range-checked here.
@@ -61,7 +61,7 @@ const fn equation(sub: Subregion) -> Option<&'static Equation> {
 
 /// Specific volume in m³/kg of region 3 at pressure `p` in MPa and
 /// temperature `t` in K: the subregion is found with
-/// [`locate`](super::locate) and its backward equation evaluated; `None`
+/// [`super::locate`] and its backward equation evaluated; `None`
 /// in the subregions that have no verified equation yet (3e, 3h, 3n, 3x).
 pub fn specific_volume(p: f64, t: f64) -> Option<f64> {
     specific_volume_in(locate(p, t), p, t)
