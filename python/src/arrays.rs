@@ -2,13 +2,18 @@
 //! with the GIL released.
 //!
 //! Inputs arrive as 1-D float64 views (any strides, so a broadcast scalar
-//! costs no copy); outputs are owned column-major buffers handed to numpy
-//! without a copy. Elements are independent, so splitting them over
-//! threads cannot change a single bit: each element is exactly the scalar
-//! core call on its inputs.
+//! costs no copy). Outputs are numpy arrays written in place: fresh ones,
+//! or the caller's (`out=`, reused so that a repeated call does not pay
+//! for faulting in new pages); both go through the same writer. Elements
+//! are independent, so splitting them over threads cannot change a single
+//! bit: each element is exactly the scalar core call on its inputs.
 
 use ebullio::{Error, State, Units};
-use numpy::{PyArray1, PyReadonlyArray1};
+use numpy::ndarray::Array1;
+use numpy::{
+    Element, PyArray1, PyArrayDyn, PyArrayMethods, PyReadonlyArray1, PyReadwriteArrayDyn,
+    PyUntypedArrayMethods,
+};
 use pyo3::exceptions::PyValueError;
 use pyo3::prelude::*;
 use rayon::prelude::*;
@@ -48,13 +53,14 @@ fn threads(value: Option<usize>) -> PyResult<Threads> {
     }
 }
 
-/// The results of `M` states per element, column-major: for state `m` and
-/// column `c`, `values[(m * COUNT + c) * n ..][.. n]`.
-struct Outputs {
-    values: Vec<f64>,
-    region: Vec<u8>,
-    phase: Vec<u8>,
-    status: Vec<u8>,
+/// Where the results of `M` states per element go, column-major: for state
+/// `m` and column `c`, `values[(m * COUNT + c) * n ..][.. n]`; `region` and
+/// `phase` `M × n`, `status` `n`.
+struct Outputs<'a> {
+    values: &'a mut [f64],
+    region: &'a mut [u8],
+    phase: &'a mut [u8],
+    status: &'a mut [u8],
 }
 
 /// One work item: the element range `start..start + len` and its slices of
@@ -105,25 +111,22 @@ fn split<T>(column: &mut [T]) -> std::slice::ChunksMut<'_, T> {
     column.chunks_mut(CHUNK)
 }
 
-/// Runs `element` for every index below `n`, `M` states each.
+/// Runs `element` for every element of `out`, `M` states each. Every
+/// value, region, phase and status is written, so whatever `out` held
+/// before cannot show through.
 fn fill<const M: usize>(
-    n: usize,
+    out: Outputs<'_>,
     threads: Threads,
     element: impl Fn(usize) -> Result<[State; M], Error> + Sync,
-) -> Result<Outputs, rayon::ThreadPoolBuildError> {
-    let mut out = Outputs {
-        values: vec![0.0; M * COUNT * n],
-        region: vec![0; M * n],
-        phase: vec![0; M * n],
-        status: vec![0; n],
-    };
+) -> Result<(), rayon::ThreadPoolBuildError> {
+    let n = out.status.len();
     if n == 0 {
-        return Ok(out);
+        return Ok(());
     }
     let mut values: Vec<_> = out.values.chunks_mut(n).map(split).collect();
     let mut region: Vec<_> = out.region.chunks_mut(n).map(split).collect();
     let mut phase: Vec<_> = out.phase.chunks_mut(n).map(split).collect();
-    let mut jobs: Vec<Job<'_>> = split(&mut out.status)
+    let mut jobs: Vec<Job<'_>> = split(out.status)
         .enumerate()
         .map(|(k, status)| Job {
             start: k * CHUNK,
@@ -143,23 +146,92 @@ fn fill<const M: usize>(
             .build()?
             .install(|| jobs.par_iter_mut().for_each(|job| job.run(&element))),
     }
-    Ok(out)
+    Ok(())
 }
 
+/// The arrays an array call writes, as [`Outputs`] lays them out: property
+/// values, region, phase, status. Any shape, as long as they are
+/// C-contiguous with the right number of elements (`out=` passes a
+/// `StateArray`'s own arrays, shaped like its inputs).
 type Arrays<'py> = (
-    Bound<'py, PyArray1<f64>>,
-    Bound<'py, PyArray1<u8>>,
-    Bound<'py, PyArray1<u8>>,
-    Bound<'py, PyArray1<u8>>,
+    Bound<'py, PyArrayDyn<f64>>,
+    Bound<'py, PyArrayDyn<u8>>,
+    Bound<'py, PyArrayDyn<u8>>,
+    Bound<'py, PyArrayDyn<u8>>,
 );
 
-fn hand_over(py: Python<'_>, out: Outputs) -> Arrays<'_> {
+/// Zeroed 1-D [`Arrays`] for `n` elements of `M` states, allocated with the
+/// GIL released (zeroing reused memory touches every page) and handed to
+/// numpy without a copy.
+fn fresh<const M: usize>(py: Python<'_>, n: usize) -> Arrays<'_> {
+    let (values, region, phase, status) = py.detach(|| {
+        (
+            vec![0.0; M * COUNT * n],
+            vec![0; M * n],
+            vec![0; M * n],
+            vec![0; n],
+        )
+    });
     (
-        PyArray1::from_vec(py, out.values),
-        PyArray1::from_vec(py, out.region),
-        PyArray1::from_vec(py, out.phase),
-        PyArray1::from_vec(py, out.status),
+        hand_over(py, values),
+        hand_over(py, region),
+        hand_over(py, phase),
+        hand_over(py, status),
     )
+}
+
+/// `buffer` as a 1-D numpy array that owns it.
+fn hand_over<T: Element>(py: Python<'_>, buffer: Vec<T>) -> Bound<'_, PyArrayDyn<T>> {
+    PyArrayDyn::from_owned_array(py, Array1::from_vec(buffer).into_dyn())
+}
+
+/// A mutable borrow of output array `name`, refused unless it is writeable,
+/// shares no memory with an input or another output, and is C-contiguous
+/// with `len` elements.
+fn writable<'py, T: Element>(
+    array: &Bound<'py, PyArrayDyn<T>>,
+    name: &str,
+    len: usize,
+) -> PyResult<PyReadwriteArrayDyn<'py, T>> {
+    if !array.is_c_contiguous() {
+        return Err(PyValueError::new_err(format!(
+            "the {name} array to write into is not C-contiguous"
+        )));
+    }
+    if array.len() != len {
+        return Err(PyValueError::new_err(format!(
+            "the {name} array to write into has {} elements, {len} expected",
+            array.len()
+        )));
+    }
+    array.try_readwrite().map_err(|error| {
+        PyValueError::new_err(format!(
+            "cannot write into the {name} array: {error} (read-only, or sharing memory with an input or another output)"
+        ))
+    })
+}
+
+/// Runs `element` for each of `n` elements, `M` states each, into `arrays`
+/// (checked first), with the GIL released.
+fn write<const M: usize>(
+    py: Python<'_>,
+    arrays: &Arrays<'_>,
+    n: usize,
+    threads: Threads,
+    element: impl Fn(usize) -> Result<[State; M], Error> + Sync + Send,
+) -> PyResult<()> {
+    let mut values = writable(&arrays.0, "values", M * COUNT * n)?;
+    let mut region = writable(&arrays.1, "region", M * n)?;
+    let mut phase = writable(&arrays.2, "phase", M * n)?;
+    let mut status = writable(&arrays.3, "status", n)?;
+    let out = Outputs {
+        values: values.as_slice_mut()?,
+        region: region.as_slice_mut()?,
+        phase: phase.as_slice_mut()?,
+        status: status.as_slice_mut()?,
+    };
+    py.detach(|| fill::<M>(out, threads, element))
+        .map_err(pool_error)
 }
 
 /// The units results are read in: `read`, or the input units.
@@ -178,8 +250,10 @@ fn pool_error(error: rayon::ThreadPoolBuildError) -> PyErr {
 ///
 /// Returns flat `values` (15 columns of n, column-major), `region`, `phase`
 /// and `status` (0 = computed); bad elements are NaN with region and phase 0.
+/// Given `out` (those four arrays, C-contiguous, of those lengths), writes
+/// into them and returns them; otherwise into fresh 1-D arrays.
 #[pyfunction]
-#[pyo3(signature = (pair, a, b, units=None, method=None, threads=None, read=None))]
+#[pyo3(signature = (pair, a, b, units=None, method=None, threads=None, read=None, out=None))]
 #[allow(clippy::too_many_arguments)]
 pub(crate) fn solve_many<'py>(
     py: Python<'py>,
@@ -190,6 +264,7 @@ pub(crate) fn solve_many<'py>(
     method: Option<&Bound<'py, PyAny>>,
     threads: Option<usize>,
     read: Option<&Bound<'py, PyAny>>,
+    out: Option<Arrays<'py>>,
 ) -> PyResult<Arrays<'py>> {
     let pair = names::pair(pair)?;
     let units = names::units(units)?;
@@ -197,21 +272,13 @@ pub(crate) fn solve_many<'py>(
     let method = names::method(method)?;
     let threads = self::threads(threads)?;
     let (a, b) = (a.as_array(), b.as_array());
-    if a.len() != b.len() {
-        return Err(PyValueError::new_err(format!(
-            "the two inputs have {} and {} elements; broadcast them first",
-            a.len(),
-            b.len()
-        )));
-    }
-    let out = py
-        .detach(|| {
-            fill::<1>(a.len(), threads, |i| {
-                State::solve(pair, a[i], b[i], units, method).map(|s| [s.in_units(read)])
-            })
-        })
-        .map_err(pool_error)?;
-    Ok(hand_over(py, out))
+    same_length(a.len(), b.len())?;
+    let n = a.len();
+    let arrays = out.unwrap_or_else(|| fresh::<1>(py, n));
+    write::<1>(py, &arrays, n, threads, |i| {
+        State::solve(pair, a[i], b[i], units, method).map(|s| [s.in_units(read)])
+    })?;
+    Ok(arrays)
 }
 
 /// Saturation points (`by` 1: pressure, 2: temperature) at `values[i]`.
@@ -233,16 +300,14 @@ pub(crate) fn saturation_many<'py>(
     let read = read_units(read, units)?;
     let threads = self::threads(threads)?;
     let values = values.as_array();
-    let out = py
-        .detach(|| {
-            fill::<2>(values.len(), threads, |i| {
-                by.solve(values[i], units)
-                    .map(|s| s.in_units(read))
-                    .map(|s| [*s.liquid(), *s.vapour()])
-            })
-        })
-        .map_err(pool_error)?;
-    Ok(hand_over(py, out))
+    let n = values.len();
+    let arrays = fresh::<2>(py, n);
+    write::<2>(py, &arrays, n, threads, |i| {
+        by.solve(values[i], units)
+            .map(|s| s.in_units(read))
+            .map(|s| [*s.liquid(), *s.vapour()])
+    })?;
+    Ok(arrays)
 }
 
 /// Raises the error of one element, `label` naming it ("element 17"):

@@ -2,7 +2,7 @@
 //! the core offers), its properties as float attributes, repr and pickling.
 //!
 //! A constructor given two Python numbers solves here, in one core call.
-//! Anything else (arrays, lists, pandas Series, `errors="flag"`) goes to
+//! Anything else (arrays, lists, pandas Series, `errors="flag"`, `out=`) goes to
 //! `ebullio._dispatch.solve`, which broadcasts and calls
 //! [`crate::arrays::solve_many`].
 
@@ -35,6 +35,21 @@ pub(crate) struct Origin {
 ///
 /// Given arrays (numpy arrays, pandas Series, lists) instead of numbers,
 /// the constructors return an ``ebullio.StateArray``.
+///
+/// ``out=`` takes a ``StateArray`` from an earlier array call whose shape
+/// is the broadcast shape of the new inputs: the results go into its own
+/// arrays, its ``units`` and recorded inputs (what ``transport()``,
+/// ``derivative()`` and pickling use) become this call's, and that same
+/// object is returned. A repeated call on same-sized batches then needs no
+/// new memory. Refused: anything but a ``StateArray`` (a ``State``, a
+/// ``SaturationArray``, a bare ndarray) and two numbers with ``out=``
+/// (``TypeError``); a different shape, or arrays that cannot be written in
+/// place, read-only or strided like ``states[::2]`` (``ValueError``).
+/// ``out`` is written where its arrays live: a ``StateArray`` that views
+/// another result (``states[:]``, a ``SaturationArray``'s ``liquid``)
+/// writes into that result too. With ``errors="raise"``, ``out`` holds
+/// this call's complete results, bad elements flagged, when the error is
+/// raised.
 #[pyclass(frozen, module = "ebullio", name = "State")]
 pub(crate) struct PyState {
     pub inner: State,
@@ -84,8 +99,10 @@ fn construct<'py>(
     method: Option<&Bound<'py, PyAny>>,
     errors: Option<&Bound<'py, PyAny>>,
     threads: Option<&Bound<'py, PyAny>>,
+    out: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Bound<'py, PyAny>> {
-    if names::errors(errors)? != Errors::Flag {
+    // With `out` the call belongs to the array path, which refuses numbers.
+    if names::errors(errors)? != Errors::Flag && out.is_none() {
         if let (Some(a), Some(b)) = (scalar(a), scalar(b)) {
             let units = names::units(units)?;
             let origin = Origin {
@@ -99,15 +116,12 @@ fn construct<'py>(
         }
     }
     static SOLVE: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
-    SOLVE.import(py, "ebullio._dispatch", "solve")?.call1((
-        pair as u32,
-        a,
-        b,
-        units,
-        method,
-        errors,
-        threads,
-    ))
+    let keywords = PyDict::new(py);
+    keywords.set_item("out", out)?;
+    SOLVE.import(py, "ebullio._dispatch", "solve")?.call(
+        (pair as u32, a, b, units, method, errors, threads),
+        Some(&keywords),
+    )
 }
 
 /// What `__reduce__` returns: the unpickler and its arguments.
@@ -174,9 +188,12 @@ impl PyState {
     /// ``method="backward"`` takes region 3's density from the SR5-05
     /// backward equation v(p,T), unrefined (an error in the subregions it
     /// does not ship); the other regions are the same either way.
+    ///
+    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+    /// the results into and return (see ``State``).
     #[staticmethod]
-    #[pyo3(signature = (p, t, *, units=None, method=None, errors=None, threads=None),
-           text_signature = "(p, t, *, units='native', method='exact', errors=None, threads=None)")]
+    #[pyo3(signature = (p, t, *, units=None, method=None, errors=None, threads=None, out=None),
+           text_signature = "(p, t, *, units='native', method='exact', errors=None, threads=None, out=None)")]
     #[allow(clippy::too_many_arguments)]
     fn from_pt<'py>(
         py: Python<'py>,
@@ -186,6 +203,7 @@ impl PyState {
         method: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         construct(
             py,
@@ -196,6 +214,7 @@ impl PyState {
             method,
             errors,
             threads,
+            out,
         )
     }
 
@@ -204,9 +223,12 @@ impl PyState {
     /// Units: "native" MPa, kJ/kg; "si" Pa, J/kg; "metric" bar, kJ/kg;
     /// "us" psia, Btu/lbm. ``method="exact"`` (default) refines on the basic
     /// equations; ``"backward"`` gives the IAPWS backward equations' values.
+    ///
+    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+    /// the results into and return (see ``State``).
     #[staticmethod]
-    #[pyo3(signature = (p, h, *, units=None, method=None, errors=None, threads=None),
-           text_signature = "(p, h, *, units='native', method='exact', errors=None, threads=None)")]
+    #[pyo3(signature = (p, h, *, units=None, method=None, errors=None, threads=None, out=None),
+           text_signature = "(p, h, *, units='native', method='exact', errors=None, threads=None, out=None)")]
     #[allow(clippy::too_many_arguments)]
     fn from_ph<'py>(
         py: Python<'py>,
@@ -216,6 +238,7 @@ impl PyState {
         method: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         construct(
             py,
@@ -226,6 +249,7 @@ impl PyState {
             method,
             errors,
             threads,
+            out,
         )
     }
 
@@ -233,9 +257,12 @@ impl PyState {
     ///
     /// Units: "native" MPa, kJ/(kg·K); "si" Pa, J/(kg·K); "metric" bar,
     /// kJ/(kg·K); "us" psia, Btu/(lbm·°R). ``method`` as for ``from_ph``.
+    ///
+    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+    /// the results into and return (see ``State``).
     #[staticmethod]
-    #[pyo3(signature = (p, s, *, units=None, method=None, errors=None, threads=None),
-           text_signature = "(p, s, *, units='native', method='exact', errors=None, threads=None)")]
+    #[pyo3(signature = (p, s, *, units=None, method=None, errors=None, threads=None, out=None),
+           text_signature = "(p, s, *, units='native', method='exact', errors=None, threads=None, out=None)")]
     #[allow(clippy::too_many_arguments)]
     fn from_ps<'py>(
         py: Python<'py>,
@@ -245,6 +272,7 @@ impl PyState {
         method: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         construct(
             py,
@@ -255,6 +283,7 @@ impl PyState {
             method,
             errors,
             threads,
+            out,
         )
     }
 
@@ -263,9 +292,12 @@ impl PyState {
     /// Units: "native" kJ/kg, kJ/(kg·K); "si" J/kg, J/(kg·K); "metric"
     /// kJ/kg, kJ/(kg·K); "us" Btu/lbm, Btu/(lbm·°R). ``method`` as for
     /// ``from_ph``.
+    ///
+    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+    /// the results into and return (see ``State``).
     #[staticmethod]
-    #[pyo3(signature = (h, s, *, units=None, method=None, errors=None, threads=None),
-           text_signature = "(h, s, *, units='native', method='exact', errors=None, threads=None)")]
+    #[pyo3(signature = (h, s, *, units=None, method=None, errors=None, threads=None, out=None),
+           text_signature = "(h, s, *, units='native', method='exact', errors=None, threads=None, out=None)")]
     #[allow(clippy::too_many_arguments)]
     fn from_hs<'py>(
         py: Python<'py>,
@@ -275,6 +307,7 @@ impl PyState {
         method: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         construct(
             py,
@@ -285,15 +318,19 @@ impl PyState {
             method,
             errors,
             threads,
+            out,
         )
     }
 
     /// The state at density ``rho`` and temperature ``t``.
     ///
     /// Units: "native" and "si" kg/m³, K; "metric" kg/m³, °C; "us" lbm/ft³, °F.
+    ///
+    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+    /// the results into and return (see ``State``).
     #[staticmethod]
-    #[pyo3(signature = (rho, t, *, units=None, errors=None, threads=None),
-           text_signature = "(rho, t, *, units='native', errors=None, threads=None)")]
+    #[pyo3(signature = (rho, t, *, units=None, errors=None, threads=None, out=None),
+           text_signature = "(rho, t, *, units='native', errors=None, threads=None, out=None)")]
     fn from_rho_t<'py>(
         py: Python<'py>,
         rho: &Bound<'py, PyAny>,
@@ -301,6 +338,7 @@ impl PyState {
         units: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         construct(
             py,
@@ -311,15 +349,19 @@ impl PyState {
             None,
             errors,
             threads,
+            out,
         )
     }
 
     /// The state at specific volume ``v`` and temperature ``t``.
     ///
     /// Units: "native" and "si" m³/kg, K; "metric" m³/kg, °C; "us" ft³/lbm, °F.
+    ///
+    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+    /// the results into and return (see ``State``).
     #[staticmethod]
-    #[pyo3(signature = (v, t, *, units=None, errors=None, threads=None),
-           text_signature = "(v, t, *, units='native', errors=None, threads=None)")]
+    #[pyo3(signature = (v, t, *, units=None, errors=None, threads=None, out=None),
+           text_signature = "(v, t, *, units='native', errors=None, threads=None, out=None)")]
     fn from_vt<'py>(
         py: Python<'py>,
         v: &Bound<'py, PyAny>,
@@ -327,6 +369,7 @@ impl PyState {
         units: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         construct(
             py,
@@ -337,6 +380,7 @@ impl PyState {
             None,
             errors,
             threads,
+            out,
         )
     }
 
@@ -344,9 +388,12 @@ impl PyState {
     ///
     /// Units: "native" m³/kg, kJ/kg; "si" m³/kg, J/kg; "metric" m³/kg,
     /// kJ/kg; "us" ft³/lbm, Btu/lbm.
+    ///
+    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+    /// the results into and return (see ``State``).
     #[staticmethod]
-    #[pyo3(signature = (v, u, *, units=None, errors=None, threads=None),
-           text_signature = "(v, u, *, units='native', errors=None, threads=None)")]
+    #[pyo3(signature = (v, u, *, units=None, errors=None, threads=None, out=None),
+           text_signature = "(v, u, *, units='native', errors=None, threads=None, out=None)")]
     fn from_vu<'py>(
         py: Python<'py>,
         v: &Bound<'py, PyAny>,
@@ -354,6 +401,7 @@ impl PyState {
         units: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         construct(
             py,
@@ -364,6 +412,7 @@ impl PyState {
             None,
             errors,
             threads,
+            out,
         )
     }
 
@@ -371,9 +420,12 @@ impl PyState {
     /// ``x`` (0 ≤ x ≤ 1).
     ///
     /// Units of ``p``: "native" MPa; "si" Pa; "metric" bar; "us" psia.
+    ///
+    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+    /// the results into and return (see ``State``).
     #[staticmethod]
-    #[pyo3(signature = (p, x, *, units=None, errors=None, threads=None),
-           text_signature = "(p, x, *, units='native', errors=None, threads=None)")]
+    #[pyo3(signature = (p, x, *, units=None, errors=None, threads=None, out=None),
+           text_signature = "(p, x, *, units='native', errors=None, threads=None, out=None)")]
     fn from_px<'py>(
         py: Python<'py>,
         p: &Bound<'py, PyAny>,
@@ -381,6 +433,7 @@ impl PyState {
         units: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         construct(
             py,
@@ -391,6 +444,7 @@ impl PyState {
             None,
             errors,
             threads,
+            out,
         )
     }
 
@@ -398,9 +452,12 @@ impl PyState {
     /// quality ``x`` (0 ≤ x ≤ 1).
     ///
     /// Units of ``t``: "native" and "si" K; "metric" °C; "us" °F.
+    ///
+    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+    /// the results into and return (see ``State``).
     #[staticmethod]
-    #[pyo3(signature = (t, x, *, units=None, errors=None, threads=None),
-           text_signature = "(t, x, *, units='native', errors=None, threads=None)")]
+    #[pyo3(signature = (t, x, *, units=None, errors=None, threads=None, out=None),
+           text_signature = "(t, x, *, units='native', errors=None, threads=None, out=None)")]
     fn from_tx<'py>(
         py: Python<'py>,
         t: &Bound<'py, PyAny>,
@@ -408,6 +465,7 @@ impl PyState {
         units: Option<&Bound<'py, PyAny>>,
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         construct(
             py,
@@ -418,6 +476,7 @@ impl PyState {
             None,
             errors,
             threads,
+            out,
         )
     }
 

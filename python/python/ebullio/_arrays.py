@@ -46,6 +46,9 @@ class StateArray:
     element is NaN in every property; the others are computed. A property
     that does not exist for an element (cp of wet steam, x of superheated
     vapour) is NaN with status OK.
+
+    A constructor given ``out=`` a StateArray of its inputs' broadcast
+    shape writes into that object's arrays and returns it (see ``State``).
     """
 
     __slots__ = ("_columns", "region", "phase", "status", "units", "_origin")
@@ -66,6 +69,13 @@ class StateArray:
         self.region = region
         self.phase = phase
         self.status = status
+        self.units = Units(units)
+        self._origin = origin
+        return self
+
+    def _rewritten(self, units: Units, origin: tuple) -> StateArray:
+        """This object once an ``out=`` call has written its arrays: its units
+        and recorded inputs become the call's."""
         self.units = Units(units)
         self._origin = origin
         return self

@@ -3,7 +3,8 @@
 The native constructors solve two Python numbers themselves; everything
 else comes here: inputs become float64 arrays (pandas missing values become
 NaN, and so a NOT_FINITE status), broadcast against each other, and go to
-the native kernel in one call.
+the native kernel in one call, which writes into fresh arrays or into those
+of the ``StateArray`` given as ``out=``.
 """
 
 from __future__ import annotations
@@ -82,8 +83,33 @@ def _broadcast(a: np.ndarray, b: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
         ) from None
 
 
-def solve(pair: int, a: Any, b: Any, units: Any, method: Any, errors: Any, threads: Any, read: Any = None) -> Any:
-    """``State.from_*`` for anything but two Python numbers."""
+def _arrays_of(out: Any, shape: tuple[int, ...]) -> tuple[np.ndarray, ...]:
+    """The arrays of ``out`` that a call of broadcast ``shape`` writes into,
+    checked to take its results in place."""
+    if not isinstance(out, StateArray):
+        if isinstance(out, SaturationArray):
+            hint = " (its liquid and vapour are parts of one saturation result)"
+        elif isinstance(out, _native.State):
+            hint = " (a State is one solved state, with nothing to write into)"
+        else:
+            hint = ""
+        raise TypeError(f"out must be a StateArray from an earlier array call of a State constructor, not {type(out).__name__}{hint}")
+    if out.shape != shape:
+        raise ValueError(f"out has shape {out.shape}, but the inputs broadcast to {shape}")
+    arrays = (out._columns, out.region, out.phase, out.status)
+    expected = (("properties", np.float64, (_COLUMNS,) + shape), ("region", np.uint8, shape), ("phase", np.uint8, shape), ("status", np.uint8, shape))
+    for array, (name, dtype, array_shape) in zip(arrays, expected):
+        if not isinstance(array, np.ndarray) or array.dtype != dtype or array.shape != array_shape:
+            raise TypeError(f"out's {name} must be a {np.dtype(dtype).name} ndarray of shape {array_shape}, as a State constructor made it")
+        if not array.flags.c_contiguous:
+            raise ValueError(f"out's {name} array is not C-contiguous (a strided view such as states[::2]); pass a StateArray a State constructor returned")
+        if not array.flags.writeable:
+            raise ValueError(f"out's {name} array is read-only")
+    return arrays
+
+
+def solve(pair: int, a: Any, b: Any, units: Any, method: Any, errors: Any, threads: Any, read: Any = None, out: Any = None) -> Any:
+    """``State.from_*`` for anything but two Python numbers without ``out``."""
     units = units_of(units)
     read = units if read is None else units_of(read)
     method = _method_of(method)
@@ -91,25 +117,39 @@ def solve(pair: int, a: Any, b: Any, units: Any, method: Any, errors: Any, threa
     threads = _threads_of(threads)
     fa, fb = floats(a), floats(b)
     scalar_inputs = fa.ndim == 0 and fb.ndim == 0 and not isinstance(a, np.ndarray) and not isinstance(b, np.ndarray)
+    if scalar_inputs and out is not None:
+        raise TypeError("out= is for array inputs; two numbers give a State, which is not written in place (pass arrays, or drop out=)")
     if scalar_inputs and errors != "flag":
         return _native.solve_scalar(pair, float(fa), float(fb), units, method, read)
     ba, bb = _broadcast(fa, fb)
     shape = ba.shape
+    arrays = None if out is None else _arrays_of(out, shape)
+    if arrays is not None and any(np.may_share_memory(x, array) for x in (fa, fb) for array in arrays):
+        # Inputs read from out itself (from_pt(st.p, st.t, out=st)) would be
+        # overwritten while being read, and out would record the results as
+        # its inputs: solve from copies.
+        fa, fb = fa.copy(), fb.copy()
+        ba, bb = _broadcast(fa, fb)
     flat_a, flat_b = ba.reshape(-1), bb.reshape(-1)
-    values, region, phase, status = _native.solve_many(pair, flat_a, flat_b, units, method, threads, read)
+    values, region, phase, status = _native.solve_many(pair, flat_a, flat_b, units, method, threads, read, arrays)
+    origin = (pair, fa, fb, units, method)
+    if out is None:
+        result = StateArray._make(
+            values.reshape((_COLUMNS,) + shape),
+            region.reshape(shape),
+            phase.reshape(shape),
+            status.reshape(shape),
+            read,
+            origin,
+        )
+    else:
+        result = out._rewritten(read, origin)
     if errors == "raise":
         bad = np.flatnonzero(status)
         if bad.size:
             k = int(bad[0])
             _native.raise_element(pair, float(flat_a[k]), float(flat_b[k]), units, method, element_label(k, shape))
-    return StateArray._make(
-        values.reshape((_COLUMNS,) + shape),
-        region.reshape(shape),
-        phase.reshape(shape),
-        status.reshape(shape),
-        read,
-        (pair, fa, fb, units, method),
-    )
+    return result
 
 
 def saturation(by: int, value: Any, units: Any, errors: Any, threads: Any, read: Any = None) -> Any:
