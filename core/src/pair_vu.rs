@@ -509,6 +509,9 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     };
     let mut found = None;
     let mut previous: Option<Saturation> = None;
+    // 1/T and dF/d(1/T) of the last point with a Newton step, for the
+    // curvature of Halley's correction.
+    let mut last_slope: Option<(f64, f64)> = None;
     for _ in 0..WET_STEPS {
         // The previous point starts region 3's density iterations.
         let sat = match &previous {
@@ -533,7 +536,22 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
             } else {
                 hi = t;
             }
-            newton = quality_match_step(l, g, v, u);
+            if let Some((f, slope)) = quality_match(l, g, v, u) {
+                let y = 1.0 / t;
+                let mut step = f / slope;
+                if let Some((y_last, slope_last)) = last_slope {
+                    // Halley's correction with the curvature measured
+                    // between this point and the last: good once the steps
+                    // are small, bounded where they are not.
+                    let curvature = (slope - slope_last) / (y - y_last);
+                    let denominator = 1.0 - 0.5 * step * curvature / slope;
+                    if denominator > 0.5 && denominator < 2.0 {
+                        step /= denominator;
+                    }
+                }
+                last_slope = Some((y, slope));
+                newton = 1.0 / (y - step);
+            }
         }
         t = if newton > lo && newton < hi {
             newton
@@ -553,21 +571,22 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     sat.mixture(x).map(Some)
 }
 
-/// The next temperature of Newton's method on
 /// F = ln x_v − ln x_u, the logarithms of the qualities the lever rule
-/// gives from v and from u, in the variable 1/T: ln x_v ≈ ln v − ln v''
-/// is nearly linear in 1/T (Clausius–Clapeyron, ideal vapour) and ln x_u
-/// changes slowly, so the steps stay good far from the root, where u_mix − u
-/// itself is nearly exponential in 1/T. NaN where either quality is not
-/// positive. Along the line each phase moves by dv/dT = v(αv − κT·p'),
+/// gives from v and from u, and its slope in the variable 1/T, at the
+/// saturation point `l`, `g`: the wet iteration's Newton steps are taken on
+/// it in 1/T, where ln x_v ≈ ln v − ln v'' is nearly linear
+/// (Clausius–Clapeyron, ideal vapour) and ln x_u changes slowly, so the
+/// steps stay good far from the root, where u_mix − u itself is nearly
+/// exponential in 1/T. `None` where either quality is not positive. Along
+/// the line each phase moves by dv/dT = v(αv − κT·p'),
 /// dh/dT = cp + v(1 − Tαv)·p' and du/dT = dh/dT − p·dv/dT − v·p'
 /// (p' = dpsat/dT).
-fn quality_match_step(l: &Properties, g: &Properties, v: f64, u: f64) -> f64 {
+fn quality_match(l: &Properties, g: &Properties, v: f64, u: f64) -> Option<(f64, f64)> {
     let t = l.t;
     let x_v = (v - l.v) / (g.v - l.v);
     let x_u = (u - l.u) / (g.u - l.u);
     if !(x_v > 0.0 && x_u > 0.0) {
-        return f64::NAN;
+        return None;
     }
     let dp = saturation_pressure_slope(t);
     let along = |phase: &Properties| {
@@ -579,8 +598,9 @@ fn quality_match_step(l: &Properties, g: &Properties, v: f64, u: f64) -> f64 {
     let dx_v = -(dv_l + x_v * (dv_g - dv_l)) / (g.v - l.v);
     let dx_u = -(du_l + x_u * (du_g - du_l)) / (g.u - l.u);
     let f = ln(x_v) - ln(x_u);
-    let slope = dx_v / x_v - dx_u / x_u;
-    1.0 / (1.0 / t + f / (t * t * slope))
+    // dF/d(1/T) = −T² dF/dT.
+    let slope = -t * t * (dx_v / x_v - dx_u / x_u);
+    Some((f, slope))
 }
 
 #[cfg(test)]
