@@ -227,21 +227,32 @@ const ISOCHORE_STEPS: u32 = 80;
 /// isochore where the density anomaly below 277 K defeats it.
 fn liquid(v: f64, u: f64) -> Option<Properties> {
     let t0 = (TRIPLE_POINT_TEMPERATURE + u / 4.2).clamp(MIN_TEMPERATURE, REGION13_TEMPERATURE);
+    newton_else_isochore(
+        Equation::Region1,
+        v,
+        u,
+        (10.0, t0),
+        (MIN_TEMPERATURE, REGION13_TEMPERATURE),
+    )
+}
+
+/// Newton in (p, T) together on `equation` from `start`, T kept within a
+/// kelvin of `t_range`; failing that, the isochore over `t_range`.
+fn newton_else_isochore(
+    equation: Equation,
+    v: f64,
+    u: f64,
+    start: (f64, f64),
+    t_range: (f64, f64),
+) -> Option<Properties> {
     let bounds = Bounds {
         x: (P_FLOOR, P_CEILING),
-        t: (MIN_TEMPERATURE - 1.0, REGION13_TEMPERATURE + 1.0),
+        t: (t_range.0 - 1.0, t_range.1 + 1.0),
     };
     let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
-    refine(Equation::Region1, targets.0, targets.1, (10.0, t0), bounds)
+    refine(equation, targets.0, targets.1, start, bounds)
         .ok()
-        .or_else(|| {
-            along_isochore(
-                Equation::Region1,
-                v,
-                u,
-                (MIN_TEMPERATURE, REGION13_TEMPERATURE),
-            )
-        })
+        .or_else(|| along_isochore(equation, v, u, t_range))
 }
 
 /// Region 2: Newton in (p, T) together from the ideal gas — T where u
@@ -251,16 +262,9 @@ fn liquid(v: f64, u: f64) -> Option<Properties> {
 /// the isochore, and p = RT/v — falling back to the isochore where that
 /// start is too far off (dense steam).
 fn vapour(v: f64, u: f64) -> Option<Properties> {
-    let isochore = || {
-        along_isochore(
-            Equation::Region2,
-            v,
-            u,
-            (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE),
-        )
-    };
+    let t_range = (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE);
     if v < IDEAL_START_MIN_VOLUME && u < HOT_STEAM_MIN_ENERGY {
-        return isochore();
+        return along_isochore(Equation::Region2, v, u, t_range);
     }
     let t_line =
         (MIN_TEMPERATURE + (u - 2_375.0) / 1.61).clamp(MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE);
@@ -274,14 +278,7 @@ fn vapour(v: f64, u: f64) -> Option<Properties> {
         ideal_gas_dew_point(v).map_or(t_line, |t_dew| t_line.max(t_dew))
     };
     let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, MAX_PRESSURE);
-    let bounds = Bounds {
-        x: (P_FLOOR, P_CEILING),
-        t: (MIN_TEMPERATURE - 1.0, REGION2_MAX_TEMPERATURE + 1.0),
-    };
-    let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
-    refine(Equation::Region2, targets.0, targets.1, (p0, t0), bounds)
-        .ok()
-        .or_else(isochore)
+    newton_else_isochore(Equation::Region2, v, u, (p0, t0), t_range)
 }
 
 /// Region 5, nearly an ideal gas: Newton in (p, T) together from T where
@@ -293,21 +290,13 @@ fn hot_gas(v: f64, u: f64) -> Option<Properties> {
     let t0 = (REGION2_MAX_TEMPERATURE + (u - 3_665.4) / cv)
         .clamp(REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE);
     let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, REGION5_MAX_PRESSURE);
-    let bounds = Bounds {
-        x: (P_FLOOR, P_CEILING),
-        t: (REGION2_MAX_TEMPERATURE - 1.0, MAX_TEMPERATURE + 1.0),
-    };
-    let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
-    refine(Equation::Region5, targets.0, targets.1, (p0, t0), bounds)
-        .ok()
-        .or_else(|| {
-            along_isochore(
-                Equation::Region5,
-                v,
-                u,
-                (REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE),
-            )
-        })
+    newton_else_isochore(
+        Equation::Region5,
+        v,
+        u,
+        (p0, t0),
+        (REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE),
+    )
 }
 
 /// Below this specific volume (above 50 kg/m³) steam is too far from the

@@ -9,6 +9,7 @@ import pytest
 
 import ebullio
 from ebullio import Status
+from inputs import mixed_inputs
 
 
 def bits(a):
@@ -31,19 +32,6 @@ def scalar_column(constructor, a, b, name, **kw):
             value = None
         out[k] = np.nan if value is None else value
     return out
-
-
-def mixed_inputs(n, seed=12345):
-    """(p, T) over regions 1, 2, 3 and 5, with some bad elements."""
-    rng = np.random.default_rng(seed)
-    p = rng.uniform(0.001, 100.0, n)
-    t = rng.uniform(273.15, 1073.15, n)
-    hot = rng.random(n) < 0.1
-    p[hot] = rng.uniform(0.01, 50.0, hot.sum())
-    t[hot] = rng.uniform(1073.15, 2273.15, hot.sum())
-    bad = rng.random(n) < 0.02
-    p[bad] = rng.choice([np.nan, np.inf, -1.0, 150.0], bad.sum())
-    return p, t
 
 
 def test_scalars_broadcast_against_arrays():

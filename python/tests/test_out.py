@@ -9,6 +9,7 @@ import pytest
 
 import ebullio
 from ebullio import State, Status, Units
+from inputs import mixed_inputs
 
 N = 4000
 
@@ -38,22 +39,9 @@ def assert_same(arr, fresh):
     assert got[4] is want[4]
 
 
-def pt_inputs(n, seed):
-    """(p, T) in MPa, K over regions 1, 2, 3 and 5, about 3 % bad."""
-    rng = np.random.default_rng(seed)
-    p = rng.uniform(0.001, 100.0, n)
-    t = rng.uniform(273.15, 1073.15, n)
-    hot = rng.random(n) < 0.1
-    p[hot] = rng.uniform(0.01, 50.0, hot.sum())
-    t[hot] = rng.uniform(1073.15, 2273.15, hot.sum())
-    bad = rng.random(n) < 0.03
-    p[bad] = rng.choice([np.nan, np.inf, -1.0, 150.0], bad.sum())
-    return p, t
-
-
 def pair_inputs(units, seed=2024):
     """(constructor name, a, b) for every pair, in `units`, with bad elements."""
-    p, t = pt_inputs(N, seed)
+    p, t = mixed_inputs(N, seed)
     reference = State.from_pt(p, t).in_units(units)
     x = np.linspace(-0.05, 1.05, N)  # past both ends: QUALITY_OUT_OF_RANGE there
     line = Units(units)
@@ -74,7 +62,7 @@ def pair_inputs(units, seed=2024):
 
 @pytest.mark.parametrize("units", ["native", "si", "metric", "us"])
 def test_out_gives_the_bits_of_a_fresh_call(units):
-    p, t = pt_inputs(N, seed=1)
+    p, t = mixed_inputs(N, seed=1)
     for name, a, b in pair_inputs(units):
         constructor = getattr(State, name)
         # A stale result of other inputs, in other units, with its bad
@@ -100,7 +88,7 @@ def test_out_takes_other_shapes_and_broadcasts():
 
 
 def test_reused_out_follows_the_new_inputs_and_units():
-    p, t = pt_inputs(N, seed=3)
+    p, t = mixed_inputs(N, seed=3)
     out = State.from_pt(p, t, units="native")
     us = State.from_pt(np.roll(p, 11), np.roll(t, 11)).in_units("us")
     p2, h2 = us.p.copy(), us.h.copy()
@@ -124,7 +112,7 @@ def test_reused_out_follows_the_new_inputs_and_units():
 
 
 def test_inputs_read_from_out_itself():
-    p, t = pt_inputs(N, seed=4)
+    p, t = mixed_inputs(N, seed=4)
     out = State.from_pt(p, t)
     p0, h0 = out.p.copy(), out.h.copy()
     assert State.from_ph(out.p, out.h, out=out) is out
@@ -134,7 +122,7 @@ def test_inputs_read_from_out_itself():
 
 
 def test_errors_raise_with_out_holds_the_whole_call():
-    p, t = pt_inputs(N, seed=5)
+    p, t = mixed_inputs(N, seed=5)
     out = State.from_pt(np.roll(p, 3), np.roll(t, 3))
     first = int(np.flatnonzero(State.from_pt(p, t).status)[0])
     with pytest.raises(ebullio.SteamError, match=rf"^element {first}: "):
@@ -146,7 +134,7 @@ def test_errors_raise_with_out_holds_the_whole_call():
 
 @pytest.mark.parametrize("threads", [None, 1, 2])
 def test_threads_agree_with_out(threads):
-    p, t = pt_inputs(60_000, seed=6)  # above the size at which the pool is used
+    p, t = mixed_inputs(60_000, seed=6)  # above the size at which the pool is used
     one = State.from_pt(p, t, threads=1)
     out = State.from_pt(np.roll(p, 5), t, threads=threads)
     assert State.from_pt(p, t, threads=threads, out=out) is out
