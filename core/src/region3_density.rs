@@ -13,14 +13,17 @@
 //!
 //! The start is the SR5-05(2016) backward equation v(p, T), iterated
 //! inside a narrow window around it and accepted only if it settles there
-//! on a rising stretch of the isotherm; where that equation is missing (its
-//! unverified subregions) or the window fails, the branch is bracketed
-//! (by sign) from the saturated-density estimates instead.
+//! on a rising stretch of the isotherm. Where that equation is missing (its
+//! unverified subregions): above Tc an estimate from the neighbouring
+//! subregions' equations inside a bracket checked by sign
+//! ([`crate::region3_gap_estimate`]); otherwise, or where the window fails,
+//! the branch is bracketed (by sign) from the saturated-density estimates.
 
 use crate::backward::sr5_05::{self, SaturationSide};
 use crate::constants::{CRITICAL_DENSITY, SPECIFIC_GAS_CONSTANT};
 use crate::error::Error;
 use crate::region3::pressure_and_slope;
+use crate::region3_gap_estimate;
 use crate::saturated_density_estimate as estimate;
 
 /// Which root of p(ρ, T) = p a caller wants.
@@ -56,7 +59,29 @@ pub(crate) fn density(p: f64, t: f64, branch: Branch) -> Result<f64, Error> {
     if let Some(rho) = from_backward_start(p, t, branch) {
         return Ok(rho);
     }
+    if branch == Branch::Supercritical {
+        if let Some(rho) = from_gap_estimate(p, t) {
+            return Ok(rho);
+        }
+    }
     bracketed(p, t, branch)
+}
+
+/// Relative half-width of the bracket around the estimate of the
+/// subregions without a verified SR5-05 table: twice its worst error.
+const GAP_BRACKET: f64 = 0.05;
+
+/// Above Tc, where the isotherm has one root, in the subregions SR5-05
+/// covers only with tables ebullio could not verify: the root from
+/// [`region3_gap_estimate`](crate::region3_gap_estimate)'s start, inside a
+/// bracket around it checked by sign.
+fn from_gap_estimate(p: f64, t: f64) -> Option<f64> {
+    let rho0 = 1.0 / region3_gap_estimate::specific_volume(sr5_05::locate(p, t), p, t)?;
+    let (lo, hi) = (rho0 * (1.0 - GAP_BRACKET), rho0 * (1.0 + GAP_BRACKET));
+    if !(pressure_and_slope(lo, t).0 <= p && p <= pressure_and_slope(hi, t).0) {
+        return None;
+    }
+    newton_in_bracket(p, t, lo, hi, rho0).map(|root| root.rho)
 }
 
 /// The density as [`density`] gives it, started from `guess` instead of
