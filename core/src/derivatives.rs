@@ -12,7 +12,6 @@
 //! (∂ρ/∂p)_h and (∂ρ/∂h)_p.
 
 use crate::error::Error;
-use crate::free_energy::Properties;
 use crate::saturation::Saturation;
 use crate::saturation_line::saturation_pressure_slope;
 use crate::state::{Phase, State};
@@ -22,12 +21,6 @@ use crate::variable::Variable;
 /// The linear factor from native units to `units` for `quantity`.
 fn scale(units: Units, quantity: Quantity) -> f64 {
     units.from_native(quantity, 1.0) - units.from_native(quantity, 0.0)
-}
-
-/// Slope of a variable along the saturation line at a saturated phase.
-fn along_line(z: Variable, phase: &Properties, dp_dt: f64) -> f64 {
-    let (z_p, z_t) = z.pt_partials(phase);
-    z_t + z_p * dp_dt
 }
 
 impl State {
@@ -129,7 +122,7 @@ impl Saturation {
     fn slope(&self, z: Variable, phase: &State) -> f64 {
         let units = phase.units();
         let dp_dt = saturation_pressure_slope(phase.native().t);
-        along_line(z, phase.native(), dp_dt) * scale(units, z.quantity())
+        z.along_saturation(phase.native(), dp_dt) * scale(units, z.quantity())
             / scale(units, Quantity::TemperatureDifference)
     }
 }
@@ -147,7 +140,7 @@ fn wet_partials(z: Variable, sat: &Saturation, x: f64) -> (f64, f64) {
             (-rho * rho * v_t, -rho * rho * v_x)
         }
         _ => {
-            let (zl_t, zg_t) = (along_line(z, l, dp_dt), along_line(z, g, dp_dt));
+            let (zl_t, zg_t) = (z.along_saturation(l, dp_dt), z.along_saturation(g, dp_dt));
             ((1.0 - x) * zl_t + x * zg_t, z.of(g) - z.of(l))
         }
     }

@@ -50,6 +50,7 @@ use crate::saturation::{min_saturation_pressure, Saturation};
 use crate::saturation_line::{saturation_pressure, saturation_pressure_slope_and_curvature};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
+use crate::variable::Variable;
 use crate::wet_hs_start::wet_temperature_start;
 
 // Entropies and enthalpies that bound the ranges of the SR4-04 boundary
@@ -668,12 +669,11 @@ fn wet_at(t: f64, h: f64, s: f64, near: Option<&Saturation>) -> Result<WetPoint,
     // One phase along the line: dh/dT, ds/dT, and the curvature of its own
     // difference (f' or f'').
     let along = |phase: &Properties| {
-        let vp = 1e3 * phase.v * dp;
-        let ds = phase.cp / phase.t - vp * phase.alpha_v;
-        let dv = phase.v * (phase.alpha_v - phase.kappa_t * dp);
+        let ds = Variable::Entropy.along_saturation(phase, dp);
+        let dv = Variable::SpecificVolume.along_saturation(phase, dp);
         let curvature = 1e3 * (dv * dp + phase.v * ddp) - ds;
         (
-            phase.cp + vp * (1.0 - phase.t * phase.alpha_v),
+            Variable::Enthalpy.along_saturation(phase, dp),
             ds,
             curvature,
         )

@@ -31,6 +31,7 @@ use crate::saturation::Saturation;
 use crate::saturation_line::{saturation_pressure, saturation_pressure_slope};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
+use crate::variable::Variable;
 
 impl State {
     /// The state at specific volume `v` and specific internal energy `u`,
@@ -579,9 +580,10 @@ fn quality_match(l: &Properties, g: &Properties, v: f64, u: f64) -> Option<(f64,
     }
     let dp = saturation_pressure_slope(t);
     let along = |phase: &Properties| {
-        let dv = phase.v * (phase.alpha_v - phase.kappa_t * dp);
-        let dh = phase.cp + 1e3 * phase.v * (1.0 - phase.t * phase.alpha_v) * dp;
-        (dv, dh - 1e3 * (phase.p * dv + phase.v * dp))
+        (
+            Variable::SpecificVolume.along_saturation(phase, dp),
+            Variable::InternalEnergy.along_saturation(phase, dp),
+        )
     };
     let ((dv_l, du_l), (dv_g, du_g)) = (along(l), along(g));
     let dx_v = -(dv_l + x_v * (dv_g - dv_l)) / (g.v - l.v);

@@ -17,6 +17,7 @@ use crate::saturation_line::{
 };
 use crate::state::{Phase, Region, State};
 use crate::units::{Quantity, Units};
+use crate::variable::Variable;
 use crate::{region1, region2, region3};
 
 /// Lowest saturation pressure of the range of validity, psat(273.15 K),
@@ -93,9 +94,8 @@ impl Saturation {
         let p = saturation_pressure(t);
         let dp = saturation_pressure_slope(t_near);
         let phase = |branch: Branch, previous: &State, phase: Phase| -> Result<State, Error> {
-            // Along the line dρ/dT = −ρ (αv − κT·dpsat/dT).
             let n = previous.native();
-            let guess = (1.0 - (n.alpha_v - n.kappa_t * dp) * (t - t_near)) / n.v;
+            let guess = 1.0 / n.v + Variable::Density.along_saturation(n, dp) * (t - t_near);
             let rho = density_near(p, t, branch, guess)?;
             let props = region3_properties(p, t, rho);
             Ok(State::single_phase(

@@ -92,6 +92,15 @@ impl Variable {
         }
     }
 
+    /// dz/dT of this variable z along the saturation line at a saturated
+    /// phase `phase`, where the line's slope is `dp_dt` (MPa/K):
+    /// (∂z/∂T)_p + (∂z/∂p)_T · dpsat/dT.
+    #[inline]
+    pub(crate) fn along_saturation(self, phase: &Properties, dp_dt: f64) -> f64 {
+        let (z_p, z_t) = self.pt_partials(phase);
+        z_t + z_p * dp_dt
+    }
+
     /// ((∂z/∂p)_T, (∂z/∂T)_p) of this variable z at a single-phase state.
     #[inline]
     pub(crate) fn pt_partials(self, s: &Properties) -> (f64, f64) {
