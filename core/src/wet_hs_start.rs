@@ -133,6 +133,15 @@ mod tests {
         }
     }
 
+    /// s_c is the region 3 equation's entropy at the critical point
+    /// (ρc = 322 kg/m³, Tc = 647.096 K, R7-97 Eqs. 4 and 2).
+    #[test]
+    fn the_critical_entropy_is_the_region3_equations() {
+        let (rho, t) = (322.0, 647.096);
+        let s = crate::region3::helmholtz(rho, t).properties(rho, t).s;
+        assert!((s - S_CRITICAL).abs() <= 1e-9, "{s}");
+    }
+
     #[test]
     fn points_below_the_dome_have_no_start() {
         // Below the 273.15 K isotherm (h under its line at s = 1), and

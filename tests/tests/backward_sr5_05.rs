@@ -165,9 +165,12 @@ fn a_saturated_phase_is_given_its_own_sides_subregion() {
     use ebullio::backward::sr5_05::{locate_on_side, SaturationSide};
     use ebullio::saturation_line::saturation_temperature;
     use Subregion::*;
-    // IAPWS SR5-05(2016), Table 2 (recalled): along the saturation line the
-    // liquid lies in 3c (below p_3cd) or 3s and the vapour in 3t or 3r;
-    // nearer the critical point the auxiliary 3u/3y and 3x/3z.
+    // The subregion names are those of the release's split as `locate`
+    // codes it (IAPWS SR5-05(2016), Table 2 and Section 4.2, recalled): along
+    // the saturation line the liquid lies in 3c (below p_3cd) or 3s and the
+    // vapour in 3t or 3r, nearer the critical point in the auxiliary 3u/3y
+    // and 3x/3z. What this checks is that on the line itself the side
+    // given, not rounding in Tsat(p), picks the phase's subregion.
     let cases = [
         (17.0, C, T),
         (20.0, S, T),
