@@ -43,7 +43,6 @@ pub mod region2;
 pub mod region2_metastable;
 pub mod region3;
 mod region3_density;
-mod region3_gap_estimate;
 pub mod region5;
 mod regions;
 mod saturated_density_estimate;

@@ -27,9 +27,9 @@ impl State {
     /// the basic equation for the density; [`Method::BackwardOnly`] takes
     /// the density of the IAPWS SR5-05(2016) backward equation v(p,T)
     /// unrefined, and the state at that (ρ, T), whose pressure differs from
-    /// `p` by the backward equation's error. Subregions 3e, 3h, 3n and 3x
-    /// have no shipped backward equation (their tables could not be
-    /// verified): there the strict call is
+    /// `p` by the backward equation's error (in every subregion 3a … 3z).
+    /// A backward volume that is not finite and positive (an
+    /// extrapolation at the edge of a subregion's range) is
     /// [`Error::BackwardEquationOutOfRange`].
     pub fn from_pt_with(p: f64, t: f64, units: Units, method: Method) -> Result<State, Error> {
         let p = native_input(units, Quantity::Pressure, p)?;
@@ -39,12 +39,12 @@ impl State {
             Located::Region2 => (region2::gibbs(p, t).properties(p, t), Region::Two, false),
             Located::Region5 => (region5::gibbs(p, t).properties(p, t), Region::Five, false),
             Located::Region3(branch) if method == Method::BackwardOnly => {
-                let rho = sr5_05::specific_volume(p, t)
-                    .map(|v| 1.0 / v)
-                    .filter(|rho| rho.is_finite() && *rho > 0.0)
-                    .ok_or(Error::BackwardEquationOutOfRange {
+                let rho = 1.0 / sr5_05::specific_volume(p, t);
+                if !(rho.is_finite() && rho > 0.0) {
+                    return Err(Error::BackwardEquationOutOfRange {
                         equation: "v(p,T) region 3",
-                    })?;
+                    });
+                }
                 (
                     region3::helmholtz(rho, t).properties(rho, t),
                     Region::Three,

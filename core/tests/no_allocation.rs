@@ -186,7 +186,7 @@ fn exercise_everything() -> f64 {
     sum += sr3_03::temperature_region3_ph(25.0, 1800.0) + sr3_03::volume_region3_ps(25.0, 4.0);
     sum +=
         sr4_04::pressure_region3_hs(1800.0, 4.0) + sr4_04::saturation_temperature_hs(2400.0, 6.0);
-    sum += sr5_05::specific_volume(25.0, 650.0).unwrap_or(0.0);
+    sum += sr5_05::specific_volume(25.0, 650.0);
     sum + exercise_plant()
 }
 

@@ -3,14 +3,15 @@
 //! every subregion, against the verification values the release prints.
 //!
 //! The values are recalled, not read from the document; each is cited
-//! with the table it comes from. A subregion whose recalled coefficients do
-//! not reproduce the printed values is left out here and listed at the end
-//! of this file.
+//! with the table it comes from. Beside them: the equations against the
+//! region 3 basic equation they were fitted to, and neighbouring equations
+//! against each other on their shared boundaries.
 
 use ebullio::backward::sr5_05::{
     locate, specific_volume, specific_volume_in, t_3ab, t_3cd, t_3ef, t_3gh, t_3ij, t_3jk, t_3mn,
     t_3op, t_3qu, t_3rx, t_3uv, t_3wx, Subregion,
 };
+use ebullio::{boundary_b23, Method, Region, State, Units};
 use ebullio_conformance::assert_printed;
 
 #[test]
@@ -43,16 +44,8 @@ fn check(sub: Subregion, p: f64, t: f64, printed: &str) {
         sub.name()
     );
     let what = format!("v_{}({p} MPa, {t} K)", sub.name());
-    assert_printed(
-        &what,
-        specific_volume(p, t).expect("a verified subregion"),
-        printed,
-    );
-    assert_printed(
-        &what,
-        specific_volume_in(sub, p, t).expect("a verified subregion"),
-        printed,
-    );
+    assert_printed(&what, specific_volume(p, t), printed);
+    assert_printed(&what, specific_volume_in(sub, p, t), printed);
 }
 
 #[test]
@@ -67,6 +60,27 @@ fn subregions_3a_to_3d_reproduce_the_release_table() {
     check(C, 30.0, 650.0, "1.819560617e-3");
     check(D, 26.0, 656.0, "2.245587720e-3");
     check(D, 30.0, 670.0, "2.506897702e-3");
+}
+
+/// The release's check points of the four subregions whose tables come
+/// from `sr5_05_3e_3h_3n_3x.tsv` (see the tables' file headers).
+// recalled from IAPWS SR5-05(2016), Table 5 (3e, 3h, 3n) and Table 13 (3x)
+const CHECK_POINTS_3E_3H_3N_3X: [(Subregion, f64, f64, &str); 8] = [
+    (Subregion::E, 26.0, 661.0, "2.970225962e-3"),
+    (Subregion::E, 30.0, 675.0, "3.004627086e-3"),
+    (Subregion::H, 23.6, 652.0, "2.651081407e-3"),
+    (Subregion::H, 24.0, 654.0, "2.967802335e-3"),
+    (Subregion::N, 22.6, 649.0, "2.923432711e-3"),
+    (Subregion::N, 22.8, 649.7, "2.913311494e-3"),
+    (Subregion::X, 22.11, 648.0, "4.528072649e-3"),
+    (Subregion::X, 22.3, 649.0, "4.556905799e-3"),
+];
+
+#[test]
+fn subregions_3e_3h_3n_3x_reproduce_the_release_tables() {
+    for (sub, p, t, printed) in CHECK_POINTS_3E_3H_3N_3X {
+        check(sub, p, t, printed);
+    }
 }
 
 #[test]
@@ -194,65 +208,230 @@ fn a_saturated_phase_is_given_its_own_sides_subregion() {
     }
 }
 
-// Left out because the recalled coefficients do not reproduce the
-// release's printed values (see the report that came with this file):
-// subregions 3e, 3h, 3n (IAPWS SR5-05(2016), Table 5) and 3x (Table 13),
-// and the second point of 3z (above).
+/// The bound on |v/v_basic − 1| between a subregion's backward equation
+/// and the region 3 basic equation solved at the same (p, T), or `None`
+/// where no bound is held here.
+///
+/// - 3a … 3t: 1e-5, the permissible value of the release's consistency
+///   requirement for these equations (0.001 %, recalled from IAPWS
+///   SR5-05(2016)); the twenty equations' maxima measured by
+///   `every_subregion_keeps_to_the_basic_equation` (2.8e-6 to 9.4e-6) sit
+///   just inside it, as fits made to a tolerance do.
+/// - 3u … 3x: 1e-3, ours — the release's value for its auxiliary equations
+///   is not recalled with confidence. Their measured maxima (9.4e-4,
+///   7.8e-4, 4.0e-4, 8.7e-4) lie beside the saturation line, where v
+///   varies fastest.
+/// - 3y, 3z, within a few hundredths of a kelvin of the critical point:
+///   none; measured up to 1.0e-2 and 1.3e-2 beside the saturation line, and
+///   no bound recalled to hold them to.
+fn tolerance(sub: Subregion) -> Option<f64> {
+    match sub {
+        Subregion::Y | Subregion::Z => None,
+        _ if sub.is_near_critical() => Some(1e-3),
+        _ => Some(1e-5),
+    }
+}
+
+/// The specific volume of the basic equation at (p, T), and whether the
+/// state is in region 3 at all.
+fn basic_volume(p: f64, t: f64) -> Option<f64> {
+    let state = State::from_pt(p, t, Units::Native).ok()?;
+    (state.region() == Region::Three).then(|| state.specific_volume())
+}
 
 #[test]
-fn subregions_without_a_verified_table_give_no_volume() {
-    // 3e, 3h, 3n and 3x could not be recalled well enough to reproduce the
-    // release's check values; they answer None rather than a wrong number,
-    // and the region 3 solver brackets the density itself there.
-    use ebullio::backward::sr5_05::Subregion;
-    for sub in [Subregion::E, Subregion::H, Subregion::N, Subregion::X] {
-        assert_eq!(specific_volume_in(sub, 40.0, 700.0), None, "{}", sub.name());
+fn every_subregion_keeps_to_the_basic_equation() {
+    // Two grids: all of region 3, and the near-critical corner where the
+    // small subregions (3h, 3m … 3p, 3u … 3x) lie.
+    let whole = (16.53, 100.0, 623.15, None);
+    let corner = (21.0, 25.0, 640.0, Some(660.0));
+    let mut worst = [(0.0_f64, 0.0, 0.0, 0_usize); 26];
+    for (p_low, p_high, t_low, t_high) in [whole, corner] {
+        for ip in 0..=200 {
+            let p = p_low + (p_high - p_low) * f64::from(ip) / 200.0;
+            let t_high = t_high.unwrap_or_else(|| boundary_b23::temperature(p));
+            for it in 0..=200 {
+                let t = t_low + (t_high - t_low) * f64::from(it) / 200.0;
+                let Some(basic) = basic_volume(p, t) else {
+                    continue;
+                };
+                let sub = locate(p, t);
+                let w = &mut worst[sub as usize];
+                let deviation = (specific_volume(p, t) / basic - 1.0).abs();
+                w.3 += 1;
+                if deviation > w.0 {
+                    (w.0, w.1, w.2) = (deviation, p, t);
+                }
+            }
+        }
     }
-    for sub in [Subregion::A, Subregion::C, Subregion::U] {
-        assert!(
-            specific_volume_in(sub, 40.0, 700.0).is_some(),
-            "{}",
+    for (k, &(deviation, p, t, count)) in worst.iter().enumerate() {
+        let sub = SUBREGIONS[k];
+        eprintln!(
+            "{}: {count} states, worst |Δv/v| {deviation:.2e} at {p} MPa, {t} K",
             sub.name()
         );
+        if let Some(bound) = tolerance(sub) {
+            assert!(count >= 20, "{}: only {count} states", sub.name());
+            assert!(deviation <= bound, "{}: {deviation:e}", sub.name());
+        }
+    }
+}
+
+/// The subregions in declaration order (`Subregion as usize`).
+const SUBREGIONS: [Subregion; 26] = {
+    use Subregion::*;
+    [
+        A, B, C, D, E, F, G, H, I, J, K, L, M, N, O, P, Q, R, S, T, U, V, W, X, Y, Z,
+    ]
+};
+
+/// The two equations on either side of a boundary agree there within the
+/// sum of their bounds against the basic equation.
+#[track_caller]
+fn meet(p: f64, t: f64, below: Subregion, above: Subregion, worst: &mut f64) {
+    let (v_below, v_above) = (
+        specific_volume_in(below, p, t),
+        specific_volume_in(above, p, t),
+    );
+    let gap = (v_below / v_above - 1.0).abs();
+    let bound = tolerance(below).unwrap() + tolerance(above).unwrap();
+    assert!(
+        gap <= bound,
+        "{}|{} at {p} MPa, {t} K: {gap:e}",
+        below.name(),
+        above.name()
+    );
+    *worst = worst.max(gap);
+}
+
+/// A boundary equation T_3xy(p).
+type Line = fn(f64) -> f64;
+/// The subregions on either side of a boundary, the lower temperature (or
+/// pressure) first.
+type Pair = (Subregion, Subregion);
+
+#[test]
+fn neighbours_of_3e_3h_3n_3x_meet_them_on_the_boundaries() {
+    use Subregion::*;
+    // The boundary lines T_3xy(p) of IAPWS SR5-05(2016), Table 2 and
+    // Section 4.2 (recalled), with the pressures between which they
+    // separate the two subregions named (lower temperature first).
+    let lines: [(&str, Line, f64, f64, Pair); 9] = [
+        ("T_3ab", t_3ab, 25.0, 40.0, (D, E)),
+        ("T_3ef", t_3ef, 25.0, 40.0, (E, F)),
+        ("T_3gh", t_3gh, 23.5, 25.0, (G, H)),
+        ("T_3gh", t_3gh, 23.0, 23.5, (L, H)),
+        ("T_3ef", t_3ef, 23.0, 25.0, (H, I)),
+        ("T_3mn", t_3mn, 22.5, 23.0, (M, N)),
+        ("T_3ef", t_3ef, 22.5, 23.0, (N, O)),
+        ("T_3wx", t_3wx, 22.11, 22.5, (W, X)),
+        ("T_3rx", t_3rx, 21.05, 22.5, (X, R)),
+    ];
+    for (name, line, p_low, p_high, (below, above)) in lines {
+        let mut worst = 0.0_f64;
+        for k in 1..200 {
+            let p = p_low + (p_high - p_low) * f64::from(k) / 200.0;
+            let t = line(p);
+            assert_eq!(
+                (locate(p, t), locate(p, t.next_up())),
+                (below, above),
+                "{name} at {p} MPa"
+            );
+            meet(p, t, below, above, &mut worst);
+        }
+        eprintln!(
+            "{name} {}|{}: worst gap {worst:.2e}",
+            below.name(),
+            above.name()
+        );
+    }
+    // Between the saturation line and 22.11 MPa, T_3wx separates 3z from
+    // 3x; 3z is held to no bound (see `tolerance`), so only the 3x side is
+    // checked there, against the basic equation.
+    for k in 1..50 {
+        let p = 21.91 + (22.11 - 21.91) * f64::from(k) / 50.0;
+        let t = t_3wx(p);
+        assert_eq!((locate(p, t), locate(p, t.next_up())), (Z, X), "{p} MPa");
+        let basic = basic_volume(p, t).unwrap();
+        let deviation = (specific_volume_in(X, p, t) / basic - 1.0).abs();
+        assert!(
+            deviation <= tolerance(X).unwrap(),
+            "3x at {p} MPa: {deviation:e}"
+        );
+    }
+    // The fixed pressures (a pressure on a limit belongs to the range
+    // below it), across the temperatures where a new subregion touches
+    // them.
+    let limits: [(f64, f64, f64, &[Pair]); 4] = [
+        (40.0, 690.0, 715.0, &[(E, B)]),
+        (25.0, 645.0, 670.0, &[(H, D), (H, E)]),
+        (23.0, 645.0, 655.0, &[(N, H)]),
+        (22.5, 645.0, 660.0, &[(V, N), (X, J), (X, P)]),
+    ];
+    for (p, t_low, t_high, wanted) in limits {
+        let mut found = Vec::new();
+        let mut worst = 0.0_f64;
+        for k in 0..=2000 {
+            let t = t_low + (t_high - t_low) * f64::from(k) / 2000.0;
+            let pair = (locate(p, t), locate(p.next_up(), t));
+            if pair.0 == pair.1 || !wanted.contains(&pair) {
+                continue;
+            }
+            meet(p, t, pair.0, pair.1, &mut worst);
+            if !found.contains(&pair) {
+                found.push(pair);
+            }
+        }
+        assert_eq!(found.len(), wanted.len(), "{p} MPa: {found:?}");
+        eprintln!("{p} MPa: worst gap {worst:.2e}");
     }
 }
 
 #[test]
 fn strict_pt_in_region_3_is_the_backward_volume_unrefined() {
-    use ebullio::{Error, Method, Region, State, Units};
-    // Points of the release's tables for subregions 3a, 3c, 3f, 3k and 3u
-    // (recalled from IAPWS SR5-05(2016), Tables 5 and 13, checked above).
-    // (p, T, bound on |Δv/v| between strict and exact): bounds of ours,
-    // a few times what the fits leave (2e-7 to 2e-6 in these subregions,
-    // 3e-5 in the near-critical 3u).
-    for (p, t, bound) in [
-        (50.0, 630.0, 1e-5),
-        (30.0, 650.0, 1e-5),
-        (26.0, 671.0, 1e-5),
-        (23.0, 660.0, 1e-5),
-        (22.0, 646.1, 1e-4),
-    ] {
-        let strict = State::from_pt_with(p, t, Units::Native, Method::BackwardOnly).unwrap();
+    // The release's check points of subregions 3a, 3c, 3f, 3k and 3u and of
+    // 3e, 3h, 3n and 3x (recalled from IAPWS SR5-05(2016), Tables 5 and
+    // 13, checked above), and the issue 12 state in 3x near the critical
+    // point whose strict entropy was refused (3190.1416818449457 psia,
+    // 705.102799999255 °F).
+    let issue_12 = (
+        3190.1416818449457 * 0.006894757293168361,
+        (705.102799999255 - 32.0) / 1.8 + 273.15,
+    );
+    let mut points = vec![
+        (50.0, 630.0),
+        (30.0, 650.0),
+        (26.0, 671.0),
+        (23.0, 660.0),
+        (22.0, 646.1),
+        issue_12,
+    ];
+    points.extend(CHECK_POINTS_3E_3H_3N_3X.map(|(_, p, t, _)| (p, t)));
+    for (p, t) in points {
+        let strict = State::from_pt_with(p, t, Units::Native, Method::BackwardOnly)
+            .unwrap_or_else(|e| panic!("strict ({p} MPa, {t} K): {e}"));
         let exact = State::from_pt(p, t, Units::Native).unwrap();
         assert_eq!(strict.region(), Region::Three);
         // The backward v, through ρ = 1/v and back: equal but for the
         // reciprocal's rounding.
-        let backward = specific_volume(p, t).unwrap();
+        let backward = specific_volume(p, t);
         assert!((strict.specific_volume() - backward).abs() <= 2.0 * f64::EPSILON * backward);
         // Not refined, yet close to the basic equation it was fitted to.
+        let bound = tolerance(locate(p, t)).unwrap();
         let dv = (strict.specific_volume() - exact.specific_volume()).abs();
         assert!(dv <= bound * exact.specific_volume(), "{p} MPa {t} K");
         assert_eq!(strict.temperature(), exact.temperature());
     }
-    // Where no backward equation is shipped, strict mode says so.
-    let in_3e = (640..700)
-        .map(f64::from)
-        .find(|&t| locate(40.0, t) == Subregion::E)
-        .expect("a 3e point at 40 MPa");
-    assert!(matches!(
-        State::from_pt_with(40.0, in_3e, Units::Native, Method::BackwardOnly),
-        Err(Error::BackwardEquationOutOfRange { .. })
-    ));
+    // The issue 12 state in the caller's units: entropy and enthalpy both
+    // answer, from the 3x volume.
+    let (p_psia, t_f) = (3190.1416818449457, 705.102799999255);
+    assert_eq!(locate(issue_12.0, issue_12.1), Subregion::X);
+    let strict =
+        State::from_pt_with(p_psia, t_f, Units::UsCustomary, Method::BackwardOnly).unwrap();
+    let exact = State::from_pt(p_psia, t_f, Units::UsCustomary).unwrap();
+    assert!((strict.entropy() / exact.entropy() - 1.0).abs() < 1e-3);
+    assert!((strict.enthalpy() / exact.enthalpy() - 1.0).abs() < 1e-3);
     // Outside region 3 the methods agree to the bit.
     for (p, t) in [(3.0, 300.0), (0.0035, 700.0), (30.0, 1500.0)] {
         assert_eq!(

@@ -4,10 +4,10 @@
 //!
 //! ```text
 //! v(p,T)/v* = ω(π,θ) = [ Σᵢ nᵢ ((π − a)^c)^Iᵢ ((θ − b)^d)^Jᵢ ]^e      (4)
+//! v(p,T)/v* = ω(π,θ) = exp[ Σᵢ nᵢ (π − a)^Iᵢ (θ − b)^Jᵢ ]             (5)
 //! ```
 //!
-//! (Subregion 3n's exponential form, Eq. (5), joins with 3n's table once
-//! that is verified.)
+//! (Eq. (5) for subregion 3n alone.)
 //!
 //! with π = p/p* and θ = T/T*. Each subregion has its own reducing
 //! quantities v*, p*, T*, shifts a, b, exponents c, d, e and number of
@@ -19,7 +19,7 @@
 //! Validity and accuracy are those of the subregion the parameters belong
 //! to; see [`super::specific_volume`].
 
-use crate::math::sqrt;
+use crate::math::{exp, sqrt};
 use crate::series::Series;
 
 /// The inner exponent c or d applied to a shifted reduced variable.
@@ -51,6 +51,8 @@ pub(super) enum Outer {
     Sum,
     /// e = 4 in Eq. (4): ω is the fourth power of the sum.
     FourthPower,
+    /// Eq. (5), subregion 3n: ω is the exponential of the sum.
+    Exponential,
 }
 
 /// Reducing quantities, shifts, exponents and coefficients of the v(p,T)
@@ -92,6 +94,7 @@ impl Equation {
                 let square = sum * sum;
                 square * square
             }
+            Outer::Exponential => exp(sum),
         };
         self.v_star * omega
     }

@@ -2,8 +2,17 @@
 //!
 //! IAPWS SR5-05(2016), Eq. (4); reducing quantities, shifts and exponents
 //! from its Table 4, exponents and coefficients from its Tables 6 to 16
-//! (all recalled). One table per subregion; see [`super::equation`] for the
-//! shape they fill in.
+//! (recalled, except 3e and 3h, below). One table per subregion; see
+//! [`super::equation`] for the shape they fill in.
+//!
+//! The tables of 3e and 3h are transcribed as printed in the project's data
+//! file `sr5_05_3e_3h_3n_3x.tsv`, whose header gives their provenance: the
+//! general-purpose `chemicals` Python package (version 1.5.2, MIT licence)
+//! carries these equations as generated, expanded code; the terms were
+//! collected back to (I, J, n) by symbolic expansion and n rounded to 15
+//! significant digits, the precision the release prints. They reproduce
+//! the release's check values (recalled) to every printed digit
+//! (tests/tests/backward_sr5_05.rs).
 
 use super::equation::{Equation, Outer, Root};
 use crate::backward::Term;
@@ -220,6 +229,55 @@ const D_TERMS: [Term; 38] = [
     (  3,  0,  0.551478022765087e-2),
 ];
 
+/// Subregion 3e: v* = 0.0032 m³/kg, p* = 40 MPa, T* = 710 K, N = 29,
+/// a = 0.587, b = 0.918, c = 1, d = 1, e = 1.
+pub(super) const E: Equation = Equation {
+    v_star: 0.0032,
+    p_star: 40.0,
+    t_star: 710.0,
+    a: 0.587,
+    b: 0.918,
+    c: Root::One,
+    d: Root::One,
+    e: Outer::Sum,
+    series: Series::for_table(&E_TERMS),
+};
+
+/// (Iᵢ, Jᵢ, nᵢ) of subregion 3e, as printed in `sr5_05_3e_3h_3n_3x.tsv`
+/// (provenance in this file's header).
+#[rustfmt::skip]
+const E_TERMS: [Term; 29] = [
+    (-12, 14,  7.15815808404721e+08),
+    (-12, 16, -1.14328360753449e+11),
+    (-10,  3,  3.76531002015720e-12),
+    (-10,  6, -9.03983668691157e-05),
+    (-10, 10,  6.65695908836252e+05),
+    (-10, 14,  5.35364174960127e+09),
+    (-10, 16,  7.94977402335603e+10),
+    ( -8,  7,  9.22230563421437e+01),
+    ( -8,  8, -1.42586073991215e+05),
+    ( -8, 10, -1.11796381424162e+06),
+    ( -6,  6,  8.96121629640760e+03),
+    ( -5,  6, -6.69989239070491e+03),
+    ( -4,  2,  4.51242538486834e-03),
+    ( -4,  4, -3.39731325977713e+01),
+    ( -3,  2, -1.20523111552278e+00),
+    ( -3,  6,  4.75992667717124e+04),
+    ( -3,  7, -2.66627750390341e+05),
+    ( -2,  0, -1.53314954386524e-04),
+    ( -2,  1,  3.05638404828265e-01),
+    ( -2,  3,  1.23654999499486e+02),
+    ( -2,  4, -1.04390794213011e+03),
+    ( -1,  0, -1.57496516174308e-02),
+    (  0,  0,  6.85331118940253e-01),
+    (  0,  1,  1.78373462873903e+00),
+    (  1,  0, -5.44674124878910e-01),
+    (  1,  4,  2.04529931318843e+03),
+    (  1,  6, -2.28342359328752e+04),
+    (  2,  0,  4.13197481515899e-01),
+    (  2,  2, -3.41931835910405e+01),
+];
+
 /// Subregion 3f: v* = 0.0064 m³/kg, p* = 40 MPa, T* = 730 K, N = 42,
 /// a = 0.587, b = 0.891, c = 1/2, d = 1, e = 4.
 pub(super) const F: Equation = Equation {
@@ -336,6 +394,55 @@ const G_TERMS: [Term; 38] = [
     (  8,  3,  0.940781944835829e9),
     ( 10,  0, -0.367279669545448e5),
     ( 10,  6, -0.837513931798655e16),
+];
+
+/// Subregion 3h: v* = 0.0032 m³/kg, p* = 25 MPa, T* = 660 K, N = 29,
+/// a = 0.898, b = 0.983, c = 1, d = 1, e = 4.
+pub(super) const H: Equation = Equation {
+    v_star: 0.0032,
+    p_star: 25.0,
+    t_star: 660.0,
+    a: 0.898,
+    b: 0.983,
+    c: Root::One,
+    d: Root::One,
+    e: Outer::FourthPower,
+    series: Series::for_table(&H_TERMS),
+};
+
+/// (Iᵢ, Jᵢ, nᵢ) of subregion 3h, as printed in `sr5_05_3e_3h_3n_3x.tsv`
+/// (provenance in this file's header).
+#[rustfmt::skip]
+const H_TERMS: [Term; 29] = [
+    (-12,  8,  5.61379678887577e-02),
+    (-12, 12,  7.74135421587083e+09),
+    (-10,  4,  1.11482975877938e-09),
+    (-10,  6, -1.43987128208183e-03),
+    (-10,  8,  1.93696558764920e+03),
+    (-10, 10, -6.05971823585005e+08),
+    (-10, 14,  1.71951568124337e+13),
+    (-10, 16, -1.85461154985145e+16),
+    ( -8,  0,  3.87851168078010e-17),
+    ( -8,  1, -3.95464327846105e-14),
+    ( -8,  6, -1.70875935679023e+02),
+    ( -8,  7, -2.12010620701220e+03),
+    ( -8,  8,  1.77683337348191e+07),
+    ( -6,  4,  1.10177443629575e+01),
+    ( -6,  6, -2.34396091693313e+05),
+    ( -6,  8, -6.56174421999594e+06),
+    ( -5,  2,  1.56362212977396e-05),
+    ( -5,  3, -2.12946257021400e+00),
+    ( -5,  4,  1.35249306374858e+01),
+    ( -4,  2,  1.77189164145813e-01),
+    ( -4,  4,  1.39499167345464e+03),
+    ( -3,  1, -7.03670932036388e-03),
+    ( -3,  2, -1.52011044389648e-01),
+    ( -2,  0,  9.81916922991113e-05),
+    ( -1,  0,  1.47199658618076e-03),
+    ( -1,  2,  2.02618487025578e+01),
+    (  0,  0,  8.99345518944240e-01),
+    (  1,  0, -2.11346402240858e-01),
+    (  1,  2,  2.49971752957491e+01),
 ];
 
 /// Subregion 3i: v* = 0.0041 m³/kg, p* = 25 MPa, T* = 660 K, N = 42,

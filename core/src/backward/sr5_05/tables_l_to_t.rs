@@ -2,8 +2,17 @@
 //!
 //! IAPWS SR5-05(2016), Eq. (4) and, for 3n, Eq. (5); reducing quantities,
 //! shifts and exponents from its Table 4, exponents and coefficients from
-//! its Tables 17 to 25 (all recalled). One table per subregion; see
-//! [`super::equation`] for the shape they fill in.
+//! its Tables 17 to 25 (recalled, except 3n, below). One table per
+//! subregion; see [`super::equation`] for the shape they fill in.
+//!
+//! The tables of 3n are transcribed as printed in the project's data
+//! file `sr5_05_3e_3h_3n_3x.tsv`, whose header gives their provenance: the
+//! general-purpose `chemicals` Python package (version 1.5.2, MIT licence)
+//! carries these equations as generated, expanded code; the terms were
+//! collected back to (I, J, n) by symbolic expansion and n rounded to 15
+//! significant digits, the precision the release prints. They reproduce
+//! the release's check values (recalled) to every printed digit
+//! (tests/tests/backward_sr5_05.rs).
 
 use super::equation::{Equation, Outer, Root};
 use crate::backward::Term;
@@ -128,6 +137,65 @@ const M_TERMS: [Term; 40] = [
     ( 8, 36, -0.211961148774260e38),
     (14, 36, -0.128617899887675e49),
     (24, 36,  0.479817895699239e65),
+];
+
+/// Subregion 3n: v* = 0.0031 m³/kg, p* = 23 MPa, T* = 650 K, N = 39,
+/// a = 0.976, b = 0.997, c = 1, d = 1, v/v* = exp(Σ …), Eq. (5).
+pub(super) const N: Equation = Equation {
+    v_star: 0.0031,
+    p_star: 23.0,
+    t_star: 650.0,
+    a: 0.976,
+    b: 0.997,
+    c: Root::One,
+    d: Root::One,
+    e: Outer::Exponential,
+    series: Series::for_table(&N_TERMS),
+};
+
+/// (Iᵢ, Jᵢ, nᵢ) of subregion 3n, as printed in `sr5_05_3e_3h_3n_3x.tsv`
+/// (provenance in this file's header).
+#[rustfmt::skip]
+const N_TERMS: [Term; 39] = [
+    ( 0, -12,  2.80967799943151e-39),
+    ( 0, -10, -1.35031446451331e-32),
+    ( 0,  -8,  1.77274872361946e-26),
+    ( 0,  -2,  2.40560808321713e-07),
+    ( 0,  -1, -8.90763306701305e-04),
+    ( 0,   1,  1.59158748314599e+03),
+    ( 0,   2, -7.92681207132600e+05),
+    ( 0,   5,  3.54542769185671e+11),
+    ( 1,   0, -3.02807107747776e+02),
+    ( 1,   1,  2.32534272709876e+05),
+    ( 1,   4, -8.69871364662769e+10),
+    ( 1,   6,  4.00849240129329e+14),
+    ( 2,  -6,  5.41276911564176e-14),
+    ( 2,  -5, -4.93111362030162e-11),
+    ( 3, -12,  6.14869006573609e-31),
+    ( 3, -10, -6.07246643970893e-24),
+    ( 3,  -8, -3.34952758812999e-19),
+    ( 3,  -6,  7.05412100773699e-12),
+    ( 3,  -3, -6.43064132636925e-03),
+    ( 3,  -1, -4.40209599407714e+03),
+    ( 4, -12,  5.82238667048942e-28),
+    ( 4,  -6,  2.58585887897486e-09),
+    ( 4,  -5, -1.58649699894543e-06),
+    ( 4,  -4,  2.20019901729615e-03),
+    ( 5, -10, -4.02352115234494e-19),
+    ( 5,  -3,  6.29154149015048e+01),
+    ( 6, -12,  3.90628369238462e-23),
+    ( 6, -10, -7.44938506925544e-17),
+    ( 6,  -3,  1.35147318617061e+02),
+    ( 7, -12,  8.21445758255119e-21),
+    ( 7,  -8, -4.21537726098389e-09),
+    ( 7,  -5, -5.25037427886100e-01),
+    ( 8, -10,  1.89917206526237e-13),
+    (10, -12,  4.02137961842776e-15),
+    (12, -12,  6.51718171878301e-13),
+    (12, -10,  3.64975183508473e-06),
+    (12,  -8, -3.91048167929649e-02),
+    (14, -12, -2.11773355803058e-08),
+    (18, -12,  2.64953354380072e-03),
 ];
 
 /// Subregion 3o: v* = 0.0034 m³/kg, p* = 23 MPa, T* = 650 K, N = 24,

@@ -3,8 +3,17 @@
 //!
 //! IAPWS SR5-05(2016), Section 4.3, Eq. (4); reducing quantities, shifts
 //! and exponents from its Table 11, exponents and coefficients from its
-//! Tables 12 to 17 of that section (all recalled). One table per
-//! subregion; see [`super::equation`] for the shape they fill in.
+//! Tables 12 to 17 of that section (recalled, except 3x, below). One
+//! table per subregion; see [`super::equation`] for the shape they fill in.
+//!
+//! The tables of 3x are transcribed as printed in the project's data
+//! file `sr5_05_3e_3h_3n_3x.tsv`, whose header gives their provenance: the
+//! general-purpose `chemicals` Python package (version 1.5.2, MIT licence)
+//! carries these equations as generated, expanded code; the terms were
+//! collected back to (I, J, n) by symbolic expansion and n rounded to 15
+//! significant digits, the precision the release prints. They reproduce
+//! the release's check values (recalled) to every printed digit
+//! (tests/tests/backward_sr5_05.rs).
 
 use super::equation::{Equation, Outer, Root};
 use crate::backward::Term;
@@ -177,6 +186,62 @@ const W_TERMS: [Term; 35] = [
     (  8, -10, -0.856711586510214e-12),
     ( 10, -12,  0.266170454405981e-13),
     ( 10,  -8,  0.858133791857099e-5),
+];
+
+/// Subregion 3x: v* = 0.0049 m³/kg, p* = 23 MPa, T* = 650 K, N = 36,
+/// a = 0.91, b = 0.988, c = 1, d = 1, e = 1.
+pub(super) const X: Equation = Equation {
+    v_star: 0.0049,
+    p_star: 23.0,
+    t_star: 650.0,
+    a: 0.91,
+    b: 0.988,
+    c: Root::One,
+    d: Root::One,
+    e: Outer::Sum,
+    series: Series::for_table(&X_TERMS),
+};
+
+/// (Iᵢ, Jᵢ, nᵢ) of subregion 3x, as printed in `sr5_05_3e_3h_3n_3x.tsv`
+/// (provenance in this file's header).
+#[rustfmt::skip]
+const X_TERMS: [Term; 36] = [
+    (-8,  14,  3.77373741298151e+18),
+    (-6,  10, -5.07100883722913e+12),
+    (-5,  10, -1.03363225598860e+15),
+    (-4,   1,  1.84790814320773e-06),
+    (-4,   2, -9.24729378390945e-04),
+    (-4,  14, -4.25999562292738e+23),
+    (-3,  -2, -4.62307771873973e-13),
+    (-3,  12,  1.07319065855767e+21),
+    (-1,   5,  6.48662492280682e+10),
+    ( 0,   0,  2.44200600688281e+00),
+    ( 0,   4, -8.51535733484258e+09),
+    ( 0,  10,  1.69894481433592e+21),
+    ( 1, -10,  2.15780222509020e-27),
+    ( 1,  -1, -3.20850551367334e-01),
+    ( 2,   6, -3.82642448458610e+16),
+    ( 3, -12, -2.75386077674421e-29),
+    ( 3,   0, -5.63199253391666e+05),
+    ( 3,   8, -3.26068646279314e+20),
+    ( 4,   3,  3.97949001553184e+13),
+    ( 5,  -6,  1.00824008584757e-07),
+    ( 5,  -2,  1.62234569738433e+04),
+    ( 5,   1, -4.32355225319745e+10),
+    ( 6,   1, -5.92874245598610e+11),
+    ( 8,  -6,  1.33061647281106e+00),
+    ( 8,  -3,  1.57338197797544e+06),
+    ( 8,   1,  2.58189614270853e+13),
+    ( 8,   8,  2.62413209706358e+24),
+    (10,  -8, -9.20011937431142e-02),
+    (12, -10,  2.20213765905426e-03),
+    (12,  -8, -1.10433759109547e+01),
+    (12,  -5,  8.47004870612087e+06),
+    (12,  -4, -5.92910695762536e+08),
+    (14, -12, -1.83027173269660e-05),
+    (14, -10,  1.81339603516302e-01),
+    (14,  -8, -1.19228759669889e+03),
+    (14,  -6,  4.30867658061468e+06),
 ];
 
 /// Subregion 3y: v* = 0.0031 m³/kg, p* = 22 MPa, T* = 650 K, N = 20,
