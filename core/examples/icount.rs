@@ -1,7 +1,8 @@
 //! Instruction-count probe: run under callgrind; argument selects the call
 //! (1–8 the basic equations and (p,T) states, 9–14 (p,h) and (p,s) in
 //! regions 1, 2 and 5, 15 a region 3 saturation point at 20 MPa, 16–17 wet (h,s) at 0.01 and
-//! 20 MPa, 18–19 wet (v,u) at 1 and 20 MPa).
+//! 20 MPa, 18–19 wet (v,u) at 1 and 20 MPa, 20–23 region 3 (p,T) states in SR5-05's
+//! subregions 3e, 3h, 3n and 3x at the release's check points).
 use std::hint::black_box;
 fn main() {
     let which: u32 = std::env::args()
@@ -117,6 +118,19 @@ fn main() {
                 let wet = ebullio::State::from_px(p, x, native).unwrap();
                 let (v, u) = black_box((wet.specific_volume(), wet.internal_energy()));
                 ebullio::State::from_vu(v, u, native).unwrap().temperature()
+            }
+            20..=23 => {
+                // IAPWS SR5-05(2016), Tables 5 and 13 (recalled): two points each.
+                let points = [
+                    [(26.0, 661.0), (30.0, 675.0)],
+                    [(23.6, 652.0), (24.0, 654.0)],
+                    [(22.6, 649.0), (22.8, 649.7)],
+                    [(22.11, 648.0), (22.3, 649.0)],
+                ];
+                let (p, t) = black_box(points[which as usize - 20][k & 1]);
+                ebullio::State::from_pt(p, t, native)
+                    .unwrap()
+                    .specific_volume()
             }
             _ => 0.0,
         };
