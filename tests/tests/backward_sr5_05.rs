@@ -215,15 +215,16 @@ fn a_saturated_phase_is_given_its_own_sides_subregion() {
 /// - 3a … 3t: 1e-5, the permissible value of the release's consistency
 ///   requirement for these equations (0.001 %, recalled from IAPWS
 ///   SR5-05(2016)); the twenty equations' maxima measured by
-///   `every_subregion_keeps_to_the_basic_equation` (2.8e-6 to 9.4e-6) sit
+///   `every_subregion_keeps_to_the_basic_equation` (2.6e-6 to 9.4e-6) sit
 ///   just inside it, as fits made to a tolerance do.
 /// - 3u … 3x: 1e-3, ours — the release's value for its auxiliary equations
-///   is not recalled with confidence. Their measured maxima (9.4e-4,
-///   7.8e-4, 4.0e-4, 8.7e-4) lie beside the saturation line, where v
+///   is not recalled with confidence. Their measured maxima (9.6e-4,
+///   7.8e-4, 4.1e-4, 8.7e-4) lie beside the saturation line, where v
 ///   varies fastest.
 /// - 3y, 3z, within a few hundredths of a kelvin of the critical point:
-///   none; measured up to 1.0e-2 and 1.3e-2 beside the saturation line, and
-///   no bound recalled to hold them to.
+///   none; measured up to 1.5e-2 and 1.3e-2 beside the saturation line
+///   (0.5 % to 1.5 % at their own check points), and no bound recalled to
+///   hold them to.
 fn tolerance(sub: Subregion) -> Option<f64> {
     match sub {
         Subregion::Y | Subregion::Z => None,
