@@ -73,7 +73,9 @@ pub enum Subregion {
     V,
     /// 3w: auxiliary, 22.11 MPa < p ≤ 22.5 MPa, T_3ef(p) < T ≤ T_3wx(p).
     W,
-    /// 3x: auxiliary, vapour side next to 3r.
+    /// 3x: auxiliary, vapour side next to 3r: p_s(643.15 K) < p ≤ 22.5 MPa,
+    /// T ≤ T_3rx(p), above T_s(p) up to 21.90096265 MPa (where T_3wx(p)
+    /// meets the saturation line) and above T_3wx(p) beyond.
     X,
     /// 3y: auxiliary, liquid side next to the critical point.
     Y,
