@@ -7,7 +7,7 @@
 //!
 //! The tables of 3n are transcribed as printed in the project's data
 //! file `sr5_05_3e_3h_3n_3x.tsv`, whose header gives their provenance: the
-//! general-purpose `chemicals` Python package (version 1.5.2, MIT licence)
+//! an MIT-licensed general-purpose chemistry package
 //! carries these equations as generated, expanded code; the terms were
 //! collected back to (I, J, n) by symbolic expansion and n rounded to 15
 //! significant digits, the precision the release prints. They reproduce
