@@ -28,6 +28,15 @@ def element_label(k: int, shape: tuple[int, ...]) -> str:
     return f"element {tuple(int(i) for i in np.unravel_index(k, shape))}"
 
 
+def kept(x: Any) -> np.ndarray:
+    """A private, read-only float64 copy of input ``x`` for a result to keep
+    (results solve their inputs again: the caller's later edits of its own
+    arrays must not reach them)."""
+    copy = np.array(x, dtype=np.float64, order="C")
+    copy.setflags(write=False)
+    return copy
+
+
 def _column(k: int, doc: str) -> property:
     def get(self: StateArray) -> np.ndarray:
         return self._columns[k]
@@ -49,6 +58,10 @@ class StateArray:
 
     A constructor given ``out=`` a StateArray of its inputs' broadcast
     shape writes into that object's arrays and returns it (see ``State``).
+
+    The inputs are kept as private read-only copies (``transport()``,
+    ``derivative()``, ``in_units()``, indexing and ``error_at`` solve them
+    again), so editing the arrays passed in changes no result.
     """
 
     __slots__ = ("_columns", "region", "phase", "status", "units", "_origin")
@@ -203,7 +216,8 @@ for _k, (_name, _doc, _symbols) in enumerate(_native.PROPERTIES):
 
 
 def _rebuild_states(columns, region, phase, status, units, origin):  # type: ignore[no-untyped-def]
-    return StateArray._make(columns, region, phase, status, units, origin)
+    pair, a, b, in_units, method = origin
+    return StateArray._make(columns, region, phase, status, units, (pair, kept(a), kept(b), in_units, method))
 
 
 _TRANSPORT = tuple(row[0] for row in _native.TRANSPORT)
@@ -402,4 +416,4 @@ class SaturationArray:
 
 
 def _rebuild_saturation(liquid, vapour, by, value, units):  # type: ignore[no-untyped-def]
-    return SaturationArray._make(liquid, vapour, by, value, Units(units))
+    return SaturationArray._make(liquid, vapour, by, kept(value), Units(units))
