@@ -24,4 +24,4 @@ def test_version_comes_from_cargo():
 
 def test_a_first_state():
     # recalled from IAPWS R7-97(2012), Table 5: h(3 MPa, 300 K) = 0.115331273e3 kJ/kg
-    assert abs(ebullio.State.from_pt(3.0, 300.0).h - 115.331273) < 5e-7
+    assert abs(ebullio.State.from_pt(3.0, 300.0, units="native").h - 115.331273) < 5e-7

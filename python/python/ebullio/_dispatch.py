@@ -28,9 +28,8 @@ _QUALITY_PAIR = {1: _PAIRS["px"], 2: _PAIRS["tx"]}  # saturation by pressure, by
 
 
 def units_of(units: Any) -> Units:
-    """The ``Units`` member named by ``units`` (None: native)."""
-    if units is None:
-        return Units.NATIVE
+    """The ``Units`` member named by ``units`` (the public calls have
+    refused a missing one already)."""
     try:
         return Units(units)
     except ValueError:
