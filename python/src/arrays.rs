@@ -408,11 +408,22 @@ fn same_length(a: usize, b: usize) -> PyResult<()> {
     Ok(())
 }
 
+/// One of several properties asked of an element: absent (the core's
+/// `Error::Undefined`, as transport of wet steam) is NaN, the element
+/// still OK; any other error is the element's status. The rule the
+/// `StateArray` columns follow, and C's `ebullio_properties_array`.
+fn absent_as_nan(value: Result<f64, Error>) -> Result<f64, Error> {
+    match value {
+        Err(Error::Undefined { .. }) => Ok(f64::NAN),
+        other => other,
+    }
+}
+
 /// The transport properties of the states from pair number `pair` at
 /// (`a[i]`, `b[i]`), read in `read`: flat `values` (the five columns of
-/// [`crate::columns::TRANSPORT`], n each) and `status` (0 = computed; the
-/// state's error, or the transport call's: undefined for wet steam, out
-/// of range above 1173.15 K).
+/// [`crate::columns::TRANSPORT`], n each) and `status` (0 = solved; the
+/// state's error, or the transport call's: out of range above 1173.15 K).
+/// A property the state does not have (wet steam's) is NaN, status OK.
 #[pyfunction]
 #[pyo3(signature = (pair, a, b, units, method=None, threads=None, read=None))]
 #[allow(clippy::too_many_arguments)]
@@ -438,11 +449,11 @@ pub(crate) fn transport_many<'py>(
             fill_values::<5>(a.len(), threads, |i| {
                 let s = State::solve(pair, a[i], b[i], units, method)?.in_units(read);
                 Ok([
-                    s.viscosity()?,
-                    s.thermal_conductivity()?,
-                    s.kinematic_viscosity()?,
-                    s.thermal_diffusivity()?,
-                    s.prandtl_number()?,
+                    absent_as_nan(s.viscosity())?,
+                    absent_as_nan(s.thermal_conductivity())?,
+                    absent_as_nan(s.kinematic_viscosity())?,
+                    absent_as_nan(s.thermal_diffusivity())?,
+                    absent_as_nan(s.prandtl_number())?,
                 ])
             })
         })

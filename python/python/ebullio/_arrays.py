@@ -54,7 +54,10 @@ class StateArray:
     ``ebullio.Status`` code per element, ``ok`` is ``status == 0``. A bad
     element is NaN in every property; the others are computed. A property
     that does not exist for an element (cp of wet steam, x of superheated
-    vapour) is NaN with status OK.
+    vapour, or one the core finds not finite and physical, as cp at the
+    critical point) is NaN with status OK: the status says whether the
+    state was solved, and the scalar getter gives None for the same
+    property.
 
     A constructor given ``out=`` a StateArray of its inputs' broadcast
     shape writes into that object's arrays and returns it (see ``State``).
@@ -169,10 +172,10 @@ class StateArray:
     def transport(self, *, threads: Any = None) -> TransportArray:
         """The transport properties of every element, a ``TransportArray``
         in these units. The states are solved again from their inputs (the
-        same bits); an element whose state failed, is wet steam (each
-        saturated phase has its own transport properties) or lies above
-        1173.15 K (the end of IAPWS R12-08 and R15-11) is NaN with its
-        ``Status``."""
+        same bits). An element whose state failed or lies above 1173.15 K
+        (the end of IAPWS R12-08 and R15-11) is NaN with its ``Status``; a
+        property the state does not have (wet steam's: each saturated phase
+        has its own) is NaN with status OK, as in the ``StateArray``."""
         from ._dispatch import _threads_of
 
         pair, a, b, units, method = self._inputs()
@@ -262,7 +265,8 @@ class TransportArray(_Flagged):
     """Transport properties per element (``StateArray.transport()``):
     ``viscosity, thermal_conductivity, kinematic_viscosity,
     thermal_diffusivity, prandtl_number`` as float64 arrays of the states'
-    shape in ``units``, and ``status`` / ``ok`` per element."""
+    shape in ``units``, and ``status`` / ``ok`` per element (NaN with
+    status OK where a property does not exist, as for wet steam)."""
 
     __slots__ = ("_columns",)
 
