@@ -11,8 +11,8 @@ from typing import Any
 
 import numpy as np
 
-from . import _native
-from ._enums import Status, Units
+from . import _frames, _native
+from ._enums import Phase, Status, Units
 
 _NAMES = tuple(row[0] for row in _native.PROPERTIES)
 _SYMBOLS = {row[0]: dict(zip(("native", "si", "metric", "us"), row[2])) for row in _native.PROPERTIES}
@@ -194,11 +194,25 @@ class StateArray:
         return DerivativeArray._make(values.reshape(self.shape), status.reshape(self.shape), self.units)
 
     def as_dict(self) -> dict[str, np.ndarray]:
-        """Every property, ``region``, ``phase`` and ``status`` as arrays, for
-        ``pandas.DataFrame(states.as_dict(), index=...)``."""
+        """Every property, ``region``, ``phase`` and ``status`` as arrays
+        (phase and status as codes; ``to_frame`` gives them by name)."""
         out = {name: self._columns[k] for k, name in enumerate(_NAMES)}
         out.update(region=self.region, phase=self.phase, status=self.status)
         return out
+
+    def to_frame(self, index: Any = None) -> Any:
+        """A pandas DataFrame, one row per element (a 1-D StateArray, or a
+        0-d one as one row): every property, ``region``, and ``phase`` and
+        ``status`` by name (Categoricals: "superheated vapour", "out of
+        range"; a bad element's phase is missing). ``index`` is the
+        frame's index, e.g. the historian's timestamps. Needs pandas."""
+        columns: dict[str, Any] = {
+            name: _frames.one_dimensional(self._columns[k], "StateArray") for k, name in enumerate(_NAMES)
+        }
+        columns["region"] = _frames.one_dimensional(self.region, "StateArray")
+        columns["phase"] = _frames.named(self.phase, Phase)
+        columns["status"] = _frames.named(self.status, Status)
+        return _frames.frame(columns, index)
 
     def __repr__(self) -> str:
         flagged = self.size - int(np.count_nonzero(self.ok))
@@ -290,6 +304,16 @@ class TransportArray(_Flagged):
         out = {name: self._columns[k] for k, name in enumerate(_TRANSPORT)}
         out["status"] = self.status
         return out
+
+    def to_frame(self, index: Any = None) -> Any:
+        """A pandas DataFrame, one row per element (1-D, or 0-d as one
+        row): every column, and ``status`` by name, as
+        ``StateArray.to_frame``. Needs pandas."""
+        columns: dict[str, Any] = {
+            name: _frames.one_dimensional(self._columns[k], "TransportArray") for k, name in enumerate(_TRANSPORT)
+        }
+        columns["status"] = _frames.named(self.status, Status)
+        return _frames.frame(columns, index)
 
     def __repr__(self) -> str:
         flagged = self.size - int(np.count_nonzero(self.ok))

@@ -82,7 +82,10 @@ def _isobar(p: float, units: Units, t_low: float, t_high: float):
 
 class _Chart:
     def __init__(self, result: CycleResult, x: str, y: str, isobars: Optional[Iterable[float]]):
-        from matplotlib.figure import Figure
+        try:
+            from matplotlib.figure import Figure
+        except ImportError:
+            raise ImportError('charts need matplotlib: pip install "ebullio[charts]" (or matplotlib itself)') from None
 
         self.result, self.x, self.y = result, x, y
         self.units = result.units

@@ -35,6 +35,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Any, Dict, List, Optional, Sequence, Tuple, Union
 
+from . import _frames
 from ._enums import Phase, Units
 from ._native import State, units_required
 from ._native import _plant as _core
@@ -289,17 +290,16 @@ class CycleResult:
         raise KeyError(f"no point {role!r} number {number}")
 
     def points_frame(self):
-        """The points as a pandas DataFrame, one row each (needs pandas)."""
-        import pandas as pd
-
-        return pd.DataFrame(self.points)
+        """The points as a pandas DataFrame, one row each, ``phase`` by
+        name (a Categorical, as ``StateArray.to_frame``). Needs pandas."""
+        frame = _frames.frame(self.points)
+        frame["phase"] = _frames.named([p["phase"] for p in self.points], Phase)
+        return frame
 
     def components_frame(self):
         """The components as a pandas DataFrame, one row each, the streams
-        as lists of (flow, h, s) tuples (needs pandas)."""
-        import pandas as pd
-
-        return pd.DataFrame(self.components)
+        as lists of (flow, h, s) tuples. Needs pandas."""
+        return _frames.frame(self.components)
 
     def __repr__(self) -> str:
         return (
