@@ -1,7 +1,7 @@
 """The plant layer through the binding: parity with the Rust core's own
 numbers, a recalled textbook cycle, the energy balance of every component
 from its returned streams, the tables, the ideal cycle, the components as
-functions, the errors, and the charts."""
+functions and the errors (the charts: test_charts.py)."""
 
 import math
 import os
@@ -234,23 +234,6 @@ def test_a_wet_exhaust_measured_by_p_and_t_is_refused():
     assert "energy balance" in e.value.needs
     with pytest.raises(ebullio.InvalidPlantError):
         plant.compress(State.from_pt(1.0, 500.0, units="native"), 2.0, 0.8)  # steam into a pump
-
-
-def test_charts_are_saved_as_png(solved, tmp_path):
-    pytest.importorskip("matplotlib")
-    from ebullio import charts
-
-    for draw, name in ((charts.t_s_diagram, "ts.png"), (charts.h_s_diagram, "hs.png")):
-        figure = draw(solved)
-        path = tmp_path / name
-        charts.save(figure, path)
-        head = path.read_bytes()[:8]
-        assert head == b"\x89PNG\r\n\x1a\n"
-        assert path.stat().st_size > 10_000
-        ax = figure.axes[0]
-        # The state points drawn are the result's.
-        offsets = ax.collections[0].get_offsets()
-        assert len(offsets) == len(solved.points)
 
 
 def test_the_same_cycle_in_us_customary_units():
