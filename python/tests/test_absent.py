@@ -86,8 +86,13 @@ CRITICAL = [
 @pytest.mark.parametrize("pair, a, b, units", CRITICAL, ids=[c[0] for c in CRITICAL])
 def test_critical_point_properties_agree_between_getters_and_columns(pair, a, b, units):
     constructor = getattr(State, f"from_{pair}")
-    state = constructor(a, b, units=units)
     states = constructor(np.array([a]), np.array([b]), units=units)
+    try:
+        state = constructor(a, b, units=units)
+    except ebullio.SteamError as error:
+        # refused (the core may decide so): refused alike, for the same reason
+        assert states.status[0] == error.status and np.isnan(states.h[0])
+        return
     assert states.status[0] == Status.OK
     for name in ebullio.PROPERTIES:
         value = getattr(state, name)
@@ -102,7 +107,11 @@ def test_critical_point_properties_agree_between_getters_and_columns(pair, a, b,
 @pytest.mark.parametrize("pair, a, b, units", CRITICAL, ids=[c[0] for c in CRITICAL])
 def test_critical_point_properties_are_absent_or_physical(pair, a, b, units):
     # physical limits: cp, cv, kappa_T and w finite and > 0, alpha_v finite
-    state = getattr(State, f"from_{pair}")(a, b, units=units)
+    # (RULES: the core reads anything else as absent), or the state refused
+    try:
+        state = getattr(State, f"from_{pair}")(a, b, units=units)
+    except ebullio.SteamError:
+        return
     for name in ("cp", "cv", "kappa_t", "w"):
         value = getattr(state, name)
         assert value is None or (np.isfinite(value) and value > 0), (name, value)
