@@ -82,6 +82,9 @@ def test_the_package_readme_runs(reader):
     assert set(frame.loc[frame["status"] != "ok", "status"].astype(str)) == {"not finite", "out of range"}
     assert str(frame["status"].iloc[17]) == "out of range"  # what st.error_at(17) explains
     assert reader["r"].thermal_efficiency < reader["r"].carnot_efficiency  # below Carnot
+    # the Dask block's result is the local one, names and all
+    local = reader["steam_properties"](reader["df"])
+    pd.testing.assert_frame_equal(reader["result"].sort_index(), local.sort_index())
 
 
 def test_the_top_readme_runs(reader):
