@@ -58,24 +58,24 @@ def main() -> None:
     print(f"{'call':<8}{'n':>10}{'threads':>9}{'python ns/el':>14}{'rust ns/el':>12}{'ratio':>8}")
     for n in args.sizes:
         p, t = inputs(n)
-        h = ebullio.State.from_pt(p, t).h
+        h = ebullio.State.from_pt(p, t, units="native").h
         rust = {} if args.no_rust else rust_loop(n)
         for pair, b, call in (("pt", t, ebullio.State.from_pt), ("ph", h, ebullio.State.from_ph)):
             for threads, label in ((1, "1"), (None, "all")):
                 r = rust.get((pair, label))
-                fresh = best(lambda: call(p, b, threads=threads)) / n * 1e9
+                fresh = best(lambda: call(p, b, units="native", threads=threads)) / n * 1e9
                 row(pair, n, label, fresh, r)
-                out = call(p, b, threads=threads)  # allocated once; every timed call rewrites it
-                reused = best(lambda: call(p, b, threads=threads, out=out)) / n * 1e9
+                out = call(p, b, units="native", threads=threads)  # allocated once; every timed call rewrites it
+                reused = best(lambda: call(p, b, units="native", threads=threads, out=out)) / n * 1e9
                 row(f"{pair} out=", n, label, reused, r)
 
     state = ebullio.State.from_pt
     number = 200_000
-    scalar = min(timeit.repeat(lambda: state(16.7, 811.15), number=number, repeat=5)) / number * 1e9
+    scalar = min(timeit.repeat(lambda: state(16.7, 811.15, units="native"), number=number, repeat=5)) / number * 1e9
     scalar_us = min(timeit.repeat(lambda: state(2400.0, 1000.0, units="us"), number=number, repeat=5)) / number * 1e9
-    read = ebullio.State.from_pt(16.7, 811.15)
+    read = ebullio.State.from_pt(16.7, 811.15, units="native")
     attr = min(timeit.repeat(lambda: read.h, number=number, repeat=5)) / number * 1e9
-    print(f"one scalar call State.from_pt(16.7, 811.15): {scalar:.0f} ns; with units='us': {scalar_us:.0f} ns; reading .h: {attr:.0f} ns")
+    print(f"one scalar call State.from_pt(16.7, 811.15, units='native'): {scalar:.0f} ns; with units='us': {scalar_us:.0f} ns; reading .h: {attr:.0f} ns")
 
 
 if __name__ == "__main__":

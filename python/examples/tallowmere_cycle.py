@@ -1,6 +1,6 @@
 """The demo plant, Tallowmere Station Unit 3 (invented): its heat balance
 solved by the ebullio core, printed as tables beside the ideal cycle, and
-its T–s diagram saved as a PNG.
+its T–s diagram and h–s close-up of the expansion saved as PNGs.
 
     python examples/tallowmere_cycle.py [out.png]
 
@@ -71,13 +71,15 @@ def main(png: str) -> None:
 
     try:
         from ebullio import charts
-        figure = charts.t_s_diagram(actual, isobars=[167.0, 37.0, 9.5, 0.068])
     except ImportError:
-        print("\n(matplotlib is not installed: no chart)")
+        print('\n(matplotlib is not installed: no charts; pip install "ebullio[charts]")')
         return
-    figure.suptitle("Tallowmere Unit 3 (invented): T–s diagram")
-    charts.save(figure, png)
-    print(f"\nT–s diagram written to {png}")
+    title = "Tallowmere Unit 3 (invented)"
+    stem = png[:-4] if png.endswith(".png") else png
+    close_up = f"{stem}_expansion.png"
+    charts.save(charts.t_s_diagram(actual, isobars=[167.0, 37.0, 9.5, 0.068], title=title), png)
+    charts.save(charts.expansion_diagram(actual, title=f"{title}: turbine expansion"), close_up)
+    print(f"\nT–s diagram written to {png}, the h–s close-up of the expansion to {close_up}")
 
 
 if __name__ == "__main__":

@@ -237,7 +237,7 @@ fn write<const M: usize>(
 /// The units results are read in: `read`, or the input units.
 fn read_units(read: Option<&Bound<'_, PyAny>>, units: Units) -> PyResult<Units> {
     match read {
-        Some(read) if !read.is_none() => names::units(Some(read)),
+        Some(read) if !read.is_none() => names::unit_system(read),
         _ => Ok(units),
     }
 }
@@ -253,21 +253,21 @@ fn pool_error(error: rayon::ThreadPoolBuildError) -> PyErr {
 /// Given `out` (those four arrays, C-contiguous, of those lengths), writes
 /// into them and returns them; otherwise into fresh 1-D arrays.
 #[pyfunction]
-#[pyo3(signature = (pair, a, b, units=None, method=None, threads=None, read=None, out=None))]
+#[pyo3(signature = (pair, a, b, units, method=None, threads=None, read=None, out=None))]
 #[allow(clippy::too_many_arguments)]
 pub(crate) fn solve_many<'py>(
     py: Python<'py>,
     pair: u32,
     a: PyReadonlyArray1<'py, f64>,
     b: PyReadonlyArray1<'py, f64>,
-    units: Option<&Bound<'py, PyAny>>,
+    units: &Bound<'py, PyAny>,
     method: Option<&Bound<'py, PyAny>>,
     threads: Option<usize>,
     read: Option<&Bound<'py, PyAny>>,
     out: Option<Arrays<'py>>,
 ) -> PyResult<Arrays<'py>> {
     let pair = names::pair(pair)?;
-    let units = names::units(units)?;
+    let units = names::unit_system(units)?;
     let read = read_units(read, units)?;
     let method = names::method(method)?;
     let threads = self::threads(threads)?;
@@ -286,17 +286,17 @@ pub(crate) fn solve_many<'py>(
 /// As `solve_many` with two states per element, liquid then vapour:
 /// `values` holds 2 × 15 columns, `region` and `phase` 2 × n.
 #[pyfunction]
-#[pyo3(signature = (by, values, units=None, threads=None, read=None))]
+#[pyo3(signature = (by, values, units, threads=None, read=None))]
 pub(crate) fn saturation_many<'py>(
     py: Python<'py>,
     by: u32,
     values: PyReadonlyArray1<'py, f64>,
-    units: Option<&Bound<'py, PyAny>>,
+    units: &Bound<'py, PyAny>,
     threads: Option<usize>,
     read: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Arrays<'py>> {
     let by = By::from_number(by)?;
-    let units: Units = names::units(units)?;
+    let units: Units = names::unit_system(units)?;
     let read = read_units(read, units)?;
     let threads = self::threads(threads)?;
     let values = values.as_array();
@@ -320,13 +320,13 @@ pub(crate) fn raise_element(
     pair: u32,
     a: f64,
     b: f64,
-    units: Option<&Bound<'_, PyAny>>,
+    units: &Bound<'_, PyAny>,
     method: Option<&Bound<'_, PyAny>>,
     label: &str,
 ) -> PyResult<()> {
     let (pair, units, method) = (
         names::pair(pair)?,
-        names::units(units)?,
+        names::unit_system(units)?,
         names::method(method)?,
     );
     State::solve(pair, a, b, units, method)
@@ -342,11 +342,11 @@ pub(crate) fn raise_saturation_element(
     py: Python<'_>,
     by: u32,
     value: f64,
-    units: Option<&Bound<'_, PyAny>>,
+    units: &Bound<'_, PyAny>,
     label: &str,
 ) -> PyResult<()> {
     By::from_number(by)?
-        .solve(value, names::units(units)?)
+        .solve(value, names::unit_system(units)?)
         .map(|_| ())
         .map_err(|error| to_py(py, &error, Some(label)))
 }
@@ -408,26 +408,37 @@ fn same_length(a: usize, b: usize) -> PyResult<()> {
     Ok(())
 }
 
+/// One of several properties asked of an element: absent (the core's
+/// `Error::Undefined`, as transport of wet steam) is NaN, the element
+/// still OK; any other error is the element's status. The rule the
+/// `StateArray` columns follow, and C's `ebullio_properties_array`.
+fn absent_as_nan(value: Result<f64, Error>) -> Result<f64, Error> {
+    match value {
+        Err(Error::Undefined { .. }) => Ok(f64::NAN),
+        other => other,
+    }
+}
+
 /// The transport properties of the states from pair number `pair` at
 /// (`a[i]`, `b[i]`), read in `read`: flat `values` (the five columns of
-/// [`crate::columns::TRANSPORT`], n each) and `status` (0 = computed; the
-/// state's error, or the transport call's: undefined for wet steam, out
-/// of range above 1173.15 K).
+/// [`crate::columns::TRANSPORT`], n each) and `status` (0 = solved; the
+/// state's error, or the transport call's: out of range above 1173.15 K).
+/// A property the state does not have (wet steam's) is NaN, status OK.
 #[pyfunction]
-#[pyo3(signature = (pair, a, b, units=None, method=None, threads=None, read=None))]
+#[pyo3(signature = (pair, a, b, units, method=None, threads=None, read=None))]
 #[allow(clippy::too_many_arguments)]
 pub(crate) fn transport_many<'py>(
     py: Python<'py>,
     pair: u32,
     a: PyReadonlyArray1<'py, f64>,
     b: PyReadonlyArray1<'py, f64>,
-    units: Option<&Bound<'py, PyAny>>,
+    units: &Bound<'py, PyAny>,
     method: Option<&Bound<'py, PyAny>>,
     threads: Option<usize>,
     read: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Values<'py>> {
     let pair = names::pair(pair)?;
-    let units = names::units(units)?;
+    let units = names::unit_system(units)?;
     let read = read_units(read, units)?;
     let method = names::method(method)?;
     let threads = self::threads(threads)?;
@@ -438,11 +449,11 @@ pub(crate) fn transport_many<'py>(
             fill_values::<5>(a.len(), threads, |i| {
                 let s = State::solve(pair, a[i], b[i], units, method)?.in_units(read);
                 Ok([
-                    s.viscosity()?,
-                    s.thermal_conductivity()?,
-                    s.kinematic_viscosity()?,
-                    s.thermal_diffusivity()?,
-                    s.prandtl_number()?,
+                    absent_as_nan(s.viscosity())?,
+                    absent_as_nan(s.thermal_conductivity())?,
+                    absent_as_nan(s.kinematic_viscosity())?,
+                    absent_as_nan(s.thermal_diffusivity())?,
+                    absent_as_nan(s.prandtl_number())?,
                 ])
             })
         })
@@ -456,7 +467,7 @@ pub(crate) fn transport_many<'py>(
 /// (∂z/∂x)_y of the states from pair number `pair` at (`a[i]`, `b[i]`),
 /// read in `read`; `z`, `x`, `y` as `State.derivative` names them.
 #[pyfunction]
-#[pyo3(signature = (pair, a, b, z, x, y, units=None, method=None, threads=None, read=None))]
+#[pyo3(signature = (pair, a, b, z, x, y, units, method=None, threads=None, read=None))]
 #[allow(clippy::too_many_arguments)]
 pub(crate) fn derivative_many<'py>(
     py: Python<'py>,
@@ -466,7 +477,7 @@ pub(crate) fn derivative_many<'py>(
     z: &str,
     x: &str,
     y: &str,
-    units: Option<&Bound<'py, PyAny>>,
+    units: &Bound<'py, PyAny>,
     method: Option<&Bound<'py, PyAny>>,
     threads: Option<usize>,
     read: Option<&Bound<'py, PyAny>>,
@@ -477,7 +488,7 @@ pub(crate) fn derivative_many<'py>(
         names::variable(y)?,
     );
     let pair = names::pair(pair)?;
-    let units = names::units(units)?;
+    let units = names::unit_system(units)?;
     let read = read_units(read, units)?;
     let method = names::method(method)?;
     let threads = self::threads(threads)?;
@@ -500,17 +511,17 @@ pub(crate) fn derivative_many<'py>(
 /// The surface tension of saturation points (`by` 1: pressure, 2:
 /// temperature) at `values[i]`, read in `read`.
 #[pyfunction]
-#[pyo3(signature = (by, values, units=None, threads=None, read=None))]
+#[pyo3(signature = (by, values, units, threads=None, read=None))]
 pub(crate) fn surface_tension_many<'py>(
     py: Python<'py>,
     by: u32,
     values: PyReadonlyArray1<'py, f64>,
-    units: Option<&Bound<'py, PyAny>>,
+    units: &Bound<'py, PyAny>,
     threads: Option<usize>,
     read: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Values<'py>> {
     let by = By::from_number(by)?;
-    let units: Units = names::units(units)?;
+    let units: Units = names::unit_system(units)?;
     let read = read_units(read, units)?;
     let threads = self::threads(threads)?;
     let values = values.as_array();

@@ -39,6 +39,7 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(arrays::surface_tension_many, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::raise_element, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::raise_saturation_element, m)?)?;
+    m.add_function(wrap_pyfunction!(names::units_required, m)?)?;
     m.add("PROPERTIES", columns::table(m.py())?)?;
     m.add("TRANSPORT", columns::transport_table(m.py())?)?;
     m.add("STATUS_CODES", errors::status_table(m.py())?)?;

@@ -3,18 +3,43 @@
 //!
 //! Unit systems are spelled "native", "si", "metric" and "us"; the
 //! `ebullio.Units` members are `str` enums with exactly those values, so
-//! both arrive here as Python strings.
+//! both arrive here as Python strings. Every public call that reads
+//! numbers needs its `units=`: there is no default unit system.
 
 use ebullio::{InputPair, Method, Units};
-use pyo3::exceptions::PyValueError;
+use pyo3::exceptions::{PyTypeError, PyValueError};
 use pyo3::prelude::*;
 use pyo3::types::{PyString, PyTuple};
 
-/// The unit system named by `obj` (None: native).
-pub(crate) fn units(obj: Option<&Bound<'_, PyAny>>) -> PyResult<Units> {
-    let Some(obj) = obj.filter(|o| !o.is_none()) else {
-        return Ok(Units::Native);
-    };
+/// The unit systems a call accepts, for its error messages.
+const SYSTEMS: &str = "'native' (MPa, K, kJ/kg), 'si' (Pa, K, J/kg), 'metric' (bar, °C, \
+                       kJ/kg), 'us' (psia, °F, Btu/lbm) or an ebullio.Units member";
+
+/// The unit system named by `obj`, which public call `call` was given as
+/// `units=`. There is no default: numbers without their units are refused
+/// (a `TypeError`, as for a missing argument), never read as MPa and K.
+pub(crate) fn units(obj: Option<&Bound<'_, PyAny>>, call: &str) -> PyResult<Units> {
+    match obj.filter(|o| !o.is_none()) {
+        Some(obj) => unit_system(obj),
+        None => Err(PyTypeError::new_err(format!(
+            "{call}() needs units=, the unit system of its numbers: {SYSTEMS}"
+        ))),
+    }
+}
+
+/// [`units`] for the Python side (`plant.Cycle`): the spelling of the unit
+/// system `call` was given, or the same `TypeError` when it has none.
+#[pyfunction]
+#[pyo3(signature = (units, call))]
+pub(crate) fn units_required(
+    units: Option<&Bound<'_, PyAny>>,
+    call: &str,
+) -> PyResult<&'static str> {
+    self::units(units, call).map(units_name)
+}
+
+/// The unit system named by `obj`.
+pub(crate) fn unit_system(obj: &Bound<'_, PyAny>) -> PyResult<Units> {
     if let Ok(text) = obj.cast::<PyString>() {
         // The spellings, and the `ebullio.Units` member names in any case.
         match text.to_cow()?.to_ascii_lowercase().as_str() {
@@ -26,8 +51,7 @@ pub(crate) fn units(obj: Option<&Bound<'_, PyAny>>) -> PyResult<Units> {
         }
     }
     Err(PyValueError::new_err(format!(
-        "unknown unit system {}: use \"native\" (MPa, K, kJ/kg), \"si\" (Pa, K, J/kg), \
-         \"metric\" (bar, °C, kJ/kg), \"us\" (psia, °F, Btu/lbm) or an ebullio.Units member",
+        "unknown unit system {}: use {SYSTEMS}",
         obj.repr()?
     )))
 }
@@ -103,21 +127,27 @@ pub(crate) fn pair(n: u32) -> PyResult<InputPair> {
         .ok_or_else(|| PyValueError::new_err(format!("unknown input pair number {n}")))
 }
 
+/// The short name of `pair`, the suffix of its constructor `State.from_*`.
+pub(crate) const fn pair_name(pair: InputPair) -> &'static str {
+    match pair {
+        InputPair::PressureTemperature => "pt",
+        InputPair::PressureEnthalpy => "ph",
+        InputPair::PressureEntropy => "ps",
+        InputPair::EnthalpyEntropy => "hs",
+        InputPair::DensityTemperature => "rho_t",
+        InputPair::VolumeTemperature => "vt",
+        InputPair::VolumeInternalEnergy => "vu",
+        InputPair::PressureQuality => "px",
+        InputPair::TemperatureQuality => "tx",
+    }
+}
+
 /// `((name, number), ...)` for the Python side's constants.
 pub(crate) fn pair_table(py: Python<'_>) -> PyResult<Bound<'_, PyTuple>> {
-    let rows = [
-        ("pt", InputPair::PressureTemperature),
-        ("ph", InputPair::PressureEnthalpy),
-        ("ps", InputPair::PressureEntropy),
-        ("hs", InputPair::EnthalpyEntropy),
-        ("rho_t", InputPair::DensityTemperature),
-        ("vt", InputPair::VolumeTemperature),
-        ("vu", InputPair::VolumeInternalEnergy),
-        ("px", InputPair::PressureQuality),
-        ("tx", InputPair::TemperatureQuality),
-    ]
-    .map(|(name, pair)| (name, pair as u32));
-    PyTuple::new(py, rows)
+    PyTuple::new(
+        py,
+        InputPair::ALL.map(|pair| (pair_name(pair), pair as u32)),
+    )
 }
 
 /// A thermodynamic variable by the attribute name it has on a state.

@@ -45,7 +45,7 @@ fn core_error(py: Python<'_>, e: Error) -> PyErr {
 
 impl Description {
     fn spec(&self, py: Python<'_>) -> PyResult<CycleSpec> {
-        let units = names::units(Some(self.units.bind(py)))?;
+        let units = names::unit_system(self.units.bind(py))?;
         let supply = match self.supply {
             (pressure, Some(temperature)) => Supply::Superheated {
                 pressure,
@@ -358,7 +358,7 @@ pub(crate) fn section_efficiency<'py>(
     exhaust_temperature: f64,
     units: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Bound<'py, PyDict>> {
-    let units = names::units(units)?;
+    let units = names::units(units, "plant.section_efficiency")?;
     let e = plant::section_efficiency(
         inlet_pressure,
         inlet_temperature,
@@ -497,7 +497,7 @@ pub(crate) fn mix<'py>(
     pressure: f64,
     units: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<(f64, PyState)> {
-    let units = names::units(units)?;
+    let units = names::units(units, "plant.mix")?;
     let states: Vec<(f64, State)> = streams.iter().map(|(m, s)| (*m, inner(s))).collect();
     let refs: Vec<(f64, &State)> = states.iter().map(|(m, s)| (*m, s)).collect();
     let (flow, mixed) = plant::mix(&refs, pressure, units).map_err(|e| core_error(py, e))?;
@@ -530,7 +530,7 @@ pub(crate) fn condensate(
     subcooling: f64,
     units: Option<&Bound<'_, PyAny>>,
 ) -> PyResult<PyState> {
-    let units = names::units(units)?;
+    let units = names::units(units, "plant.condensate")?;
     let s = plant::condensate(pressure, subcooling, units).map_err(|e| core_error(py, e))?;
     Ok(py_state(&s))
 }

@@ -35,6 +35,14 @@ impl By {
         }
     }
 
+    /// The constructor that asks for the point this way.
+    const fn call(self) -> &'static str {
+        match self {
+            By::Pressure => "Saturation.at_pressure",
+            By::Temperature => "Saturation.at_temperature",
+        }
+    }
+
     /// The (·, x) pair that gives this point's phases and mixtures.
     pub(crate) fn quality_pair(self) -> InputPair {
         match self {
@@ -94,15 +102,20 @@ fn construct<'py>(
     errors: Option<&Bound<'py, PyAny>>,
     threads: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Bound<'py, PyAny>> {
+    let units = names::units(units, by.call())?;
     if names::errors(errors)? != Errors::Flag {
         if let Some(v) = scalar(value) {
-            let units = names::units(units)?;
             return Ok(Bound::new(py, PySaturation::solve(py, by, v, units, units)?)?.into_any());
         }
     }
     static SATURATION: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
-    python_attr(py, &SATURATION, "ebullio._dispatch", "saturation")?
-        .call1((by as u32, value, units, errors, threads))
+    python_attr(py, &SATURATION, "ebullio._dispatch", "saturation")?.call1((
+        by as u32,
+        value,
+        names::units_name(units),
+        errors,
+        threads,
+    ))
 }
 
 #[pymethods]
@@ -112,7 +125,7 @@ impl PySaturation {
     /// pressure 22.064 MPa.
     #[staticmethod]
     #[pyo3(signature = (p, *, units=None, errors=None, threads=None),
-           text_signature = "(p, *, units='native', errors=None, threads=None)")]
+           text_signature = "(p, *, units, errors=None, threads=None)")]
     fn at_pressure<'py>(
         py: Python<'py>,
         p: &Bound<'py, PyAny>,
@@ -127,7 +140,7 @@ impl PySaturation {
     /// (us); from 273.15 K to the critical temperature 647.096 K.
     #[staticmethod]
     #[pyo3(signature = (t, *, units=None, errors=None, threads=None),
-           text_signature = "(t, *, units='native', errors=None, threads=None)")]
+           text_signature = "(t, *, units, errors=None, threads=None)")]
     fn at_temperature<'py>(
         py: Python<'py>,
         t: &Bound<'py, PyAny>,
@@ -230,7 +243,7 @@ impl PySaturation {
     /// The same point, read in other units.
     fn in_units(&self, units: &Bound<'_, PyAny>) -> PyResult<PySaturation> {
         Ok(PySaturation {
-            inner: self.inner.in_units(names::units(Some(units))?),
+            inner: self.inner.in_units(names::unit_system(units)?),
             ..*self
         })
     }
@@ -280,17 +293,17 @@ impl PySaturation {
 /// One saturation point (`by` 1: pressure, 2: temperature): the scalar path
 /// of `ebullio._dispatch` and the unpickler. `read` defaults to `units`.
 #[pyfunction]
-#[pyo3(signature = (by, value, units=None, read=None))]
+#[pyo3(signature = (by, value, units, read=None))]
 pub(crate) fn saturation_scalar(
     py: Python<'_>,
     by: u32,
     value: f64,
-    units: Option<&Bound<'_, PyAny>>,
+    units: &Bound<'_, PyAny>,
     read: Option<&Bound<'_, PyAny>>,
 ) -> PyResult<PySaturation> {
-    let units = names::units(units)?;
+    let units = names::unit_system(units)?;
     let read = match read {
-        Some(read) if !read.is_none() => names::units(Some(read))?,
+        Some(read) if !read.is_none() => names::unit_system(read)?,
         _ => units,
     };
     PySaturation::solve(py, By::from_number(by)?, value, units, read)

@@ -28,8 +28,10 @@ pub(crate) struct Origin {
 /// A state of water or steam, solved from one input pair.
 ///
 /// Make one with a constructor, ``State.from_pt(p, t, units="native")`` and
-/// its siblings; read its properties as attributes in the units it was
-/// made in (``state.in_units("us")`` reads it in others). Properties that
+/// its siblings, each of which needs ``units=`` (there is no default unit
+/// system: without it the call raises ``TypeError``); read its properties
+/// as attributes in the units it was made in (``state.in_units("us")``
+/// reads it in others). Properties that
 /// do not exist for the state (cp, cv, w, alpha_v, kappa_t of wet steam;
 /// x of a single-phase state) are ``None``.
 ///
@@ -101,10 +103,10 @@ fn construct<'py>(
     threads: Option<&Bound<'py, PyAny>>,
     out: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Bound<'py, PyAny>> {
+    let units = names::units(units, &format!("State.from_{}", names::pair_name(pair)))?;
     // With `out` the call belongs to the array path, which refuses numbers.
     if names::errors(errors)? != Errors::Flag && out.is_none() {
         if let (Some(a), Some(b)) = (scalar(a), scalar(b)) {
-            let units = names::units(units)?;
             let origin = Origin {
                 pair,
                 a,
@@ -119,7 +121,15 @@ fn construct<'py>(
     let keywords = PyDict::new(py);
     keywords.set_item("out", out)?;
     SOLVE.import(py, "ebullio._dispatch", "solve")?.call(
-        (pair as u32, a, b, units, method, errors, threads),
+        (
+            pair as u32,
+            a,
+            b,
+            names::units_name(units),
+            method,
+            errors,
+            threads,
+        ),
         Some(&keywords),
     )
 }
@@ -193,7 +203,7 @@ impl PyState {
     /// the results into and return (see ``State``).
     #[staticmethod]
     #[pyo3(signature = (p, t, *, units=None, method=None, errors=None, threads=None, out=None),
-           text_signature = "(p, t, *, units='native', method='exact', errors=None, threads=None, out=None)")]
+           text_signature = "(p, t, *, units, method='exact', errors=None, threads=None, out=None)")]
     #[allow(clippy::too_many_arguments)]
     fn from_pt<'py>(
         py: Python<'py>,
@@ -228,7 +238,7 @@ impl PyState {
     /// the results into and return (see ``State``).
     #[staticmethod]
     #[pyo3(signature = (p, h, *, units=None, method=None, errors=None, threads=None, out=None),
-           text_signature = "(p, h, *, units='native', method='exact', errors=None, threads=None, out=None)")]
+           text_signature = "(p, h, *, units, method='exact', errors=None, threads=None, out=None)")]
     #[allow(clippy::too_many_arguments)]
     fn from_ph<'py>(
         py: Python<'py>,
@@ -262,7 +272,7 @@ impl PyState {
     /// the results into and return (see ``State``).
     #[staticmethod]
     #[pyo3(signature = (p, s, *, units=None, method=None, errors=None, threads=None, out=None),
-           text_signature = "(p, s, *, units='native', method='exact', errors=None, threads=None, out=None)")]
+           text_signature = "(p, s, *, units, method='exact', errors=None, threads=None, out=None)")]
     #[allow(clippy::too_many_arguments)]
     fn from_ps<'py>(
         py: Python<'py>,
@@ -297,7 +307,7 @@ impl PyState {
     /// the results into and return (see ``State``).
     #[staticmethod]
     #[pyo3(signature = (h, s, *, units=None, method=None, errors=None, threads=None, out=None),
-           text_signature = "(h, s, *, units='native', method='exact', errors=None, threads=None, out=None)")]
+           text_signature = "(h, s, *, units, method='exact', errors=None, threads=None, out=None)")]
     #[allow(clippy::too_many_arguments)]
     fn from_hs<'py>(
         py: Python<'py>,
@@ -330,7 +340,7 @@ impl PyState {
     /// the results into and return (see ``State``).
     #[staticmethod]
     #[pyo3(signature = (rho, t, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(rho, t, *, units='native', errors=None, threads=None, out=None)")]
+           text_signature = "(rho, t, *, units, errors=None, threads=None, out=None)")]
     fn from_rho_t<'py>(
         py: Python<'py>,
         rho: &Bound<'py, PyAny>,
@@ -361,7 +371,7 @@ impl PyState {
     /// the results into and return (see ``State``).
     #[staticmethod]
     #[pyo3(signature = (v, t, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(v, t, *, units='native', errors=None, threads=None, out=None)")]
+           text_signature = "(v, t, *, units, errors=None, threads=None, out=None)")]
     fn from_vt<'py>(
         py: Python<'py>,
         v: &Bound<'py, PyAny>,
@@ -393,7 +403,7 @@ impl PyState {
     /// the results into and return (see ``State``).
     #[staticmethod]
     #[pyo3(signature = (v, u, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(v, u, *, units='native', errors=None, threads=None, out=None)")]
+           text_signature = "(v, u, *, units, errors=None, threads=None, out=None)")]
     fn from_vu<'py>(
         py: Python<'py>,
         v: &Bound<'py, PyAny>,
@@ -425,7 +435,7 @@ impl PyState {
     /// the results into and return (see ``State``).
     #[staticmethod]
     #[pyo3(signature = (p, x, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(p, x, *, units='native', errors=None, threads=None, out=None)")]
+           text_signature = "(p, x, *, units, errors=None, threads=None, out=None)")]
     fn from_px<'py>(
         py: Python<'py>,
         p: &Bound<'py, PyAny>,
@@ -457,7 +467,7 @@ impl PyState {
     /// the results into and return (see ``State``).
     #[staticmethod]
     #[pyo3(signature = (t, x, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(t, x, *, units='native', errors=None, threads=None, out=None)")]
+           text_signature = "(t, x, *, units, errors=None, threads=None, out=None)")]
     fn from_tx<'py>(
         py: Python<'py>,
         t: &Bound<'py, PyAny>,
@@ -670,7 +680,7 @@ impl PyState {
     /// The same state, read in other units.
     fn in_units(&self, units: &Bound<'_, PyAny>) -> PyResult<PyState> {
         Ok(PyState {
-            inner: self.inner.in_units(names::units(Some(units))?),
+            inner: self.inner.in_units(names::unit_system(units)?),
             origin: self.origin,
         })
     }
@@ -755,19 +765,19 @@ impl PyState {
 /// One state from pair number `pair` at (`a`, `b`): the scalar path of
 /// `ebullio._dispatch` and the unpickler. `read` defaults to `units`.
 #[pyfunction]
-#[pyo3(signature = (pair, a, b, units=None, method=None, read=None))]
+#[pyo3(signature = (pair, a, b, units, method=None, read=None))]
 pub(crate) fn solve_scalar(
     py: Python<'_>,
     pair: u32,
     a: f64,
     b: f64,
-    units: Option<&Bound<'_, PyAny>>,
+    units: &Bound<'_, PyAny>,
     method: Option<&Bound<'_, PyAny>>,
     read: Option<&Bound<'_, PyAny>>,
 ) -> PyResult<PyState> {
-    let units = names::units(units)?;
+    let units = names::unit_system(units)?;
     let read = match read {
-        Some(read) if !read.is_none() => names::units(Some(read))?,
+        Some(read) if !read.is_none() => names::unit_system(read)?,
         _ => units,
     };
     let origin = Origin {

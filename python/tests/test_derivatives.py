@@ -47,11 +47,11 @@ def test_named_coefficients_are_their_definitions():
 
 
 def test_named_coefficients_of_wet_steam():
-    wet = State.from_px(1.0, 0.5)
+    wet = State.from_px(1.0, 0.5, units="native")
     # (dh/dp)_T does not exist where T is fixed by p; (dp/dv)_T is zero there.
     assert wet.isothermal_throttling_coefficient is None
     assert wet.isothermal_stress_coefficient == 0.0
     # (1/p)(dp/dT)_v of wet steam is the Clapeyron slope over p.
-    sat = ebullio.Saturation.at_pressure(1.0)
+    sat = ebullio.Saturation.at_pressure(1.0, units="native")
     close(wet.relative_pressure_coefficient, sat.pressure_slope / sat.p, 1e-12)
     assert wet.isentropic_exponent > 0.0

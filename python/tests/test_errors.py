@@ -30,18 +30,18 @@ def test_out_of_range_in_the_callers_units():
 
 def test_not_finite_and_quality():
     with pytest.raises(ebullio.NotFiniteError, match="temperature is not a finite number") as caught:
-        ebullio.State.from_pt(1.0, float("nan"))
+        ebullio.State.from_pt(1.0, float("nan"), units="native")
     assert caught.value.quantity == "temperature" and caught.value.status == Status.NOT_FINITE
     with pytest.raises(ebullio.QualityOutOfRangeError, match="quality 1.5 is outside the valid range 0 to 1"):
-        ebullio.State.from_px(1.0, 1.5)
+        ebullio.State.from_px(1.0, 1.5, units="native")
     with pytest.raises(ebullio.QualityOutOfRangeError):
-        ebullio.Saturation.at_pressure(1.0).mixture(-0.5)
+        ebullio.Saturation.at_pressure(1.0, units="native").mixture(-0.5)
 
 
 def test_no_state_for_the_pair():
     # a specific volume and internal energy no water state has
     with pytest.raises(ebullio.OutOfRangeError) as caught:
-        ebullio.State.from_vu(1e-4, 100.0)
+        ebullio.State.from_vu(1e-4, 100.0, units="native")
     assert caught.value.status in (Status.NO_STATE_IN_RANGE, Status.OUT_OF_RANGE)
 
 
@@ -50,18 +50,18 @@ def test_status_enum_matches_the_native_table():
 
 
 def test_phase_names_are_the_trades():
-    state = ebullio.State.from_pt(16.7, 811.15)
+    state = ebullio.State.from_pt(16.7, 811.15, units="native")
     assert str(state.phase) == "superheated vapour" and state.phase == 2
-    assert str(ebullio.State.from_pt(30.0, 900.0).phase) == "supercritical fluid"
+    assert str(ebullio.State.from_pt(30.0, 900.0, units="native").phase) == "supercritical fluid"
 
 
 def test_bad_arguments_are_value_errors_not_panics():
     for call in (
-        lambda: ebullio.State.from_pt(1.0, 400.0, errors="ignore"),
+        lambda: ebullio.State.from_pt(1.0, 400.0, errors="ignore", units="native"),
         lambda: ebullio.State.from_pt([[1.0, 2.0]], [[1.0], [2.0], [3.0]], units="nope"),
-        lambda: ebullio.State.from_pt(np.ones((2, 3)), np.ones((3, 2))),
+        lambda: ebullio.State.from_pt(np.ones((2, 3)), np.ones((3, 2)), units="native"),
         lambda: ebullio.Saturation.at_pressure([1.0], units="furlongs"),
-        lambda: ebullio.State.from_pt(np.ones(2), np.ones(2), threads=-1),
+        lambda: ebullio.State.from_pt(np.ones(2), np.ones(2), threads=-1, units="native"),
     ):
         with pytest.raises(ValueError):
             call()
@@ -72,5 +72,5 @@ def test_bad_arguments_are_value_errors_not_panics():
 def test_repr_shows_units():
     text = repr(ebullio.State.from_pt(167.0, 538.0, units="metric"))
     assert text.startswith("State(p=167 bar, t=538 °C") and "kJ/kg" in text and "region 2" in text
-    arr = repr(ebullio.State.from_pt([1.0, 200.0], 400.0))
+    arr = repr(ebullio.State.from_pt([1.0, 200.0], 400.0, units="native"))
     assert "1 ok, 1 flagged" in arr and "[MPa]" in arr

@@ -24,4 +24,14 @@ def test_version_comes_from_cargo():
 
 def test_a_first_state():
     # recalled from IAPWS R7-97(2012), Table 5: h(3 MPa, 300 K) = 0.115331273e3 kJ/kg
-    assert abs(ebullio.State.from_pt(3.0, 300.0).h - 115.331273) < 5e-7
+    assert abs(ebullio.State.from_pt(3.0, 300.0, units="native").h - 115.331273) < 5e-7
+
+
+def test_install_extras_bring_pandas_and_matplotlib():
+    # The README's install line asks for ebullio[pandas,charts]; the wheel
+    # must declare what each extra brings.
+    meta = importlib.metadata.metadata("ebullio")
+    assert {"pandas", "charts"} <= set(meta.get_all("Provides-Extra"))
+    requires = [r.replace(" ", "").replace("'", '"') for r in meta.get_all("Requires-Dist")]
+    assert any(r.startswith("pandas") and 'extra=="pandas"' in r for r in requires), requires
+    assert any(r.startswith("matplotlib") and 'extra=="charts"' in r for r in requires), requires

@@ -12,7 +12,7 @@ pandas column at once, over every core.
 Constructors, one per input pair: ``State.from_pt, from_ph, from_ps,
 from_hs, from_rho_t, from_vt, from_vu, from_px, from_tx``; the saturation
 line: ``Saturation.at_pressure, at_temperature``; steam cycles and their
-components: ``ebullio.plant`` (charts of them: ``ebullio.charts``). Each takes ``units=``
+components: ``ebullio.plant`` (charts of them: ``ebullio.charts``). Each needs ``units=``
 ("native", "si", "metric", "us", or an ``ebullio.Units`` member). Arrays
 give a ``StateArray`` with a status per element; bad scalar input raises a
 ``SteamError`` (a ``ValueError``) naming the quantity, its value and the

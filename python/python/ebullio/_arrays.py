@@ -11,8 +11,8 @@ from typing import Any
 
 import numpy as np
 
-from . import _native
-from ._enums import Status, Units
+from . import _frames, _native
+from ._enums import Phase, Status, Units
 
 _NAMES = tuple(row[0] for row in _native.PROPERTIES)
 _SYMBOLS = {row[0]: dict(zip(("native", "si", "metric", "us"), row[2])) for row in _native.PROPERTIES}
@@ -26,6 +26,15 @@ def element_label(k: int, shape: tuple[int, ...]) -> str:
     if len(shape) == 1:
         return f"element {k}"
     return f"element {tuple(int(i) for i in np.unravel_index(k, shape))}"
+
+
+def kept(x: Any) -> np.ndarray:
+    """A private, read-only float64 copy of input ``x`` for a result to keep
+    (results solve their inputs again: the caller's later edits of its own
+    arrays must not reach them)."""
+    copy = np.array(x, dtype=np.float64, order="C")
+    copy.setflags(write=False)
+    return copy
 
 
 def _column(k: int, doc: str) -> property:
@@ -45,10 +54,17 @@ class StateArray:
     ``ebullio.Status`` code per element, ``ok`` is ``status == 0``. A bad
     element is NaN in every property; the others are computed. A property
     that does not exist for an element (cp of wet steam, x of superheated
-    vapour) is NaN with status OK.
+    vapour, or one the core finds not finite and physical, as cp at the
+    critical point) is NaN with status OK: the status says whether the
+    state was solved, and the scalar getter gives None for the same
+    property.
 
     A constructor given ``out=`` a StateArray of its inputs' broadcast
     shape writes into that object's arrays and returns it (see ``State``).
+
+    The inputs are kept as private read-only copies (``transport()``,
+    ``derivative()``, ``in_units()``, indexing and ``error_at`` solve them
+    again), so editing the arrays passed in changes no result.
     """
 
     __slots__ = ("_columns", "region", "phase", "status", "units", "_origin")
@@ -156,10 +172,10 @@ class StateArray:
     def transport(self, *, threads: Any = None) -> TransportArray:
         """The transport properties of every element, a ``TransportArray``
         in these units. The states are solved again from their inputs (the
-        same bits); an element whose state failed, is wet steam (each
-        saturated phase has its own transport properties) or lies above
-        1173.15 K (the end of IAPWS R12-08 and R15-11) is NaN with its
-        ``Status``."""
+        same bits). An element whose state failed or lies above 1173.15 K
+        (the end of IAPWS R12-08 and R15-11) is NaN with its ``Status``; a
+        property the state does not have (wet steam's: each saturated phase
+        has its own) is NaN with status OK, as in the ``StateArray``."""
         from ._dispatch import _threads_of
 
         pair, a, b, units, method = self._inputs()
@@ -178,11 +194,25 @@ class StateArray:
         return DerivativeArray._make(values.reshape(self.shape), status.reshape(self.shape), self.units)
 
     def as_dict(self) -> dict[str, np.ndarray]:
-        """Every property, ``region``, ``phase`` and ``status`` as arrays, for
-        ``pandas.DataFrame(states.as_dict(), index=...)``."""
+        """Every property, ``region``, ``phase`` and ``status`` as arrays
+        (phase and status as codes; ``to_frame`` gives them by name)."""
         out = {name: self._columns[k] for k, name in enumerate(_NAMES)}
         out.update(region=self.region, phase=self.phase, status=self.status)
         return out
+
+    def to_frame(self, index: Any = None) -> Any:
+        """A pandas DataFrame, one row per element (a 1-D StateArray, or a
+        0-d one as one row): every property, ``region``, and ``phase`` and
+        ``status`` by name (Categoricals: "superheated vapour", "out of
+        range"; a bad element's phase is missing). ``index`` is the
+        frame's index, e.g. the historian's timestamps. Needs pandas."""
+        columns: dict[str, Any] = {
+            name: _frames.one_dimensional(self._columns[k], "StateArray") for k, name in enumerate(_NAMES)
+        }
+        columns["region"] = _frames.one_dimensional(self.region, "StateArray")
+        columns["phase"] = _frames.named(self.phase, Phase)
+        columns["status"] = _frames.named(self.status, Status)
+        return _frames.frame(columns, index)
 
     def __repr__(self) -> str:
         flagged = self.size - int(np.count_nonzero(self.ok))
@@ -203,7 +233,8 @@ for _k, (_name, _doc, _symbols) in enumerate(_native.PROPERTIES):
 
 
 def _rebuild_states(columns, region, phase, status, units, origin):  # type: ignore[no-untyped-def]
-    return StateArray._make(columns, region, phase, status, units, origin)
+    pair, a, b, in_units, method = origin
+    return StateArray._make(columns, region, phase, status, units, (pair, kept(a), kept(b), in_units, method))
 
 
 _TRANSPORT = tuple(row[0] for row in _native.TRANSPORT)
@@ -248,7 +279,8 @@ class TransportArray(_Flagged):
     """Transport properties per element (``StateArray.transport()``):
     ``viscosity, thermal_conductivity, kinematic_viscosity,
     thermal_diffusivity, prandtl_number`` as float64 arrays of the states'
-    shape in ``units``, and ``status`` / ``ok`` per element."""
+    shape in ``units``, and ``status`` / ``ok`` per element (NaN with
+    status OK where a property does not exist, as for wet steam)."""
 
     __slots__ = ("_columns",)
 
@@ -272,6 +304,16 @@ class TransportArray(_Flagged):
         out = {name: self._columns[k] for k, name in enumerate(_TRANSPORT)}
         out["status"] = self.status
         return out
+
+    def to_frame(self, index: Any = None) -> Any:
+        """A pandas DataFrame, one row per element (1-D, or 0-d as one
+        row): every column, and ``status`` by name, as
+        ``StateArray.to_frame``. Needs pandas."""
+        columns: dict[str, Any] = {
+            name: _frames.one_dimensional(self._columns[k], "TransportArray") for k, name in enumerate(_TRANSPORT)
+        }
+        columns["status"] = _frames.named(self.status, Status)
+        return _frames.frame(columns, index)
 
     def __repr__(self) -> str:
         flagged = self.size - int(np.count_nonzero(self.ok))
@@ -402,4 +444,4 @@ class SaturationArray:
 
 
 def _rebuild_saturation(liquid, vapour, by, value, units):  # type: ignore[no-untyped-def]
-    return SaturationArray._make(liquid, vapour, by, value, Units(units))
+    return SaturationArray._make(liquid, vapour, by, kept(value), Units(units))

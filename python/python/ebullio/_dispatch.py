@@ -5,6 +5,11 @@ else comes here: inputs become float64 arrays (pandas missing values become
 NaN, and so a NOT_FINITE status), broadcast against each other, and go to
 the native kernel in one call, which writes into fresh arrays or into those
 of the ``StateArray`` given as ``out=``.
+
+A result keeps the inputs it was solved from (``transport()``,
+``derivative()``, ``in_units()``, indexing and ``error_at`` solve them
+again) as private read-only copies: the caller's later edits of its own
+arrays never change a result once returned.
 """
 
 from __future__ import annotations
@@ -14,7 +19,7 @@ from typing import Any
 import numpy as np
 
 from . import _native
-from ._arrays import SaturationArray, StateArray, element_label
+from ._arrays import SaturationArray, StateArray, element_label, kept
 from ._enums import Method, Units
 
 _PAIRS = dict(_native.INPUT_PAIRS)
@@ -23,9 +28,8 @@ _QUALITY_PAIR = {1: _PAIRS["px"], 2: _PAIRS["tx"]}  # saturation by pressure, by
 
 
 def units_of(units: Any) -> Units:
-    """The ``Units`` member named by ``units`` (None: native)."""
-    if units is None:
-        return Units.NATIVE
+    """The ``Units`` member named by ``units`` (the public calls have
+    refused a missing one already)."""
     try:
         return Units(units)
     except ValueError:
@@ -121,15 +125,12 @@ def solve(pair: int, a: Any, b: Any, units: Any, method: Any, errors: Any, threa
         raise TypeError("out= is for array inputs; two numbers give a State, which is not written in place (pass arrays, or drop out=)")
     if scalar_inputs and errors != "flag":
         return _native.solve_scalar(pair, float(fa), float(fb), units, method, read)
-    ba, bb = _broadcast(fa, fb)
-    shape = ba.shape
+    shape = _broadcast(fa, fb)[0].shape
     arrays = None if out is None else _arrays_of(out, shape)
-    if arrays is not None and any(np.may_share_memory(x, array) for x in (fa, fb) for array in arrays):
-        # Inputs read from out itself (from_pt(st.p, st.t, out=st)) would be
-        # overwritten while being read, and out would record the results as
-        # its inputs: solve from copies.
-        fa, fb = fa.copy(), fb.copy()
-        ba, bb = _broadcast(fa, fb)
+    # Solved from the copies the result keeps, so inputs read from out
+    # itself (from_pt(st.p, st.t, out=st)) are not overwritten while read.
+    fa, fb = kept(fa), kept(fb)
+    ba, bb = _broadcast(fa, fb)
     flat_a, flat_b = ba.reshape(-1), bb.reshape(-1)
     values, region, phase, status = _native.solve_many(pair, flat_a, flat_b, units, method, threads, read, arrays)
     origin = (pair, fa, fb, units, method)
@@ -161,6 +162,7 @@ def saturation(by: int, value: Any, units: Any, errors: Any, threads: Any, read:
     fv = floats(value)
     if fv.ndim == 0 and not isinstance(value, np.ndarray) and errors != "flag":
         return _native.saturation_scalar(by, float(fv), units, read)
+    fv = kept(fv)
     shape = fv.shape
     flat = fv.reshape(-1)
     values, region, phase, status = _native.saturation_many(by, flat, units, threads, read)

@@ -73,6 +73,7 @@ class Phase(enum.IntEnum):
 
 class Status(enum.IntEnum):
     """Why an element of an array result is NaN; ``OK`` (0) when computed.
+    ``str()`` gives its name in words ("out of range"), as DataFrames show it.
 
     The codes match the exception raised for the same input as a scalar:
     NOT_FINITE -> NotFiniteError; OUT_OF_RANGE, NO_STATE_IN_RANGE and
@@ -94,3 +95,6 @@ class Status(enum.IntEnum):
     INVALID_PLANT = 8
     NOT_FIXED_BY_MEASUREMENT = 9
     OTHER = 255
+
+    def __str__(self) -> str:
+        return self.name.lower().replace("_", " ")

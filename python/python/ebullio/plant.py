@@ -35,8 +35,9 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Any, Dict, List, Optional, Sequence, Tuple, Union
 
+from . import _frames
 from ._enums import Phase, Units
-from ._native import State
+from ._native import State, units_required
 from ._native import _plant as _core
 
 __all__ = [
@@ -66,6 +67,8 @@ __all__ = [
     "condensate",
 ]
 
+#: A unit system, required where a call reads numbers (None is refused
+#: with a TypeError that lists the systems).
 _UnitsArg = Union[Units, str, None]
 
 
@@ -143,8 +146,9 @@ class OpenHeater:
 class Cycle:
     """A regenerative reheat Rankine cycle as plain data.
 
-    ``units``: the unit system of every number here and in the result
-    ("native", "si", "metric", "us" or an ``ebullio.Units``);
+    ``units`` (required, there is no default): the unit system of every
+    number here and in the result ("native", "si", "metric", "us" or an
+    ``ebullio.Units``);
     ``supply``: a ``Supply``; ``casings``: from the throttle to the
     condenser; ``heaters``: ``ClosedHeater`` and ``OpenHeater`` from the
     highest extraction pressure down (numbered 1, 2, … in that order in the
@@ -160,7 +164,7 @@ class Cycle:
     casings: Sequence[Casing]
     heaters: Sequence[Union[ClosedHeater, OpenHeater]] = ()
     reheat: Optional[Reheat] = None
-    units: _UnitsArg = "native"
+    units: _UnitsArg = None
     feed_pressure: Optional[float] = None
     feed_pump_efficiency: float = 1.0
     condensate_pump_efficiency: float = 1.0
@@ -169,7 +173,7 @@ class Cycle:
     def __post_init__(self) -> None:
         object.__setattr__(self, "casings", tuple(self.casings))
         object.__setattr__(self, "heaters", tuple(self.heaters))
-        object.__setattr__(self, "units", Units(str(self.units or "native")))
+        object.__setattr__(self, "units", Units(units_required(self.units, "plant.Cycle")))
 
     def _native(self) -> Dict[str, Any]:
         return {
@@ -286,17 +290,16 @@ class CycleResult:
         raise KeyError(f"no point {role!r} number {number}")
 
     def points_frame(self):
-        """The points as a pandas DataFrame, one row each (needs pandas)."""
-        import pandas as pd
-
-        return pd.DataFrame(self.points)
+        """The points as a pandas DataFrame, one row each, ``phase`` by
+        name (a Categorical, as ``StateArray.to_frame``). Needs pandas."""
+        frame = _frames.frame(self.points)
+        frame["phase"] = _frames.named([p["phase"] for p in self.points], Phase)
+        return frame
 
     def components_frame(self):
         """The components as a pandas DataFrame, one row each, the streams
-        as lists of (flow, h, s) tuples (needs pandas)."""
-        import pandas as pd
-
-        return pd.DataFrame(self.components)
+        as lists of (flow, h, s) tuples. Needs pandas."""
+        return _frames.frame(self.components)
 
     def __repr__(self) -> str:
         return (
@@ -378,7 +381,7 @@ def section_efficiency(
     inlet_p: float, inlet_t: float, exhaust_p: float, exhaust_t: float, *, units: _UnitsArg = None
 ) -> Expansion:
     """A turbine section's isentropic efficiency from measured pressures and
-    temperatures at both ends. An end at or below saturation may be wet and
+    temperatures at both ends, in ``units`` (required). An end at or below saturation may be wet and
     is refused with ``NotFixedByMeasurementError`` (its ``needs`` says
     what would fix it: ``section_efficiency_between`` with the exhaust from
     a heat balance)."""
@@ -442,7 +445,7 @@ def mix(
     streams: Sequence[Tuple[float, State]], p: float, *, units: _UnitsArg = None
 ) -> Tuple[float, State]:
     """Adiabatic mixing of ``(flow, State)`` streams at pressure ``p`` (in
-    ``units``): the total flow and the mixed state."""
+    ``units``, required): the total flow and the mixed state."""
     return _core.mix(list(streams), p, units)
 
 
@@ -459,5 +462,6 @@ def heat_duty(flow: float, inlet: State, outlet: State) -> float:
 
 def condensate(p: float, subcooling: float = 0.0, *, units: _UnitsArg = None) -> State:
     """The condensate a condenser at ``p`` delivers, ``subcooling`` below its
-    saturation temperature (a temperature difference), in ``units``."""
+    saturation temperature (a temperature difference), in ``units``
+    (required)."""
     return _core.condensate(p, subcooling, units)
