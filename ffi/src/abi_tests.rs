@@ -798,6 +798,103 @@ fn every_property_path_honours_the_method_with_the_cores_bits() {
 }
 
 #[test]
+fn every_state_and_derivative_path_honours_the_method_with_the_cores_bits() {
+    use ebullio::Variable::*;
+    let triples = [
+        [Enthalpy, Temperature, Pressure],
+        [Density, Pressure, Entropy],
+        [Temperature, Pressure, Enthalpy],
+    ];
+    let flat: Vec<u32> = triples.iter().flatten().map(|&v| v as u32).collect();
+    for method in [Method::Exact, Method::BackwardOnly] {
+        for (pair, a, b, units) in method_cases() {
+            let core = State::solve(pair, a, b, units, method);
+            let mut s = blank_state();
+            // SAFETY: a whole EbullioState with its size set; no detail.
+            let status = unsafe {
+                ebullio_solve(
+                    pair as u32,
+                    a,
+                    b,
+                    units as u32,
+                    method as u32,
+                    &mut s,
+                    ptr::null_mut(),
+                )
+            };
+            let mut jacobian = [0.0; 3];
+            let mut element = EbullioStatus::Panic;
+            // SAFETY: three triples, one element, three outputs, one status.
+            unsafe {
+                ebullio_derivatives_array(
+                    flat.as_ptr(),
+                    3,
+                    pair as u32,
+                    &a,
+                    &b,
+                    1,
+                    units as u32,
+                    method as u32,
+                    jacobian.as_mut_ptr(),
+                    &mut element,
+                )
+            };
+            let core = match core {
+                Ok(c) => c,
+                Err(e) => {
+                    assert_eq!(status, EbullioStatus::from(&e));
+                    assert_eq!(element, status);
+                    continue;
+                }
+            };
+            assert_eq!(status, EbullioStatus::Ok);
+            assert_eq!(element, EbullioStatus::Ok);
+            assert_eq!(s.enthalpy.to_bits(), core.enthalpy().to_bits());
+            assert_eq!(s.density.to_bits(), core.density().to_bits());
+            for (k, &[z, x, y]) in triples.iter().enumerate() {
+                let want = one_property_outcome(core.derivative(z, x, y).map(Some));
+                let mut st = EbullioStatus::Panic;
+                // SAFETY: `st` is a writable status.
+                let v = unsafe {
+                    ebullio_derivative(
+                        z as u32,
+                        x as u32,
+                        y as u32,
+                        pair as u32,
+                        a,
+                        b,
+                        units as u32,
+                        method as u32,
+                        &mut st,
+                    )
+                };
+                assert!(same((v, st), want), "{pair:?} {method:?} {z:?} {x:?} {y:?}");
+                let (mut out, mut one) = (0.0, EbullioStatus::Panic);
+                // SAFETY: one element in, one out, one status.
+                unsafe {
+                    ebullio_derivative_array(
+                        z as u32,
+                        x as u32,
+                        y as u32,
+                        pair as u32,
+                        &a,
+                        &b,
+                        1,
+                        units as u32,
+                        method as u32,
+                        &mut out,
+                        &mut one,
+                    )
+                };
+                assert!(same((out, one), want), "array {pair:?} {method:?} {z:?}");
+                let bits = want.unwrap_or(f64::NAN).to_bits();
+                assert_eq!(jacobian[k].to_bits(), bits, "{pair:?} {method:?} {z:?}");
+            }
+        }
+    }
+}
+
+#[test]
 fn several_properties_give_nan_for_an_absent_one_and_keep_the_element_ok() {
     // Issue 12, defect 13: enthalpy and quality of single-phase states.
     use EbullioProperty as P;
