@@ -791,8 +791,10 @@ typedef struct {
 // Every property of one state. Set `size = sizeof(EbullioState)` before
 // the call; the library fills the fields it and the caller both know and
 // never writes `size`. Fields are only ever added at the end. A property
-// that does not exist for the state (cp of wet steam, the quality of a
-// single-phase state) is NaN.
+// the state does not have (cp of wet steam, the quality of a
+// single-phase state, cp at the critical point, where it is infinite) is
+// NaN: the struct holds several properties, and the call's status says
+// whether the state was solved.
 typedef struct {
   // `sizeof(EbullioState)` as the caller's header declares it.
   uint32_t size;
@@ -899,9 +901,11 @@ const char *ebullio_status_message(int32_t status);
 //
 // Writes `out[i]` for every i: the value, or NaN where element i failed;
 // and, if `statuses` is not null, `statuses[i]` (`EBULLIO_STATUS_OK` or
-// why it failed). Returns `EBULLIO_STATUS_OK` when every element
-// succeeded, `EBULLIO_STATUS_SOME_ELEMENTS_FAILED` when any failed, or an
-// argument status (then nothing was written). `out` may be `a` or `b`
+// why it failed). Element i is `ebullio_property` of its inputs: a
+// property its state does not have is `EBULLIO_STATUS_PROPERTY_UNDEFINED`.
+// Returns `EBULLIO_STATUS_OK` when every element succeeded,
+// `EBULLIO_STATUS_SOME_ELEMENTS_FAILED` when any failed, or an argument
+// status (then nothing was written). `out` may be `a` or `b`
 // (in place). With `n == 0` nothing is read or written and the pointers
 // may be null.
 //
@@ -923,10 +927,12 @@ EbullioStatus ebullio_property_array(uint32_t property,
 // `n × n_properties` values, state by state (`out[i * n_properties + k]`
 // is property k of state i), each solved once.
 //
-// `statuses[i]` is the first failure of state i: a state that exists but
-// lacks one property (cp of wet steam) gets `EBULLIO_STATUS_PROPERTY_UNDEFINED`,
-// one above a transport property's range `EBULLIO_STATUS_OUT_OF_RANGE`,
-// with its other values filled. Otherwise as `ebullio_property_array`;
+// `statuses[i]` says whether state i was solved. A solved state that
+// lacks a property (cp of wet steam, the quality of a single-phase state,
+// cp at the critical point, a transport property above 1173.15 K) gives
+// NaN for it, its other values filled, and keeps `EBULLIO_STATUS_OK`;
+// `ebullio_property` says why one is missing. This holds for any
+// `n_properties`, 1 included. Otherwise as `ebullio_property_array`;
 // `n_properties` must be at least 1.
 //
 // # Safety
@@ -992,9 +998,10 @@ EbullioStatus ebullio_derivative_array(uint32_t z,
 // `variables` holds `3 × n_derivatives` `EbullioVariable` numbers, z, x,
 // y for each derivative in turn, and `out` receives `n × n_derivatives`
 // values, state by state (`out[i * n_derivatives + k]` is derivative k of
-// state i). `statuses[i]` is the first failure of state i, its other
-// values filled. `n_derivatives` must be at least 1; otherwise as
-// `ebullio_properties_array`.
+// state i). `statuses[i]` says whether state i was solved: a derivative
+// a solved state does not have (y the same as x, infinite at the
+// critical point) is NaN, the element `EBULLIO_STATUS_OK`, as in
+// `ebullio_properties_array`. `n_derivatives` must be at least 1.
 //
 // # Safety
 // `variables` valid for `3 × n_derivatives` values; `a`, `b` for `n`
@@ -1025,7 +1032,9 @@ EbullioStatus ebullio_derivatives_array(const uint32_t *variables,
 // for a kind, drains or flag value that is none of its values (or a
 // reserved field that is not 0), `EBULLIO_STATUS_BAD_LENGTH` for a casing
 // or heater count above its array, `EBULLIO_STATUS_INVALID_PLANT` for a
-// description the solver refuses.
+// description the solver refuses, or whose solution holds a figure that
+// is not a finite number (a point's quality, NaN off the saturation line,
+// aside): status 0 comes only with finite figures.
 //
 // # Safety
 // `spec` must point to a readable `EbullioCycleSpec` of at least the
@@ -1181,7 +1190,10 @@ EbullioStatus ebullio_open_heater(double steam_pressure,
 // pressure, the spray water given by (p, T); every number in `units`.
 // `outlet`, if not null (size set), receives the steam leaving. A target
 // not between saturation and the steam temperature is
-// `EBULLIO_STATUS_INVALID_PLANT`. Outputs are written only on success.
+// `EBULLIO_STATUS_INVALID_PLANT`, and so is a balance with a figure that
+// is not a finite number (a flow too large to compute with): status 0
+// comes only with finite figures, as for every component call. Outputs
+// are written only on success.
 //
 // # Safety
 // As for `ebullio_open_heater`.
@@ -1222,11 +1234,16 @@ EbullioStatus ebullio_solve(uint32_t pair,
 // success); `status` may be null for callers that test for NaN.
 //
 // `property` is an `EbullioProperty`, `pair` an `EbullioInputPair`,
-// `units` an `EbullioUnits`, `method` an `EbullioMethod`. A property that
-// does not exist for the state (cp of wet steam, a transport property of
-// wet steam, the surface tension off the saturation line) gives
-// `EBULLIO_STATUS_PROPERTY_UNDEFINED`; a transport property above
-// 1173.15 K (the releases' range) `EBULLIO_STATUS_OUT_OF_RANGE`.
+// `units` an `EbullioUnits`, `method` an `EbullioMethod`; every property
+// is read off the state that `ebullio_solve` gives with the same method.
+// The absent-property rule: a call that asks for one property reports
+// one the state does not have (cp of wet steam, the quality of a
+// single-phase state, cp at the critical point where it is infinite, a
+// transport property of wet steam, the surface tension off the
+// saturation line) as `EBULLIO_STATUS_PROPERTY_UNDEFINED`, with NaN; a
+// transport property above 1173.15 K (the releases' range) is
+// `EBULLIO_STATUS_OUT_OF_RANGE`. `EBULLIO_STATUS_OK` always comes with a
+// finite value.
 //
 // # Safety
 // `status`, if not null, must point to a writable `EbullioStatus`.

@@ -11,7 +11,21 @@ use crate::args::{check_len, InArray, OutArray};
 use crate::boundary::boundary;
 use crate::codes;
 use crate::state::Choice;
-use crate::status::EbullioStatus;
+use crate::status::{finite, EbullioStatus};
+
+/// How an array call reports a value a solved state does not have (the
+/// absent-property rule, one for C and Python).
+#[derive(Clone, Copy, PartialEq, Eq)]
+pub(crate) enum Asked {
+    /// One value per element (`ebullio_property_array`,
+    /// `ebullio_derivative_array`): the element's status says why a value
+    /// is missing, `EBULLIO_STATUS_PROPERTY_UNDEFINED` for an absent one.
+    OnePerElement,
+    /// Several values per element (`ebullio_properties_array`,
+    /// `ebullio_derivatives_array`), however many are asked: a missing value
+    /// is NaN, and the element's status says whether its state was solved.
+    Several,
+}
 
 /// What an array call reads off each state: `count()` values.
 pub(crate) trait Columns {
@@ -19,7 +33,7 @@ pub(crate) trait Columns {
     fn count(&self) -> usize;
     /// Every code is decoded before anything is written.
     fn check(&self) -> Result<(), EbullioStatus>;
-    /// The only value of the state (`count() == 1`), from the inputs.
+    /// The only value of the state (`Asked::OnePerElement`), from the inputs.
     fn single(&self, choice: Choice, a: f64, b: f64) -> Result<f64, EbullioStatus> {
         self.read(&choice.solved(a, b)?, 0)
     }
@@ -52,9 +66,11 @@ impl Columns for Properties {
 ///
 /// Writes `out[i]` for every i: the value, or NaN where element i failed;
 /// and, if `statuses` is not null, `statuses[i]` (`EBULLIO_STATUS_OK` or
-/// why it failed). Returns `EBULLIO_STATUS_OK` when every element
-/// succeeded, `EBULLIO_STATUS_SOME_ELEMENTS_FAILED` when any failed, or an
-/// argument status (then nothing was written). `out` may be `a` or `b`
+/// why it failed). Element i is `ebullio_property` of its inputs: a
+/// property its state does not have is `EBULLIO_STATUS_PROPERTY_UNDEFINED`.
+/// Returns `EBULLIO_STATUS_OK` when every element succeeded,
+/// `EBULLIO_STATUS_SOME_ELEMENTS_FAILED` when any failed, or an argument
+/// status (then nothing was written). `out` may be `a` or `b`
 /// (in place). With `n == 0` nothing is read or written and the pointers
 /// may be null.
 ///
@@ -80,8 +96,9 @@ pub unsafe extern "C" fn ebullio_property_array(
             Ok(p) => Properties(p),
             Err(status) => return status,
         };
+        let shape = (pair, units, method, Asked::OnePerElement);
         // SAFETY: this function's contract, forwarded.
-        let r = unsafe { kernel(&columns, pair, a, b, n, units, method, out, statuses) };
+        let r = unsafe { kernel(&columns, shape, a, b, n, out, statuses) };
         r.unwrap_or_else(|status| status)
     })
 }
@@ -91,10 +108,12 @@ pub unsafe extern "C" fn ebullio_property_array(
 /// `n × n_properties` values, state by state (`out[i * n_properties + k]`
 /// is property k of state i), each solved once.
 ///
-/// `statuses[i]` is the first failure of state i: a state that exists but
-/// lacks one property (cp of wet steam) gets `EBULLIO_STATUS_PROPERTY_UNDEFINED`,
-/// one above a transport property's range `EBULLIO_STATUS_OUT_OF_RANGE`,
-/// with its other values filled. Otherwise as `ebullio_property_array`;
+/// `statuses[i]` says whether state i was solved. A solved state that
+/// lacks a property (cp of wet steam, the quality of a single-phase state,
+/// cp at the critical point, a transport property above 1173.15 K) gives
+/// NaN for it, its other values filled, and keeps `EBULLIO_STATUS_OK`;
+/// `ebullio_property` says why one is missing. This holds for any
+/// `n_properties`, 1 included. Otherwise as `ebullio_property_array`;
 /// `n_properties` must be at least 1.
 ///
 /// # Safety
@@ -124,8 +143,9 @@ pub unsafe extern "C" fn ebullio_properties_array(
             Ok(p) => Properties(p),
             Err(status) => return status,
         };
+        let shape = (pair, units, method, Asked::Several);
         // SAFETY: this function's contract, forwarded.
-        let r = unsafe { kernel(&columns, pair, a, b, n, units, method, out, statuses) };
+        let r = unsafe { kernel(&columns, shape, a, b, n, out, statuses) };
         r.unwrap_or_else(|status| status)
     })
 }
@@ -136,15 +156,12 @@ pub unsafe extern "C" fn ebullio_properties_array(
 /// # Safety
 /// `a`, `b` valid for `n` doubles; `out` for `n × columns.count()`
 /// doubles; `statuses`, if not null, for `n` `EbullioStatus` values.
-#[allow(clippy::too_many_arguments)]
 pub(crate) unsafe fn kernel(
     columns: &impl Columns,
-    pair: u32,
+    (pair, units, method, asked): (u32, u32, u32, Asked),
     a: *const f64,
     b: *const f64,
     n: usize,
-    units: u32,
-    method: u32,
     out: *mut f64,
     statuses: *mut EbullioStatus,
 ) -> Result<EbullioStatus, EbullioStatus> {
@@ -170,22 +187,18 @@ pub(crate) unsafe fn kernel(
     let mut all_good = true;
     for i in 0..n {
         let (x, y) = (a.get(i), b.get(i));
-        let element = if k == 1 {
-            let r = columns.single(choice, x, y);
+        let element = if asked == Asked::OnePerElement {
+            let r = finite(columns.single(choice, x, y));
             out.set(i, *r.as_ref().unwrap_or(&f64::NAN));
             r.err().unwrap_or(EbullioStatus::Ok)
         } else {
             match choice.solved(x, y) {
                 Ok(state) => {
-                    let mut first = EbullioStatus::Ok;
                     for c in 0..k {
-                        let r = columns.read(&state, c);
-                        if let (Err(status), EbullioStatus::Ok) = (r, first) {
-                            first = status;
-                        }
+                        let r = finite(columns.read(&state, c));
                         out.set(i * k + c, r.unwrap_or(f64::NAN));
                     }
-                    first
+                    EbullioStatus::Ok
                 }
                 Err(status) => {
                     for c in 0..k {

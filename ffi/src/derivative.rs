@@ -3,20 +3,20 @@
 //! for each of n states (a Jacobian for a Newton solver), every state
 //! solved once. Each value is the core's `State::derivative`.
 
-use ebullio::State;
+use ebullio::{State, Variable};
 
 use crate::args::InArray;
-use crate::array::{kernel, Columns};
+use crate::array::{kernel, Asked, Columns};
 use crate::boundary::boundary;
 use crate::codes;
 use crate::state::Choice;
-use crate::status::EbullioStatus;
+use crate::status::{finite, scalar, EbullioStatus};
 
 /// `EbullioVariable` numbers, three per derivative: z, x, y.
 struct Derivatives(InArray<u32>);
 
 impl Derivatives {
-    fn triple(&self, k: usize) -> Result<[ebullio::Variable; 3], EbullioStatus> {
+    fn triple(&self, k: usize) -> Result<[Variable; 3], EbullioStatus> {
         let v = |j: usize| self.0.get(3 * k + j);
         codes::derivative(v(0), v(1), v(2))
     }
@@ -32,11 +32,18 @@ impl Columns for Derivatives {
     }
 
     fn read(&self, state: &State, k: usize) -> Result<f64, EbullioStatus> {
-        let [z, x, y] = self.triple(k)?;
+        derivative_of(state, self.triple(k)?)
+    }
+}
+
+/// (∂z/∂x)_y of `state`: the core's value if finite, undefined if the
+/// core has none or only a non-finite one (at the critical point).
+fn derivative_of(state: &State, [z, x, y]: [Variable; 3]) -> Result<f64, EbullioStatus> {
+    finite(
         state
             .derivative(z, x, y)
-            .map_err(|e| EbullioStatus::from(&e))
-    }
+            .map_err(|e| EbullioStatus::from(&e)),
+    )
 }
 
 /// The partial derivative (∂z/∂x) at constant y of the state given by
@@ -70,17 +77,10 @@ pub unsafe extern "C" fn ebullio_derivative(
     let result = boundary!(Err(EbullioStatus::Panic) => {
         let [z, x, y] = codes::derivative(z, x, y)?;
         let state = Choice::decode(pair, units, method)?.solved(a, b)?;
-        state.derivative(z, x, y).map_err(|e| EbullioStatus::from(&e))
+        derivative_of(&state, [z, x, y])
     });
-    let (value, code) = match result {
-        Ok(v) => (v, EbullioStatus::Ok),
-        Err(s) => (f64::NAN, s),
-    };
-    if !status.is_null() {
-        // SAFETY: not null, and the caller's contract makes it writable.
-        unsafe { status.write(code) };
-    }
-    value
+    // SAFETY: the caller's contract for `status`, as documented.
+    unsafe { scalar(result, status) }
 }
 
 /// (∂z/∂x)_y for each of `n` states given by `a[i]`, `b[i]`; `out[i]` the
@@ -112,8 +112,9 @@ pub unsafe extern "C" fn ebullio_derivative_array(
             Ok(v) => Derivatives(v),
             Err(status) => return status,
         };
+        let shape = (pair, units, method, Asked::OnePerElement);
         // SAFETY: this function's contract, forwarded.
-        let r = unsafe { kernel(&columns, pair, a, b, n, units, method, out, statuses) };
+        let r = unsafe { kernel(&columns, shape, a, b, n, out, statuses) };
         r.unwrap_or_else(|status| status)
     })
 }
@@ -122,9 +123,10 @@ pub unsafe extern "C" fn ebullio_derivative_array(
 /// `variables` holds `3 × n_derivatives` `EbullioVariable` numbers, z, x,
 /// y for each derivative in turn, and `out` receives `n × n_derivatives`
 /// values, state by state (`out[i * n_derivatives + k]` is derivative k of
-/// state i). `statuses[i]` is the first failure of state i, its other
-/// values filled. `n_derivatives` must be at least 1; otherwise as
-/// `ebullio_properties_array`.
+/// state i). `statuses[i]` says whether state i was solved: a derivative
+/// a solved state does not have (y the same as x, infinite at the
+/// critical point) is NaN, the element `EBULLIO_STATUS_OK`, as in
+/// `ebullio_properties_array`. `n_derivatives` must be at least 1.
 ///
 /// # Safety
 /// `variables` valid for `3 × n_derivatives` values; `a`, `b` for `n`
@@ -156,8 +158,9 @@ pub unsafe extern "C" fn ebullio_derivatives_array(
             Ok(v) => Derivatives(v),
             Err(status) => return status,
         };
+        let shape = (pair, units, method, Asked::Several);
         // SAFETY: this function's contract, forwarded.
-        let r = unsafe { kernel(&columns, pair, a, b, n, units, method, out, statuses) };
+        let r = unsafe { kernel(&columns, shape, a, b, n, out, statuses) };
         r.unwrap_or_else(|status| status)
     })
 }

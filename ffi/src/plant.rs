@@ -35,6 +35,7 @@ pub use spec::{
 };
 
 use ebullio::plant::solve_cycle;
+use ebullio::Error;
 
 use crate::args::{read_in_struct, OutStruct};
 use crate::boundary::boundary;
@@ -56,7 +57,9 @@ use crate::status::EbullioStatus;
 /// for a kind, drains or flag value that is none of its values (or a
 /// reserved field that is not 0), `EBULLIO_STATUS_BAD_LENGTH` for a casing
 /// or heater count above its array, `EBULLIO_STATUS_INVALID_PLANT` for a
-/// description the solver refuses.
+/// description the solver refuses, or whose solution holds a figure that
+/// is not a finite number (a point's quality, NaN off the saturation line,
+/// aside): status 0 comes only with finite figures.
 ///
 /// # Safety
 /// `spec` must point to a readable `EbullioCycleSpec` of at least the
@@ -94,9 +97,15 @@ pub unsafe extern "C" fn ebullio_cycle_solve(
             Ok(s) => s,
             Err(status) => return fail(status, units),
         };
-        match solve_cycle(&core_spec) {
+        let solved = solve_cycle(&core_spec).map(|r| EbullioCycleResult::of(&r)).and_then(|r| {
+            // The last line of defence behind the core's own checks.
+            r.all_finite().then_some(r).ok_or(Error::InvalidPlant {
+                what: "a figure of the solved cycle is not a finite number",
+            })
+        });
+        match solved {
             Ok(result) => {
-                out.write(&EbullioCycleResult::of(&result));
+                out.write(&result);
                 EbullioStatus::Ok
             }
             Err(e) => {

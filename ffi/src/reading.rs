@@ -5,7 +5,7 @@
 
 use ebullio::{Property, State};
 
-use crate::status::EbullioStatus;
+use crate::status::{finite, EbullioStatus};
 
 /// One `EbullioProperty`, decoded.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -64,10 +64,14 @@ impl Reading {
     }
 
     /// The value at `state`, in the state's units, or why there is none:
-    /// `EBULLIO_STATUS_PROPERTY_UNDEFINED` where it does not exist for the
-    /// state, the core error's status otherwise (a transport property
-    /// above 1173.15 K is out of range).
+    /// `EBULLIO_STATUS_PROPERTY_UNDEFINED` where the core has none for the
+    /// state (or only a non-finite one), the core error's status otherwise
+    /// (a transport property above 1173.15 K is out of range).
     pub(crate) fn of(self, state: &State) -> Result<f64, EbullioStatus> {
+        finite(self.core_value(state))
+    }
+
+    fn core_value(self, state: &State) -> Result<f64, EbullioStatus> {
         let value = match self {
             Reading::Thermodynamic(p) => {
                 return state.get(p).ok_or(EbullioStatus::PropertyUndefined)

@@ -10,13 +10,15 @@ use crate::boundary::boundary;
 use crate::codes::{self, c_phase, c_region, c_units, EbullioPhase, EbullioRegion, EbullioUnits};
 use crate::detail::{report, EbullioErrorDetail};
 use crate::reading::Reading;
-use crate::status::EbullioStatus;
+use crate::status::{finite, scalar, EbullioStatus};
 
 /// Every property of one state. Set `size = sizeof(EbullioState)` before
 /// the call; the library fills the fields it and the caller both know and
 /// never writes `size`. Fields are only ever added at the end. A property
-/// that does not exist for the state (cp of wet steam, the quality of a
-/// single-phase state) is NaN.
+/// the state does not have (cp of wet steam, the quality of a
+/// single-phase state, cp at the critical point, where it is infinite) is
+/// NaN: the struct holds several properties, and the call's status says
+/// whether the state was solved.
 #[repr(C)]
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct EbullioState {
@@ -77,9 +79,12 @@ unsafe impl SizePrefixed for EbullioState {
 
 impl EbullioState {
     /// The C view of a state, every value through `State::get` so that it
-    /// is bit for bit what the scalar and array calls return.
+    /// is bit for bit what the scalar and array calls return; NaN where
+    /// they say the property is absent.
     pub(crate) fn of(s: &State) -> EbullioState {
-        let get = |p: Property| s.get(p).unwrap_or(f64::NAN);
+        let get = |p: Property| {
+            finite(s.get(p).ok_or(EbullioStatus::PropertyUndefined)).unwrap_or(f64::NAN)
+        };
         EbullioState {
             size: size_of::<EbullioState>() as u32,
             units: c_units(s.units()),
@@ -125,13 +130,16 @@ impl Choice {
         State::solve(self.pair, a, b, self.units, self.method)
     }
 
-    /// One property; enthalpy from (p, T) takes the core's cheap path,
-    /// which gives the same bits as the full state.
+    /// One property; exact enthalpy from (p, T) takes the core's cheap
+    /// path, which gives the same bits as the exact state. The strict
+    /// method solves the state: its region 3 density, and so its
+    /// enthalpy, is the backward equation's.
     pub(crate) fn property(self, reading: Reading, a: f64, b: f64) -> Result<f64, EbullioStatus> {
         if reading == Reading::Thermodynamic(Property::Enthalpy)
             && self.pair == InputPair::PressureTemperature
+            && self.method == Method::Exact
         {
-            return ebullio::enthalpy_from_pt(a, b, self.units).map_err(|e| (&e).into());
+            return finite(ebullio::enthalpy_from_pt(a, b, self.units).map_err(|e| (&e).into()));
         }
         reading.of(&self.solved(a, b)?)
     }
@@ -207,11 +215,16 @@ pub unsafe extern "C" fn ebullio_solve(
 /// success); `status` may be null for callers that test for NaN.
 ///
 /// `property` is an `EbullioProperty`, `pair` an `EbullioInputPair`,
-/// `units` an `EbullioUnits`, `method` an `EbullioMethod`. A property that
-/// does not exist for the state (cp of wet steam, a transport property of
-/// wet steam, the surface tension off the saturation line) gives
-/// `EBULLIO_STATUS_PROPERTY_UNDEFINED`; a transport property above
-/// 1173.15 K (the releases' range) `EBULLIO_STATUS_OUT_OF_RANGE`.
+/// `units` an `EbullioUnits`, `method` an `EbullioMethod`; every property
+/// is read off the state that `ebullio_solve` gives with the same method.
+/// The absent-property rule: a call that asks for one property reports
+/// one the state does not have (cp of wet steam, the quality of a
+/// single-phase state, cp at the critical point where it is infinite, a
+/// transport property of wet steam, the surface tension off the
+/// saturation line) as `EBULLIO_STATUS_PROPERTY_UNDEFINED`, with NaN; a
+/// transport property above 1173.15 K (the releases' range) is
+/// `EBULLIO_STATUS_OUT_OF_RANGE`. `EBULLIO_STATUS_OK` always comes with a
+/// finite value.
 ///
 /// # Safety
 /// `status`, if not null, must point to a writable `EbullioStatus`.
@@ -229,15 +242,8 @@ pub unsafe extern "C" fn ebullio_property(
         let property = codes::property(property)?;
         Choice::decode(pair, units, method)?.property(property, a, b)
     });
-    let (value, code) = match result {
-        Ok(v) => (v, EbullioStatus::Ok),
-        Err(s) => (f64::NAN, s),
-    };
-    if !status.is_null() {
-        // SAFETY: not null, and the caller's contract makes it writable.
-        unsafe { status.write(code) };
-    }
-    value
+    // SAFETY: the caller's contract for `status`, as documented.
+    unsafe { scalar(result, status) }
 }
 
 /// # Safety

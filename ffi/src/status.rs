@@ -194,6 +194,38 @@ impl From<&Error> for EbullioStatus {
     }
 }
 
+/// The last line of defence of every call that returns a value: status
+/// 0 always comes with a finite number. The core reports a property it
+/// cannot give finite as absent; a non-finite value that got through
+/// anyway reads as absent too, never as a result.
+pub(crate) fn finite(value: Result<f64, EbullioStatus>) -> Result<f64, EbullioStatus> {
+    value.and_then(|v| {
+        if v.is_finite() {
+            Ok(v)
+        } else {
+            Err(EbullioStatus::PropertyUndefined)
+        }
+    })
+}
+
+/// The return value of a one-value call (`ebullio_property`,
+/// `ebullio_derivative`): the value, or NaN with the status written to
+/// `status` when it is not null.
+///
+/// # Safety
+/// `status`, if not null, must point to a writable `EbullioStatus`.
+pub(crate) unsafe fn scalar(result: Result<f64, EbullioStatus>, status: *mut EbullioStatus) -> f64 {
+    let (value, code) = match finite(result) {
+        Ok(v) => (v, EbullioStatus::Ok),
+        Err(s) => (f64::NAN, s),
+    };
+    if !status.is_null() {
+        // SAFETY: not null, and this function's contract makes it writable.
+        unsafe { status.write(code) };
+    }
+    value
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

@@ -2,8 +2,8 @@
 # The C ABI from the languages that call it: C99 (dynamic and static link),
 # C++, Fortran, Python ctypes, valgrind memcheck, several threads at once, and
 # the plant calls against the Rust core's own numbers.
-# Builds `cargo build --release -p ebullio-ffi` and uses
-# $CARGO_TARGET_DIR/release (default target/release) libebullio_c.{so,a}.
+# Builds and installs the library with ffi/install.sh under a scratch prefix
+# and compiles everything through its pkg-config file.
 # Prints one line per step and a final "ffi: N passed, M failed"; exits
 # non-zero if any step failed.
 set -euo pipefail
@@ -33,26 +33,21 @@ need valgrind valgrind
 need pkg-config pkgconf
 need python3 python3
 
-cargo build --release -p ebullio-ffi --quiet
-
-target=${CARGO_TARGET_DIR:-target}
-case $target in /*) ;; *) target=$root/$target ;; esac
-lib=$target/release
-[ -f "$lib/libebullio_c.so" ] && [ -f "$lib/libebullio_c.a" ] || {
-    echo "ffi: $lib/libebullio_c.{so,a} not built" >&2
-    exit 1
-}
-version=$(sed -n 's/^version *= *"\(.*\)"/\1/p' Cargo.toml | head -n 1)
-abi=$(sed -n 's/^abi-version *= *\([0-9][0-9]*\).*/\1/p' ffi/Cargo.toml)
-
 work=$(mktemp -d)
 trap 'rm -rf "$work"' EXIT
 
-# The pkg-config file, pointed at the build tree; every C build uses it.
-mkdir -p "$work/pkgconfig"
-sed -e "s|@LIBDIR@|$lib|" -e "s|@INCLUDEDIR@|$ffi/include|" -e "s|@VERSION@|$version|" \
-    ffi/ebullio.pc.in >"$work/pkgconfig/ebullio.pc"
-export PKG_CONFIG_PATH=$work/pkgconfig
+# Built and installed by ffi/install.sh under a scratch prefix, as a C user
+# installs it; every C build below takes its flags from the ebullio.pc the
+# script writes, and the version from it too.
+bash "$ffi/install.sh" "$work/prefix" >/dev/null
+lib=$work/prefix/lib
+[ -f "$lib/libebullio_c.so" ] && [ -f "$lib/libebullio_c.a" ] || {
+    echo "ffi: $lib/libebullio_c.{so,a} not installed" >&2
+    exit 1
+}
+export PKG_CONFIG_PATH=$lib/pkgconfig
+version=$(pkg-config --modversion ebullio)
+abi=$(sed -n 's/^abi-version *= *\([0-9][0-9]*\).*/\1/p' ffi/Cargo.toml)
 read -r -a cflags <<<"$(pkg-config --cflags ebullio)"
 read -r -a libs <<<"$(pkg-config --libs ebullio)"
 static_libs=()
@@ -125,6 +120,21 @@ plant_ctypes() {
         python3 "$here/python/test_plant_ctypes.py" "$lib/libebullio_c.so" "$work/plant_reference.txt"
 }
 
+# The README's C program, taken from README.md ("Use from C"), compiled by
+# the README's command line through pkg-config and run.
+readme_c() {
+    awk '/^## Use from C/ { section = 1 }
+         section && /^```c$/ { copying = 1; next }
+         copying && /^```$/ { exit }
+         copying { print }' README.md >"$work/app.c" &&
+        grep -q 'int main' "$work/app.c" &&
+        cc "${c99[@]}" "$work/app.c" $(pkg-config --cflags --libs ebullio) -o "$work/app" &&
+        LD_LIBRARY_PATH=$lib "$work/app" >"$work/app.out" &&
+        cat "$work/app.out" &&
+        grep -Eq '^main steam: h = [0-9]+\.[0-9] kJ/kg, s = [0-9]+\.[0-9]{4} kJ/\(kg K\)$' "$work/app.out" &&
+        grep -q '^exhaust: cp is absent' "$work/app.out"
+}
+
 threads() {
     gcc "${c99[@]}" -pthread "${cflags[@]}" "$here/c/test_threads.c" \
         -o "$work/threads" "${libs[@]}" "${rpath[@]}" &&
@@ -134,7 +144,7 @@ threads() {
 passed=0
 failed=0
 for step in c_dynamic c_static cxx_header fortran python_ctypes valgrind_memcheck threads \
-    plant_c plant_ctypes; do
+    plant_c plant_ctypes readme_c; do
     if "$step" >"$work/$step.log" 2>&1; then
         passed=$((passed + 1))
         echo "ok   $step: $(tail -n 1 "$work/$step.log")"

@@ -838,3 +838,66 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
     assert_eq!(status, EbullioStatus::NullPointer);
     assert_eq!(o, HeaterOutputs::blank());
 }
+
+#[test]
+fn a_component_call_never_returns_a_non_finite_figure_with_status_ok() {
+    // Issue 12, defect 8: spray into f64::MAX of steam gave an infinite
+    // spray flow with status OK. Whatever the core says, C writes only
+    // finite figures with status 0, and refuses (outputs untouched,
+    // detail filled) otherwise.
+    let units = EbullioUnits::MetricEngineering as u32;
+    let mut o = HeaterOutputs::blank();
+    let before = o.balance;
+    let mut d = blank_detail();
+    // SAFETY: every pointer is to a local of the right type, sizes set.
+    let status = unsafe {
+        ebullio_attemperator_spray(
+            167.0,
+            560.0,
+            f64::MAX,
+            186.0,
+            180.0,
+            538.0,
+            units,
+            &mut o.balance,
+            &mut o.first,
+            &mut d,
+        )
+    };
+    assert_ne!(status, EbullioStatus::Ok, "{:?}", o.balance);
+    assert_eq!(o.balance, before);
+    assert_eq!(d.status, status);
+    assert!(!detail_text(&d).is_empty());
+}
+
+#[test]
+fn a_cycle_with_a_figure_that_is_not_finite_is_refused() {
+    // Issue 12, defect 8: a casing at an isentropic efficiency of 1e-300
+    // delivers no work, and the back-work ratio came out infinite with
+    // status OK. (Invented plant: 10 MPa, 800 K, one casing to 0.01 MPa.)
+    let mut c = EbullioCycleSpec::zeroed();
+    c.units = EbullioUnits::Native as u32;
+    c.supply_kind = EbullioSupplyKind::Superheated as u32;
+    c.supply_pressure = 10.0;
+    c.supply_temperature = 800.0;
+    c.casing_count = 1;
+    c.casings[0] = EbullioCasing {
+        exhaust_pressure: 0.01,
+        isentropic_efficiency: 1e-300,
+    };
+    c.feed_pump_efficiency = 0.85;
+    c.condensate_pump_efficiency = 1.0;
+    let mut r = marked_result();
+    let mut d = blank_detail();
+    // SAFETY: a whole spec, result and detail, sizes set.
+    let status = unsafe { ebullio_cycle_solve(&c, &mut *r, &mut d) };
+    assert_ne!(
+        status,
+        EbullioStatus::Ok,
+        "back-work ratio {}",
+        r.back_work_ratio
+    );
+    assert_eq!(r.turbine_work, -1.0, "nothing written on {status:?}");
+    assert_eq!(d.status, status);
+    assert!(!detail_text(&d).is_empty());
+}

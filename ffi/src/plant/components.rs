@@ -9,8 +9,8 @@ use core::mem::size_of;
 use ebullio::plant::{compress, expand, section_efficiency, Compression, Expansion};
 use ebullio::{Error, State, Units};
 
-use super::figures::figures_layout;
-use crate::args::{OutStruct, SizePrefixed};
+use super::figures::{figures_layout, Figures};
+use crate::args::OutStruct;
 use crate::boundary::boundary;
 use crate::codes::{self, c_units, EbullioUnits};
 use crate::detail::{report, EbullioErrorDetail};
@@ -37,7 +37,15 @@ pub struct EbullioExpansion {
     pub entropy_generation: f64,
 }
 
-figures_layout!(EbullioExpansion, work, 4);
+figures_layout!(
+    EbullioExpansion,
+    [
+        work,
+        isentropic_work,
+        isentropic_efficiency,
+        entropy_generation
+    ]
+);
 
 /// The figures of one compression through a pump, per unit mass, in the
 /// call's units. Set `size = sizeof(EbullioCompression)` before the call.
@@ -64,7 +72,17 @@ pub struct EbullioCompression {
     pub entropy_generation: f64,
 }
 
-figures_layout!(EbullioCompression, work, 6);
+figures_layout!(
+    EbullioCompression,
+    [
+        work,
+        isentropic_work,
+        incompressible_work,
+        isentropic_efficiency,
+        temperature_rise,
+        entropy_generation
+    ]
+);
 
 impl EbullioExpansion {
     fn of(e: &Expansion) -> EbullioExpansion {
@@ -96,16 +114,32 @@ impl EbullioCompression {
 
 /// The caller's output pointers of a component call, checked: the
 /// figures and up to two states.
-pub(super) struct Outs<T: SizePrefixed> {
+pub(super) struct Outs<T: Figures> {
     figures: OutStruct<T>,
     first: Option<OutStruct<EbullioState>>,
     second: Option<OutStruct<EbullioState>>,
 }
 
-impl<T: SizePrefixed> Outs<T> {
+/// Why figures that are not all finite are refused: the last line of
+/// defence behind the core's own checks (an input as large as `f64::MAX`
+/// can overflow a flow or a duty).
+const NOT_FINITE_FIGURES: Error = Error::InvalidPlant {
+    what: "a figure of the result is not a finite number (an input too large to compute with?)",
+};
+
+impl<T: Figures> Outs<T> {
     /// Writes the figures, then each state whose output the caller gave
-    /// (`second` is `None` for a call with one state output).
-    pub(super) fn write(&self, figures: &T, first: &State, second: Option<&State>) {
+    /// (`second` is `None` for a call with one state output); writes
+    /// nothing and refuses if a figure is not finite.
+    pub(super) fn write(
+        &self,
+        figures: &T,
+        first: &State,
+        second: Option<&State>,
+    ) -> Result<(), Error> {
+        if !figures.all_finite() {
+            return Err(NOT_FINITE_FIGURES);
+        }
         self.figures.write(figures);
         if let Some(out) = &self.first {
             out.write(&EbullioState::of(first));
@@ -113,25 +147,27 @@ impl<T: SizePrefixed> Outs<T> {
         if let (Some(out), Some(state)) = (&self.second, second) {
             out.write(&EbullioState::of(state));
         }
+        Ok(())
     }
 }
 
 /// The shared frame of the component calls: checks every pointer and the
 /// unit system, runs `compute` (which decodes any other argument codes
 /// first, then calls the core), writes the outputs only on success and
-/// the detail only on failure.
+/// the detail only on failure (figures that are not all finite are a
+/// failure: `EBULLIO_STATUS_INVALID_PLANT`).
 ///
 /// # Safety
 /// As the exported calls document for `figures`, the two states (`first`,
 /// `second`) and `detail`.
-pub(super) unsafe fn component_call<T: SizePrefixed, R>(
+pub(super) unsafe fn component_call<T: Figures, R>(
     units: u32,
     figures: *mut T,
     first: *mut EbullioState,
     second: *mut EbullioState,
     detail: *mut EbullioErrorDetail,
     compute: impl FnOnce(Units) -> Result<Result<R, Error>, EbullioStatus>,
-    write: impl FnOnce(&Outs<T>, &R),
+    write: impl FnOnce(&Outs<T>, &R) -> Result<(), Error>,
 ) -> EbullioStatus {
     // SAFETY: this function's contract, forwarded.
     let detail = match unsafe { OutStruct::optional(detail) } {
@@ -163,11 +199,8 @@ pub(super) unsafe fn component_call<T: SizePrefixed, R>(
         Ok(u) => u,
         Err(status) => return fail(status),
     };
-    match compute(units) {
-        Ok(Ok(result)) => {
-            write(&outs, &result);
-            EbullioStatus::Ok
-        }
+    match compute(units).map(|r| r.and_then(|result| write(&outs, &result))) {
+        Ok(Ok(())) => EbullioStatus::Ok,
         Ok(Err(e)) => {
             report(&detail, || EbullioErrorDetail::of_error(&e, units));
             EbullioStatus::from(&e)
@@ -176,12 +209,12 @@ pub(super) unsafe fn component_call<T: SizePrefixed, R>(
     }
 }
 
-fn write_expansion(outs: &Outs<EbullioExpansion>, e: &Expansion) {
+fn write_expansion(outs: &Outs<EbullioExpansion>, e: &Expansion) -> Result<(), Error> {
     outs.write(
         &EbullioExpansion::of(e),
         &e.exhaust,
         Some(&e.isentropic_exhaust),
-    );
+    )
 }
 
 /// Expands steam through a turbine section at an isentropic efficiency
@@ -323,7 +356,7 @@ pub unsafe extern "C" fn ebullio_pump_compression(
                     .and_then(|inlet| compress(&inlet, outlet_pressure, isentropic_efficiency)))
             },
             |outs, c: &Compression| {
-                outs.write(&EbullioCompression::of(c), &c.outlet, Some(&c.isentropic_outlet));
+                outs.write(&EbullioCompression::of(c), &c.outlet, Some(&c.isentropic_outlet))
             },
         )
     })

@@ -43,7 +43,10 @@ pub struct EbullioHeaterBalance {
     pub entropy_generation: f64,
 }
 
-figures_layout!(EbullioHeaterBalance, balancing_flow, 4);
+figures_layout!(
+    EbullioHeaterBalance,
+    [balancing_flow, through_flow, duty, entropy_generation]
+);
 
 fn balance(
     units: Units,
@@ -139,7 +142,7 @@ pub unsafe extern "C" fn ebullio_closed_heater(
                     h.duty,
                     h.entropy_generation,
                 );
-                outs.write(&figures, &h.feedwater_out, Some(&h.drain_out));
+                outs.write(&figures, &h.feedwater_out, Some(&h.drain_out))
             },
         )
     })
@@ -200,7 +203,7 @@ pub unsafe extern "C" fn ebullio_open_heater(
                     0.0,
                     h.entropy_generation,
                 );
-                outs.write(&figures, &h.outlet, None);
+                outs.write(&figures, &h.outlet, None)
             },
         )
     })
@@ -211,7 +214,10 @@ pub unsafe extern "C" fn ebullio_open_heater(
 /// pressure, the spray water given by (p, T); every number in `units`.
 /// `outlet`, if not null (size set), receives the steam leaving. A target
 /// not between saturation and the steam temperature is
-/// `EBULLIO_STATUS_INVALID_PLANT`. Outputs are written only on success.
+/// `EBULLIO_STATUS_INVALID_PLANT`, and so is a balance with a figure that
+/// is not a finite number (a flow too large to compute with): status 0
+/// comes only with finite figures, as for every component call. Outputs
+/// are written only on success.
 ///
 /// # Safety
 /// As for `ebullio_open_heater`.
@@ -247,7 +253,7 @@ pub unsafe extern "C" fn ebullio_attemperator_spray(
             |outs, s: &Spray| {
                 let figures =
                     balance(s.outlet.units(), s.spray_flow, steam_flow, 0.0, s.entropy_generation);
-                outs.write(&figures, &s.outlet, None);
+                outs.write(&figures, &s.outlet, None)
             },
         )
     })

@@ -303,6 +303,46 @@ impl EbullioCycleResult {
     }
 }
 
+impl EbullioCycleResult {
+    /// Whether every figure is a finite number (a point's quality aside,
+    /// NaN for a single-phase state): the call writes the block with
+    /// status 0 only then.
+    pub(crate) fn all_finite(&self) -> bool {
+        let totals = [
+            self.turbine_work,
+            self.pump_work,
+            self.net_work,
+            self.boiler_heat,
+            self.reheat_heat,
+            self.heat_input,
+            self.condenser_duty,
+            self.thermal_efficiency,
+            self.heat_rate_kj_per_kwh,
+            self.heat_rate_btu_per_kwh,
+            self.steam_rate_kg_per_kwh,
+            self.steam_rate_lbm_per_kwh,
+            self.back_work_ratio,
+            self.carnot_efficiency,
+        ];
+        let points = self
+            .points
+            .iter()
+            .flat_map(|p| [p.flow, p.pressure, p.temperature, p.enthalpy, p.entropy]);
+        let components = self.components.iter().flat_map(|c| {
+            let streams = c.inlets.iter().chain(&c.outlets);
+            [c.heat_in, c.work_out, c.entropy_generation]
+                .into_iter()
+                .chain(streams.flat_map(|s| [s.flow, s.enthalpy, s.entropy]))
+        });
+        totals
+            .into_iter()
+            .chain(self.extraction_fractions)
+            .chain(points)
+            .chain(components)
+            .all(f64::is_finite)
+    }
+}
+
 fn point(p: &StatePoint) -> EbullioCyclePoint {
     let s = &p.state;
     let get = |q: Property| s.get(q).unwrap_or(f64::NAN);

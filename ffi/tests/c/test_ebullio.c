@@ -304,13 +304,14 @@ static void arrays(void) {
                  EBULLIO_STATUS_OK);
     CHECK(memcmp(p, h, sizeof h) == 0);
 
-    /* Two properties per state; wet steam lacks cp. */
+    /* Two properties per state; wet steam lacks cp: NaN, and the element
+       stays OK (its state was solved). */
     CHECK_STATUS(ebullio_properties_array(props, 2,
                                           EBULLIO_INPUT_PAIR_PRESSURE_QUALITY,
                                           px, x, 2, EBULLIO_UNITS_NATIVE,
                                           EBULLIO_METHOD_EXACT, two, st),
-                 EBULLIO_STATUS_SOME_ELEMENTS_FAILED);
-    CHECK_STATUS(st[0], EBULLIO_STATUS_PROPERTY_UNDEFINED);
+                 EBULLIO_STATUS_OK);
+    CHECK_STATUS(st[0], EBULLIO_STATUS_OK);
     CHECK_STATUS(st[1], EBULLIO_STATUS_OK);
     CHECK(!isnan(two[0]) && isnan(two[1]));
     CHECK(!isnan(two[2]) && !isnan(two[3]));
@@ -421,14 +422,15 @@ static void transport(void) {
     check_relative("Pr = mu cp/lambda", v, mu * s.isobaric_heat_capacity / lambda, 1e-14);
     CHECK_STATUS(st, EBULLIO_STATUS_OK);
 
-    /* A batch from (rho, T): good, above 1173.15 K, good; the density is
-       filled even where the transport properties are out of range. */
+    /* A batch from (rho, T): good, above 1173.15 K, good. Every state is
+       solved, so every element is OK; the transport properties above
+       1173.15 K are NaN beside the density. */
     CHECK_STATUS(ebullio_properties_array(props, 3, EBULLIO_INPUT_PAIR_DENSITY_TEMPERATURE, a_rho,
                                           b_t, 3, EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT,
                                           three, sts),
-                 EBULLIO_STATUS_SOME_ELEMENTS_FAILED);
+                 EBULLIO_STATUS_OK);
     CHECK_STATUS(sts[0], EBULLIO_STATUS_OK);
-    CHECK_STATUS(sts[1], EBULLIO_STATUS_OUT_OF_RANGE);
+    CHECK_STATUS(sts[1], EBULLIO_STATUS_OK);
     CHECK_STATUS(sts[2], EBULLIO_STATUS_OK);
     check_printed("batch R12-08 Table 4 mu(298.15 K, 998) uPa s", three[0] * 1e6, "889.735100");
     check_printed("batch R15-11 Table 5 lambda(298.15 K, 998) mW/(m K)", three[2] * 1e3,
@@ -728,6 +730,98 @@ static void messages(void) {
     CHECK(EBULLIO_STATUS_OK == 0);
 }
 
+/* The method reaches every property call (issue 12, defect 6), the
+   absent-property rule (defect 13), and status 0 only with finite values
+   (defects 4, 5 and 8). */
+static void edges(void) {
+    const uint32_t pt = EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE;
+    const uint32_t strict = EBULLIO_METHOD_BACKWARD_ONLY;
+    uint32_t hs[2] = {EBULLIO_PROPERTY_ENTHALPY, EBULLIO_PROPERTY_ENTROPY};
+    uint32_t hx[2] = {EBULLIO_PROPERTY_ENTHALPY, EBULLIO_PROPERTY_QUALITY};
+    double p = 22.06271891067149, t = 635.1878989437665, one, exact, pair[2];
+    double ps[2] = {3.0, 0.0035}, ts[2] = {300.0, 700.0}, out[4];
+    EbullioStatus st = EBULLIO_STATUS_PANIC, st2 = EBULLIO_STATUS_PANIC, sts[2];
+    EbullioState s = fresh_state();
+    EbullioHeaterBalance balance;
+    EbullioErrorDetail d = fresh_detail();
+    uint32_t n;
+    size_t i;
+
+    /* Region 3 beside the critical point: the strict state's enthalpy is
+       the backward equation's, whichever call asks. */
+    CHECK_STATUS(ebullio_solve(pt, p, t, EBULLIO_UNITS_NATIVE, strict, &s, NULL),
+                 EBULLIO_STATUS_OK);
+    one = ebullio_property(EBULLIO_PROPERTY_ENTHALPY, pt, p, t, EBULLIO_UNITS_NATIVE, strict, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_OK);
+    CHECK(one == s.enthalpy);
+    exact = ebullio_property(EBULLIO_PROPERTY_ENTHALPY, pt, p, t, EBULLIO_UNITS_NATIVE,
+                             EBULLIO_METHOD_EXACT, &st);
+    CHECK(fabs(one - exact) > 1e-4);
+    CHECK_STATUS(ebullio_property_array(EBULLIO_PROPERTY_ENTHALPY, pt, &p, &t, 1,
+                                        EBULLIO_UNITS_NATIVE, strict, &one, NULL),
+                 EBULLIO_STATUS_OK);
+    CHECK(one == s.enthalpy);
+    CHECK_STATUS(ebullio_properties_array(hs, 2, pt, &p, &t, 1, EBULLIO_UNITS_NATIVE, strict, pair,
+                                          NULL),
+                 EBULLIO_STATUS_OK);
+    CHECK(pair[0] == s.enthalpy && pair[1] == s.entropy);
+    /* The same neighbourhood in psia and degF: enthalpy and entropy share
+       the strict state's outcome. */
+    (void)ebullio_property(EBULLIO_PROPERTY_ENTHALPY, pt, 3190.1416818449457, 705.102799999255,
+                           EBULLIO_UNITS_US_CUSTOMARY, strict, &st);
+    (void)ebullio_property(EBULLIO_PROPERTY_ENTROPY, pt, 3190.1416818449457, 705.102799999255,
+                           EBULLIO_UNITS_US_CUSTOMARY, strict, &st2);
+    CHECK_STATUS(st, st2);
+    CHECK_STATUS(ebullio_solve(pt, 3190.1416818449457, 705.102799999255,
+                               EBULLIO_UNITS_US_CUSTOMARY, strict, &s, NULL),
+                 st);
+
+    /* Quality of single-phase states: absent. One property asked: 205;
+       several: NaN, the element OK. */
+    (void)ebullio_property(EBULLIO_PROPERTY_QUALITY, pt, 3.0, 300.0, EBULLIO_UNITS_NATIVE,
+                           EBULLIO_METHOD_EXACT, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_PROPERTY_UNDEFINED);
+    CHECK_STATUS(ebullio_properties_array(hx, 2, pt, ps, ts, 2, EBULLIO_UNITS_NATIVE,
+                                          EBULLIO_METHOD_EXACT, out, sts),
+                 EBULLIO_STATUS_OK);
+    for (i = 0; i < 2; ++i) {
+        CHECK_STATUS(sts[i], EBULLIO_STATUS_OK);
+        CHECK(isfinite(out[2 * i]) && isnan(out[2 * i + 1]));
+    }
+    CHECK_STATUS(ebullio_property_array(EBULLIO_PROPERTY_QUALITY, pt, ps, ts, 2,
+                                        EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, out, sts),
+                 EBULLIO_STATUS_SOME_ELEMENTS_FAILED);
+    CHECK_STATUS(sts[0], EBULLIO_STATUS_PROPERTY_UNDEFINED);
+
+    /* At the critical point from (h, s) in SI units cp, alpha_v and kappa_T
+       were +inf with status 0; beside it, from (v, T) in metric units, the
+       thermal conductivity NaN. Every property: status 0 iff finite. */
+    for (n = 1; n <= 26; ++n) {
+        one = ebullio_property(n, EBULLIO_INPUT_PAIR_ENTHALPY_ENTROPY, 2087549.7609043422,
+                               4412.025988194036, EBULLIO_UNITS_SI_BASE, EBULLIO_METHOD_EXACT, &st);
+        CHECK((st == EBULLIO_STATUS_OK) == (isfinite(one) != 0));
+        one = ebullio_property(n, EBULLIO_INPUT_PAIR_VOLUME_TEMPERATURE, 0.0031056074035673677,
+                               373.94599999992187, EBULLIO_UNITS_METRIC_ENGINEERING,
+                               EBULLIO_METHOD_EXACT, &st);
+        CHECK((st == EBULLIO_STATUS_OK) == (isfinite(one) != 0));
+    }
+    CHECK_STATUS(ebullio_solve(EBULLIO_INPUT_PAIR_ENTHALPY_ENTROPY, 2087549.7609043422,
+                               4412.025988194036, EBULLIO_UNITS_SI_BASE, EBULLIO_METHOD_EXACT, &s,
+                               NULL),
+                 EBULLIO_STATUS_OK);
+    CHECK(!isinf(s.isobaric_heat_capacity) && !isinf(s.compressibility));
+
+    /* Spray into DBL_MAX kg/h of steam: refused, nothing written. */
+    memset(&balance, 0, sizeof balance);
+    balance.size = (uint32_t)sizeof balance;
+    balance.balancing_flow = -1.0;
+    st = ebullio_attemperator_spray(167.0, 560.0, 1.7976931348623157e308, 186.0, 180.0, 538.0,
+                                    EBULLIO_UNITS_METRIC_ENGINEERING, &balance, NULL, &d);
+    CHECK(st != EBULLIO_STATUS_OK);
+    CHECK_STATUS(d.status, st);
+    CHECK(balance.balancing_flow == -1.0);
+}
+
 int main(void) {
     versions();
     region1_table5();
@@ -738,6 +832,7 @@ int main(void) {
     arrays();
     transport();
     derivatives();
+    edges();
     error_paths();
     messages();
     printf("c: %d checks, %d failed\n", checks, failures);
