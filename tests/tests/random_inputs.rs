@@ -23,10 +23,11 @@ use ebullio_conformance::oracles::state::{
 };
 use ebullio_conformance::oracles::transport::check_transport;
 use ebullio_conformance::oracles::Findings;
+use ebullio_conformance::random_inputs::cases::{case_from_state, raw_case};
 use ebullio_conformance::random_inputs::draw::{campaign_seed, Draw, Seeded};
 use ebullio_conformance::random_inputs::plant::cycle;
 use ebullio_conformance::random_inputs::states::{pair_values, source, values_from};
-use ebullio_conformance::random_inputs::values::{pair_quantities, value};
+use ebullio_conformance::random_inputs::values::value;
 
 /// In-range source states per pair; each is solved in all four unit
 /// systems by both methods.
@@ -46,18 +47,6 @@ const METHODS: [Method; 2] = [Method::Exact, Method::BackwardOnly];
 
 fn draw_for(target: &str) -> Seeded {
     Seeded::for_target(campaign_seed(), target)
-}
-
-/// Adversarial values of the pair's quantities in `units`.
-fn raw_case(draw: &mut Seeded, pair: InputPair, units: Units, method: Method) -> SolveCase {
-    let [qa, qb] = pair_quantities(pair);
-    SolveCase {
-        pair,
-        a: value(draw, qa, units),
-        b: value(draw, qb, units),
-        units,
-        method,
-    }
 }
 
 #[test]
@@ -276,19 +265,11 @@ fn c_abi_scalar_and_array_calls_match_the_core() {
                 let mut batch = Vec::new();
                 while batch.len() < C_CASES_PER_COMBINATION {
                     let case = if draw.chance(0.5) {
-                        let Some(src) = source(&mut draw) else {
+                        let Some((case, _)) = case_from_state(&mut draw, pair, units, method)
+                        else {
                             continue;
                         };
-                        let Some((a, b, _)) = values_from(&mut draw, &src, pair, units) else {
-                            continue;
-                        };
-                        SolveCase {
-                            pair,
-                            a,
-                            b,
-                            units,
-                            method,
-                        }
+                        case
                     } else {
                         raw_case(&mut draw, pair, units, method)
                     };

@@ -2,6 +2,7 @@
 //! [`draw::Draw`], adversarial single values, in-range states to start
 //! from.
 
+pub mod cases;
 pub mod draw;
 pub mod plant;
 pub mod states;
