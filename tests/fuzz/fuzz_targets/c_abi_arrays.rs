@@ -12,7 +12,7 @@ use libfuzzer_sys::fuzz_target;
 
 fuzz_target!(|data: &[u8]| {
     let mut draw = Bytes::new(data);
-    let mut findings = Findings::stopping_at_first();
+    let mut findings = Findings::for_fuzzing();
     let pair = draw.pick(&InputPair::ALL);
     let units = draw.pick(&Units::ALL);
     let method = draw.pick(&[Method::Exact, Method::BackwardOnly]);
@@ -32,4 +32,5 @@ fuzz_target!(|data: &[u8]| {
         batch.push(case);
     }
     check_c_arrays(&batch, &mut findings);
+    findings.print_new_kinds();
 });

@@ -10,10 +10,11 @@ use libfuzzer_sys::fuzz_target;
 
 fuzz_target!(|data: &[u8]| {
     let mut draw = Bytes::new(data);
-    let mut findings = Findings::stopping_at_first();
+    let mut findings = Findings::for_fuzzing();
     if draw.chance(0.8) {
         check_cycle(&cycle(&mut draw), &mut findings);
     } else {
         check_component(&mut draw, &mut findings);
     }
+    findings.print_new_kinds();
 });

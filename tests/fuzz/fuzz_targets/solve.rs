@@ -13,7 +13,7 @@ use libfuzzer_sys::fuzz_target;
 
 fuzz_target!(|data: &[u8]| {
     let mut draw = Bytes::new(data);
-    let mut findings = Findings::stopping_at_first();
+    let mut findings = Findings::for_fuzzing();
     let (case, expect_state) = any_case(&mut draw);
     if let Some(state) = check_solve(&case, expect_state, &mut findings) {
         let call = || case.call();
@@ -22,4 +22,5 @@ fuzz_target!(|data: &[u8]| {
             check_derivatives(&state, &call, &mut findings);
         }
     }
+    findings.print_new_kinds();
 });

@@ -2,8 +2,9 @@
 //! each kind kept word for word. The harness fails a target with the whole
 //! list; a fuzz target stops at the first finding.
 
-use std::collections::BTreeMap;
+use std::collections::{BTreeMap, BTreeSet};
 use std::fmt::Write;
+use std::sync::Mutex;
 
 /// How many reproducers of one kind a report shows: 3, or
 /// `EBULLIO_CAMPAIGN_SHOW` when set (to study one kind).
@@ -34,6 +35,35 @@ impl Findings {
         Findings {
             stop_at_first: true,
             ..Findings::default()
+        }
+    }
+
+    /// A fuzz target's findings: stopping at the first, or, with
+    /// `EBULLIO_FUZZ_KEEP_GOING` set, collecting them for
+    /// [`Findings::print_new_kinds`] (a run that measures and lists rather
+    /// than stops).
+    pub fn for_fuzzing() -> Findings {
+        if std::env::var_os("EBULLIO_FUZZ_KEEP_GOING").is_some() {
+            Findings::new()
+        } else {
+            Findings::stopping_at_first()
+        }
+    }
+
+    /// Prints each kind this process has not printed before, with its
+    /// first reproducer, to stderr.
+    pub fn print_new_kinds(&self) {
+        static SEEN: Mutex<BTreeSet<String>> = Mutex::new(BTreeSet::new());
+        let Ok(mut seen) = SEEN.lock() else { return };
+        for (kind, (_, shown)) in &self.by_kind {
+            if seen.insert(kind.clone()) {
+                eprintln!(
+                    "NEW FINDING KIND #{}: {kind}
+    {}",
+                    seen.len(),
+                    shown.first().map_or("", String::as_str)
+                );
+            }
         }
     }
 
