@@ -81,3 +81,9 @@ pub const ENTROPY_ROUNDING: f64 = 1e-9;
 /// neighbouring regions (or the two sides of 623.15 K on the saturation
 /// line) and their temperatures agree within 0.1 K.
 pub const SEAM_TWIN_KELVIN: f64 = 0.1;
+
+/// Across a region boundary the two equations' entropies differ by up to
+/// IF97's permissible inconsistency, 0.2 J/(kg·K) (recalled from IAPWS
+/// R7-97(2012), section 5): a throttle from one region into the other at
+/// nearly the same pressure may show that much "destroyed", kJ/(kg·K).
+pub const SEAM_ENTROPY: f64 = 2e-4;
