@@ -1,5 +1,9 @@
 //! Helpers for the conformance suite: comparing against values printed in
-//! the IAPWS releases to the digits they print.
+//! the IAPWS releases to the digits they print; the random-input
+//! campaign's inputs and oracles.
+
+pub mod oracles;
+pub mod random_inputs;
 
 /// Asserts that `actual` agrees with a value printed as `printed` (for
 /// example `"0.100215168e-2"`) to every significant digit printed: the

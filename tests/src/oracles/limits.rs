@@ -1,0 +1,89 @@
+//! The numbers the oracles hold the engine to, each from the promise or
+//! the physics it stands for.
+
+use ebullio::{Quantity, Units};
+
+/// The round trip's relative tolerance: a state solved from a pair
+/// reproduces the pair "to relative 1e-10 or better" (README, DESIGN.md).
+pub const ROUND_TRIP_RELATIVE: f64 = 1e-10;
+
+/// The round trip's absolute floor in native units, which matters only
+/// near zero (ISSUE 12: "the absolute floor applies only near zero"): u
+/// and h pass through 0 at the triple point's liquid, s too (R7-97(2012),
+/// section 3), and a temperature in °C or °F passes through 0 on its
+/// scale. 1e-9 kJ/kg holds |h| below 10 kJ/kg to it (within ~2.4 K of
+/// the triple point); 1e-11 kJ/(kg·K) holds |s| below 0.1 kJ/(kg·K) to
+/// it; 1e-11 K is a few rounding steps of the scale offsets. Everything
+/// else is relative alone (p, v, ρ never near zero; x given exactly).
+fn floor_native(quantity: Quantity) -> f64 {
+    match quantity {
+        Quantity::Enthalpy | Quantity::InternalEnergy => 1e-9,
+        Quantity::Entropy => 1e-11,
+        Quantity::Temperature => 1e-11,
+        _ => 0.0,
+    }
+}
+
+/// The linear factor from native units to `units` for `quantity`.
+pub fn unit_factor(units: Units, quantity: Quantity) -> f64 {
+    (units.from_native(quantity, 1.0) - units.from_native(quantity, 0.0)).abs()
+}
+
+/// How far a round-trip value of `quantity` may lie from `given`, in the
+/// caller's `units`.
+pub fn round_trip_tolerance(quantity: Quantity, units: Units, given: f64) -> f64 {
+    (ROUND_TRIP_RELATIVE * given.abs()).max(floor_native(quantity) * unit_factor(units, quantity))
+}
+
+/// The range of validity (R7-97(2012), section 4): 273.15 K ≤ T ≤
+/// 1073.15 K at p ≤ 100 MPa, 1073.15 K < T ≤ 2273.15 K at p ≤ 50 MPa, and
+/// ebullio's floor of 1e-12 MPa (constants.rs). A solved state may stand
+/// outside it only by what the promised round trip leaves open: inputs
+/// reproduced to relative 1e-10 fix T to about that (cp/T and cp are
+/// bounded away from 0 at the range's edges), but p only to ~1e-9 where it
+/// is an output of (h, s) or (v, u) (a liquid's h barely moves with p; an
+/// ideal gas's s moves with ln p by R/s ~ 1/20 of s).
+pub fn in_range(p: f64, t: f64) -> bool {
+    let within =
+        |x: f64, lo: f64, hi: f64, slack: f64| x >= lo * (1.0 - slack) && x <= hi * (1.0 + slack);
+    let p_max = if t <= 1073.15 * (1.0 + TEMPERATURE_SLACK) {
+        100.0
+    } else {
+        50.0
+    };
+    within(t, 273.15, 2273.15, TEMPERATURE_SLACK) && within(p, 1e-12, p_max, PRESSURE_SLACK)
+}
+
+/// How far (relative) a solved state's temperature may stand outside the
+/// range.
+pub const TEMPERATURE_SLACK: f64 = 1e-9;
+/// How far (relative) a solved state's pressure may stand outside the
+/// range.
+pub const PRESSURE_SLACK: f64 = 1e-8;
+
+/// The critical point (R7-97(2012), Eqs. 2 and 3), and the neighbourhood
+/// where the formulation's cp, κT and αv grow without bound, so that a
+/// single-phase state may lack them (the lead's absent-property rule).
+/// Outside it every single-phase state has them all.
+pub fn near_critical(p: f64, t: f64) -> bool {
+    (t - 647.096).abs() <= 5.0 && (p - 22.064).abs() <= 2.0
+}
+
+/// How much negative entropy generation rounding explains, relative to
+/// the entropies booked (flow × specific entropy summed in magnitude).
+pub const ENTROPY_ROUNDING: f64 = 1e-9;
+
+/// Where IF97 itself allows two answers (R7-97(2012), section 5: the
+/// permissible inconsistency between neighbouring equations, Δh and Δs at
+/// the boundaries; DEVELOPERS.md "Recorded pitfalls"): near 623.15 K, B23
+/// and 1073.15 K a pair can have a valid solution in each region. Two
+/// solutions of the same inputs are twins when they come from
+/// neighbouring regions (or the two sides of 623.15 K on the saturation
+/// line) and their temperatures agree within 0.1 K.
+pub const SEAM_TWIN_KELVIN: f64 = 0.1;
+
+/// Across a region boundary the two equations' entropies differ by up to
+/// IF97's permissible inconsistency, 0.2 J/(kg·K) (recalled from IAPWS
+/// R7-97(2012), section 5): a throttle from one region into the other at
+/// nearly the same pressure may show that much "destroyed", kJ/(kg·K).
+pub const SEAM_ENTROPY: f64 = 2e-4;

@@ -1,0 +1,9 @@
+//! Inputs for the random-input campaign: a seeded or fuzzer-driven
+//! [`draw::Draw`], adversarial single values, in-range states to start
+//! from.
+
+pub mod cases;
+pub mod draw;
+pub mod plant;
+pub mod states;
+pub mod values;
