@@ -28,7 +28,9 @@ impl State {
     /// unit; temperatures as differences). Wet steam gives the
     /// homogeneous-mixture derivative. A derivative that does not exist —
     /// y the same as x, or one that two-phase equilibrium forbids, such as
-    /// (∂h/∂p) at constant T in wet steam — is an error.
+    /// (∂h/∂p) at constant T in wet steam — is an error, and so is one
+    /// built on a response property the state lacks (cp, αv, κT at and
+    /// next to the critical point: see [`State::isobaric_heat_capacity`]).
     pub fn derivative(&self, z: Variable, x: Variable, y: Variable) -> Result<f64, Error> {
         let native = if self.phase() == Phase::WetSteam {
             let sat = Saturation::at_temperature(self.native().t, Units::Native)?;
@@ -36,7 +38,10 @@ impl State {
             let partials = |var: Variable| wet_partials(var, &sat, quality);
             jacobian_ratio(partials(z), partials(x), partials(y))
         } else {
-            let partials = |var: Variable| var.pt_partials(self.native());
+            // NaN for an absent response property, so a derivative built on
+            // one is undefined (jacobian_ratio refuses NaN).
+            let physical = self.physical();
+            let partials = |var: Variable| var.pt_partials(&physical);
             jacobian_ratio(partials(z), partials(x), partials(y))
         }
         .ok_or(Error::Undefined {
@@ -129,7 +134,7 @@ impl Saturation {
 
 /// ((∂z/∂T)_x, (∂z/∂x)_T) of a wet-steam variable at quality `x`.
 fn wet_partials(z: Variable, sat: &Saturation, x: f64) -> (f64, f64) {
-    let (l, g) = (sat.liquid().native(), sat.vapour().native());
+    let (l, g) = (&sat.liquid().physical(), &sat.vapour().physical());
     let dp_dt = saturation_pressure_slope(l.t);
     match z {
         Variable::Pressure => (dp_dt, 0.0),
