@@ -34,6 +34,11 @@ impl State {
     pub fn derivative(&self, z: Variable, x: Variable, y: Variable) -> Result<f64, Error> {
         let native = if self.phase() == Phase::WetSteam {
             let sat = Saturation::at_temperature(self.native().t, Units::Native)?;
+            if !resolves_the_line(&sat) {
+                return Err(Error::Undefined {
+                    what: "derivative of wet steam within 1.3e-5 K of the critical point",
+                });
+            }
             let quality = self.quality().unwrap_or(0.0);
             let partials = |var: Variable| wet_partials(var, &sat, quality);
             jacobian_ratio(partials(z), partials(x), partials(y))
@@ -113,23 +118,40 @@ impl Saturation {
     }
 
     /// dz'/dT: how the saturated liquid's `z` changes along the line, per
-    /// temperature difference.
-    pub fn liquid_slope(&self, z: Variable) -> f64 {
+    /// temperature difference. `None` within about 1.3e-5 K of the critical
+    /// point, where the equations do not resolve the line (see
+    /// [`Saturation::vapour_slope`]).
+    pub fn liquid_slope(&self, z: Variable) -> Option<f64> {
         self.slope(z, self.liquid())
     }
 
     /// dz''/dT: how the saturated vapour's `z` changes along the line, per
-    /// temperature difference.
-    pub fn vapour_slope(&self, z: Variable) -> f64 {
+    /// temperature difference. `None` within about 1.3e-5 K of the critical
+    /// point: there the region 3 equation has no vapour root at the region
+    /// 4 psat (its turning point stands in) and the slopes measure the two
+    /// equations' inconsistency (dρ''/dT came out negative), not the fluid.
+    pub fn vapour_slope(&self, z: Variable) -> Option<f64> {
         self.slope(z, self.vapour())
     }
 
-    fn slope(&self, z: Variable, phase: &State) -> f64 {
+    fn slope(&self, z: Variable, phase: &State) -> Option<f64> {
         let units = phase.units();
-        let dp_dt = saturation_pressure_slope(phase.native().t);
-        z.along_saturation(phase.native(), dp_dt) * scale(units, z.quantity())
-            / scale(units, Quantity::TemperatureDifference)
+        let props = phase.physical();
+        let dp_dt = saturation_pressure_slope(props.t);
+        let native = z.along_saturation(&props, dp_dt);
+        (resolves_the_line(self) && native.is_finite()).then(|| {
+            native * scale(units, z.quantity()) / scale(units, Quantity::TemperatureDifference)
+        })
     }
+}
+
+/// Whether a saturation point's phases resolve the line: its vapour
+/// densifies along it, dρ''/dT > 0, as it does all the way to Tc (common
+/// practice). Within about 1.3e-5 K below Tc (measured) it does not.
+fn resolves_the_line(sat: &Saturation) -> bool {
+    let vapour = sat.vapour().physical();
+    let dp_dt = saturation_pressure_slope(vapour.t);
+    Variable::Density.along_saturation(&vapour, dp_dt) > 0.0
 }
 
 /// ((∂z/∂T)_x, (∂z/∂x)_T) of a wet-steam variable at quality `x`.

@@ -156,8 +156,8 @@ fn exercise_everything() -> f64 {
                 .unwrap_or(0.0);
             if let Ok(sat) = Saturation::at_pressure(w.pressure(), units) {
                 sum += sat.pressure_slope()
-                    + sat.liquid_slope(Variable::Enthalpy)
-                    + sat.vapour_slope(Variable::Entropy);
+                    + sat.liquid_slope(Variable::Enthalpy).unwrap_or(0.0)
+                    + sat.vapour_slope(Variable::Entropy).unwrap_or(0.0);
                 sum += sat.surface_tension() + w.viscosity().unwrap_or(0.0);
             }
         }

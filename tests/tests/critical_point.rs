@@ -3,7 +3,7 @@
 //! those a random-input campaign found returning cp, αv, κT = +inf or a
 //! negative cp and κT as Ok (issue 12, defects 4 and 5).
 
-use ebullio::{Error, InputPair, Method, Property, State, Units, Variable};
+use ebullio::{Error, InputPair, Method, Property, Saturation, State, Units, Variable};
 
 /// The states of the issue, each exact as found.
 fn near_critical_states() -> [State; 5] {
@@ -203,4 +203,39 @@ fn the_unstable_cap_is_confined_to_the_critical_point() {
             }
         }
     }
+}
+
+/// Within about 1.3e-5 K below Tc the region 3 equation has no vapour root
+/// at the region 4 psat (its turning point stands for it) and the two
+/// equations do not resolve the saturation line: the saturated vapour's
+/// density slope along the line came out negative there and wet steam's
+/// (∂ρ/∂p)_h negative. Along the line up to Tc the saturated vapour
+/// densifies and a homogeneous mixture compresses under pressure (common
+/// practice): a value given keeps those signs, or it is absent. A tenth
+/// of a kelvin off, both are there.
+#[test]
+fn wet_steam_just_below_the_critical_point_gives_signed_derivatives_or_none() {
+    for k in 0..=400 {
+        let t = 647.096 - 1e-3 * (f64::from(k) / 400.0).powi(3);
+        let sat = Saturation::at_temperature(t, Units::Native).unwrap();
+        if let Some(d) = sat.vapour_slope(Variable::Density) {
+            assert!(d > 0.0, "dρ''/dT = {d} at {t} K");
+        }
+        // The liquid's slope is given exactly where the vapour's is.
+        assert_eq!(
+            sat.liquid_slope(Variable::Density).is_some(),
+            sat.vapour_slope(Variable::Density).is_some()
+        );
+        let wet = sat.mixture(0.5).unwrap();
+        match wet.derivative(Variable::Density, Variable::Pressure, Variable::Enthalpy) {
+            Ok(d) => assert!(d > 0.0, "(∂ρ/∂p)_h = {d} at {t} K"),
+            Err(e) => assert!(matches!(e, Error::Undefined { .. }), "{e:?}"),
+        }
+    }
+    let sat = Saturation::at_temperature(647.0, Units::Native).unwrap();
+    assert!(sat.vapour_slope(Variable::Density).unwrap() > 0.0);
+    let wet = sat.mixture(0.5).unwrap();
+    assert!(wet
+        .derivative(Variable::Density, Variable::Pressure, Variable::Enthalpy)
+        .is_ok());
 }
