@@ -43,3 +43,6 @@ def test_cp_at_the_critical_point_is_absent():
     states = ebullio.State.from_rho_t([322.0, 500.0], [647.096, 700.0], units="native")
     assert np.isnan(states.cp[0]) and states.cp[1] > 0.0
     assert list(states.status) == [Status.OK, Status.OK]
+    # The thermal conductivity diverges there (IAPWS R15-11): None, not NaN.
+    near = ebullio.State.from_vt(0.0031056074035673677, 373.94599999992187, units="metric")
+    assert near.thermal_conductivity is None and near.prandtl_number is None

@@ -239,3 +239,37 @@ fn wet_steam_just_below_the_critical_point_gives_signed_derivatives_or_none() {
         .derivative(Variable::Density, Variable::Pressure, Variable::Enthalpy)
         .is_ok());
 }
+
+/// Off the critical point the rule hides nothing: across the whole (p, T)
+/// range and along the saturation line every response property is present
+/// and satisfies the stability conditions (IF97 describes stable states
+/// there; R7-97(2012), section 4, range of validity).
+#[test]
+fn everywhere_else_every_response_property_is_present_and_physical() {
+    let present = |state: &State| {
+        assert!(assert_physical_or_absent(state), "{state:?}");
+        for value in [
+            state.isochoric_heat_capacity(),
+            state.speed_of_sound(),
+            state.expansion_coefficient(),
+            state.compressibility(),
+        ] {
+            assert!(value.is_some(), "{state:?}");
+        }
+    };
+    for i in 0..=120 {
+        let t = 273.15 + (2273.15 - 273.15) * f64::from(i) / 120.0;
+        for j in 0..=120 {
+            let p = 1e-6 * (100.0f64 / 1e-6).powf(f64::from(j) / 120.0);
+            if let Ok(state) = State::from_pt(p, t, Units::Native) {
+                present(&state);
+            }
+        }
+    }
+    for i in 0..=400 {
+        let t = 273.15 + (647.0 - 273.15) * f64::from(i) / 400.0;
+        let sat = Saturation::at_temperature(t, Units::Native).unwrap();
+        present(sat.liquid());
+        present(sat.vapour());
+    }
+}
