@@ -20,8 +20,9 @@ impl State {
     /// side and [`State::is_near_saturation`] is true. It is 100 times the
     /// largest Tsat(psat(T)) round-trip error measured (7.3e-14, near the
     /// critical point; unit conversions add a few 1e-16), and 1e-11·T is at
-    /// most 6.5 nK on the line — far below any measurement, and a
-    /// pressure within about 8e-11 (relative) of psat(T).
+    /// most 6.5 nK on the line, far below any measurement. In pressure it
+    /// is a band of d ln psat/d ln T times as much, 7.9e-11 (relative) at
+    /// Tc to 2e-10 at 273.16 K: any p within 1e-11 of psat(T) is inside.
     pub const SATURATION_TOLERANCE: f64 = SATURATION_TOLERANCE;
 
     /// Tsat(p) at the state's native pressure, where the saturation line
