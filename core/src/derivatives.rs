@@ -28,15 +28,25 @@ impl State {
     /// unit; temperatures as differences). Wet steam gives the
     /// homogeneous-mixture derivative. A derivative that does not exist —
     /// y the same as x, or one that two-phase equilibrium forbids, such as
-    /// (∂h/∂p) at constant T in wet steam — is an error.
+    /// (∂h/∂p) at constant T in wet steam — is an error, and so is one
+    /// built on a response property the state lacks (cp, αv, κT at and
+    /// next to the critical point: see [`State::isobaric_heat_capacity`]).
     pub fn derivative(&self, z: Variable, x: Variable, y: Variable) -> Result<f64, Error> {
         let native = if self.phase() == Phase::WetSteam {
             let sat = Saturation::at_temperature(self.native().t, Units::Native)?;
+            if !resolves_the_line(&sat) {
+                return Err(Error::Undefined {
+                    what: "derivative of wet steam within 1.3e-5 K of the critical point",
+                });
+            }
             let quality = self.quality().unwrap_or(0.0);
             let partials = |var: Variable| wet_partials(var, &sat, quality);
             jacobian_ratio(partials(z), partials(x), partials(y))
         } else {
-            let partials = |var: Variable| var.pt_partials(self.native());
+            // NaN for an absent response property, so a derivative built on
+            // one is undefined (jacobian_ratio refuses NaN).
+            let physical = self.physical();
+            let partials = |var: Variable| var.pt_partials(&physical);
             jacobian_ratio(partials(z), partials(x), partials(y))
         }
         .ok_or(Error::Undefined {
@@ -108,28 +118,45 @@ impl Saturation {
     }
 
     /// dz'/dT: how the saturated liquid's `z` changes along the line, per
-    /// temperature difference.
-    pub fn liquid_slope(&self, z: Variable) -> f64 {
+    /// temperature difference. `None` within about 1.3e-5 K of the critical
+    /// point, where the equations do not resolve the line (see
+    /// [`Saturation::vapour_slope`]).
+    pub fn liquid_slope(&self, z: Variable) -> Option<f64> {
         self.slope(z, self.liquid())
     }
 
     /// dz''/dT: how the saturated vapour's `z` changes along the line, per
-    /// temperature difference.
-    pub fn vapour_slope(&self, z: Variable) -> f64 {
+    /// temperature difference. `None` within about 1.3e-5 K of the critical
+    /// point: there the region 3 equation has no vapour root at the region
+    /// 4 psat (its turning point stands in) and the slopes measure the two
+    /// equations' inconsistency (dρ''/dT came out negative), not the fluid.
+    pub fn vapour_slope(&self, z: Variable) -> Option<f64> {
         self.slope(z, self.vapour())
     }
 
-    fn slope(&self, z: Variable, phase: &State) -> f64 {
+    fn slope(&self, z: Variable, phase: &State) -> Option<f64> {
         let units = phase.units();
-        let dp_dt = saturation_pressure_slope(phase.native().t);
-        z.along_saturation(phase.native(), dp_dt) * scale(units, z.quantity())
-            / scale(units, Quantity::TemperatureDifference)
+        let props = phase.physical();
+        let dp_dt = saturation_pressure_slope(props.t);
+        let native = z.along_saturation(&props, dp_dt);
+        (resolves_the_line(self) && native.is_finite()).then(|| {
+            native * scale(units, z.quantity()) / scale(units, Quantity::TemperatureDifference)
+        })
     }
+}
+
+/// Whether a saturation point's phases resolve the line: its vapour
+/// densifies along it, dρ''/dT > 0, as it does all the way to Tc (common
+/// practice). Within about 1.3e-5 K below Tc (measured) it does not.
+fn resolves_the_line(sat: &Saturation) -> bool {
+    let vapour = sat.vapour().physical();
+    let dp_dt = saturation_pressure_slope(vapour.t);
+    Variable::Density.along_saturation(&vapour, dp_dt) > 0.0
 }
 
 /// ((∂z/∂T)_x, (∂z/∂x)_T) of a wet-steam variable at quality `x`.
 fn wet_partials(z: Variable, sat: &Saturation, x: f64) -> (f64, f64) {
-    let (l, g) = (sat.liquid().native(), sat.vapour().native());
+    let (l, g) = (&sat.liquid().physical(), &sat.vapour().physical());
     let dp_dt = saturation_pressure_slope(l.t);
     match z {
         Variable::Pressure => (dp_dt, 0.0),

@@ -134,7 +134,7 @@ pub(crate) fn native_input(units: Units, quantity: Quantity, value: f64) -> Resu
 /// A range bound printed to seven significant digits without trailing
 /// zeros: limits converted to the caller's units (14503.77 psia) read as
 /// numbers a person would write, not as 14503.773773020925.
-struct Significant(f64);
+pub(crate) struct Significant(pub(crate) f64);
 
 impl fmt::Display for Significant {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {

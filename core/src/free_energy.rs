@@ -88,6 +88,41 @@ pub struct Properties {
     pub kappa_t: f64,
 }
 
+impl Properties {
+    /// The same properties with each response property (cp, cv, w, αv, κT)
+    /// NaN where the formulation does not give it finite and physical:
+    /// what every reader of a state sees (as `None`, `Error::Undefined` or
+    /// NaN), decided here once.
+    ///
+    /// A state that violates the stability conditions κT > 0 and
+    /// cp ≥ cv > 0 has none of them: the region 3 equation does so only in
+    /// a cap at its own critical point, about 1e-9 K above IF97's Tc (ρ
+    /// within 0.002 kg/m³ of ρc, Tc ≤ T ≤ Tc + 1.1e-9 K, measured), where
+    /// p(ρ) has a tiny van der Waals loop. A stable state keeps each one
+    /// that is finite (and positive, but αv): at the critical point itself
+    /// cp, αv and κT are infinite and absent, cv and w finite and kept.
+    /// Wet steam's fields are NaN already.
+    pub(crate) fn physical(&self) -> Properties {
+        // Written to be false for NaN.
+        let stable = self.kappa_t > 0.0 && self.cv > 0.0 && self.cp >= self.cv;
+        let keep = |value: f64, sign_ok: bool| {
+            if stable && sign_ok && value.is_finite() {
+                value
+            } else {
+                f64::NAN
+            }
+        };
+        Properties {
+            cp: keep(self.cp, self.cp > 0.0),
+            cv: keep(self.cv, self.cv > 0.0),
+            w: keep(self.w, self.w > 0.0),
+            alpha_v: keep(self.alpha_v, true),
+            kappa_t: keep(self.kappa_t, self.kappa_t > 0.0),
+            ..*self
+        }
+    }
+}
+
 impl ReducedGibbs {
     /// The properties at pressure `p` (MPa) and temperature `t` (K).
     #[inline]

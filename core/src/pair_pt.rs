@@ -14,10 +14,12 @@ impl State {
     ///
     /// Valid for 273.15 K ≤ T ≤ 1073.15 K at 0 < p ≤ 100 MPa and for
     /// 1073.15 K < T ≤ 2273.15 K at 0 < p ≤ 50 MPa. Pressure and
-    /// temperature do not fix a two-phase state: a (p, T) exactly on the
-    /// saturation line gives the saturated liquid's single-phase limit as
-    /// compressed liquid; use [`crate::Saturation`] or [`State::from_px`]
-    /// for the saturation line itself.
+    /// temperature do not fix a two-phase state: a (p, T) on the
+    /// saturation line (T within [`State::SATURATION_TOLERANCE`] of
+    /// Tsat(p), in any units) gives the saturated liquid's single-phase
+    /// limit as compressed liquid, and [`State::is_near_saturation`] says
+    /// so; use [`crate::Saturation`] or [`State::from_px`] for the
+    /// saturation line itself.
     pub fn from_pt(p: f64, t: f64, units: Units) -> Result<State, Error> {
         State::from_pt_with(p, t, units, Method::Exact)
     }

@@ -18,8 +18,22 @@ pub(crate) enum Located {
     Region5,
 }
 
+/// The relative distance in T within which a (p, T) counts as on the
+/// saturation line; documented and justified at
+/// [`crate::State::SATURATION_TOLERANCE`].
+pub(crate) const SATURATION_TOLERANCE: f64 = 1e-11;
+
+/// Whether native (`p`, `t`), below Tc, is on the liquid side: above the
+/// saturation line or on it, within [`SATURATION_TOLERANCE`]. T ≤
+/// Tsat(p)·(1 + tol) written as p ≥ psat(T/(1 + tol)): one psat, and
+/// valid at any p.
+fn liquid_side(p: f64, t: f64) -> bool {
+    p >= saturation_pressure(t / (1.0 + SATURATION_TOLERANCE))
+}
+
 /// Locates native `p` (MPa) and `t` (K); out-of-range errors are reported
-/// in `units`. A state exactly on the saturation line is taken as liquid.
+/// in `units`. A state on the saturation line (within
+/// [`SATURATION_TOLERANCE`]) is taken as liquid.
 pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
     if !(MIN_TEMPERATURE..=MAX_TEMPERATURE).contains(&t) {
         return Err(Error::out_of_range(
@@ -45,7 +59,7 @@ pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
         ));
     }
     Ok(if t <= REGION13_TEMPERATURE {
-        if p >= saturation_pressure(t) {
+        if liquid_side(p, t) {
             Located::Region1
         } else {
             Located::Region2
@@ -55,7 +69,7 @@ pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
             Located::Region2
         } else if t >= CRITICAL_TEMPERATURE {
             Located::Region3(Branch::Supercritical)
-        } else if p >= saturation_pressure(t) {
+        } else if liquid_side(p, t) {
             Located::Region3(Branch::Liquid)
         } else {
             Located::Region3(Branch::Vapour)

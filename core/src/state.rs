@@ -73,7 +73,9 @@ impl core::fmt::Display for Phase {
 /// A state of water or steam. Properties that do not exist for the state
 /// (the heat capacities, speed of sound, expansion coefficient and
 /// compressibility of wet steam; the quality of a single-phase state) read
-/// as `None`.
+/// as `None`, and so do those the formulation cannot give finite and
+/// physical: at and next to the critical point (see
+/// [`State::isobaric_heat_capacity`]).
 #[derive(Clone, Copy, Debug)]
 pub struct State {
     props: Properties,
@@ -168,8 +170,19 @@ impl State {
 
     /// The native-unit properties (MPa, K, kJ/kg, …), for the layers built
     /// on the core. For wet steam the single-phase-only fields are NaN.
+    /// These are the equations' raw values: next to the critical point cp,
+    /// αv and κT may be infinite or negative here, where the getters say
+    /// `None`.
     pub fn native(&self) -> &Properties {
         &self.props
+    }
+
+    /// The native properties with the response properties the formulation
+    /// does not give finite and physical set to NaN
+    /// ([`Properties::physical`]): what the getters, derivatives and
+    /// transport read.
+    pub(crate) fn physical(&self) -> Properties {
+        self.props.physical()
     }
 
     #[inline]
@@ -177,9 +190,11 @@ impl State {
         self.units.from_native(quantity, value)
     }
 
+    /// A response property of [`State::physical`]: NaN there (wet steam,
+    /// or not finite and physical) reads as `None`.
     #[inline]
-    fn read_single_phase(&self, quantity: Quantity, value: f64) -> Option<f64> {
-        (self.phase != Phase::WetSteam).then(|| self.read(quantity, value))
+    fn read_response(&self, quantity: Quantity, value: f64) -> Option<f64> {
+        (!value.is_nan()).then(|| self.read(quantity, value))
     }
 
     /// Pressure.
@@ -237,28 +252,41 @@ impl State {
     }
 
     /// Specific isobaric heat capacity cp; `None` for wet steam.
+    ///
+    /// This and the other response properties (cv, w, αv, κT) are also
+    /// `None` where the formulation cannot give them finite and physical:
+    /// at the critical point itself cp, αv and κT are infinite, and within
+    /// about 1e-9 K and 0.002 kg/m³ of it the region 3 equation violates
+    /// the stability conditions (κT > 0, cp ≥ cv > 0), where all five are
+    /// `None`. Close to the critical point they are present, large and
+    /// physical.
     pub fn isobaric_heat_capacity(&self) -> Option<f64> {
-        self.read_single_phase(Quantity::SpecificEntropy, self.props.cp)
+        self.read_response(Quantity::SpecificEntropy, self.physical().cp)
     }
 
-    /// Specific isochoric heat capacity cv; `None` for wet steam.
+    /// Specific isochoric heat capacity cv; `None` for wet steam and where
+    /// the state is not stable (see [`State::isobaric_heat_capacity`]).
     pub fn isochoric_heat_capacity(&self) -> Option<f64> {
-        self.read_single_phase(Quantity::SpecificEntropy, self.props.cv)
+        self.read_response(Quantity::SpecificEntropy, self.physical().cv)
     }
 
-    /// Speed of sound; `None` for wet steam.
+    /// Speed of sound; `None` for wet steam and where the state is not
+    /// stable (see [`State::isobaric_heat_capacity`]).
     pub fn speed_of_sound(&self) -> Option<f64> {
-        self.read_single_phase(Quantity::Speed, self.props.w)
+        self.read_response(Quantity::Speed, self.physical().w)
     }
 
     /// Isobaric cubic expansion coefficient αv = (∂v/∂T)_p / v; `None` for
-    /// wet steam.
+    /// wet steam and at and next to the critical point (see
+    /// [`State::isobaric_heat_capacity`]).
     pub fn expansion_coefficient(&self) -> Option<f64> {
-        self.read_single_phase(Quantity::ExpansionCoefficient, self.props.alpha_v)
+        self.read_response(Quantity::ExpansionCoefficient, self.physical().alpha_v)
     }
 
-    /// Isothermal compressibility κT = −(∂v/∂p)_T / v; `None` for wet steam.
+    /// Isothermal compressibility κT = −(∂v/∂p)_T / v; `None` for wet steam
+    /// and at and next to the critical point (see
+    /// [`State::isobaric_heat_capacity`]).
     pub fn compressibility(&self) -> Option<f64> {
-        self.read_single_phase(Quantity::Compressibility, self.props.kappa_t)
+        self.read_response(Quantity::Compressibility, self.physical().kappa_t)
     }
 }

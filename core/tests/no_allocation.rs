@@ -33,6 +33,16 @@ unsafe impl GlobalAlloc for Counting {
 #[global_allocator]
 static GLOBAL: Counting = Counting;
 
+/// Counts the bytes a `Display` writes, storing none.
+struct ByteCount(usize);
+
+impl std::fmt::Write for ByteCount {
+    fn write_str(&mut self, s: &str) -> std::fmt::Result {
+        self.0 += s.len();
+        Ok(())
+    }
+}
+
 /// Everything a state can be asked, summed so nothing is optimised away.
 fn read_all(s: Result<State, ebullio::Error>) -> f64 {
     match s {
@@ -45,6 +55,10 @@ fn read_all(s: Result<State, ebullio::Error>) -> f64 {
             sum += s.speed_of_sound().unwrap_or(0.0) + s.quality().unwrap_or(0.0);
             sum += s.expansion_coefficient().unwrap_or(0.0) + s.compressibility().unwrap_or(0.0);
             sum += f64::from(s.region().number()) + f64::from(s.phase() as u32);
+            sum += s.superheat().unwrap_or(0.0) + f64::from(u8::from(s.is_near_saturation()));
+            let mut printed = ByteCount(0);
+            let _ = std::fmt::Write::write_fmt(&mut printed, format_args!("{s}"));
+            sum += printed.0 as f64;
             sum + s.in_units(Units::UsCustomary).enthalpy()
         }
         // Formatting an error would allocate in the caller's String, not in
@@ -142,8 +156,8 @@ fn exercise_everything() -> f64 {
                 .unwrap_or(0.0);
             if let Ok(sat) = Saturation::at_pressure(w.pressure(), units) {
                 sum += sat.pressure_slope()
-                    + sat.liquid_slope(Variable::Enthalpy)
-                    + sat.vapour_slope(Variable::Entropy);
+                    + sat.liquid_slope(Variable::Enthalpy).unwrap_or(0.0)
+                    + sat.vapour_slope(Variable::Entropy).unwrap_or(0.0);
                 sum += sat.surface_tension() + w.viscosity().unwrap_or(0.0);
             }
         }

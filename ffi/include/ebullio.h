@@ -366,6 +366,11 @@ enum EbullioProperty
   EBULLIO_PROPERTY_RELATIVE_PRESSURE_COEFFICIENT = 25,
   // Isothermal stress coefficient -(1/p)(dp/dv)_T.
   EBULLIO_PROPERTY_ISOTHERMAL_STRESS_COEFFICIENT = 26,
+  // 1 where the state lies on the saturation line as far as (p, T) can
+  // tell (T within relative 1e-11 of Tsat(p), taken as the liquid side;
+  // wet steam and saturated phases too), so p and T did not fix its
+  // phase; 0 elsewhere. A per-element flag in the array calls.
+  EBULLIO_PROPERTY_NEAR_SATURATION = 27,
 };
 #ifndef __cplusplus
 #if __STDC_VERSION__ >= 202311L

@@ -117,6 +117,11 @@ pub enum EbullioProperty {
     RelativePressureCoefficient = 25,
     /// Isothermal stress coefficient -(1/p)(dp/dv)_T.
     IsothermalStressCoefficient = 26,
+    /// 1 where the state lies on the saturation line as far as (p, T) can
+    /// tell (T within relative 1e-11 of Tsat(p), taken as the liquid side;
+    /// wet steam and saturated phases too), so p and T did not fix its
+    /// phase; 0 elsewhere. A per-element flag in the array calls.
+    NearSaturation = 27,
 }
 
 /// A thermodynamic variable of a partial derivative (dz/dx)_y
@@ -373,7 +378,7 @@ mod tests {
             assert_eq!(property(*c as u32), Ok(Reading::Thermodynamic(core)));
         }
         assert_eq!(property(0), Err(EbullioStatus::UnknownProperty));
-        assert_eq!(property(27), Err(EbullioStatus::UnknownProperty));
+        assert_eq!(property(28), Err(EbullioStatus::UnknownProperty));
     }
 
     #[test]
@@ -400,6 +405,7 @@ mod tests {
                 C::IsothermalStressCoefficient,
                 Reading::IsothermalStressCoefficient,
             ),
+            (C::NearSaturation, Reading::NearSaturation),
         ];
         for (k, (c, reading)) in c.iter().enumerate() {
             // Numbered on from the core's last property, without gaps.

@@ -1,7 +1,8 @@
 //! What the property calls read off a solved state, by `EbullioProperty`
 //! number: the core's thermodynamic `Property` (1–15), the transport
-//! properties (16–21) and the named coefficients (22–26). Each is one core
-//! call on the state; nothing is computed here.
+//! properties (16–21), the named coefficients (22–26) and the
+//! near-saturation flag (27). Each is one core call on the state; nothing
+//! is computed here.
 
 use ebullio::{Property, State};
 
@@ -34,10 +35,12 @@ pub(crate) enum Reading {
     RelativePressureCoefficient,
     /// `State::isothermal_stress_coefficient`.
     IsothermalStressCoefficient,
+    /// `State::is_near_saturation`, as 1 or 0.
+    NearSaturation,
 }
 
 /// The numbers past the core's `Property`, as `EbullioProperty` gives them.
-const BEYOND_CORE: [(u32, Reading); 11] = [
+const BEYOND_CORE: [(u32, Reading); 12] = [
     (16, Reading::Viscosity),
     (17, Reading::ThermalConductivity),
     (18, Reading::KinematicViscosity),
@@ -49,6 +52,7 @@ const BEYOND_CORE: [(u32, Reading); 11] = [
     (24, Reading::IsothermalThrottlingCoefficient),
     (25, Reading::RelativePressureCoefficient),
     (26, Reading::IsothermalStressCoefficient),
+    (27, Reading::NearSaturation),
 ];
 
 impl Reading {
@@ -87,6 +91,7 @@ impl Reading {
             Reading::IsothermalThrottlingCoefficient => state.isothermal_throttling_coefficient(),
             Reading::RelativePressureCoefficient => state.relative_pressure_coefficient(),
             Reading::IsothermalStressCoefficient => state.isothermal_stress_coefficient(),
+            Reading::NearSaturation => Ok(f64::from(u8::from(state.is_near_saturation()))),
         };
         value.map_err(|e| EbullioStatus::from(&e))
     }

@@ -508,6 +508,40 @@ pub(crate) fn derivative_many<'py>(
     ))
 }
 
+/// Whether each state from pair number `pair` at (`a[i]`, `b[i]`) lies on
+/// the saturation line as far as (p, T) can tell (`State::is_near_saturation`),
+/// as 1.0 or 0.0, and a status per element (a failed state is NaN).
+#[pyfunction]
+#[pyo3(signature = (pair, a, b, units, method=None, threads=None))]
+pub(crate) fn near_saturation_many<'py>(
+    py: Python<'py>,
+    pair: u32,
+    a: PyReadonlyArray1<'py, f64>,
+    b: PyReadonlyArray1<'py, f64>,
+    units: &Bound<'py, PyAny>,
+    method: Option<&Bound<'py, PyAny>>,
+    threads: Option<usize>,
+) -> PyResult<Values<'py>> {
+    let pair = names::pair(pair)?;
+    let units = names::unit_system(units)?;
+    let method = names::method(method)?;
+    let threads = self::threads(threads)?;
+    let (a, b) = (a.as_array(), b.as_array());
+    same_length(a.len(), b.len())?;
+    let (values, status) = py
+        .detach(|| {
+            fill_values::<1>(a.len(), threads, |i| {
+                let s = State::solve(pair, a[i], b[i], units, method)?;
+                Ok([f64::from(u8::from(s.is_near_saturation()))])
+            })
+        })
+        .map_err(pool_error)?;
+    Ok((
+        PyArray1::from_vec(py, values),
+        PyArray1::from_vec(py, status),
+    ))
+}
+
 /// The surface tension of saturation points (`by` 1: pressure, 2:
 /// temperature) at `values[i]`, read in `read`.
 #[pyfunction]

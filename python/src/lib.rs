@@ -36,6 +36,7 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(arrays::saturation_many, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::transport_many, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::derivative_many, m)?)?;
+    m.add_function(wrap_pyfunction!(arrays::near_saturation_many, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::surface_tension_many, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::raise_element, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::raise_saturation_element, m)?)?;

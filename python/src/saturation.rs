@@ -198,13 +198,14 @@ impl PySaturation {
 
     /// dz'/dT: how the saturated liquid's ``z`` (one of ``"p" "t" "v" "rho"
     /// "u" "h" "s" "g" "f"``) changes along the line, per temperature
-    /// difference, in these units.
-    fn liquid_slope(&self, z: &str) -> PyResult<f64> {
+    /// difference, in these units; ``None`` within about 1.3e-5 K of the
+    /// critical point, where the equations do not resolve the line.
+    fn liquid_slope(&self, z: &str) -> PyResult<Option<f64>> {
         Ok(self.inner.liquid_slope(names::variable(z)?))
     }
 
     /// dz''/dT: as ``liquid_slope``, for the saturated vapour.
-    fn vapour_slope(&self, z: &str) -> PyResult<f64> {
+    fn vapour_slope(&self, z: &str) -> PyResult<Option<f64>> {
         Ok(self.inner.vapour_slope(names::variable(z)?))
     }
 

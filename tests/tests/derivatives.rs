@@ -291,13 +291,13 @@ fn saturation_slopes_match_central_differences() {
                 / (2.0 * dt);
             close(
                 &format!("d{z:?}'/dT at {t} K"),
-                sat.liquid_slope(z),
+                sat.liquid_slope(z).unwrap(),
                 fd_l,
                 1e-5,
             );
             close(
                 &format!("d{z:?}''/dT at {t} K"),
-                sat.vapour_slope(z),
+                sat.vapour_slope(z).unwrap(),
                 fd_v,
                 1e-5,
             );

@@ -336,6 +336,45 @@ static void check_relative(const char *what, double a, double b, double rel) {
 #define TRANSPORT_CELL(prop, pair, a_, b_, units)                          \
     ebullio_property((prop), (pair), (a_), (b_), (units), EBULLIO_METHOD_EXACT, &st)
 
+/* (p, T) on the saturation line, read off the saturation call in US units
+   and given back: the liquid side, flagged per element by property 27; ten
+   kelvin (18 degF) of superheat is not flagged. At the critical point cp
+   and the thermal conductivity are absent (205), not inf or NaN. */
+static void near_saturation_and_critical_point(void) {
+    EbullioState liquid = fresh_state(), vapour = fresh_state();
+    EbullioStatus st = EBULLIO_STATUS_PANIC, sts[2];
+    double p[2], t[2], flag[2], v;
+    CHECK_STATUS(ebullio_saturation_at_pressure(150.0, EBULLIO_UNITS_US_CUSTOMARY,
+                                                &liquid, &vapour, NULL),
+                 EBULLIO_STATUS_OK);
+    p[0] = p[1] = 150.0;
+    t[0] = liquid.temperature;
+    t[1] = liquid.temperature + 18.0;
+    CHECK_STATUS(ebullio_property_array(EBULLIO_PROPERTY_NEAR_SATURATION,
+                                        EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE, p, t, 2,
+                                        EBULLIO_UNITS_US_CUSTOMARY, EBULLIO_METHOD_EXACT,
+                                        flag, sts),
+                 EBULLIO_STATUS_OK);
+    CHECK(flag[0] == 1.0 && flag[1] == 0.0);
+    v = ebullio_property(EBULLIO_PROPERTY_ENTHALPY, EBULLIO_INPUT_PAIR_PRESSURE_TEMPERATURE,
+                         150.0, liquid.temperature, EBULLIO_UNITS_US_CUSTOMARY,
+                         EBULLIO_METHOD_EXACT, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_OK);
+    check_relative("(p, Tsat) is the liquid side", v, liquid.enthalpy, 1e-9);
+    /* IAPWS R7-97(2012), Eqs. 2 and 4: rho_c = 322 kg/m3, Tc = 647.096 K. */
+    v = ebullio_property(EBULLIO_PROPERTY_ISOBARIC_HEAT_CAPACITY,
+                         EBULLIO_INPUT_PAIR_DENSITY_TEMPERATURE, 322.0, 647.096,
+                         EBULLIO_UNITS_NATIVE, EBULLIO_METHOD_EXACT, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_PROPERTY_UNDEFINED);
+    CHECK(isnan(v));
+    v = ebullio_property(EBULLIO_PROPERTY_THERMAL_CONDUCTIVITY,
+                         EBULLIO_INPUT_PAIR_VOLUME_TEMPERATURE, 0.0031056074035673677,
+                         373.94599999992187, EBULLIO_UNITS_METRIC_ENGINEERING,
+                         EBULLIO_METHOD_EXACT, &st);
+    CHECK_STATUS(st, EBULLIO_STATUS_PROPERTY_UNDEFINED);
+    CHECK(isnan(v));
+}
+
 static void transport(void) {
     /* recalled from IAPWS R12-08, Table 4 (T in K, rho in kg/m3, mu in
        micro-Pa s), the points inside IF97's range, each state from (rho, T). */
@@ -634,7 +673,7 @@ static void error_paths(void) {
     v = ebullio_property(0, 1, 3.0, 300.0, 0, 0, &st);
     CHECK_STATUS(st, EBULLIO_STATUS_UNKNOWN_PROPERTY);
     CHECK(isnan(v));
-    v = ebullio_property(27, 1, 3.0, 300.0, 0, 0, &st);
+    v = ebullio_property(28, 1, 3.0, 300.0, 0, 0, &st);
     CHECK_STATUS(st, EBULLIO_STATUS_UNKNOWN_PROPERTY);
     v = ebullio_property(6, 77, 3.0, 300.0, 0, 0, &st);
     CHECK_STATUS(st, EBULLIO_STATUS_UNKNOWN_INPUT_PAIR);
@@ -829,6 +868,7 @@ int main(void) {
     region3_table33();
     region5_table42();
     saturation_tables35_36();
+    near_saturation_and_critical_point();
     arrays();
     transport();
     derivatives();

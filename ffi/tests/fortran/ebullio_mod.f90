@@ -75,6 +75,7 @@ module ebullio
   integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_ISOTHERMAL_THROTTLING_COEFFICIENT = 24
   integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_RELATIVE_PRESSURE_COEFFICIENT = 25
   integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_ISOTHERMAL_STRESS_COEFFICIENT = 26
+  integer(c_int32_t), parameter, public :: EBULLIO_PROPERTY_NEAR_SATURATION = 27
 
   ! EbullioVariable (of a derivative (dz/dx)_y)
   integer(c_int32_t), parameter, public :: EBULLIO_VARIABLE_PRESSURE = 1

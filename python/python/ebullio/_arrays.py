@@ -193,6 +193,20 @@ class StateArray:
         values, status = _native.derivative_many(pair, a, b, z, x, y, units, method, _threads_of(threads), self.units)
         return DerivativeArray._make(values.reshape(self.shape), status.reshape(self.shape), self.units)
 
+    @property
+    def near_saturation(self) -> np.ndarray:
+        """A bool array: True where the element lies on the saturation line as
+        far as (p, T) can tell (T within ``State``'s relative 1e-11 of
+        Tsat(p), taken as the liquid side; wet steam and saturated phases
+        too), so p and T did not fix its phase; False elsewhere and where the
+        element is bad. Solved again from the inputs (the same bits), as
+        ``transport()``."""
+        from ._dispatch import _threads_of
+
+        pair, a, b, units, method = self._inputs()
+        values, _ = _native.near_saturation_many(pair, a, b, units, method, _threads_of(None))
+        return (values == 1.0).reshape(self.shape)
+
     def as_dict(self) -> dict[str, np.ndarray]:
         """Every property, ``region``, ``phase`` and ``status`` as arrays
         (phase and status as codes; ``to_frame`` gives them by name)."""
