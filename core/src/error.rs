@@ -20,7 +20,8 @@ pub enum Error {
     /// An input lies outside the formulation's range of validity for the
     /// state; `min` and `max` bound it, in the caller's units.
     #[error(
-        "{quantity} {value} {unit} is outside the valid range {} to {} {unit}",
+        "{quantity} {} {unit} is outside the valid range {} to {} {unit}",
+        Given(*value),
         Significant(*min),
         Significant(*max),
         unit = units.symbol(*quantity)
@@ -39,7 +40,7 @@ pub enum Error {
     },
 
     /// A vapour quality outside [0, 1].
-    #[error("quality {value} is outside the valid range 0 to 1")]
+    #[error("quality {} is outside the valid range 0 to 1", Given(*value))]
     QualityOutOfRange {
         /// The quality given.
         value: f64,
@@ -121,13 +122,71 @@ impl Error {
     }
 }
 
+impl Error {
+    /// The error with the caller's own number for a range error on
+    /// `quantity`: what the caller typed, not its round trip through
+    /// native units (which overflows for the largest finite inputs).
+    pub(crate) fn with_given(self, (quantity, given): (Quantity, f64)) -> Error {
+        match self {
+            Error::OutOfRange {
+                quantity: refused,
+                min,
+                max,
+                units,
+                ..
+            } if refused == quantity => Error::OutOfRange {
+                quantity,
+                value: given,
+                min,
+                max,
+                units,
+            },
+            other => other,
+        }
+    }
+}
+
 /// Converts a caller's input to native units, refusing NaN and infinities.
+/// A finite input whose conversion overflows (−f64::MAX Btu/lbm) becomes
+/// the largest finite native value of its sign, which every pair's range
+/// check refuses; the caller's number goes back into the error through
+/// [`Error::with_given`].
 #[inline]
 pub(crate) fn native_input(units: Units, quantity: Quantity, value: f64) -> Result<f64, Error> {
     if value.is_finite() {
-        Ok(units.to_native(quantity, value))
+        Ok(units.to_native(quantity, value).clamp(-f64::MAX, f64::MAX))
     } else {
         Err(Error::NotFinite { quantity })
+    }
+}
+
+/// Solves a pair from the caller's `a` and `b`: both converted to native
+/// units by [`native_input`], and any range error reporting the caller's
+/// own number.
+#[inline]
+pub(crate) fn solve_given<T>(
+    units: Units,
+    a: (Quantity, f64),
+    b: (Quantity, f64),
+    solve: impl FnOnce(f64, f64) -> Result<T, Error>,
+) -> Result<T, Error> {
+    let native_a = native_input(units, a.0, a.1)?;
+    let native_b = native_input(units, b.0, b.1)?;
+    solve(native_a, native_b).map_err(|e| e.with_given(a).with_given(b))
+}
+
+/// The caller's own number as typed, shortest round-trip digits, in
+/// scientific notation where plain digits would run long.
+struct Given(f64);
+
+impl fmt::Display for Given {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        let x = self.0;
+        if x != 0.0 && x.is_finite() && !(1e-5..1e15).contains(&x.abs()) {
+            write!(f, "{x:e}")
+        } else {
+            write!(f, "{x}")
+        }
     }
 }
 
@@ -144,8 +203,9 @@ impl fmt::Display for Significant {
         }
         let exponent = floor(log10(x.abs())) as i32;
         let mut buffer = StackText::default();
-        if exponent < -4 {
-            // Tiny bounds in scientific notation: 1.5e-12, not 0.0000…
+        if !(-4..15).contains(&exponent) {
+            // Tiny and huge bounds in scientific notation: 1.5e-12, not
+            // 0.0000…, and 1.05e12, not a row of digits.
             write!(buffer, "{x:.6e}")?;
             let (mantissa, power) = buffer
                 .as_str()
@@ -201,7 +261,7 @@ impl Write for StackText {
 #[cfg(test)]
 mod tests {
     extern crate std;
-    use super::Significant;
+    use super::{Given, Significant};
     use std::string::ToString;
 
     #[test]
@@ -214,5 +274,15 @@ mod tests {
         assert_eq!(Significant(1e8).to_string(), "100000000");
         assert_eq!(Significant(0.0).to_string(), "0");
         assert_eq!(Significant(-459.67).to_string(), "-459.67");
+        assert_eq!(Significant(1.0494e15).to_string(), "1.0494e15");
+    }
+
+    #[test]
+    fn given_values_print_as_typed_and_short() {
+        assert_eq!(Given(-3.4).to_string(), "-3.4");
+        assert_eq!(Given(17404.5).to_string(), "17404.5");
+        assert_eq!(Given(-f64::MAX).to_string(), "-1.7976931348623157e308");
+        assert_eq!(Given(1e-300).to_string(), "1e-300");
+        assert_eq!(Given(0.0).to_string(), "0");
     }
 }

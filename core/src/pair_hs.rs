@@ -40,12 +40,12 @@
 use crate::backward::{r7_97, sr2_01, sr3_03, sr4_04};
 use crate::boundary_b23;
 use crate::constants::*;
-use crate::error::{native_input, Error};
+use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
 use crate::inverse::{refine, Bounds, Equation, Given};
 use crate::math::{exp, ln};
 use crate::pair_ph_ps::Method;
-use crate::regions::{region3_phase, single_phase};
+use crate::regions::{region3_phase, single_phase, within_range};
 use crate::saturation::{min_saturation_pressure, Saturation};
 use crate::saturation_line::{saturation_pressure, saturation_pressure_slope_and_curvature};
 use crate::state::{Region, State};
@@ -1102,10 +1102,17 @@ fn solve(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
             // Near the edge of the range the backward state may lie on
             // either side of it by the equations' own deviation: the exact
             // state decides whether the point is in range, so that both
-            // methods refuse the same points.
+            // methods refuse the same points; a backward state outside
+            // the range with an exact one inside is the backward
+            // equations' failure.
             let (p, t) = (state.native().p, state.native().t);
             if p >= 0.99 * MAX_PRESSURE || t <= MIN_TEMPERATURE + 0.5 {
                 solve_exact(h, s, indicated, units)?;
+            }
+            if !within_range(p, t) {
+                return Err(Error::BackwardEquationOutOfRange {
+                    equation: "p(h,s), T(p,h)",
+                });
             }
             return Ok(state.in_units(units));
         }
@@ -1154,9 +1161,8 @@ impl State {
     /// outside their range), the exact state is returned, as are the
     /// errors.
     pub fn from_hs_with(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
-        let h = native_input(units, Quantity::Enthalpy, h)?;
-        let s = native_input(units, Quantity::Entropy, s)?;
-        solve(h, s, units, method)
+        let (h, s) = ((Quantity::Enthalpy, h), (Quantity::Entropy, s));
+        solve_given(units, h, s, |h, s| solve(h, s, units, method))
     }
 }
 

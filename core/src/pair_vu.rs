@@ -21,7 +21,7 @@
 //! benchmarks.
 
 use crate::constants::*;
-use crate::error::{native_input, Error};
+use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
 use crate::inverse::{refine, Bounds, Equation, Given};
 use crate::math::ln;
@@ -37,20 +37,24 @@ impl State {
     /// The state at specific volume `v` and specific internal energy `u`,
     /// in `units`, reproducing both to relative 1e-10 or better.
     pub fn from_vu(v: f64, u: f64, units: Units) -> Result<State, Error> {
-        let v = native_input(units, Quantity::SpecificVolume, v)?;
-        let u = native_input(units, Quantity::InternalEnergy, u)?;
-        solve(v, u, units)
+        let (v, u) = ((Quantity::SpecificVolume, v), (Quantity::InternalEnergy, u));
+        solve_given(units, v, u, |v, u| solve(v, u, units))
     }
 }
 
 /// Solves native (v, u); errors reported in `units`.
 pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
-    if v <= 0.0 {
+    // The range's smallest v, at 100 MPa and 273.15 K (water's density
+    // falls with T there), and its largest, at 2273.15 K and the lowest
+    // pressure; the conformance suite checks both are the extremes.
+    let v_min = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE).v;
+    let v_max = Equation::Region5.evaluate(MIN_PRESSURE, MAX_TEMPERATURE).v;
+    if !(v_min..=v_max).contains(&v) {
         return Err(Error::out_of_range(
             Quantity::SpecificVolume,
             v,
-            0.0,
-            f64::INFINITY,
+            v_min,
+            v_max,
             units,
         ));
     }
