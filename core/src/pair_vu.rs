@@ -23,7 +23,7 @@
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{refine, Bounds, Equation, Given};
+use crate::inverse::{refine, within_promise, Bounds, Equation, Given};
 use crate::math::ln;
 use crate::region3_density::Branch;
 use crate::regions::{locate, region3_phase, single_phase, Located};
@@ -368,7 +368,7 @@ fn along_isochore(equation: Equation, v: f64, u: f64, t_range: (f64, f64)) -> Op
     }
     // The bracket has closed to the last bit of T: keep the best state if
     // it meets the promised precision.
-    best.filter(|b| (b.u - u).abs() <= (1e-10 * u.abs()).max(1e-9))
+    best.filter(|b| within_promise(Given::InternalEnergy, b.u, u))
 }
 
 /// Which end of the pressure range an isotherm ran into.
@@ -559,7 +559,7 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     let Some((sat, x, u_mix)) = found else {
         return Ok(None);
     };
-    if (u_mix - u).abs() > (1e-10 * u.abs()).max(1e-9) {
+    if !within_promise(Given::InternalEnergy, u_mix, u) {
         return Ok(None);
     }
     sat.mixture(x).map(Some)
