@@ -22,8 +22,8 @@ pub enum Error {
     #[error(
         "{quantity} {} {unit} is outside the valid range {} to {} {unit}",
         Given(*value),
-        Significant(*min),
-        Significant(*max),
+        Bound { x: *min, refused: *value },
+        Bound { x: *max, refused: *value },
         unit = units.symbol(*quantity)
     )]
     OutOfRange {
@@ -190,14 +190,37 @@ impl fmt::Display for Given {
     }
 }
 
-/// A range bound printed to seven significant digits without trailing
-/// zeros: limits converted to the caller's units (14503.77 psia) read as
-/// numbers a person would write, not as 14503.773773020925.
-struct Significant(f64);
+/// A range bound as a person would write it: seven significant digits
+/// (14503.77 psia, not 14503.773773020925), or as many more as keep the
+/// refused value outside the printed range (a value 2e-7 below a bound of
+/// 1.0000004 must not read as inside "1 to ...").
+struct Bound {
+    x: f64,
+    refused: f64,
+}
+
+impl fmt::Display for Bound {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        let side = |y: f64| (y - self.refused).signum();
+        let mut text = StackText::default();
+        for digits in 7..=17 {
+            text = StackText::default();
+            write!(text, "{}", Significant(self.x, digits))?;
+            let printed: f64 = text.as_str().parse().unwrap_or(self.x);
+            if printed != self.refused && side(printed) == side(self.x) {
+                break;
+            }
+        }
+        f.write_str(text.as_str())
+    }
+}
+
+/// `x` to `.1` significant digits without trailing zeros.
+struct Significant(f64, i32);
 
 impl fmt::Display for Significant {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        let x = self.0;
+        let Significant(x, digits) = *self;
         if x == 0.0 || !x.is_finite() {
             return write!(f, "{x}");
         }
@@ -206,7 +229,8 @@ impl fmt::Display for Significant {
         if !(-4..15).contains(&exponent) {
             // Tiny and huge bounds in scientific notation: 1.5e-12, not
             // 0.0000…, and 1.05e12, not a row of digits.
-            write!(buffer, "{x:.6e}")?;
+            let decimals = (digits - 1).max(0) as usize;
+            write!(buffer, "{x:.decimals$e}")?;
             let (mantissa, power) = buffer
                 .as_str()
                 .split_once('e')
@@ -214,7 +238,7 @@ impl fmt::Display for Significant {
             let mantissa = mantissa.trim_end_matches('0').trim_end_matches('.');
             return write!(f, "{mantissa}e{power}");
         }
-        let decimals = (6 - exponent).clamp(0, 17) as usize;
+        let decimals = (digits - 1 - exponent).clamp(0, 20) as usize;
         write!(buffer, "{x:.decimals$}")?;
         let mut text = buffer.as_str();
         if text.contains('.') {
@@ -261,20 +285,34 @@ impl Write for StackText {
 #[cfg(test)]
 mod tests {
     extern crate std;
-    use super::{Given, Significant};
+    use super::{Bound, Given, Significant};
     use std::string::ToString;
 
     #[test]
     fn bounds_print_to_seven_significant_digits() {
-        assert_eq!(Significant(14503.773773020925).to_string(), "14503.77");
-        assert_eq!(Significant(2000.0).to_string(), "2000");
-        assert_eq!(Significant(0.000611212677).to_string(), "0.0006112127");
-        assert_eq!(Significant(1e-12).to_string(), "1e-12");
-        assert_eq!(Significant(6.112126774443449e-5).to_string(), "6.112127e-5");
-        assert_eq!(Significant(1e8).to_string(), "100000000");
-        assert_eq!(Significant(0.0).to_string(), "0");
-        assert_eq!(Significant(-459.67).to_string(), "-459.67");
-        assert_eq!(Significant(1.0494e15).to_string(), "1.0494e15");
+        assert_eq!(Significant(14503.773773020925, 7).to_string(), "14503.77");
+        assert_eq!(Significant(2000.0, 7).to_string(), "2000");
+        assert_eq!(Significant(0.000611212677, 7).to_string(), "0.0006112127");
+        assert_eq!(Significant(1e-12, 7).to_string(), "1e-12");
+        assert_eq!(
+            Significant(6.112126774443449e-5, 7).to_string(),
+            "6.112127e-5"
+        );
+        assert_eq!(Significant(1e8, 7).to_string(), "100000000");
+        assert_eq!(Significant(0.0, 7).to_string(), "0");
+        assert_eq!(Significant(-459.67, 7).to_string(), "-459.67");
+        assert_eq!(Significant(1.0494e15, 7).to_string(), "1.0494e15");
+    }
+
+    #[test]
+    fn bounds_keep_the_refused_value_outside() {
+        let bound = |x, refused| Bound { x, refused }.to_string();
+        assert_eq!(bound(14503.773773020925, 17404.5), "14503.77");
+        assert_eq!(bound(1.0000004, 1.0000002), "1.0000004");
+        assert_eq!(bound(1.0000004, 2.0), "1");
+        assert_eq!(bound(-0.041300004, -0.0413000041), "-0.0413");
+        assert_eq!(bound(-0.041299996, -0.041299998), "-0.041299996");
+        assert_eq!(bound(100.0, 100.00000001), "100");
     }
 
     #[test]

@@ -75,6 +75,16 @@ fn assert_honest(what: &str, pair: InputPair, (a, b): (f64, f64), err: &Error, u
                 "{what}: {text}"
             );
             assert!(!(min..=max).contains(&value), "{what}: {text}");
+            // As printed, too: the bounds' digits keep the value outside.
+            let printed = text
+                .split_once("valid range ")
+                .and_then(|(_, range)| range.split_once(" to "))
+                .and_then(|(lo, rest)| Some((lo.parse::<f64>().ok()?, rest.split(' ').next()?)))
+                .and_then(|(lo, hi)| Some((lo, hi.parse::<f64>().ok()?)));
+            let Some((lo, hi)) = printed else {
+                panic!("{what}: no range in {text}")
+            };
+            assert!(!(lo..=hi).contains(&value), "{what}: {text}");
         }
         Error::QualityOutOfRange { value } => {
             assert_eq!(qb, Quantity::Quality, "{what}: {text}");
