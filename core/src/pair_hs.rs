@@ -100,6 +100,11 @@ const LOWEST_PRESSURE: f64 = 1e-200;
 /// Relative tolerance of the membership checks in (p, T): what the
 /// refinement (relative 1e-13 on h and s) leaves in p and T, with margin.
 const INSIDE: f64 = 1e-9;
+/// Relative tolerance at the range's own temperature limits, 273.15 K and
+/// 2273.15 K: (h, s) fixes T to about the refinement's 1e-13, so a state
+/// farther beyond is outside the range, not rounding (p, which (h, s) fixes
+/// only loosely in a liquid, keeps [`INSIDE`]).
+const TEMPERATURE_EDGE: f64 = 1e-12;
 /// The largest relative excess over a region boundary accepted when both
 /// neighbouring equations put their solution outside their own region
 /// (the formulation's consistency seams).
@@ -533,8 +538,8 @@ fn check(place: Place, props: Properties) -> Attempt {
     } else {
         MAX_PRESSURE
     };
-    let beyond_range = -over(t, MIN_TEMPERATURE) > INSIDE
-        || over(t, MAX_TEMPERATURE) > INSIDE
+    let beyond_range = -over(t, MIN_TEMPERATURE) > TEMPERATURE_EDGE
+        || over(t, MAX_TEMPERATURE) > TEMPERATURE_EDGE
         || over(p, max_p) > INSIDE;
     match (beyond_range, worst) {
         (false, None) => Attempt::Inside(single_state(place, props)),

@@ -43,7 +43,10 @@ pub enum Method {
     Exact = 0,
     /// The IAPWS backward equations' own values, unrefined, for matching
     /// another IF97 implementation's backward results digit for digit.
-    /// Where IF97 has no backward equation (region 5) the state is exact.
+    /// Where IF97 has no backward equation (region 5) the state is exact;
+    /// where the backward state falls outside the range of validity (its
+    /// T below 273.15 K, its p above 100 MPa) the call is
+    /// [`Error::BackwardEquationOutOfRange`].
     BackwardOnly = 1,
 }
 

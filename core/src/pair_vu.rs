@@ -421,7 +421,8 @@ fn pressure_on_isotherm(
 /// The state if `equation` is the stable one at the solution's (p, T).
 fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State> {
     // A solution at the range's edge may sit a hair outside it (the pair
-    // fixes p only to its conditioning); that is not extrapolation.
+    // fixes p only to its conditioning); that is not extrapolation. T it
+    // fixes to the iteration's precision: beyond 1e-12 it is.
     let t = props.t.clamp(MIN_TEMPERATURE, MAX_TEMPERATURE);
     let p_max = if t <= REGION2_MAX_TEMPERATURE {
         MAX_PRESSURE
@@ -429,7 +430,7 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
         REGION5_MAX_PRESSURE
     };
     let p = props.p.min(p_max);
-    if (t - props.t).abs() > 1e-9 * t || (p - props.p).abs() > 1e-9 * p {
+    if (t - props.t).abs() > 1e-12 * t || (p - props.p).abs() > 1e-9 * p {
         return None;
     }
     // A solution on a region boundary may land a rounding on the

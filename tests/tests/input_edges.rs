@@ -426,3 +426,40 @@ fn specific_volume_extremes_of_the_range() {
         "{err:?}"
     );
 }
+
+/// Found by a random-input run: (h, s) and (v, u) a hair past the hottest
+/// state of the range (h, s at 2273.15 K and low pressure, nudged by
+/// 1e-9) came back at 2273.150002 K, and (v, u) of cold water at 100 MPa
+/// at 273.1499998 K; they are refused.
+#[test]
+fn h_s_and_v_u_beyond_the_temperature_limits_are_refused() {
+    let cases = [
+        (
+            InputPair::EnthalpyEntropy,
+            7.376980415719164e3,
+            1.5244381138288993e1,
+        ),
+        (
+            InputPair::VolumeInternalEnergy,
+            5.106427193644301e6,
+            6.3278625926259165e3,
+        ),
+    ];
+    let us = [(
+        InputPair::VolumeInternalEnergy,
+        1.532465503070491e-2,
+        -1.2154990859616589e-1,
+    )];
+    let cases = cases
+        .map(|c| (c, Units::Native))
+        .into_iter()
+        .chain(us.map(|c| (c, Units::UsCustomary)));
+    for ((pair, a, b), units) in cases {
+        for method in [Method::Exact, Method::BackwardOnly] {
+            match State::solve(pair, a, b, units, method) {
+                Ok(state) => assert_in_range(&format!("{pair:?}"), &state),
+                Err(e) => assert_honest(&format!("{pair:?}"), pair, (a, b), &e, units),
+            }
+        }
+    }
+}
