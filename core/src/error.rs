@@ -226,9 +226,9 @@ impl fmt::Display for Significant {
         }
         let exponent = floor(log10(x.abs())) as i32;
         let mut buffer = StackText::default();
-        if !(-4..15).contains(&exponent) {
+        if !(-4..9).contains(&exponent) {
             // Tiny and huge bounds in scientific notation: 1.5e-12, not
-            // 0.0000…, and 1.05e12, not a row of digits.
+            // 0.0000…, and 1.049118e12, not 1049117826900.
             let decimals = (digits - 1).max(0) as usize;
             write!(buffer, "{x:.decimals$e}")?;
             let (mantissa, power) = buffer
@@ -302,6 +302,7 @@ mod tests {
         assert_eq!(Significant(0.0, 7).to_string(), "0");
         assert_eq!(Significant(-459.67, 7).to_string(), "-459.67");
         assert_eq!(Significant(1.0494e15, 7).to_string(), "1.0494e15");
+        assert_eq!(Significant(1049117826900.4, 7).to_string(), "1.049118e12");
     }
 
     #[test]
