@@ -20,9 +20,10 @@ pub enum Error {
     /// An input lies outside the formulation's range of validity for the
     /// state; `min` and `max` bound it, in the caller's units.
     #[error(
-        "{quantity} {value} {unit} is outside the valid range {} to {} {unit}",
-        Significant(*min),
-        Significant(*max),
+        "{quantity} {} {unit} is outside the valid range {} to {} {unit}",
+        Given(*value),
+        Bound { x: *min, refused: *value },
+        Bound { x: *max, refused: *value },
         unit = units.symbol(*quantity)
     )]
     OutOfRange {
@@ -39,7 +40,7 @@ pub enum Error {
     },
 
     /// A vapour quality outside [0, 1].
-    #[error("quality {value} is outside the valid range 0 to 1")]
+    #[error("quality {} is outside the valid range 0 to 1", Given(*value))]
     QualityOutOfRange {
         /// The quality given.
         value: f64,
@@ -121,32 +122,115 @@ impl Error {
     }
 }
 
+impl Error {
+    /// The error with the caller's own number for a range error on
+    /// `quantity`: what the caller typed, not its round trip through
+    /// native units (which overflows for the largest finite inputs).
+    pub(crate) fn with_given(self, (quantity, given): (Quantity, f64)) -> Error {
+        match self {
+            Error::OutOfRange {
+                quantity: refused,
+                min,
+                max,
+                units,
+                ..
+            } if refused == quantity => Error::OutOfRange {
+                quantity,
+                value: given,
+                min,
+                max,
+                units,
+            },
+            other => other,
+        }
+    }
+}
+
 /// Converts a caller's input to native units, refusing NaN and infinities.
+/// A finite input whose conversion overflows (−f64::MAX Btu/lbm) becomes
+/// the largest finite native value of its sign, which every pair's range
+/// check refuses; the caller's number goes back into the error through
+/// [`Error::with_given`].
 #[inline]
 pub(crate) fn native_input(units: Units, quantity: Quantity, value: f64) -> Result<f64, Error> {
     if value.is_finite() {
-        Ok(units.to_native(quantity, value))
+        Ok(units.to_native(quantity, value).clamp(-f64::MAX, f64::MAX))
     } else {
         Err(Error::NotFinite { quantity })
     }
 }
 
-/// A range bound printed to seven significant digits without trailing
-/// zeros: limits converted to the caller's units (14503.77 psia) read as
-/// numbers a person would write, not as 14503.773773020925.
-pub(crate) struct Significant(pub(crate) f64);
+/// Solves a pair from the caller's `a` and `b`: both converted to native
+/// units by [`native_input`], and any range error reporting the caller's
+/// own number.
+#[inline]
+pub(crate) fn solve_given<T>(
+    units: Units,
+    a: (Quantity, f64),
+    b: (Quantity, f64),
+    solve: impl FnOnce(f64, f64) -> Result<T, Error>,
+) -> Result<T, Error> {
+    let native_a = native_input(units, a.0, a.1)?;
+    let native_b = native_input(units, b.0, b.1)?;
+    solve(native_a, native_b).map_err(|e| e.with_given(a).with_given(b))
+}
+
+/// The caller's own number as typed, shortest round-trip digits, in
+/// scientific notation where plain digits would run long.
+struct Given(f64);
+
+impl fmt::Display for Given {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        let x = self.0;
+        if x != 0.0 && x.is_finite() && !(1e-5..1e15).contains(&x.abs()) {
+            write!(f, "{x:e}")
+        } else {
+            write!(f, "{x}")
+        }
+    }
+}
+
+/// A range bound as a person would write it: seven significant digits
+/// (14503.77 psia, not 14503.773773020925), or as many more as keep the
+/// refused value outside the printed range (a value 2e-7 below a bound of
+/// 1.0000004 must not read as inside "1 to ...").
+struct Bound {
+    x: f64,
+    refused: f64,
+}
+
+impl fmt::Display for Bound {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        let side = |y: f64| (y - self.refused).signum();
+        let mut text = StackText::default();
+        for digits in 7..=17 {
+            text = StackText::default();
+            write!(text, "{}", Significant(self.x, digits))?;
+            let printed: f64 = text.as_str().parse().unwrap_or(self.x);
+            if printed != self.refused && side(printed) == side(self.x) {
+                break;
+            }
+        }
+        f.write_str(text.as_str())
+    }
+}
+
+/// `x` to `.1` significant digits without trailing zeros.
+pub(crate) struct Significant(pub(crate) f64, pub(crate) i32);
 
 impl fmt::Display for Significant {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        let x = self.0;
+        let Significant(x, digits) = *self;
         if x == 0.0 || !x.is_finite() {
             return write!(f, "{x}");
         }
         let exponent = floor(log10(x.abs())) as i32;
         let mut buffer = StackText::default();
-        if exponent < -4 {
-            // Tiny bounds in scientific notation: 1.5e-12, not 0.0000…
-            write!(buffer, "{x:.6e}")?;
+        if !(-4..9).contains(&exponent) {
+            // Tiny and huge bounds in scientific notation: 1.5e-12, not
+            // 0.0000…, and 1.049118e12, not 1049117826900.
+            let decimals = (digits - 1).max(0) as usize;
+            write!(buffer, "{x:.decimals$e}")?;
             let (mantissa, power) = buffer
                 .as_str()
                 .split_once('e')
@@ -154,7 +238,7 @@ impl fmt::Display for Significant {
             let mantissa = mantissa.trim_end_matches('0').trim_end_matches('.');
             return write!(f, "{mantissa}e{power}");
         }
-        let decimals = (6 - exponent).clamp(0, 17) as usize;
+        let decimals = (digits - 1 - exponent).clamp(0, 20) as usize;
         write!(buffer, "{x:.decimals$}")?;
         let mut text = buffer.as_str();
         if text.contains('.') {
@@ -201,18 +285,43 @@ impl Write for StackText {
 #[cfg(test)]
 mod tests {
     extern crate std;
-    use super::Significant;
+    use super::{Bound, Given, Significant};
     use std::string::ToString;
 
     #[test]
     fn bounds_print_to_seven_significant_digits() {
-        assert_eq!(Significant(14503.773773020925).to_string(), "14503.77");
-        assert_eq!(Significant(2000.0).to_string(), "2000");
-        assert_eq!(Significant(0.000611212677).to_string(), "0.0006112127");
-        assert_eq!(Significant(1e-12).to_string(), "1e-12");
-        assert_eq!(Significant(6.112126774443449e-5).to_string(), "6.112127e-5");
-        assert_eq!(Significant(1e8).to_string(), "100000000");
-        assert_eq!(Significant(0.0).to_string(), "0");
-        assert_eq!(Significant(-459.67).to_string(), "-459.67");
+        assert_eq!(Significant(14503.773773020925, 7).to_string(), "14503.77");
+        assert_eq!(Significant(2000.0, 7).to_string(), "2000");
+        assert_eq!(Significant(0.000611212677, 7).to_string(), "0.0006112127");
+        assert_eq!(Significant(1e-12, 7).to_string(), "1e-12");
+        assert_eq!(
+            Significant(6.112126774443449e-5, 7).to_string(),
+            "6.112127e-5"
+        );
+        assert_eq!(Significant(1e8, 7).to_string(), "100000000");
+        assert_eq!(Significant(0.0, 7).to_string(), "0");
+        assert_eq!(Significant(-459.67, 7).to_string(), "-459.67");
+        assert_eq!(Significant(1.0494e15, 7).to_string(), "1.0494e15");
+        assert_eq!(Significant(1049117826900.4, 7).to_string(), "1.049118e12");
+    }
+
+    #[test]
+    fn bounds_keep_the_refused_value_outside() {
+        let bound = |x, refused| Bound { x, refused }.to_string();
+        assert_eq!(bound(14503.773773020925, 17404.5), "14503.77");
+        assert_eq!(bound(1.0000004, 1.0000002), "1.0000004");
+        assert_eq!(bound(1.0000004, 2.0), "1");
+        assert_eq!(bound(-0.041300004, -0.0413000041), "-0.0413");
+        assert_eq!(bound(-0.041299996, -0.041299998), "-0.041299996");
+        assert_eq!(bound(100.0, 100.00000001), "100");
+    }
+
+    #[test]
+    fn given_values_print_as_typed_and_short() {
+        assert_eq!(Given(-3.4).to_string(), "-3.4");
+        assert_eq!(Given(17404.5).to_string(), "17404.5");
+        assert_eq!(Given(-f64::MAX).to_string(), "-1.7976931348623157e308");
+        assert_eq!(Given(1e-300).to_string(), "1e-300");
+        assert_eq!(Given(0.0).to_string(), "0");
     }
 }

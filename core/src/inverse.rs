@@ -1,8 +1,7 @@
 //! The refinement every inverse pair shares: Newton's method in the
 //! region's own variables — (p, T) for the Gibbs regions 1, 2 and 5, (ρ, T)
 //! for the Helmholtz region 3 — until the state reproduces the two given
-//! properties to relative 1e-10 or better (absolute 1e-9 in native units
-//! where a value passes through zero).
+//! properties to the promise of [`within_promise`].
 //!
 //! The Jacobian needs nothing beyond the properties one evaluation already
 //! gives (v, T, cp, cv, αv, κT): the partial derivatives of p, T, v, ρ, u,
@@ -97,20 +96,38 @@ fn partials(equation: Equation, given: Given, s: &Properties) -> (f64, f64) {
     }
 }
 
-/// Whether `actual` reproduces the `given` property's `target` to
-/// `relative`, or to `absolute` (native units) for u, h and s, which pass
-/// through zero at the triple point; p, T, ρ and v never do, however small.
+/// Below this magnitude (native units) a given value counts as near zero
+/// and is held to `relative` × this instead of relative to itself: u, h
+/// and s pass through zero at the triple point, where a relative bound
+/// asks more than the rounding of their sums allows. 10 kJ/kg for u and h
+/// (liquid within ~2.4 K of 273.15 K), 0.1 kJ/(kg·K) for s; p, T, ρ and v
+/// are never near zero in this sense, however small.
 #[inline]
-fn within(given: Given, actual: f64, target: f64, (relative, absolute): (f64, f64)) -> bool {
-    let floor = match given {
-        Given::InternalEnergy | Given::Enthalpy | Given::Entropy => absolute,
+pub(crate) const fn near_zero(given: Given) -> f64 {
+    match given {
+        Given::InternalEnergy | Given::Enthalpy => 10.0,
+        Given::Entropy => 0.1,
         _ => 0.0,
-    };
-    (actual - target).abs() <= (relative * target.abs()).max(floor)
+    }
 }
 
-/// Whether one given value is reproduced to the aim of the iterations
-/// (relative 1e-13, absolute 1e-12): an iterate that does is final.
+/// Whether `actual` reproduces the `given` property's `target` to
+/// `relative`, with the floor of [`near_zero`].
+#[inline]
+fn within(given: Given, actual: f64, target: f64, relative: f64) -> bool {
+    (actual - target).abs() <= relative * target.abs().max(near_zero(given))
+}
+
+/// The promise to the caller: each given value reproduced to relative
+/// 1e-10, or where it is near zero to 1e-10 of [`near_zero`] (absolute
+/// 1e-9 kJ/kg for u and h, 1e-11 kJ/(kg·K) for s).
+#[inline]
+pub(crate) fn within_promise(given: Given, actual: f64, target: f64) -> bool {
+    within(given, actual, target, PROMISED)
+}
+
+/// Whether one given value is reproduced to the aim of the iterations, a
+/// thousand times tighter than the promise: an iterate that does is final.
 #[inline]
 pub(crate) fn reaches_aim(given: Given, actual: f64, target: f64) -> bool {
     within(given, actual, target, AIMED)
@@ -124,14 +141,14 @@ pub(crate) fn reproduces_as_promised(props: &Properties, a: (Given, f64), b: (Gi
 
 /// Whether `props` reproduces both given values to `tolerance`.
 #[inline]
-fn reproduces(props: &Properties, a: (Given, f64), b: (Given, f64), tolerance: (f64, f64)) -> bool {
+fn reproduces(props: &Properties, a: (Given, f64), b: (Given, f64), tolerance: f64) -> bool {
     within(a.0, value(a.0, props), a.1, tolerance) && within(b.0, value(b.0, props), b.1, tolerance)
 }
 
-/// What the caller is promised: relative 1e-10, absolute 1e-9 near zero.
-/// The iteration itself aims a thousand times tighter.
-const PROMISED: (f64, f64) = (1e-10, 1e-9);
-const AIMED: (f64, f64) = (1e-13, 1e-12);
+/// What the caller is promised, relative (see [`within_promise`]); the
+/// iteration itself aims a thousand times tighter.
+const PROMISED: f64 = 1e-10;
+const AIMED: f64 = 1e-13;
 
 /// Bounds of the variables during the iteration, so that a wild step can
 /// never leave the equation's domain (they are wider than the region, the
@@ -188,5 +205,27 @@ pub(crate) fn refine(
         Err(Error::NotConverged {
             what: "inverse-pair",
         })
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// The promise is relative 1e-10 away from zero: an entropy of
+    /// 5 kJ/(kg·K) off by 9e-10 (1.8e-10 relative) breaks it, as an
+    /// enthalpy of 500 kJ/kg off by 9e-8 does; near zero the floor holds
+    /// (1e-9 kJ/kg, 1e-11 kJ/(kg·K)).
+    #[test]
+    fn the_floor_applies_only_near_zero() {
+        assert!(!within_promise(Given::Entropy, 5.0 + 9e-10, 5.0));
+        assert!(within_promise(Given::Entropy, 5.0 + 4e-10, 5.0));
+        assert!(!within_promise(Given::Enthalpy, 500.0 + 9e-8, 500.0));
+        assert!(within_promise(Given::Enthalpy, 0.001 + 9e-10, 0.001));
+        assert!(!within_promise(Given::Enthalpy, 0.001 + 2e-9, 0.001));
+        assert!(within_promise(Given::Entropy, 1e-4 + 9e-12, 1e-4));
+        assert!(!within_promise(Given::Entropy, 1e-4 + 2e-11, 1e-4));
+        // p, T, ρ, v have no floor.
+        assert!(!within_promise(Given::Pressure, 1e-9 + 1e-18, 1e-9));
     }
 }

@@ -40,12 +40,12 @@
 use crate::backward::{r7_97, sr2_01, sr3_03, sr4_04};
 use crate::boundary_b23;
 use crate::constants::*;
-use crate::error::{native_input, Error};
+use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
 use crate::inverse::{refine, Bounds, Equation, Given};
 use crate::math::{exp, ln};
 use crate::pair_ph_ps::Method;
-use crate::regions::{region3_phase, single_phase};
+use crate::regions::{region3_phase, single_phase, within_range};
 use crate::saturation::{min_saturation_pressure, Saturation};
 use crate::saturation_line::{saturation_pressure, saturation_pressure_slope_and_curvature};
 use crate::state::{Region, State};
@@ -100,6 +100,11 @@ const LOWEST_PRESSURE: f64 = 1e-200;
 /// Relative tolerance of the membership checks in (p, T): what the
 /// refinement (relative 1e-13 on h and s) leaves in p and T, with margin.
 const INSIDE: f64 = 1e-9;
+/// Relative tolerance at the range's own temperature limits, 273.15 K and
+/// 2273.15 K: (h, s) fixes T to about the refinement's 1e-13, so a state
+/// farther beyond is outside the range, not rounding (p, which (h, s) fixes
+/// only loosely in a liquid, keeps [`INSIDE`]).
+const TEMPERATURE_EDGE: f64 = 1e-12;
 /// The largest relative excess over a region boundary accepted when both
 /// neighbouring equations put their solution outside their own region
 /// (the formulation's consistency seams).
@@ -153,15 +158,12 @@ enum Attempt {
         excess: f64,
         candidate: Option<State>,
     },
-    /// The solution lies beyond the formulation's range: the quantity, its
-    /// native value and the native limits. If it lies within a seam of a
-    /// neighbour's boundary, that neighbour may still hold the state.
-    Beyond(Limit, Option<Place>),
+    /// The solution lies beyond the formulation's range (colder than
+    /// 273.15 K, hotter than 2273.15 K, above its pressure limit). If it
+    /// lies within a seam of a neighbour's boundary, that neighbour may
+    /// still hold the state.
+    Beyond(Option<Place>),
 }
-
-/// A limit of the range a solution exceeds: the quantity, its native
-/// value, the native limits.
-type Limit = (Quantity, f64, f64, f64);
 
 /// The place the boundary equations of SR4-04 and SR2-01 indicate.
 fn place_by_boundary_equations(h: f64, s: f64) -> Place {
@@ -536,21 +538,17 @@ fn check(place: Place, props: Properties) -> Attempt {
     } else {
         MAX_PRESSURE
     };
-    let limit = if -over(t, MIN_TEMPERATURE) > INSIDE || over(t, MAX_TEMPERATURE) > INSIDE {
-        Some((Quantity::Temperature, t, MIN_TEMPERATURE, MAX_TEMPERATURE))
-    } else if over(p, max_p) > INSIDE {
-        Some((Quantity::Pressure, p, 0.0, max_p))
-    } else {
-        None
-    };
-    match (limit, worst) {
-        (None, None) => Attempt::Inside(single_state(place, props)),
-        (None, Some((next, excess))) => Attempt::Outside {
+    let beyond_range = -over(t, MIN_TEMPERATURE) > TEMPERATURE_EDGE
+        || over(t, MAX_TEMPERATURE) > TEMPERATURE_EDGE
+        || over(p, max_p) > INSIDE;
+    match (beyond_range, worst) {
+        (false, None) => Attempt::Inside(single_state(place, props)),
+        (false, Some((next, excess))) => Attempt::Outside {
             next,
             excess,
             candidate: Some(single_state(place, props)),
         },
-        (Some(limit), worst) => {
+        (true, worst) => {
             // Beyond the range here, but at a region boundary the
             // neighbour's equation (which disagrees by the formulation's
             // consistency) may still place the state inside the range:
@@ -565,7 +563,7 @@ fn check(place: Place, props: Properties) -> Attempt {
                 Place::Five if near(REGION2_MAX_TEMPERATURE) => Some(Place::Two),
                 _ => None,
             };
-            Attempt::Beyond(limit, worst.map(|(next, _)| next).or(seam))
+            Attempt::Beyond(worst.map(|(next, _)| next).or(seam))
         }
     }
 }
@@ -754,15 +752,7 @@ fn wet_edge_at_273(h: f64, s: f64) -> Result<Option<Attempt>, Error> {
     }
     if f > 0.0 {
         // Below the 273.15 K isotherm, the lower edge of the wet region.
-        return Ok(Some(Attempt::Beyond(
-            (
-                Quantity::Temperature,
-                lo - f / (s - sat.liquid().native().s).max(1e-3),
-                MIN_TEMPERATURE,
-                MAX_TEMPERATURE,
-            ),
-            None,
-        )));
+        return Ok(Some(Attempt::Beyond(None)));
     }
     Ok(None)
 }
@@ -901,7 +891,7 @@ fn solve_exact(h: f64, s: f64, indicated: Place, units: Units) -> Result<State, 
     // Solutions outside their place: (place, the neighbour it points to,
     // excess, state), at most one per place.
     let mut outside: [Option<(Place, Place, f64, State)>; 5] = [None; 5];
-    let mut beyond = None;
+    let mut beyond = false;
     for slot in outside.iter_mut() {
         let Some(current) = place else { break };
         tried |= current.bit();
@@ -915,8 +905,8 @@ fn solve_exact(h: f64, s: f64, indicated: Place, units: Units) -> Result<State, 
                 *slot = candidate.map(|state| (current, next, excess, state));
                 Some(next)
             }
-            Ok(Attempt::Beyond(limit, neighbour)) => {
-                beyond = beyond.or(Some(limit));
+            Ok(Attempt::Beyond(neighbour)) => {
+                beyond = true;
                 neighbour
             }
             Err(_) => None,
@@ -949,9 +939,11 @@ fn solve_exact(h: f64, s: f64, indicated: Place, units: Units) -> Result<State, 
 }
 
 /// The error for a point that has no state: the enthalpy range valid at
-/// this entropy if h lies outside it; otherwise the temperature or
-/// pressure the solution would need; otherwise non-convergence.
-fn refusal(h: f64, s: f64, beyond: Option<Limit>, units: Units) -> Error {
+/// this entropy if h lies outside it; otherwise, where the solution lies
+/// beyond the range (the cold pockets inside the enthalpy band, where the
+/// valid h at s is not one interval), no state in range; otherwise
+/// non-convergence.
+fn refusal(h: f64, s: f64, beyond: bool, units: Units) -> Error {
     let s_min = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE).s;
     let s_max = Equation::Region5
         .evaluate(LOWEST_PRESSURE, MAX_TEMPERATURE)
@@ -967,9 +959,12 @@ fn refusal(h: f64, s: f64, beyond: Option<Limit>, units: Units) -> Error {
     if !(h_min - slack..=h_max + slack).contains(&h) {
         return Error::out_of_range(Quantity::Enthalpy, h, h_min, h_max, units);
     }
-    match beyond {
-        Some((quantity, value, min, max)) => Error::out_of_range(quantity, value, min, max, units),
-        None => NOT_CONVERGED,
+    if beyond {
+        Error::NoStateInRange {
+            pair: "specific enthalpy and specific entropy",
+        }
+    } else {
+        NOT_CONVERGED
     }
 }
 
@@ -1102,10 +1097,17 @@ fn solve(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
             // Near the edge of the range the backward state may lie on
             // either side of it by the equations' own deviation: the exact
             // state decides whether the point is in range, so that both
-            // methods refuse the same points.
+            // methods refuse the same points; a backward state outside
+            // the range with an exact one inside is the backward
+            // equations' failure.
             let (p, t) = (state.native().p, state.native().t);
             if p >= 0.99 * MAX_PRESSURE || t <= MIN_TEMPERATURE + 0.5 {
                 solve_exact(h, s, indicated, units)?;
+            }
+            if !within_range(p, t) {
+                return Err(Error::BackwardEquationOutOfRange {
+                    equation: "p(h,s), T(p,h)",
+                });
             }
             return Ok(state.in_units(units));
         }
@@ -1116,7 +1118,8 @@ fn solve(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
 impl State {
     /// The state at specific enthalpy `h` and specific entropy `s`, in
     /// `units`, refined on the basic equations to reproduce both to
-    /// relative 1e-10 or better (absolute 1e-9 kJ/kg, kJ/(kg·K) near zero).
+    /// relative 1e-10 or better (near zero, absolute 1e-9 kJ/kg and
+    /// 1e-11 kJ/(kg·K): the README's "Round trips").
     ///
     /// Valid over the whole range of IF97 — every single-phase state of
     /// regions 1, 2, 3 and 5 (273.15 K ≤ T ≤ 1073.15 K at p ≤ 100 MPa,
@@ -1132,8 +1135,8 @@ impl State {
     /// below the lowest entropy of the range, s(100 MPa, 273.15 K), it is
     /// for the entropy. Inside that enthalpy band lie a few tiny pockets
     /// colder than 273.15 K (cold water near s = 0, where isentropic
-    /// compression cools it); there the error names the temperature the
-    /// state would need. A NaN or infinite input is [`Error::NotFinite`];
+    /// compression cools it); there the error is [`Error::NoStateInRange`],
+    /// the valid enthalpies at that entropy being no single interval. A NaN or infinite input is [`Error::NotFinite`];
     /// an iteration that fails is [`Error::NotConverged`], never an
     /// approximate state.
     pub fn from_hs(h: f64, s: f64, units: Units) -> Result<State, Error> {
@@ -1154,15 +1157,15 @@ impl State {
     /// outside their range), the exact state is returned, as are the
     /// errors.
     pub fn from_hs_with(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
-        let h = native_input(units, Quantity::Enthalpy, h)?;
-        let s = native_input(units, Quantity::Entropy, s)?;
-        solve(h, s, units, method)
+        let (h, s) = ((Quantity::Enthalpy, h), (Quantity::Entropy, s));
+        solve_given(units, h, s, |h, s| solve(h, s, units, method))
     }
 }
 
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::inverse::within_promise;
 
     /// The saturated phases at 273.15 K and 623.15 K that the wet
     /// iteration's brackets take from constants, against the basic
@@ -1228,9 +1231,9 @@ mod tests {
                     let wet = attempt_wet(h, s);
                     if let Ok(Attempt::Inside(state)) = wet {
                         let native = state.native();
-                        let scale = |a: f64| (1e-10 * a.abs()).max(1e-9);
-                        assert!((native.h - h).abs() <= scale(h), "{t} K, x {x}, dh {dh}");
-                        assert!((native.s - s).abs() <= scale(s), "{t} K, x {x}, dh {dh}");
+                        let kept = |given, actual, target| within_promise(given, actual, target);
+                        assert!(kept(Given::Enthalpy, native.h, h), "{t} K, x {x}, dh {dh}");
+                        assert!(kept(Given::Entropy, native.s, s), "{t} K, x {x}, dh {dh}");
                     } else if t == MIN_TEMPERATURE && dh > 0.0 && x == 0.3 {
                         panic!("above the 273.15 K line, x {x}, dh {dh}: not wet");
                     }

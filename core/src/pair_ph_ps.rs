@@ -21,12 +21,12 @@
 use crate::backward::{r7_97, sr3_03};
 use crate::boundary_b23;
 use crate::constants::*;
-use crate::error::{native_input, Error};
+use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
 use crate::free_energy::{IsobarGibbs, ReducedGibbs};
 use crate::inverse::{reaches_aim, refine, reproduces_as_promised, value, Bounds, Equation, Given};
 use crate::math::exp;
-use crate::regions::{region3_phase, single_phase};
+use crate::regions::{region3_phase, single_phase, within_range};
 use crate::saturation::Saturation;
 use crate::saturation_line::{saturation_pressure, saturation_temperature};
 use crate::state::{Region, State};
@@ -43,7 +43,10 @@ pub enum Method {
     Exact = 0,
     /// The IAPWS backward equations' own values, unrefined, for matching
     /// another IF97 implementation's backward results digit for digit.
-    /// Where IF97 has no backward equation (region 5) the state is exact.
+    /// Where IF97 has no backward equation (region 5) the state is exact;
+    /// where the backward state falls outside the range of validity (its
+    /// T below 273.15 K, its p above 100 MPa) the call is
+    /// [`Error::BackwardEquationOutOfRange`].
     BackwardOnly = 1,
 }
 
@@ -193,17 +196,8 @@ pub(crate) fn solve(
     let out_of_range =
         |min: f64, max: f64| Error::out_of_range(caloric.quantity(), z, min, max, units);
     let z_at = |equation, t| caloric.at(equation, p, t);
-    let lowest =
-        || z_at(Equation::Region1, MIN_TEMPERATURE).min(z_at(Equation::Region2, MIN_TEMPERATURE));
-    let highest = || {
-        if p <= REGION5_MAX_PRESSURE {
-            z_at(Equation::Region5, MAX_TEMPERATURE)
-        } else {
-            z_at(Equation::Region2, REGION2_MAX_TEMPERATURE)
-        }
-    };
-
-    let location = if p < crate::saturation::min_saturation_pressure() {
+    let below_triple_line = p < crate::saturation::min_saturation_pressure();
+    let location = if below_triple_line {
         // Below psat(273.15 K) only vapour lies within the range.
         Location::Single(Equation::Region2)
     } else if p <= saturation_pressure(REGION13_TEMPERATURE) {
@@ -251,34 +245,44 @@ pub(crate) fn solve(
         }
         Location::Single(equation) => equation,
     };
-    // Past region 2's hot end lies region 5 (up to 50 MPa).
-    let beyond_region2 = || z > z_at(Equation::Region2, REGION2_MAX_TEMPERATURE);
-    let region5_or_refuse = || {
-        if p > REGION5_MAX_PRESSURE {
-            Err(out_of_range(lowest(), highest()))
+    // The range at p: z grows with T along the isobar (cp > 0), from the
+    // 273.15 K state (liquid at or above psat(273.15 K), vapour below) to
+    // the hottest. Outside it no state lies in the range (a wet z, between
+    // z' and z'', lies inside).
+    let lowest = z_at(
+        if below_triple_line {
+            Equation::Region2
         } else {
-            Ok(Equation::Region5)
-        }
+            Equation::Region1
+        },
+        MIN_TEMPERATURE,
+    );
+    let highest = if p <= REGION5_MAX_PRESSURE {
+        z_at(Equation::Region5, MAX_TEMPERATURE)
+    } else {
+        z_at(Equation::Region2, REGION2_MAX_TEMPERATURE)
     };
+    if !(lowest..=highest).contains(&z) {
+        return Err(out_of_range(lowest, highest));
+    }
+
+    // Past region 2's hot end lies region 5 (the range check has refused
+    // such z above 50 MPa).
+    let beyond_region2 = || z > z_at(Equation::Region2, REGION2_MAX_TEMPERATURE);
     let equation = match (equation, method) {
         // The backward equation of region 2 says nothing past 1073.15 K.
-        (Equation::Region2, Method::BackwardOnly) if beyond_region2() => region5_or_refuse()?,
+        (Equation::Region2, Method::BackwardOnly) if beyond_region2() => Equation::Region5,
         (Equation::Region2, Method::Exact) => {
             // The iteration stops at 1073.15 K if the state lies beyond.
             let t0 = backward_temperature(Equation::Region2);
-            let t_range = (MIN_TEMPERATURE - 10.0, REGION2_MAX_TEMPERATURE);
+            let t_range = (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE);
             match refine_pt(Equation::Region2, p, z, caloric, t0, t_range) {
                 Ok(props) => {
                     let phase = single_phase(p, props.t, false);
                     return Ok(State::single_phase(props, Region::Two, phase, units));
                 }
-                Err(_) if beyond_region2() => region5_or_refuse()?,
-                Err(e) => {
-                    if t0 < MIN_TEMPERATURE + 1.0 && z < z_at(Equation::Region2, MIN_TEMPERATURE) {
-                        return Err(out_of_range(lowest(), highest()));
-                    }
-                    return Err(e);
-                }
+                Err(_) if beyond_region2() => Equation::Region5,
+                Err(e) => return Err(e),
             }
         }
         (equation, _) => equation,
@@ -287,27 +291,20 @@ pub(crate) fn solve(
     let props = match equation {
         Equation::Region1 | Equation::Region2 => {
             let t0 = backward_temperature(equation);
-            // The range's cold end: below 273.15 K there is no state.
-            if t0 < MIN_TEMPERATURE + 1.0 && z < z_at(equation, MIN_TEMPERATURE) {
-                return Err(out_of_range(lowest(), highest()));
-            }
             if method == Method::BackwardOnly {
                 let (t_lo, t_hi) = match equation {
                     Equation::Region1 => (MIN_TEMPERATURE, REGION13_TEMPERATURE),
                     _ => (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE),
                 };
-                backward_valid(t0, (t_lo, t_hi), caloric.backward_name(equation))?;
+                backward_valid(t0, p, (t_lo, t_hi), caloric.backward_name(equation))?;
                 equation.evaluate(p, t0)
             } else {
-                let t_range = (MIN_TEMPERATURE - 10.0, REGION2_MAX_TEMPERATURE + 10.0);
+                let t_range = (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE + 10.0);
                 refine_pt(equation, p, z, caloric, t0, t_range)?
             }
         }
         Equation::Region5 => {
-            let (z_lo, z_hi) = (z_at(Equation::Region5, REGION2_MAX_TEMPERATURE), highest());
-            if z > z_hi {
-                return Err(out_of_range(lowest(), z_hi));
-            }
+            let (z_lo, z_hi) = (z_at(Equation::Region5, REGION2_MAX_TEMPERATURE), highest);
             let span = MAX_TEMPERATURE - REGION2_MAX_TEMPERATURE;
             let t0 = REGION2_MAX_TEMPERATURE + span * (z - z_lo) / (z_hi - z_lo);
             refine_pt(
@@ -316,7 +313,7 @@ pub(crate) fn solve(
                 z,
                 caloric,
                 t0,
-                (REGION2_MAX_TEMPERATURE - 10.0, MAX_TEMPERATURE + 10.0),
+                (REGION2_MAX_TEMPERATURE - 10.0, MAX_TEMPERATURE),
             )?
         }
         Equation::Region3 => {
@@ -325,6 +322,7 @@ pub(crate) fn solve(
             let mut props = if method == Method::BackwardOnly {
                 backward_valid(
                     t0,
+                    p,
                     (REGION13_TEMPERATURE, B23_MAX_TEMPERATURE),
                     caloric.backward_name(equation),
                 )?;
@@ -333,7 +331,14 @@ pub(crate) fn solve(
                         equation: caloric.backward_name(equation),
                     });
                 }
-                equation.evaluate(rho0, t0)
+                let props = equation.evaluate(rho0, t0);
+                // Its pressure is the equations' own, and may leave the range.
+                if !within_range(props.p, props.t) {
+                    return Err(Error::BackwardEquationOutOfRange {
+                        equation: caloric.backward_name(equation),
+                    });
+                }
+                props
             } else {
                 let bounds = Bounds {
                     x: (20.0, 1100.0),
@@ -378,8 +383,15 @@ const BACKWARD_SLACK: f64 = 1.0;
 
 /// Refuses a backward-equation temperature that is no state of the region
 /// (the equation used far outside the range it was fitted to).
-fn backward_valid(t: f64, (lo, hi): (f64, f64), equation: &'static str) -> Result<(), Error> {
-    if t >= lo - BACKWARD_SLACK && t <= hi + BACKWARD_SLACK {
+/// Past the range's own edges (273.15 K, 1073.15 K above 50 MPa) no slack:
+/// the state would be outside the formulation.
+fn backward_valid(
+    t: f64,
+    p: f64,
+    (lo, hi): (f64, f64),
+    equation: &'static str,
+) -> Result<(), Error> {
+    if t >= lo - BACKWARD_SLACK && t <= hi + BACKWARD_SLACK && within_range(p, t) {
         Ok(())
     } else {
         Err(Error::BackwardEquationOutOfRange { equation })
@@ -528,9 +540,10 @@ impl State {
 
     /// [`State::from_ph`] with the choice of [`Method`].
     pub fn from_ph_with(p: f64, h: f64, units: Units, method: Method) -> Result<State, Error> {
-        let p = native_input(units, Quantity::Pressure, p)?;
-        let h = native_input(units, Quantity::Enthalpy, h)?;
-        solve(p, h, Caloric::Enthalpy, method, units)
+        let (p, h) = ((Quantity::Pressure, p), (Quantity::Enthalpy, h));
+        solve_given(units, p, h, |p, h| {
+            solve(p, h, Caloric::Enthalpy, method, units)
+        })
     }
 
     /// The state at pressure `p` and specific entropy `s`, in `units`,
@@ -541,9 +554,10 @@ impl State {
 
     /// [`State::from_ps`] with the choice of [`Method`].
     pub fn from_ps_with(p: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
-        let p = native_input(units, Quantity::Pressure, p)?;
-        let s = native_input(units, Quantity::Entropy, s)?;
-        solve(p, s, Caloric::Entropy, method, units)
+        let (p, s) = ((Quantity::Pressure, p), (Quantity::Entropy, s));
+        solve_given(units, p, s, |p, s| {
+            solve(p, s, Caloric::Entropy, method, units)
+        })
     }
 }
 

@@ -4,7 +4,7 @@
 use crate::backward::sr5_05;
 use crate::error::{native_input, Error};
 use crate::pair_ph_ps::Method;
-use crate::regions::{locate, single_phase, Located};
+use crate::regions::{locate, single_phase, within_range, Located};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
 use crate::{region1, region2, region3, region3_density, region5};
@@ -34,9 +34,10 @@ impl State {
     /// extrapolation at the edge of a subregion's range) is
     /// [`Error::BackwardEquationOutOfRange`].
     pub fn from_pt_with(p: f64, t: f64, units: Units, method: Method) -> Result<State, Error> {
+        let given = (Quantity::Pressure, p, Quantity::Temperature, t);
         let p = native_input(units, Quantity::Pressure, p)?;
         let t = native_input(units, Quantity::Temperature, t)?;
-        let (props, region, liquid) = match locate(p, t, units)? {
+        let (props, region, liquid) = match located(p, t, units, given)? {
             Located::Region1 => (region1::gibbs(p, t).properties(p, t), Region::One, true),
             Located::Region2 => (region2::gibbs(p, t).properties(p, t), Region::Two, false),
             Located::Region5 => (region5::gibbs(p, t).properties(p, t), Region::Five, false),
@@ -47,8 +48,15 @@ impl State {
                         equation: "v(p,T) region 3",
                     });
                 }
+                let props = region3::helmholtz(rho, t).properties(rho, t);
+                // The backward density's pressure may leave the range (near 100 MPa).
+                if !within_range(props.p, t) {
+                    return Err(Error::BackwardEquationOutOfRange {
+                        equation: "v(p,T) region 3",
+                    });
+                }
                 (
-                    region3::helmholtz(rho, t).properties(rho, t),
+                    props,
                     Region::Three,
                     branch == region3_density::Branch::Liquid,
                 )
@@ -79,13 +87,24 @@ impl State {
 /// the cheap path for batches that need nothing else. Same value, bit for
 /// bit, as `State::from_pt(p, t, units)?.enthalpy()` in regions 1, 2 and 5.
 pub fn enthalpy_from_pt(p: f64, t: f64, units: Units) -> Result<f64, Error> {
+    let given = (Quantity::Pressure, p, Quantity::Temperature, t);
     let p_native = native_input(units, Quantity::Pressure, p)?;
     let t_native = native_input(units, Quantity::Temperature, t)?;
-    let h = match locate(p_native, t_native, units)? {
+    let h = match located(p_native, t_native, units, given)? {
         Located::Region1 => region1::enthalpy(p_native, t_native),
         Located::Region2 => region2::enthalpy(p_native, t_native),
         Located::Region5 => region5::enthalpy(p_native, t_native),
         Located::Region3(_) => return State::from_pt(p, t, units).map(|s| s.enthalpy()),
     };
     Ok(units.from_native(Quantity::Enthalpy, h))
+}
+
+/// [`locate`], its range errors carrying the caller's own p and T.
+fn located(
+    p: f64,
+    t: f64,
+    units: Units,
+    (qp, p_given, qt, t_given): (Quantity, f64, Quantity, f64),
+) -> Result<Located, Error> {
+    locate(p, t, units).map_err(|e| e.with_given((qp, p_given)).with_given((qt, t_given)))
 }

@@ -13,7 +13,7 @@
 
 use crate::boundary_b23;
 use crate::constants::*;
-use crate::error::{native_input, Error};
+use crate::error::{solve_given, Error};
 use crate::inverse::{refine, Bounds, Equation, Given};
 use crate::regions::{region3_phase, single_phase};
 use crate::saturation::Saturation;
@@ -23,16 +23,37 @@ use crate::units::{Quantity, Units};
 impl State {
     /// The state at density `rho` and temperature `t`, in `units`.
     pub fn from_rho_t(rho: f64, t: f64, units: Units) -> Result<State, Error> {
-        let rho = native_input(units, Quantity::Density, rho)?;
-        let t = native_input(units, Quantity::Temperature, t)?;
-        solve(rho, t, units)
+        let (rho, t) = ((Quantity::Density, rho), (Quantity::Temperature, t));
+        solve_given(units, rho, t, |rho, t| solve(rho, t, units))
     }
 
     /// The state at specific volume `v` and temperature `t`, in `units`.
     pub fn from_vt(v: f64, t: f64, units: Units) -> Result<State, Error> {
-        let v = native_input(units, Quantity::SpecificVolume, v)?;
-        let t = native_input(units, Quantity::Temperature, t)?;
-        solve(1.0 / v, t, units)
+        let (v, t) = ((Quantity::SpecificVolume, v), (Quantity::Temperature, t));
+        solve_given(units, v, t, |v, t| {
+            solve(1.0 / v, t, units).map_err(as_volume_range)
+        })
+    }
+}
+
+/// A density range error as the specific volume's: the caller gave v, and
+/// v = 1/ρ in every unit system (m³/kg and kg/m³, ft³/lbm and lbm/ft³).
+fn as_volume_range(error: Error) -> Error {
+    match error {
+        Error::OutOfRange {
+            quantity: Quantity::Density,
+            value,
+            min,
+            max,
+            units,
+        } => Error::OutOfRange {
+            quantity: Quantity::SpecificVolume,
+            value: 1.0 / value,
+            min: 1.0 / max,
+            max: 1.0 / min,
+            units,
+        },
+        other => other,
     }
 }
 
@@ -68,8 +89,10 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
         let (vl, vv) = (sat.liquid().native().v, sat.vapour().native().v);
         let v = 1.0 / rho;
         if v >= vl && v <= vv {
-            // On the lines themselves the saturated phases are returned.
-            return sat.mixture((v - vl) / (vv - vl)).map(|s| s.in_units(units));
+            // On the lines themselves the saturated phases are returned;
+            // at the critical point, where v' = v'', the liquid's.
+            let x = if vv > vl { (v - vl) / (vv - vl) } else { 0.0 };
+            return sat.mixture(x).map(|s| s.in_units(units));
         }
         if t <= REGION13_TEMPERATURE {
             // Liquid side is region 1, vapour side region 2.

@@ -21,9 +21,9 @@
 //! benchmarks.
 
 use crate::constants::*;
-use crate::error::{native_input, Error};
+use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{refine, Bounds, Equation, Given};
+use crate::inverse::{refine, within_promise, Bounds, Equation, Given};
 use crate::math::ln;
 use crate::region3_density::Branch;
 use crate::regions::{locate, region3_phase, single_phase, Located};
@@ -37,20 +37,24 @@ impl State {
     /// The state at specific volume `v` and specific internal energy `u`,
     /// in `units`, reproducing both to relative 1e-10 or better.
     pub fn from_vu(v: f64, u: f64, units: Units) -> Result<State, Error> {
-        let v = native_input(units, Quantity::SpecificVolume, v)?;
-        let u = native_input(units, Quantity::InternalEnergy, u)?;
-        solve(v, u, units)
+        let (v, u) = ((Quantity::SpecificVolume, v), (Quantity::InternalEnergy, u));
+        solve_given(units, v, u, |v, u| solve(v, u, units))
     }
 }
 
 /// Solves native (v, u); errors reported in `units`.
 pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
-    if v <= 0.0 {
+    // The range's smallest v, at 100 MPa and 273.15 K (water's density
+    // falls with T there), and its largest, at 2273.15 K and the lowest
+    // pressure; the conformance suite checks both are the extremes.
+    let v_min = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE).v;
+    let v_max = Equation::Region5.evaluate(MIN_PRESSURE, MAX_TEMPERATURE).v;
+    if !(v_min..=v_max).contains(&v) {
         return Err(Error::out_of_range(
             Quantity::SpecificVolume,
             v,
-            0.0,
-            f64::INFINITY,
+            v_min,
+            v_max,
             units,
         ));
     }
@@ -364,7 +368,7 @@ fn along_isochore(equation: Equation, v: f64, u: f64, t_range: (f64, f64)) -> Op
     }
     // The bracket has closed to the last bit of T: keep the best state if
     // it meets the promised precision.
-    best.filter(|b| (b.u - u).abs() <= (1e-10 * u.abs()).max(1e-9))
+    best.filter(|b| within_promise(Given::InternalEnergy, b.u, u))
 }
 
 /// Which end of the pressure range an isotherm ran into.
@@ -417,7 +421,8 @@ fn pressure_on_isotherm(
 /// The state if `equation` is the stable one at the solution's (p, T).
 fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State> {
     // A solution at the range's edge may sit a hair outside it (the pair
-    // fixes p only to its conditioning); that is not extrapolation.
+    // fixes p only to its conditioning); that is not extrapolation. T it
+    // fixes to the iteration's precision: beyond 1e-12 it is.
     let t = props.t.clamp(MIN_TEMPERATURE, MAX_TEMPERATURE);
     let p_max = if t <= REGION2_MAX_TEMPERATURE {
         MAX_PRESSURE
@@ -425,7 +430,7 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
         REGION5_MAX_PRESSURE
     };
     let p = props.p.min(p_max);
-    if (t - props.t).abs() > 1e-9 * t || (p - props.p).abs() > 1e-9 * p {
+    if (t - props.t).abs() > 1e-12 * t || (p - props.p).abs() > 1e-9 * p {
         return None;
     }
     // A solution on a region boundary may land a rounding on the
@@ -555,7 +560,7 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     let Some((sat, x, u_mix)) = found else {
         return Ok(None);
     };
-    if (u_mix - u).abs() > (1e-10 * u.abs()).max(1e-9) {
+    if !within_promise(Given::InternalEnergy, u_mix, u) {
         return Ok(None);
     }
     sat.mixture(x).map(Some)

@@ -103,3 +103,15 @@ pub(crate) fn region3_phase(p: f64, t: f64) -> Phase {
         t < CRITICAL_TEMPERATURE && p >= saturation_pressure(t),
     )
 }
+
+/// Whether native `p` (MPa) and `t` (K) lie inside the range of validity,
+/// R7-97(2012) section 1: 273.15 K ≤ T ≤ 1073.15 K at p ≤ 100 MPa, to
+/// 2273.15 K at p ≤ 50 MPa. The check every backward-only result passes.
+pub(crate) fn within_range(p: f64, t: f64) -> bool {
+    let max_pressure = if t <= REGION2_MAX_TEMPERATURE {
+        MAX_PRESSURE
+    } else {
+        REGION5_MAX_PRESSURE
+    };
+    (MIN_TEMPERATURE..=MAX_TEMPERATURE).contains(&t) && (MIN_PRESSURE..=max_pressure).contains(&p)
+}

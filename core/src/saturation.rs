@@ -37,16 +37,14 @@ impl Saturation {
     /// Saturation at pressure `p`, from psat(273.15 K) to the critical
     /// pressure, in `units`.
     pub fn at_pressure(p: f64, units: Units) -> Result<Saturation, Error> {
+        let given = (Quantity::Pressure, p);
         let p = native_input(units, Quantity::Pressure, p)?;
         let min = min_saturation_pressure();
         if !(min..=CRITICAL_PRESSURE).contains(&p) {
-            return Err(Error::out_of_range(
-                Quantity::Pressure,
-                p,
-                min,
-                CRITICAL_PRESSURE,
-                units,
-            ));
+            return Err(
+                Error::out_of_range(Quantity::Pressure, p, min, CRITICAL_PRESSURE, units)
+                    .with_given(given),
+            );
         }
         let t = if p == CRITICAL_PRESSURE {
             CRITICAL_TEMPERATURE
@@ -59,6 +57,7 @@ impl Saturation {
     /// Saturation at temperature `t`, from 273.15 K to the critical
     /// temperature, in `units`.
     pub fn at_temperature(t: f64, units: Units) -> Result<Saturation, Error> {
+        let given = (Quantity::Temperature, t);
         let t = native_input(units, Quantity::Temperature, t)?;
         if !(MIN_TEMPERATURE..=CRITICAL_TEMPERATURE).contains(&t) {
             return Err(Error::out_of_range(
@@ -67,7 +66,8 @@ impl Saturation {
                 MIN_TEMPERATURE,
                 CRITICAL_TEMPERATURE,
                 units,
-            ));
+            )
+            .with_given(given));
         }
         let p = if t == CRITICAL_TEMPERATURE {
             CRITICAL_PRESSURE
@@ -230,12 +230,15 @@ fn region3_properties(p: f64, t: f64, rho: f64) -> Properties {
 impl State {
     /// Wet steam (or a saturated phase) at pressure `p` and quality `x`.
     pub fn from_px(p: f64, x: f64, units: Units) -> Result<State, Error> {
+        // A NaN pressure is its own error, whatever the quality.
+        native_input(units, Quantity::Pressure, p)?;
         check_quality(x)?;
         Saturation::at_pressure(p, units)?.mixture(x)
     }
 
     /// Wet steam (or a saturated phase) at temperature `t` and quality `x`.
     pub fn from_tx(t: f64, x: f64, units: Units) -> Result<State, Error> {
+        native_input(units, Quantity::Temperature, t)?;
         check_quality(x)?;
         Saturation::at_temperature(t, units)?.mixture(x)
     }

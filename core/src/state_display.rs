@@ -27,7 +27,7 @@ impl fmt::Display for State {
             write!(f, "{separator}{symbol} = ")?;
             match f.precision() {
                 Some(decimals) => write!(f, "{value:.decimals$}")?,
-                None => write!(f, "{}", Significant(value))?,
+                None => write!(f, "{}", Significant(value, 7))?,
             }
             let unit = units.symbol(quantity);
             if !unit.is_empty() {

@@ -6,7 +6,7 @@
 //! phase. Reproducible: the seed is `EBULLIO_SEED` (default 1997).
 
 use ebullio::saturation_line::{saturation_pressure, saturation_temperature};
-use ebullio::{boundary_b23, Method, Phase, State, Units};
+use ebullio::{boundary_b23, Method, Phase, Quantity, State, Units};
 use proptest::prelude::*;
 use proptest::test_runner::{Config, RngSeed};
 
@@ -92,8 +92,123 @@ fn assert_same(pair: &str, a: &State, b: &State, p_tol: f64) -> Result<(), TestC
     Ok(())
 }
 
+/// The promise of the README ("Round trips"): every given value comes back
+/// to relative 1e-10; u, h and s near zero to 1e-10 of 10 kJ/kg (u, h) or
+/// 0.1 kJ/(kg·K) (s) — absolute 1e-9 kJ/kg, 1e-11 kJ/(kg·K) — converted to
+/// the caller's units; a temperature relative to its absolute value.
+fn assert_promise(
+    what: &str,
+    quantity: Quantity,
+    back: f64,
+    given: f64,
+    units: Units,
+) -> Result<(), TestCaseError> {
+    let scale = match quantity {
+        Quantity::Enthalpy | Quantity::InternalEnergy => units.from_native(quantity, 10.0),
+        Quantity::Entropy => units.from_native(quantity, 0.1),
+        // °C and °F have their zero elsewhere: relative to the kelvins
+        // (rankines) of the given temperature.
+        Quantity::Temperature => units.from_native(
+            Quantity::TemperatureDifference,
+            units.to_native(quantity, given),
+        ),
+        _ => 0.0,
+    };
+    let tolerance = 1e-10 * given.abs().max(scale);
+    prop_assert!(
+        (back - given).abs() <= tolerance,
+        "{what} {units:?}: {quantity} {back} for {given} (off by {:e}, promised {tolerance:e})",
+        back - given
+    );
+    Ok(())
+}
+
+/// Every inverse pair from the state `a`, its values given in `units`:
+/// each comes back within the promise, in those units.
+fn assert_pairs_keep_the_promise(a: &State, units: Units) -> Result<(), TestCaseError> {
+    let a = a.in_units(units);
+    let (p, t, v, rho) = (
+        a.pressure(),
+        a.temperature(),
+        a.specific_volume(),
+        a.density(),
+    );
+    let (h, s, u) = (a.enthalpy(), a.entropy(), a.internal_energy());
+    let at = format!("at {} MPa, {} K", a.native().p, a.native().t);
+    let cases = [
+        (
+            "(p,h)",
+            State::from_ph(p, h, units),
+            (Quantity::Pressure, p),
+            (Quantity::Enthalpy, h),
+        ),
+        (
+            "(p,s)",
+            State::from_ps(p, s, units),
+            (Quantity::Pressure, p),
+            (Quantity::Entropy, s),
+        ),
+        (
+            "(h,s)",
+            State::from_hs(h, s, units),
+            (Quantity::Enthalpy, h),
+            (Quantity::Entropy, s),
+        ),
+        (
+            "(ρ,T)",
+            State::from_rho_t(rho, t, units),
+            (Quantity::Density, rho),
+            (Quantity::Temperature, t),
+        ),
+        (
+            "(v,T)",
+            State::from_vt(v, t, units),
+            (Quantity::SpecificVolume, v),
+            (Quantity::Temperature, t),
+        ),
+        (
+            "(v,u)",
+            State::from_vu(v, u, units),
+            (Quantity::SpecificVolume, v),
+            (Quantity::InternalEnergy, u),
+        ),
+    ];
+    for (pair, back, first, second) in cases {
+        let what = format!("{pair} {at}");
+        let back = back.map_err(|e| TestCaseError::fail(format!("{what} {units:?}: {e}")))?;
+        let value = |quantity| match quantity {
+            Quantity::Pressure => back.pressure(),
+            Quantity::Temperature => back.temperature(),
+            Quantity::Enthalpy => back.enthalpy(),
+            Quantity::Entropy => back.entropy(),
+            Quantity::InternalEnergy => back.internal_energy(),
+            Quantity::Density => back.density(),
+            _ => back.specific_volume(),
+        };
+        for (quantity, given) in [first, second] {
+            assert_promise(&what, quantity, value(quantity), given, units)?;
+        }
+    }
+    Ok(())
+}
+
 proptest! {
     #![proptest_config(config(4000))]
+
+    #[test]
+    fn every_pair_keeps_the_round_trip_promise_in_the_callers_units(
+        (p, t) in states(),
+        k in 0usize..4,
+        x in prop_oneof![Just(None), (0.0f64..1.0).prop_map(Some)],
+    ) {
+        // Single phase from (p, T), or wet steam at T below Tc.
+        let a = match x {
+            Some(x) if t < 647.0 => State::from_tx(t, x, Units::Native),
+            _ => State::from_pt(p, t, Units::Native),
+        };
+        let Ok(a) = a else { return Ok(()); };
+        assert_pairs_keep_the_promise(&a, Units::ALL[k])?;
+    }
 
     #[test]
     fn single_phase_states_come_back_from_every_pair((p, t) in states()) {
@@ -276,8 +391,13 @@ fn the_side_of_a_boundary_is_the_side_of_the_given_value() {
                             Some(region) => assert_eq!(back.region(), region, "{at}"),
                             None => assert!(wet, "{at}: {:?}", back.phase()),
                         }
-                        let tolerance = (1e-10 * z.abs()).max(1e-9);
-                        assert!((z_back - z).abs() <= tolerance, "{at}: {z_back}");
+                        let quantity = if enthalpy {
+                            Quantity::Enthalpy
+                        } else {
+                            Quantity::Entropy
+                        };
+                        assert_promise(&at, quantity, z_back, z, Units::Native)
+                            .unwrap_or_else(|e| panic!("{e}"));
                     }
                 }
             }

@@ -1,0 +1,465 @@
+//! Inputs at and beyond the edges of the range: every refused input is an
+//! error that names the right quantity with a range that is true at the
+//! other input's value, in the caller's units; every returned state lies
+//! inside the range of validity of IAPWS R7-97(2012), section 1
+//! (273.15 K ≤ T ≤ 1073.15 K at p ≤ 100 MPa, to 2273.15 K at p ≤ 50 MPa).
+
+use ebullio::{Error, InputPair, Method, Quantity, State, Units};
+
+/// The range of validity, IAPWS R7-97(2012), section 1, with the rounding
+/// a state may carry (its T and p from an iteration on a boundary).
+fn assert_in_range(what: &str, state: &State) {
+    let s = state.native();
+    let slack = 1e-12;
+    let t_max = if s.p <= 50.0 * (1.0 + slack) {
+        2273.15
+    } else {
+        1073.15
+    };
+    assert!(
+        s.t >= 273.15 * (1.0 - slack) && s.t <= t_max * (1.0 + slack),
+        "{what}: T = {} K outside the range",
+        s.t
+    );
+    assert!(
+        s.p > 0.0 && s.p <= 100.0 * (1.0 + slack),
+        "{what}: p = {} MPa outside the range",
+        s.p
+    );
+}
+
+/// The quantity each slot of a pair stands for.
+fn quantities(pair: InputPair) -> (Quantity, Quantity) {
+    use InputPair::*;
+    use Quantity::*;
+    match pair {
+        PressureTemperature => (Pressure, Temperature),
+        PressureEnthalpy => (Pressure, Enthalpy),
+        PressureEntropy => (Pressure, Entropy),
+        EnthalpyEntropy => (Enthalpy, Entropy),
+        DensityTemperature => (Density, Temperature),
+        VolumeTemperature => (SpecificVolume, Temperature),
+        VolumeInternalEnergy => (SpecificVolume, InternalEnergy),
+        PressureQuality => (Pressure, Quality),
+        TemperatureQuality => (Temperature, Quality),
+    }
+}
+
+/// A refusal is honest: a range error names one of the two inputs, carries
+/// the caller's own number, and a finite range that does not contain it.
+fn assert_honest(what: &str, pair: InputPair, (a, b): (f64, f64), err: &Error, units: Units) {
+    let (qa, qb) = quantities(pair);
+    let text = err.to_string();
+    assert!(
+        !text.contains("inf") && !text.contains("NaN"),
+        "{what}: {text}"
+    );
+    match *err {
+        Error::OutOfRange {
+            quantity,
+            value,
+            min,
+            max,
+            units: reported,
+        } => {
+            assert_eq!(reported, units, "{what}: {text}");
+            let given = if quantity == qa {
+                a
+            } else {
+                assert_eq!(quantity, qb, "{what}: {text}");
+                b
+            };
+            assert_eq!(value.to_bits(), given.to_bits(), "{what}: {text}");
+            assert!(
+                min.is_finite() && max.is_finite() && min <= max,
+                "{what}: {text}"
+            );
+            assert!(!(min..=max).contains(&value), "{what}: {text}");
+            // As printed, too: the bounds' digits keep the value outside.
+            let printed = text
+                .split_once("valid range ")
+                .and_then(|(_, range)| range.split_once(" to "))
+                .and_then(|(lo, rest)| Some((lo.parse::<f64>().ok()?, rest.split(' ').next()?)))
+                .and_then(|(lo, hi)| Some((lo, hi.parse::<f64>().ok()?)));
+            let Some((lo, hi)) = printed else {
+                panic!("{what}: no range in {text}")
+            };
+            assert!(!(lo..=hi).contains(&value), "{what}: {text}");
+        }
+        Error::QualityOutOfRange { value } => {
+            assert_eq!(qb, Quantity::Quality, "{what}: {text}");
+            assert!(a.is_finite() && value == b, "{what}: {text}");
+        }
+        Error::NotFinite { quantity } => {
+            let given = if quantity == qa { a } else { b };
+            assert!(
+                (quantity == qa || quantity == qb) && !given.is_finite(),
+                "{what}: {text}"
+            );
+        }
+        _ => {}
+    }
+}
+
+/// Values that overflow when converted from some unit system, and the
+/// largest finite ones.
+const HUGE: [f64; 4] = [f64::MAX, -f64::MAX, 1e306, -1e306];
+
+#[test]
+fn inputs_that_overflow_on_conversion_are_refused() {
+    // The reproducers of issue 12: converted to native units they were
+    // infinite, and solved as other states.
+    let err = State::solve(
+        InputPair::EnthalpyEntropy,
+        -f64::MAX,
+        1.2443871214374884,
+        Units::UsCustomary,
+        Method::Exact,
+    )
+    .unwrap_err();
+    assert!(
+        matches!(err, Error::OutOfRange { quantity: Quantity::Enthalpy, value, .. } if value == -f64::MAX),
+        "{err:?}"
+    );
+    let err = State::solve(
+        InputPair::VolumeInternalEnergy,
+        23.07682425659189,
+        f64::MAX,
+        Units::UsCustomary,
+        Method::Exact,
+    )
+    .unwrap_err();
+    assert!(
+        matches!(
+            err,
+            Error::OutOfRange {
+                quantity: Quantity::InternalEnergy,
+                ..
+            } | Error::NoStateInRange { .. }
+        ),
+        "{err:?}"
+    );
+    // Every pair, unit system and method, a huge value in either slot,
+    // beside a value that is valid for the pair in native units.
+    let ordinary = |pair: InputPair| match pair {
+        InputPair::PressureTemperature => (1.0, 500.0),
+        InputPair::PressureEnthalpy => (1.0, 2000.0),
+        InputPair::PressureEntropy => (1.0, 5.0),
+        InputPair::EnthalpyEntropy => (2000.0, 5.0),
+        InputPair::DensityTemperature => (10.0, 500.0),
+        InputPair::VolumeTemperature => (0.1, 500.0),
+        InputPair::VolumeInternalEnergy => (0.1, 2000.0),
+        InputPair::PressureQuality => (1.0, 0.5),
+        InputPair::TemperatureQuality => (400.0, 0.5),
+    };
+    for pair in InputPair::ALL {
+        for units in Units::ALL {
+            for method in [Method::Exact, Method::BackwardOnly] {
+                for huge in HUGE {
+                    let (a, b) = ordinary(pair);
+                    for inputs in [(huge, b), (a, huge)] {
+                        let what = format!("{pair:?} {inputs:?} {units:?} {method:?}");
+                        match State::solve(pair, inputs.0, inputs.1, units, method) {
+                            Ok(s) => panic!("{what}: solved as {s:?}"),
+                            Err(e) => assert_honest(&what, pair, inputs, &e, units),
+                        }
+                    }
+                }
+            }
+        }
+    }
+}
+
+/// h and s at (p, T), native.
+fn caloric_at(p: f64, t: f64) -> (f64, f64) {
+    let s = State::from_pt(p, t, Units::Native).unwrap();
+    (s.enthalpy(), s.entropy())
+}
+
+#[test]
+fn absurd_enthalpy_or_entropy_near_100_mpa_is_refused_with_the_range_at_p() {
+    let err = State::from_ph(100.0, -771471705.8529421, Units::Native).unwrap_err();
+    let (h_cold, _) = caloric_at(100.0, 273.15);
+    let (h_hot, _) = caloric_at(100.0, 1073.15);
+    let Error::OutOfRange {
+        quantity: Quantity::Enthalpy,
+        min,
+        max,
+        ..
+    } = err
+    else {
+        panic!("{err:?}")
+    };
+    assert!(
+        (min - h_cold).abs() < 1e-9 && (max - h_hot).abs() < 1e-9,
+        "{err}"
+    );
+    let err = State::from_ps(99.99999, -1e5, Units::Native).unwrap_err();
+    let (_, s_cold) = caloric_at(99.99999, 273.15);
+    let (_, s_hot) = caloric_at(99.99999, 1073.15);
+    let Error::OutOfRange {
+        quantity: Quantity::Entropy,
+        min,
+        max,
+        ..
+    } = err
+    else {
+        panic!("{err:?}")
+    };
+    assert!(
+        (min - s_cold).abs() < 1e-12 && (max - s_hot).abs() < 1e-12,
+        "{err}"
+    );
+}
+
+#[test]
+fn no_vapour_colder_than_273_15_k_from_p_h_or_p_s() {
+    let err = State::from_ph(1e-4, 2490.0, Units::Native).unwrap_err();
+    let (h_cold, _) = caloric_at(1e-4, 273.15);
+    assert!(
+        matches!(err, Error::OutOfRange { quantity: Quantity::Enthalpy, min, .. } if (min - h_cold).abs() < 1e-9),
+        "{err:?}"
+    );
+    let err = State::from_ps(611.2, 9155.0, Units::SiBase).unwrap_err();
+    let (_, s_cold) = caloric_at(611.2e-6, 273.15);
+    assert!(
+        matches!(err, Error::OutOfRange { quantity: Quantity::Entropy, min, .. } if (min - 1e3 * s_cold).abs() < 1e-6),
+        "{err:?}"
+    );
+}
+
+/// A grid over and beyond the range, in native units, for the pairs'
+/// first and second values.
+fn grid(lo: f64, hi: f64, n: usize) -> impl Iterator<Item = f64> {
+    (0..=n).map(move |k| lo + (hi - lo) * k as f64 / n as f64)
+}
+
+fn log_grid(lo: f64, hi: f64, n: usize) -> impl Iterator<Item = f64> {
+    grid(lo.log10(), hi.log10(), n).map(|e| 10f64.powf(e))
+}
+
+/// Every pair over a grid across the edges of the range: each state
+/// returned lies inside the range, each refusal is honest.
+#[test]
+fn every_pair_returns_states_inside_the_range_or_refuses_honestly() {
+    let pressures: Vec<f64> = log_grid(1e-7, 110.0, 40)
+        .chain([6.112e-4, 6.1121e-4, 6.1122e-4, 50.0, 99.99999, 100.0])
+        .collect();
+    let enthalpies: Vec<f64> = grid(-50.0, 7500.0, 60).collect();
+    let entropies: Vec<f64> = grid(-0.5, 14.0, 60).chain([9.155, 9.16]).collect();
+    let temperatures: Vec<f64> = grid(263.15, 2283.15, 40).chain([273.15, 647.096]).collect();
+    let volumes: Vec<f64> = log_grid(8e-4, 1e6, 40).collect();
+    let energies: Vec<f64> = grid(-50.0, 6000.0, 30).collect();
+    let cases: Vec<(InputPair, &[f64], &[f64])> = vec![
+        (InputPair::PressureEnthalpy, &pressures, &enthalpies),
+        (InputPair::PressureEntropy, &pressures, &entropies),
+        (InputPair::EnthalpyEntropy, &enthalpies, &entropies),
+        (InputPair::VolumeTemperature, &volumes, &temperatures),
+        (InputPair::VolumeInternalEnergy, &volumes, &energies),
+        (InputPair::PressureTemperature, &pressures, &temperatures),
+    ];
+    for (pair, firsts, seconds) in cases {
+        for method in [Method::Exact, Method::BackwardOnly] {
+            for &a in firsts {
+                for &b in seconds {
+                    let what = format!("{pair:?} ({a}, {b}) {method:?}");
+                    match State::solve(pair, a, b, Units::Native, method) {
+                        Ok(state) => assert_in_range(&what, &state),
+                        Err(Error::BackwardEquationOutOfRange { .. })
+                            if method == Method::BackwardOnly => {}
+                        Err(e) => assert_honest(&what, pair, (a, b), &e, Units::Native),
+                    }
+                }
+            }
+        }
+    }
+    // (ρ, T) on the same temperatures, densities from 1/v.
+    for &v in &volumes {
+        for &t in &temperatures {
+            let what = format!("(rho, T) ({}, {t})", 1.0 / v);
+            match State::from_rho_t(1.0 / v, t, Units::Native) {
+                Ok(state) => assert_in_range(&what, &state),
+                Err(e) => assert_honest(
+                    &what,
+                    InputPair::DensityTemperature,
+                    (1.0 / v, t),
+                    &e,
+                    Units::Native,
+                ),
+            }
+        }
+    }
+}
+
+#[test]
+fn backward_only_results_outside_the_range_are_refused() {
+    // T(p,h) of region 1 gives 273.136 K here (R7-97 eq. 11 used below
+    // its range); the state is refused, not returned.
+    assert!(matches!(
+        State::from_ph_with(0.01, 0.0, Units::Native, Method::BackwardOnly),
+        Err(Error::BackwardEquationOutOfRange { .. })
+    ));
+}
+
+#[test]
+fn range_messages_give_the_range_at_the_other_inputs_value() {
+    // Below the liquid's enthalpy at 273.15 K and 0.689 MPa.
+    let err = State::from_ph(0.689, -3.4, Units::Native).unwrap_err();
+    let (h_cold, _) = caloric_at(0.689, 273.15);
+    let (h_hot, _) = caloric_at(0.689, 2273.15);
+    assert!(
+        matches!(err, Error::OutOfRange { quantity: Quantity::Enthalpy, min, max, .. }
+            if (min - h_cold).abs() < 1e-9 && (max - h_hot).abs() < 1e-9),
+        "{err:?}"
+    );
+    assert_honest(
+        "(0.689, -3.4)",
+        InputPair::PressureEnthalpy,
+        (0.689, -3.4),
+        &err,
+        Units::Native,
+    );
+    let err = State::from_ph(100.0, 0.0, Units::Native).unwrap_err();
+    assert_honest(
+        "(100, 0)",
+        InputPair::PressureEnthalpy,
+        (100.0, 0.0),
+        &err,
+        Units::Native,
+    );
+    assert!(err.to_string().contains("95."), "{err}");
+    // A zero or negative specific volume: the range of v, not "0 to inf".
+    for v in [0.0, -1.0] {
+        let err = State::from_vu(v, 2000.0, Units::Native).unwrap_err();
+        assert_honest(
+            "(v, u)",
+            InputPair::VolumeInternalEnergy,
+            (v, 2000.0),
+            &err,
+            Units::Native,
+        );
+        let err = State::from_vt(v, 500.0, Units::Native).unwrap_err();
+        assert!(
+            matches!(
+                err,
+                Error::OutOfRange {
+                    quantity: Quantity::SpecificVolume,
+                    ..
+                }
+            ),
+            "{err:?}"
+        );
+        assert_honest(
+            "(v, T)",
+            InputPair::VolumeTemperature,
+            (v, 500.0),
+            &err,
+            Units::Native,
+        );
+    }
+    // The critical density at the critical temperature (IAPWS R7-97(2012),
+    // eqs. 2 and 3: ρc = 322 kg/m³, Tc = 647.096 K) is the critical
+    // point, not a quality error.
+    match State::from_rho_t(322.09062154574286, 647.096, Units::Native) {
+        Ok(state) => assert_in_range("critical point", &state),
+        Err(e) => assert_ne!(
+            std::mem::discriminant(&e),
+            std::mem::discriminant(&Error::NotFinite {
+                quantity: Quantity::Quality
+            }),
+            "{e}"
+        ),
+    }
+    // A NaN pressure or temperature beside a quality out of [0, 1] is the
+    // NaN's error.
+    for x in [1.5, -0.5] {
+        assert_eq!(
+            State::from_px(f64::NAN, x, Units::Native),
+            Err(Error::NotFinite {
+                quantity: Quantity::Pressure
+            })
+        );
+        assert_eq!(
+            State::from_tx(f64::INFINITY, x, Units::Native),
+            Err(Error::NotFinite {
+                quantity: Quantity::Temperature
+            })
+        );
+    }
+}
+
+/// The error text the README shows is the real one.
+#[test]
+fn the_readme_error_example_is_a_real_message() {
+    let err = State::from_pt(17404.5, 500.0, Units::UsCustomary).unwrap_err();
+    let readme = include_str!("../../README.md").replace('\n', " ");
+    let shown = err.to_string();
+    assert!(
+        readme.contains(&format!("*{shown}*")),
+        "the README's error example is not {shown}"
+    );
+}
+
+/// The (v, u) range check's extremes are the range's: the densest state
+/// at 100 MPa and 273.15 K, the most rarefied at 2273.15 K and 1e-12 MPa
+/// (v grows as p falls, κT > 0; and with T along these isobars).
+#[test]
+fn specific_volume_extremes_of_the_range() {
+    let v_min = State::from_pt(100.0, 273.15, Units::Native)
+        .unwrap()
+        .specific_volume();
+    let v_max = State::from_pt(1e-12, 2273.15, Units::Native)
+        .unwrap()
+        .specific_volume();
+    for p in log_grid(1e-12, 100.0, 30) {
+        for t in grid(273.15, 2273.15, 200) {
+            if let Ok(s) = State::from_pt(p, t, Units::Native) {
+                let v = s.specific_volume();
+                assert!(v >= v_min && v <= v_max, "{p} MPa, {t} K: v = {v}");
+            }
+        }
+    }
+    let err = State::from_vu(0.999 * v_min, 0.0, Units::Native).unwrap_err();
+    assert!(
+        matches!(err, Error::OutOfRange { quantity: Quantity::SpecificVolume, min, max, .. }
+            if min == v_min && max == v_max),
+        "{err:?}"
+    );
+}
+
+/// Found by a random-input run: (h, s) and (v, u) a hair past the hottest
+/// state of the range (h, s at 2273.15 K and low pressure, nudged by
+/// 1e-9) came back at 2273.150002 K, and (v, u) of cold water at 100 MPa
+/// at 273.1499998 K; they are refused.
+#[test]
+fn h_s_and_v_u_beyond_the_temperature_limits_are_refused() {
+    let cases = [
+        (
+            InputPair::EnthalpyEntropy,
+            7.376980415719164e3,
+            1.5244381138288993e1,
+        ),
+        (
+            InputPair::VolumeInternalEnergy,
+            5.106427193644301e6,
+            6.3278625926259165e3,
+        ),
+    ];
+    let us = [(
+        InputPair::VolumeInternalEnergy,
+        1.532465503070491e-2,
+        -1.2154990859616589e-1,
+    )];
+    let cases = cases
+        .map(|c| (c, Units::Native))
+        .into_iter()
+        .chain(us.map(|c| (c, Units::UsCustomary)));
+    for ((pair, a, b), units) in cases {
+        for method in [Method::Exact, Method::BackwardOnly] {
+            match State::solve(pair, a, b, units, method) {
+                Ok(state) => assert_in_range(&format!("{pair:?}"), &state),
+                Err(e) => assert_honest(&format!("{pair:?}"), pair, (a, b), &e, units),
+            }
+        }
+    }
+}
