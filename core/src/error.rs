@@ -4,6 +4,8 @@
 use core::fmt::{self, Write};
 
 use crate::math::{floor, log10};
+use crate::plant::fault::FigureText;
+use crate::plant::{PlantFigure, PlantPart};
 use crate::units::{Quantity, Units};
 
 /// Why a state could not be computed.
@@ -80,13 +82,18 @@ pub enum Error {
         what: &'static str,
     },
 
-    /// A plant description that cannot be solved as given: an efficiency
-    /// outside (0, 1], heaters out of pressure order, a heater whose
-    /// temperatures leave no heat to transfer.
-    #[error("the plant description is not valid: {what}")]
+    /// A plant (a cycle or one component) that cannot exist as given: an
+    /// efficiency outside (0, 1], heaters out of pressure order, a heater
+    /// needing more steam than reaches it, a cycle beating Carnot. Names
+    /// the part and, where a number shows it, that number and its limit.
+    #[error("the plant description is not valid: {part}: {what}{}", FigureText(*figure))]
     InvalidPlant {
-        /// What is wrong with it.
+        /// The part at fault.
+        part: PlantPart,
+        /// What is impossible about it.
         what: &'static str,
+        /// The number that shows it, in the caller's units, if one does.
+        figure: Option<PlantFigure>,
     },
 
     /// Measurements that do not fix a state: a turbine exhaust read as
@@ -134,7 +141,7 @@ pub(crate) fn native_input(units: Units, quantity: Quantity, value: f64) -> Resu
 /// A range bound printed to seven significant digits without trailing
 /// zeros: limits converted to the caller's units (14503.77 psia) read as
 /// numbers a person would write, not as 14503.773773020925.
-struct Significant(f64);
+pub(crate) struct Significant(pub(crate) f64);
 
 impl fmt::Display for Significant {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {

@@ -2,9 +2,14 @@
 //! reheater heat input, condenser duty; and the condensate a condenser
 //! delivers.
 
+use super::fault::refuse_with;
 use super::native;
+use super::{PlantFigure, PlantPart};
+use crate::constants::MIN_TEMPERATURE;
 use crate::saturation_line::saturation_temperature;
 use crate::{Error, Quantity, Saturation, State, Units};
+
+const CONDENSER: PlantPart = PlantPart::single("condenser");
 
 /// Heat given to `flow` going from `inlet` to `outlet` (negative when the
 /// flow gives heat away, as in a condenser), in the inlet's units times
@@ -18,18 +23,39 @@ pub fn heat_duty(flow: f64, inlet: &State, outlet: &State) -> f64 {
 
 /// The condensate leaving a condenser at `pressure`, subcooled below its
 /// saturation temperature by `subcooling` (a temperature difference; 0
-/// for saturated liquid), all in `units`.
+/// for saturated liquid), all in `units`. The subcooling lies between 0
+/// and the saturation temperature less 273.15 K, the formulation's
+/// lowest temperature.
 pub fn condensate(pressure: f64, subcooling: f64, units: Units) -> Result<State, Error> {
     let sat = Saturation::at_pressure(pressure, units)?;
     let dt = native(Quantity::TemperatureDifference, subcooling, units)?;
+    let subcooling_figure = |limit| {
+        PlantFigure::native(
+            "subcooling",
+            Quantity::TemperatureDifference,
+            dt,
+            Some(limit),
+            units,
+        )
+    };
     if dt < 0.0 {
-        return Err(Error::InvalidPlant {
-            what: "a condensate subcooling is negative",
-        });
+        return Err(refuse_with(
+            CONDENSER,
+            "its condensate subcooling is negative",
+            subcooling_figure(0.0),
+        ));
     }
     if dt == 0.0 {
         return Ok(*sat.liquid());
     }
     let p = sat.liquid().native().p;
-    Ok(State::from_pt(p, saturation_temperature(p) - dt, Units::Native)?.in_units(units))
+    let t_sat = saturation_temperature(p);
+    if dt > t_sat - MIN_TEMPERATURE {
+        return Err(refuse_with(
+            CONDENSER,
+            "its condensate subcooling puts the hotwell below 273.15 K, the formulation's lowest temperature",
+            subcooling_figure(t_sat - MIN_TEMPERATURE),
+        ));
+    }
+    Ok(State::from_pt(p, t_sat - dt, Units::Native)?.in_units(units))
 }

@@ -2,10 +2,15 @@
 //! from an inlet state to an exhaust pressure at an isentropic efficiency,
 //! and, for performance tests, the efficiency from measured end states.
 
+use super::fault::{in_caller_units, refuse};
+use super::PlantPart;
 use super::{check_efficiency, native};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
 use crate::{Error, Quantity, State, Units};
+
+/// How a stand-alone section names itself in a refusal.
+const TURBINE_SECTION: PlantPart = PlantPart::single("turbine section");
 
 /// One expansion through a turbine section. States and specific values
 /// are in the unit system of the inlet state.
@@ -35,22 +40,24 @@ pub fn expand(
     isentropic_efficiency: f64,
 ) -> Result<Expansion, Error> {
     let units = inlet.units();
-    let efficiency = check_efficiency(isentropic_efficiency)?;
+    let efficiency = check_efficiency(isentropic_efficiency, TURBINE_SECTION)?;
     let p_out = native(Quantity::Pressure, exhaust_pressure, units)?;
     let start = inlet.native();
     if p_out >= start.p {
-        return Err(Error::InvalidPlant {
-            what: "a turbine section's exhaust pressure is not below its inlet pressure",
-        });
+        return Err(refuse(
+            TURBINE_SECTION,
+            "its exhaust pressure is not below its inlet pressure",
+        ));
     }
-    let ideal = State::from_ps(p_out, start.s, Units::Native)?;
+    let ideal =
+        State::from_ps(p_out, start.s, Units::Native).map_err(|e| in_caller_units(e, units))?;
     let h_out = start.h - efficiency * (start.h - ideal.native().h);
     // At efficiency 1 the isentropic state is the exhaust: no second solve,
     // and no round-off between the two.
     let exhaust = if efficiency == 1.0 {
         ideal
     } else {
-        State::from_ph(p_out, h_out, Units::Native)?
+        State::from_ph(p_out, h_out, Units::Native).map_err(|e| in_caller_units(e, units))?
     };
     Ok(between_native(inlet, &exhaust, &ideal, units))
 }
@@ -97,9 +104,10 @@ pub fn section_efficiency(
 pub fn section_efficiency_between(inlet: &State, exhaust: &State) -> Result<Expansion, Error> {
     let p_out = exhaust.native().p;
     if p_out >= inlet.native().p {
-        return Err(Error::InvalidPlant {
-            what: "a turbine section's exhaust pressure is not below its inlet pressure",
-        });
+        return Err(refuse(
+            TURBINE_SECTION,
+            "its exhaust pressure is not below its inlet pressure",
+        ));
     }
     let ideal = State::from_ps(p_out, inlet.native().s, Units::Native)?;
     Ok(between_native(inlet, exhaust, &ideal, inlet.units()))
