@@ -59,7 +59,7 @@ pub fn spray_for_temperature(
     )?;
     let throughput =
         ((flow + spray_flow) * o.s).abs() + (flow * s.s).abs() + (spray_flow * w.s).abs();
-    second_law(ATTEMPERATOR, entropy_generation, throughput)?;
+    second_law(ATTEMPERATOR, entropy_generation, throughput, units)?;
     Ok(Spray {
         spray_flow,
         outlet: outlet.in_units(units),

@@ -88,7 +88,7 @@ pub fn closed_heater(
         + (c_flow * c.s).abs()
         + (flow * a.s).abs()
         + (flow * b.s).abs();
-    second_law(CLOSED_HEATER, entropy_generation, throughput)?;
+    second_law(CLOSED_HEATER, entropy_generation, throughput, units)?;
     Ok(ClosedHeater {
         feedwater_out: fw_out.in_units(units),
         drain_out: drain.in_units(units),
@@ -146,9 +146,9 @@ pub(crate) fn end_states(
     if t_out > shell.t * (1.0 + TEMPERATURE_ROUNDING) {
         return Err(refuse_with(
             part,
-            "its feedwater would leave hotter than the extraction steam entering its shell",
+            "its feedwater would leave hotter than the steam entering its shell",
             PlantFigure::native(
-                "feedwater outlet temperature",
+                "feedwater outlet",
                 Quantity::Temperature,
                 t_out,
                 Some(shell.t),
@@ -204,9 +204,9 @@ pub(crate) fn desuperheating_zone(
         // Per unit feedwater flow (needed > 0, so that flow is not 0).
         return Err(refuse_with(
             part,
-            "its feedwater leaves above the shell saturation temperature, and the steam's superheat cannot heat it that far",
+            "the steam's superheat cannot heat the feedwater this far",
             PlantFigure::native(
-                "heat needed above saturation per unit feedwater",
+                "needed per unit feedwater",
                 Quantity::Enthalpy,
                 needed / feedwater_flow,
                 Some(available.max(0.0) / feedwater_flow),

@@ -197,7 +197,7 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
             if p_extraction > current.native().p {
                 return Err(refuse(
                     heater_part(&heaters[next], next),
-                    "its extraction pressure is not below the one before it along the expansion, or lies between the reheater's inlet and outlet pressures",
+                    "its extraction pressure is not below the previous one, or lies between the reheater's inlet and outlet pressures",
                 ));
             }
             if p_extraction < current.native().p {
@@ -458,9 +458,9 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
         if w.extraction_flow > reaching + FLOW_ROUNDING {
             return Err(refuse_with(
                 part,
-                "its energy balance needs more extraction steam than reaches its extraction point from the throttle",
+                "it needs more steam than reaches its extraction point",
                 PlantFigure::number(
-                    "extraction flow per unit throttle flow",
+                    "extraction per unit throttle flow",
                     w.extraction_flow,
                     Some(reaching.max(0.0)),
                 ),
@@ -671,9 +671,9 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
     if boiler_inlet.native().t >= throttle.native().t || boiler_heat <= 0.0 {
         return Err(refuse_with(
             BOILER,
-            "its feedwater enters no colder than the throttle steam leaves: the feed pump discharges too hot",
+            "its feedwater enters no colder than the throttle steam: the feed pump discharges too hot",
             PlantFigure::native(
-                "feedwater temperature",
+                "feedwater",
                 Quantity::Temperature,
                 boiler_inlet.native().t,
                 Some(throttle.native().t),
@@ -887,7 +887,7 @@ impl Assembly {
                 name: kind.name(),
                 number,
             };
-            self.second_law_breach = second_law(part, generation, throughput).err();
+            self.second_law_breach = second_law(part, generation, throughput, Units::Native).err();
         }
         let mut c = Component {
             kind,

@@ -46,7 +46,7 @@ impl fmt::Display for PlantPart {
 /// The number that shows a refusal's reason, with the limit it breaks.
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct PlantFigure {
-    /// What the number is, e.g. "extraction flow per unit throttle flow".
+    /// What the number is, e.g. "extraction per unit throttle flow".
     pub label: &'static str,
     /// Its value, in `units`.
     pub value: f64,
@@ -185,19 +185,27 @@ pub(crate) fn finite_figures(part: PlantPart, figures: &[f64]) -> Result<(), Err
 const ENTROPY_ROUNDING: f64 = 2e-5;
 
 /// The second law for one component: the entropy it generates
-/// (native, flow × kJ/(kg·K)) is not negative beyond the rounding of its
-/// `throughput` (the sum of |flow × s| of its streams).
-pub(crate) fn second_law(part: PlantPart, generation: f64, throughput: f64) -> Result<(), Error> {
+/// (native, flow × kJ/(kg·K)) is not negative beyond [`ENTROPY_ROUNDING`]
+/// of its `throughput` (the sum of |flow × s| of its streams); reported
+/// in `units`.
+pub(crate) fn second_law(
+    part: PlantPart,
+    generation: f64,
+    throughput: f64,
+    units: Units,
+) -> Result<(), Error> {
     if generation >= -ENTROPY_ROUNDING * throughput {
         Ok(())
     } else {
         Err(refuse_with(
             part,
             "it would destroy entropy, which the second law forbids",
-            PlantFigure::number(
-                "entropy generation, kJ/K per kg of flow",
+            PlantFigure::native(
+                "entropy generation per unit flow",
+                Quantity::Entropy,
                 generation,
                 Some(0.0),
+                units,
             ),
         ))
     }

@@ -53,7 +53,7 @@ pub fn condensate(pressure: f64, subcooling: f64, units: Units) -> Result<State,
     if dt > t_sat - MIN_TEMPERATURE {
         return Err(refuse_with(
             CONDENSER,
-            "its condensate subcooling puts the hotwell below 273.15 K, the formulation's lowest temperature",
+            "its subcooling puts the hotwell below 273.15 K, the formulation's lowest temperature",
             subcooling_figure(t_sat - MIN_TEMPERATURE),
         ));
     }

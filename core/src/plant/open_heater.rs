@@ -64,7 +64,7 @@ pub fn open_heater(
         + (extraction_flow * e.s).abs()
         + (c_flow * c.s).abs()
         + (feedwater_flow * a.s).abs();
-    second_law(OPEN_HEATER, entropy_generation, throughput)?;
+    second_law(OPEN_HEATER, entropy_generation, throughput, units)?;
     Ok(OpenHeater {
         outlet: outlet.in_units(units),
         extraction_flow,
