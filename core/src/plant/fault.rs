@@ -111,6 +111,11 @@ impl fmt::Display for FigureText {
     }
 }
 
+/// Why a machine on a pressure step of a few ulps is refused: its work is
+/// at the rounding of the enthalpies and its sign and efficiency are noise.
+pub(crate) const TOO_SMALL_A_STEP: &str =
+    "its pressure step is too small for its work to stand above rounding";
+
 /// A refusal of `part` for `what`, without a number.
 pub(crate) fn refuse(part: PlantPart, what: &'static str) -> Error {
     Error::InvalidPlant {

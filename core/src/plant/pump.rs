@@ -3,7 +3,7 @@
 //! end from (p,s), the real one from (p,h)), with the incompressible
 //! estimate v·Δp reported beside it so a caller sees how small it is.
 
-use super::fault::{in_caller_units, refuse, refuse_with};
+use super::fault::{in_caller_units, refuse, refuse_with, TOO_SMALL_A_STEP};
 use super::{check_efficiency, native};
 use super::{PlantFigure, PlantPart};
 use crate::{Error, Phase, Quantity, State, Units};
@@ -32,7 +32,7 @@ pub struct Compression {
     pub isentropic_efficiency: f64,
     /// The temperature rise across the pump, a temperature difference.
     pub temperature_rise: f64,
-    /// Specific entropy generated, s_out − s_in (never negative).
+    /// Specific entropy generated, s_out − s_in (not negative beyond the rounding of s).
     pub entropy_generation: f64,
 }
 
@@ -61,6 +61,9 @@ pub fn compress(
     }
     let ideal = State::from_ps(p_out, a.s, Units::Native).map_err(|e| in_caller_units(e, units))?;
     let isentropic_work = ideal.native().h - a.h;
+    if isentropic_work <= 0.0 {
+        return Err(refuse(PUMP, TOO_SMALL_A_STEP));
+    }
     let outlet = if efficiency == 1.0 {
         ideal
     } else {
@@ -80,6 +83,9 @@ pub fn compress(
         })?
     };
     let b = outlet.native();
+    if b.h <= a.h {
+        return Err(refuse(PUMP, TOO_SMALL_A_STEP));
+    }
     // MPa · m³/kg = MJ/kg: a thousand kJ/kg.
     let incompressible_work = 1e3 * a.v * (p_out - a.p);
     let energy = |x| units.from_native(Quantity::Enthalpy, x);

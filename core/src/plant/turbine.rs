@@ -2,7 +2,7 @@
 //! from an inlet state to an exhaust pressure at an isentropic efficiency,
 //! and, for performance tests, the efficiency from measured end states.
 
-use super::fault::{in_caller_units, refuse};
+use super::fault::{finite_figures, in_caller_units, refuse, TOO_SMALL_A_STEP};
 use super::PlantPart;
 use super::{check_efficiency, native};
 use crate::constants::CRITICAL_PRESSURE;
@@ -28,7 +28,7 @@ pub struct Expansion {
     pub isentropic_work: f64,
     /// The section's isentropic efficiency, work / isentropic work.
     pub isentropic_efficiency: f64,
-    /// Specific entropy generated, s_out − s_in (never negative).
+    /// Specific entropy generated, s_out − s_in (not negative beyond the rounding of s).
     pub entropy_generation: f64,
 }
 
@@ -59,6 +59,9 @@ pub fn expand(
     } else {
         State::from_ph(p_out, h_out, Units::Native).map_err(|e| in_caller_units(e, units))?
     };
+    if exhaust.native().h >= start.h || ideal.native().h >= start.h {
+        return Err(refuse(TURBINE_SECTION, TOO_SMALL_A_STEP));
+    }
     Ok(between_native(inlet, &exhaust, &ideal, units))
 }
 
@@ -110,7 +113,11 @@ pub fn section_efficiency_between(inlet: &State, exhaust: &State) -> Result<Expa
         ));
     }
     let ideal = State::from_ps(p_out, inlet.native().s, Units::Native)?;
-    Ok(between_native(inlet, exhaust, &ideal, inlet.units()))
+    let expansion = between_native(inlet, exhaust, &ideal, inlet.units());
+    // A measured efficiency may lie outside (0, 1] (bad readings show so),
+    // but not be infinite: the isentropic work must not vanish.
+    finite_figures(TURBINE_SECTION, &[expansion.isentropic_efficiency])?;
+    Ok(expansion)
 }
 
 /// A measured (p,T) point, which fixes a state only as single-phase
