@@ -233,6 +233,16 @@ fn vanishing_casing_efficiency_gives_no_cycle() {
         1e-300,
     );
     refused(&spec, &["cycle", "net work"]);
+    // Alone, the section's work is at the enthalpy's rounding: refused
+    // naming the efficiency, or positive.
+    let steam = State::from_pt(10.0, 773.15, Units::Native).unwrap();
+    match ebullio::plant::expand(&steam, 0.01, 1e-300) {
+        Ok(x) => assert!(x.work > 0.0, "{x:?}"),
+        Err(e) => assert!(
+            e.to_string().contains("isentropic efficiency 1e-300"),
+            "{e}"
+        ),
+    }
 }
 
 #[test]
@@ -436,4 +446,18 @@ fn machines_on_a_pressure_step_below_rounding_give_physical_figures_or_none() {
             }
         }
     }
+}
+
+#[test]
+fn heat_duty_of_an_overflowing_flow_is_refused() {
+    use ebullio::plant::heat_duty;
+    let water = State::from_pt(10.0, 473.15, Units::Native).unwrap();
+    let steam = State::from_pt(10.0, 773.15, Units::Native).unwrap();
+    // f64::MAX × 2000 kJ/kg overflows; a NaN flow is no flow.
+    for flow in [f64::MAX, f64::NAN, -1.0] {
+        let duty = heat_duty(flow, &water, &steam);
+        assert!(duty.is_err(), "{flow}: {duty:?}");
+    }
+    let duty = heat_duty(2.0, &water, &steam).unwrap();
+    assert!(duty > 0.0 && duty.is_finite());
 }

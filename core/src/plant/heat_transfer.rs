@@ -2,7 +2,8 @@
 //! reheater heat input, condenser duty; and the condensate a condenser
 //! delivers.
 
-use super::fault::refuse_with;
+use super::closed_heater::finite_flow;
+use super::fault::{finite_figures, refuse_with};
 use super::native;
 use super::{PlantFigure, PlantPart};
 use crate::constants::MIN_TEMPERATURE;
@@ -10,15 +11,20 @@ use crate::saturation_line::saturation_temperature;
 use crate::{Error, Quantity, Saturation, State, Units};
 
 const CONDENSER: PlantPart = PlantPart::single("condenser");
+const HEAT_DUTY: PlantPart = PlantPart::single("heat duty");
 
 /// Heat given to `flow` going from `inlet` to `outlet` (negative when the
 /// flow gives heat away, as in a condenser), in the inlet's units times
-/// the flow unit.
-pub fn heat_duty(flow: f64, inlet: &State, outlet: &State) -> f64 {
-    inlet.units().from_native(
+/// the flow unit. The flow is finite and not negative, and so is the
+/// duty's size.
+pub fn heat_duty(flow: f64, inlet: &State, outlet: &State) -> Result<f64, Error> {
+    let flow = finite_flow(flow, HEAT_DUTY)?;
+    let duty = inlet.units().from_native(
         Quantity::Enthalpy,
         flow * (outlet.native().h - inlet.native().h),
-    )
+    );
+    finite_figures(HEAT_DUTY, &[duty])?;
+    Ok(duty)
 }
 
 /// The condensate leaving a condenser at `pressure`, subcooled below its

@@ -2,9 +2,9 @@
 //! from an inlet state to an exhaust pressure at an isentropic efficiency,
 //! and, for performance tests, the efficiency from measured end states.
 
-use super::fault::{finite_figures, in_caller_units, refuse, TOO_SMALL_A_STEP};
-use super::PlantPart;
+use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, TOO_SMALL_A_STEP};
 use super::{check_efficiency, native};
+use super::{PlantFigure, PlantPart};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
 use crate::{Error, Quantity, State, Units};
@@ -59,8 +59,15 @@ pub fn expand(
     } else {
         State::from_ph(p_out, h_out, Units::Native).map_err(|e| in_caller_units(e, units))?
     };
-    if exhaust.native().h >= start.h || ideal.native().h >= start.h {
+    if ideal.native().h >= start.h {
         return Err(refuse(TURBINE_SECTION, TOO_SMALL_A_STEP));
+    }
+    if exhaust.native().h >= start.h {
+        return Err(refuse_with(
+            TURBINE_SECTION,
+            "its isentropic efficiency is too small for its work to stand above rounding",
+            PlantFigure::number("isentropic efficiency", efficiency, None),
+        ));
     }
     Ok(between_native(inlet, &exhaust, &ideal, units))
 }
