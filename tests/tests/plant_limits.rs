@@ -344,6 +344,19 @@ fn subcooling_is_reported_as_a_subcooling() {
     let limit =
         Units::MetricEngineering.from_native(Quantity::TemperatureDifference, 318.956 - 273.15);
     assert!(text.contains(&format!("limit {:.1}", limit)), "{text}");
+    // In US units the subcooling is in °F of difference: 180 °F is 100 K,
+    // and at 1 psia (saturation 101.69 °F, recalled from steam tables) the
+    // limit is 101.69 − 32 = 69.69 °F, not a reading offset by 459.67.
+    let mut spec = CycleSpec::new(
+        Units::UsCustomary,
+        Supply::Superheated {
+            pressure: 1800.0,
+            temperature: 1000.0,
+        },
+    );
+    spec.push_casing(casing(1.0, 0.85)).unwrap();
+    spec.condensate_subcooling = 180.0;
+    refused(&spec, &["condenser", "subcooling 180 °F, limit 69.69"]);
 }
 
 #[test]
@@ -460,4 +473,35 @@ fn heat_duty_of_an_overflowing_flow_is_refused() {
     }
     let duty = heat_duty(2.0, &water, &steam).unwrap();
     assert!(duty > 0.0 && duty.is_finite());
+}
+
+#[test]
+fn components_whose_balance_overflows_are_refused() {
+    use ebullio::plant::{mix, open_heater};
+    // A closed heater at 0.65 MPa on 10 MPa feedwater, an open heater at
+    // 0.65 MPa, two streams mixed: each with a flow near f64::MAX, whose
+    // duty or extraction would be inf.
+    let steam = State::from_pt(0.65, 453.15, Units::Native).unwrap();
+    let feedwater = State::from_pt(10.0, 319.3, Units::Native).unwrap();
+    let condensate = State::from_pt(0.65, 319.3, Units::Native).unwrap();
+    let approach = HeaterApproach {
+        terminal_temperature_difference: 3.0,
+        drain_cooler_approach: None,
+    };
+    let e = closed_heater(&steam, &feedwater, f64::MAX, None, approach).unwrap_err();
+    assert!(e.to_string().contains("closed heater"), "{e}");
+    let e = open_heater(&steam, &condensate, f64::MAX, None).unwrap_err();
+    assert!(e.to_string().contains("open heater"), "{e}");
+    let e = mix(
+        &[(f64::MAX, &steam), (f64::MAX, &condensate)],
+        0.65,
+        Units::Native,
+    )
+    .unwrap_err();
+    assert!(e.to_string().contains("mixing point"), "{e}");
+    // The same components at ordinary flows keep finite, physical figures.
+    let h = closed_heater(&steam, &feedwater, 1.0, None, approach).unwrap();
+    assert!(h.extraction_flow > 0.0 && h.duty.is_finite() && h.entropy_generation > 0.0);
+    let o = open_heater(&steam, &condensate, 1.0, None).unwrap();
+    assert!((0.0..1.0).contains(&o.extraction_flow) && o.entropy_generation > 0.0);
 }

@@ -813,7 +813,11 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
         )
     };
     assert_eq!(status, EbullioStatus::InvalidPlant);
-    assert!(detail_text(&d).contains("attemperator"), "{}", detail_text(&d));
+    assert!(
+        detail_text(&d).contains("attemperator"),
+        "{}",
+        detail_text(&d)
+    );
     // A TTD that leaves the feedwater no temperature rise.
     // SAFETY: as above.
     let status = unsafe {
