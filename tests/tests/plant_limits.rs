@@ -505,3 +505,56 @@ fn components_whose_balance_overflows_are_refused() {
     let o = open_heater(&steam, &condensate, 1.0, None).unwrap();
     assert!((0.0..1.0).contains(&o.extraction_flow) && o.entropy_generation > 0.0);
 }
+
+#[test]
+fn casing_exhausting_below_the_condenser_is_refused_by_name() {
+    // An HP casing exhausting at 0.0004 MPa, below the triple point and
+    // below the 0.007 MPa condenser after it: its expansion has no state
+    // to reach (NotConverged before), and the pressures do not fall.
+    let mut spec = simple(
+        Supply::Superheated {
+            pressure: 0.6,
+            temperature: 460.0,
+        },
+        0.0004,
+        0.9,
+    );
+    spec.push_casing(casing(0.007, 0.85)).unwrap();
+    refused(&spec, &["casing 1", "exhaust pressure"]);
+}
+
+#[test]
+fn heater_above_the_critical_pressure_is_refused_by_name() {
+    // A deaerator at 24 MPa on a 30 MPa, 600 °C throttle: no saturation
+    // above the 22.064 MPa critical pressure (IAPWS R7-97(2012), Eq. 2).
+    let mut spec = simple(
+        Supply::Superheated {
+            pressure: 30.0,
+            temperature: 873.15,
+        },
+        0.01,
+        0.85,
+    );
+    spec.push_heater(Heater {
+        extraction_pressure: 24.0,
+        extraction_line_loss: 0.0,
+        kind: HeaterKind::Open,
+    })
+    .unwrap();
+    refused(&spec, &["open heater 1", "limit 22.064 MPa"]);
+}
+
+#[test]
+fn pump_from_water_at_its_lowest_temperature_is_refused_by_name() {
+    use ebullio::plant::compress;
+    // Water at 273.16 K and 1 kPa compressed to 20 MPa: isentropically it
+    // cools (its expansion coefficient is negative below 4 °C, a
+    // handbook fact), below the formulation's 273.15 K.
+    let cold = State::from_pt(0.001, 273.16, Units::Native).unwrap();
+    let e = compress(&cold, 20.0, 0.8).unwrap_err();
+    assert!(matches!(e, Error::InvalidPlant { .. }), "{e:?}");
+    assert!(
+        e.to_string().contains("pump") && e.to_string().contains("273.15 K"),
+        "{e}"
+    );
+}

@@ -117,6 +117,17 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
         units,
     )?
     .in_units(Units::Native);
+    // Casing exhausts fall toward the condenser, so none lies below the
+    // condenser's saturation range (an expansion there has no state).
+    // (NaN passes here and is refused as not finite below.)
+    for (c, pair) in casings.windows(2).enumerate() {
+        if pair[0].exhaust_pressure <= pair[1].exhaust_pressure {
+            return Err(refuse(
+                PlantPart::numbered("casing", c),
+                "its exhaust pressure is not above the next casing's",
+            ));
+        }
+    }
     let throttle = match spec.supply {
         Supply::Superheated {
             pressure: p,
@@ -234,6 +245,19 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
                 PlantPart::numbered("extraction line", j),
                 "its fractional pressure loss lies outside [0, 1)",
                 PlantFigure::number("loss", loss, None),
+            ));
+        }
+        if extraction[j].native().p >= CRITICAL_PRESSURE {
+            return Err(refuse_with(
+                heater_part(heater, j),
+                "its steam cannot condense: its pressure is not below the critical pressure",
+                PlantFigure::native(
+                    "extraction pressure",
+                    Quantity::Pressure,
+                    extraction[j].native().p,
+                    Some(CRITICAL_PRESSURE),
+                    units,
+                ),
             ));
         }
         if loss > 0.0 {

@@ -59,7 +59,18 @@ pub fn compress(
             "its outlet pressure is not above its inlet pressure",
         ));
     }
-    let ideal = State::from_ps(p_out, a.s, Units::Native).map_err(|e| in_caller_units(e, units))?;
+    let ideal = State::from_ps(p_out, a.s, Units::Native).map_err(|e| match e {
+        // Water near 0 °C cools on adiabatic compression (it expands on
+        // cooling below 4 °C), past the formulation's lowest temperature.
+        Error::OutOfRange {
+            quantity: Quantity::Entropy,
+            ..
+        } => refuse(
+            PUMP,
+            "its isentropic outlet would lie below 273.15 K, the formulation's lowest temperature",
+        ),
+        other => in_caller_units(other, units),
+    })?;
     let isentropic_work = ideal.native().h - a.h;
     if isentropic_work <= 0.0 {
         return Err(refuse(PUMP, TOO_SMALL_A_STEP));
