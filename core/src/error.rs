@@ -4,6 +4,8 @@
 use core::fmt::{self, Write};
 
 use crate::math::{floor, log10};
+use crate::plant::fault::FigureText;
+use crate::plant::{PlantFigure, PlantPart};
 use crate::units::{Quantity, Units};
 
 /// Why a state could not be computed.
@@ -81,13 +83,18 @@ pub enum Error {
         what: &'static str,
     },
 
-    /// A plant description that cannot be solved as given: an efficiency
-    /// outside (0, 1], heaters out of pressure order, a heater whose
-    /// temperatures leave no heat to transfer.
-    #[error("the plant description is not valid: {what}")]
+    /// A plant (a cycle or one component) that cannot exist as given: an
+    /// efficiency outside (0, 1], heaters out of pressure order, a heater
+    /// needing more steam than reaches it, a cycle beating Carnot. Names
+    /// the part and, where a number shows it, that number and its limit.
+    #[error("the plant description is not valid: {part}: {what}{}", FigureText(*figure))]
     InvalidPlant {
-        /// What is wrong with it.
+        /// The part at fault.
+        part: PlantPart,
+        /// What is impossible about it.
         what: &'static str,
+        /// The number that shows it, in the caller's units, if one does.
+        figure: Option<PlantFigure>,
     },
 
     /// Measurements that do not fix a state: a turbine exhaust read as

@@ -34,7 +34,7 @@ pub use spec::{
     EbullioSupplyKind, EBULLIO_MAX_CASINGS, EBULLIO_MAX_HEATERS,
 };
 
-use ebullio::plant::solve_cycle;
+use ebullio::plant::{solve_cycle, PlantPart};
 use ebullio::Error;
 
 use crate::args::{read_in_struct, OutStruct};
@@ -100,6 +100,8 @@ pub unsafe extern "C" fn ebullio_cycle_solve(
         let solved = solve_cycle(&core_spec).map(|r| EbullioCycleResult::of(&r)).and_then(|r| {
             // The last line of defence behind the core's own checks.
             r.all_finite().then_some(r).ok_or(Error::InvalidPlant {
+                part: PlantPart::single("cycle"),
+                figure: None,
                 what: "a figure of the solved cycle is not a finite number",
             })
         });

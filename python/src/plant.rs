@@ -517,8 +517,13 @@ pub(crate) fn throttle(
 
 /// `ebullio::plant::heat_duty`.
 #[pyfunction]
-pub(crate) fn heat_duty(flow: f64, inlet: &Bound<'_, PyState>, outlet: &Bound<'_, PyState>) -> f64 {
-    plant::heat_duty(flow, &inner(inlet), &inner(outlet))
+pub(crate) fn heat_duty(
+    py: Python<'_>,
+    flow: f64,
+    inlet: &Bound<'_, PyState>,
+    outlet: &Bound<'_, PyState>,
+) -> PyResult<f64> {
+    plant::heat_duty(flow, &inner(inlet), &inner(outlet)).map_err(|e| core_error(py, e))
 }
 
 /// `ebullio::plant::condensate`.

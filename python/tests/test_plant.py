@@ -171,6 +171,25 @@ def test_bad_descriptions_raise_with_the_cores_reason():
         Cycle(supply=Supply(120.0, 811.0), casings=[Casing(0.01)], units="native").solve()
 
 
+def test_impossible_plants_are_refused_naming_the_part_in_the_cycles_units():
+    # A closed heater at 19 MPa on 20 MPa saturated steam would need 2.46
+    # times the throttle flow (tests/tests/plant_limits.rs has the case).
+    greedy = Cycle(units="native", supply=Supply(20.0), casings=[Casing(0.01, 0.85)],
+                   heaters=[ClosedHeater(19.0)])
+    with pytest.raises(ebullio.InvalidPlantError, match="closed heater 1") as e:
+        greedy.solve()
+    assert "limit 1" in str(e.value)
+    # 300 degC at 125 bar is compressed liquid (saturation 327.8 degC,
+    # recalled from steam tables): the figures are in degC.
+    liquid = Cycle(units="metric", supply=Supply(125.0, 300.0), casings=[Casing(0.1)])
+    with pytest.raises(ebullio.InvalidPlantError, match="steam supply.*°C"):
+        liquid.solve()
+    water = State.from_pt(10.0, 473.15, units="native")
+    steam = State.from_pt(10.0, 773.15, units="native")
+    with pytest.raises(ebullio.InvalidPlantError, match="heat duty"):
+        plant.heat_duty(math.inf, water, steam)
+
+
 def test_the_components_as_functions():
     inlet = State.from_pt(16.7, 811.15, units="native")
     e = plant.expand(inlet, 4.1, 0.86)

@@ -131,7 +131,7 @@ fn a_closed_heater_keeps_its_approaches_and_its_balance() {
     close(
         "duty",
         h.duty,
-        heat_duty(0.8, &fw_in, &h.feedwater_out),
+        heat_duty(0.8, &fw_in, &h.feedwater_out).unwrap(),
         1e-12,
     );
     assert!(h.entropy_generation > 0.0);

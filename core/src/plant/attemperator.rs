@@ -2,10 +2,14 @@
 //! to bring it down to a target temperature, mixing at the steam pressure.
 
 use super::closed_heater::finite_flow;
+use super::fault::{finite_figures, refuse, second_law};
 use super::native;
+use super::PlantPart;
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
 use crate::{Error, Quantity, State, Units};
+
+const ATTEMPERATOR: PlantPart = PlantPart::single("attemperator");
 
 /// The spray an attemperator needs. Flows are in the unit of the steam
 /// flow given.
@@ -30,23 +34,32 @@ pub fn spray_for_temperature(
     target_temperature: f64,
 ) -> Result<Spray, Error> {
     let units = steam.units();
-    let flow = finite_flow(steam_flow)?;
+    let flow = finite_flow(steam_flow, ATTEMPERATOR)?;
     let (s, w) = (steam.native(), spray.native());
     let t = native(Quantity::Temperature, target_temperature, units)?;
     if t >= s.t || (s.p < CRITICAL_PRESSURE && t <= saturation_temperature(s.p)) {
-        return Err(Error::InvalidPlant {
-            what: "an attemperator target temperature is not between saturation and the steam temperature",
-        });
+        return Err(refuse(
+            ATTEMPERATOR,
+            "its target temperature is not between saturation and the steam temperature",
+        ));
     }
     let outlet = State::from_pt(s.p, t, Units::Native)?;
     let o = outlet.native();
     if w.h >= o.h {
-        return Err(Error::InvalidPlant {
-            what: "an attemperator's spray water is not colder than the target steam",
-        });
+        return Err(refuse(
+            ATTEMPERATOR,
+            "its spray water is not colder than the target steam",
+        ));
     }
     let spray_flow = flow * (s.h - o.h) / (o.h - w.h);
     let entropy_generation = (flow + spray_flow) * o.s - flow * s.s - spray_flow * w.s;
+    finite_figures(
+        ATTEMPERATOR,
+        &[spray_flow, flow + spray_flow, entropy_generation],
+    )?;
+    let throughput =
+        ((flow + spray_flow) * o.s).abs() + (flow * s.s).abs() + (spray_flow * w.s).abs();
+    second_law(ATTEMPERATOR, entropy_generation, throughput, units)?;
     Ok(Spray {
         spray_flow,
         outlet: outlet.in_units(units),

@@ -6,10 +6,18 @@
 //! leaves as saturated liquid). The extraction flow follows from the
 //! energy balance. Water-side pressure drop is not modelled.
 
+use super::fault::{finite_figures, refuse, refuse_with, second_law};
 use super::native;
+use super::{PlantFigure, PlantPart};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
 use crate::{Error, Phase, Quantity, Saturation, State, Units};
+
+/// Relative rounding between a saturation temperature and the same
+/// temperature of a state solved on the saturation line.
+const TEMPERATURE_ROUNDING: f64 = 1e-12;
+
+const CLOSED_HEATER: PlantPart = PlantPart::single("closed heater");
 
 /// How a closed heater's temperatures are set, in the caller's units
 /// (temperature differences).
@@ -52,8 +60,8 @@ pub fn closed_heater(
     approach: HeaterApproach,
 ) -> Result<ClosedHeater, Error> {
     let units = feedwater_in.units();
-    let flow = finite_flow(feedwater_flow)?;
-    let (fw_out, drain) = end_states(extraction, feedwater_in, approach)?;
+    let flow = finite_flow(feedwater_flow, CLOSED_HEATER)?;
+    let (fw_out, drain) = end_states(extraction, feedwater_in, approach, CLOSED_HEATER)?;
     let (e, a, b, d) = (
         extraction.native(),
         feedwater_in.native(),
@@ -61,18 +69,26 @@ pub fn closed_heater(
         drain.native(),
     );
     let (c_flow, c) = match cascaded_drains {
-        Some((m, state)) => (finite_flow(m)?, *state.native()),
+        Some((m, state)) => (finite_flow(m, CLOSED_HEATER)?, *state.native()),
         None => (0.0, *d),
     };
     let duty = flow * (b.h - a.h);
     let extraction_flow = (duty - c_flow * (c.h - d.h)) / (e.h - d.h);
     if extraction_flow < 0.0 {
-        return Err(Error::InvalidPlant {
-            what: "a closed heater's cascaded drains alone give more heat than its feedwater takes",
-        });
+        return Err(refuse(
+            CLOSED_HEATER,
+            "its cascaded drains alone give more heat than its feedwater takes",
+        ));
     }
+    desuperheating_zone(CLOSED_HEATER, extraction, &fw_out, flow, extraction_flow)?;
     let entropy_generation =
         extraction_flow * (d.s - e.s) + c_flow * (d.s - c.s) + flow * (b.s - a.s);
+    finite_figures(CLOSED_HEATER, &[duty, extraction_flow, entropy_generation])?;
+    let throughput = (extraction_flow * e.s).abs()
+        + (c_flow * c.s).abs()
+        + (flow * a.s).abs()
+        + (flow * b.s).abs();
+    second_law(CLOSED_HEATER, entropy_generation, throughput, units)?;
     Ok(ClosedHeater {
         feedwater_out: fw_out.in_units(units),
         drain_out: drain.in_units(units),
@@ -88,6 +104,7 @@ pub(crate) fn end_states(
     extraction: &State,
     feedwater_in: &State,
     approach: HeaterApproach,
+    part: PlantPart,
 ) -> Result<(State, State), Error> {
     let units = feedwater_in.units();
     let ttd = native(
@@ -98,9 +115,10 @@ pub(crate) fn end_states(
     let shell = extraction.native();
     let fw = feedwater_in.native();
     if shell.p >= CRITICAL_PRESSURE {
-        return Err(Error::InvalidPlant {
-            what: "a closed heater's shell pressure is not below the critical pressure",
-        });
+        return Err(refuse(
+            part,
+            "its shell pressure is not below the critical pressure",
+        ));
     }
     if extraction.native().h
         <= Saturation::at_pressure(shell.p, Units::Native)?
@@ -108,31 +126,49 @@ pub(crate) fn end_states(
             .native()
             .h
     {
-        return Err(Error::InvalidPlant {
-            what: "a closed heater's extraction steam is not above its drain enthalpy",
-        });
+        return Err(refuse(
+            part,
+            "its extraction steam is not above its drain enthalpy",
+        ));
     }
     let t_shell = saturation_temperature(shell.p);
     let t_out = t_shell - ttd;
     if t_out <= fw.t {
-        return Err(Error::InvalidPlant {
-            what: "a closed heater's terminal temperature difference leaves no temperature rise for its feedwater",
-        });
+        return Err(refuse(
+            part,
+            "its terminal temperature difference leaves no temperature rise for its feedwater",
+        ));
+    }
+    // Heat flows from hot to cold: the feedwater can leave no hotter than
+    // the steam enters the shell, whatever the TTD (common practice; a
+    // negative TTD needs superheated steam and a desuperheating zone).
+    // Equal is the ideal heater (TTD 0 on saturated steam), to rounding.
+    if t_out > shell.t * (1.0 + TEMPERATURE_ROUNDING) {
+        return Err(refuse_with(
+            part,
+            "its feedwater would leave hotter than the steam entering its shell",
+            PlantFigure::native(
+                "feedwater outlet",
+                Quantity::Temperature,
+                t_out,
+                Some(shell.t),
+                units,
+            ),
+        ));
     }
     let fw_out = State::from_pt(fw.p, t_out, Units::Native)?;
     if fw_out.phase() != Phase::CompressedLiquid {
-        return Err(Error::InvalidPlant {
-            what: "a closed heater's feedwater would boil: its pressure is too low for its outlet temperature",
-        });
+        return Err(refuse(
+            part,
+            "its feedwater would boil: its pressure is too low for its outlet temperature",
+        ));
     }
     let drain = match approach.drain_cooler_approach {
         None => *Saturation::at_pressure(shell.p, Units::Native)?.liquid(),
         Some(dca) => {
             let t_drain = fw.t + native(Quantity::TemperatureDifference, dca, units)?;
             if dca < 0.0 || t_drain >= t_shell {
-                return Err(Error::InvalidPlant {
-                    what: "a drain cooler approach is negative or puts the drain at or above the shell saturation temperature",
-                });
+                return Err(refuse(part, "its drain cooler approach is negative or puts the drain at or above the shell saturation temperature"));
             }
             State::from_pt(shell.p, t_drain, Units::Native)?
         }
@@ -140,11 +176,51 @@ pub(crate) fn end_states(
     Ok((fw_out, drain))
 }
 
-pub(crate) fn finite_flow(flow: f64) -> Result<f64, Error> {
+/// With a negative TTD the feedwater leaves above the shell saturation
+/// temperature, and only the steam's superheat (its desuperheating zone)
+/// can heat it there: `feedwater_flow` × (h_out − h(T_sat)) must not
+/// exceed `extraction_flow` × (h_steam − h_g). Refuses a heater that
+/// would need more.
+pub(crate) fn desuperheating_zone(
+    part: PlantPart,
+    shell: &State,
+    feedwater_out: &State,
+    feedwater_flow: f64,
+    extraction_flow: f64,
+) -> Result<(), Error> {
+    let (e, b) = (shell.native(), feedwater_out.native());
+    let t_sat = saturation_temperature(e.p);
+    if b.t <= t_sat {
+        return Ok(());
+    }
+    let at_saturation = State::from_pt(b.p, t_sat, Units::Native)?.native().h;
+    let needed = feedwater_flow * (b.h - at_saturation);
+    let h_vapour = Saturation::at_pressure(e.p, Units::Native)?
+        .vapour()
+        .native()
+        .h;
+    let available = extraction_flow * (e.h - h_vapour);
+    if needed > available.max(0.0) {
+        // Per unit feedwater flow (needed > 0, so that flow is not 0).
+        return Err(refuse_with(
+            part,
+            "the steam's superheat cannot heat the feedwater this far",
+            PlantFigure::native(
+                "needed per unit feedwater",
+                Quantity::Enthalpy,
+                needed / feedwater_flow,
+                Some(available.max(0.0) / feedwater_flow),
+                shell.units(),
+            ),
+        ));
+    }
+    Ok(())
+}
+
+/// A mass flow given to `part`: finite and not negative.
+pub(crate) fn finite_flow(flow: f64, part: PlantPart) -> Result<f64, Error> {
     if !flow.is_finite() || flow < 0.0 {
-        return Err(Error::InvalidPlant {
-            what: "a mass flow is negative or not finite",
-        });
+        return Err(refuse(part, "a mass flow is negative or not finite"));
     }
     Ok(flow)
 }

@@ -10,19 +10,22 @@
 //! exact; with them the mixing points couple the two, and the sweeps
 //! repeat until the extraction fractions stop changing.
 
-use super::closed_heater::{end_states, HeaterApproach};
+use super::closed_heater::{desuperheating_zone, end_states, HeaterApproach};
 use super::cycle_result::{
     Component, ComponentKind, CycleResult, PointLabel, PointRole, StatePoint, Stream,
     MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
 };
-use super::cycle_spec::{CycleSpec, Drains, HeaterKind, Supply, MAX_CASINGS, MAX_HEATERS};
+use super::cycle_spec::{CycleSpec, Drains, Heater, HeaterKind, Supply, MAX_CASINGS, MAX_HEATERS};
+use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
 use super::heat_transfer::condensate;
 use super::mixing::{mix, throttle as throttle_to};
 use super::pump::compress;
 use super::turbine::expand;
-use super::{check_efficiency, native};
+use super::{check_efficiency, native, PlantFigure, PlantPart};
+use crate::constants::CRITICAL_PRESSURE;
+use crate::saturation_line::saturation_temperature;
 use crate::units::{BTU_KJ, POUND_MASS_KG};
-use crate::{Error, Quantity, Saturation, State, Units};
+use crate::{Error, Phase, Quantity, Saturation, State, Units};
 
 /// Sweeps allowed for the pumped-forward drains' fixed point; it
 /// contracts by roughly the drain-to-feedwater flow ratio per sweep.
@@ -31,6 +34,16 @@ const MAX_SWEEPS: usize = 60;
 /// converged (they are fractions of the throttle flow, so absolute).
 const SWEEP_TOLERANCE: f64 = 1e-14;
 const MAX_GROUPS: usize = MAX_CASINGS + MAX_HEATERS;
+/// Flows are fractions of the throttle flow summed from a few terms each
+/// good to about 1e-15; a flow past its limit by more than this is real.
+const FLOW_ROUNDING: f64 = 1e-12;
+
+const CYCLE: PlantPart = PlantPart::single("cycle");
+const SUPPLY: PlantPart = PlantPart::single("steam supply");
+const REHEATER: PlantPart = PlantPart::single("reheater");
+const BOILER: PlantPart = PlantPart::single("boiler");
+const FEED_PUMP: PlantPart = PlantPart::single("feed pump");
+const CONDENSATE_PUMP: PlantPart = PlantPart::single("condensate pump");
 
 /// A stage group: part of a casing between two extraction points.
 #[derive(Clone, Copy)]
@@ -64,7 +77,25 @@ struct HeaterWater {
 
 /// Solves the cycle `spec` describes. Every number in the result is per
 /// unit mass of throttle steam, in `spec.units`.
+///
+/// A cycle that cannot exist is refused with [`Error::InvalidPlant`]
+/// naming the part at fault, so every solved cycle keeps these limits:
+/// every flow lies in [0, 1] of the throttle flow (no heater takes more
+/// steam than reaches its extraction point); the boiler only heats (its
+/// feedwater enters colder than the throttle steam) and the heat input is
+/// positive; the net work is positive; no component generates negative
+/// entropy beyond rounding; the thermal efficiency is below the Carnot
+/// efficiency between the hotwell and the hottest steam; every figure is
+/// finite. "Superheated" throttle steam must be superheated vapour or
+/// supercritical fluid. A closed heater's feedwater leaves colder than
+/// the steam entering its shell, and with a negative TTD the heat it
+/// takes above the shell saturation temperature comes from the steam's
+/// superheat alone. Errors are in `spec.units`.
 pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
+    solve(spec).map_err(|e| in_caller_units(e, spec.units))
+}
+
+fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
     let units = spec.units;
     let pressure = |x| native(Quantity::Pressure, x, units);
     let temperature = |x| native(Quantity::Temperature, x, units);
@@ -72,16 +103,59 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
     let heaters = spec.heaters();
     let n = heaters.len();
     if casings.is_empty() {
-        return invalid("a cycle has no turbine casing");
+        return Err(refuse(CYCLE, "it has no turbine casing"));
     }
     if spec.reheat.is_some() && casings.len() < 2 {
-        return invalid("reheat needs a casing after it");
+        return Err(refuse(REHEATER, "it needs a casing after it"));
+    }
+    // The hotwell first: the condenser's saturation range (triple point
+    // to critical point) then refuses a condenser pressure in the
+    // caller's units before any expansion tries to reach it.
+    let hotwell = condensate(
+        spec.condenser_pressure().unwrap_or_default(),
+        spec.condensate_subcooling,
+        units,
+    )?
+    .in_units(Units::Native);
+    // Casing exhausts fall toward the condenser, so none lies below the
+    // condenser's saturation range (an expansion there has no state).
+    // (NaN passes here and is refused as not finite below.)
+    for (c, pair) in casings.windows(2).enumerate() {
+        if pair[0].exhaust_pressure <= pair[1].exhaust_pressure {
+            return Err(refuse(
+                PlantPart::numbered("casing", c),
+                "its exhaust pressure is not above the next casing's",
+            ));
+        }
     }
     let throttle = match spec.supply {
         Supply::Superheated {
             pressure: p,
             temperature: t,
-        } => State::from_pt(pressure(p)?, temperature(t)?, Units::Native)?,
+        } => {
+            let steam = State::from_pt(pressure(p)?, temperature(t)?, Units::Native)?;
+            if !matches!(
+                steam.phase(),
+                Phase::SuperheatedVapour | Phase::SupercriticalFluid
+            ) {
+                // Steam needs more than its saturation temperature, or
+                // above the critical pressure more than the critical one.
+                let n = steam.native();
+                let lowest = saturation_temperature(n.p.min(CRITICAL_PRESSURE));
+                return Err(refuse_with(
+                    SUPPLY,
+                    "its \"superheated\" throttle steam is liquid at that pressure and temperature",
+                    PlantFigure::native(
+                        "throttle temperature",
+                        Quantity::Temperature,
+                        n.t,
+                        Some(lowest),
+                        units,
+                    ),
+                ));
+            }
+            steam
+        }
         Supply::SaturatedVapour { pressure: p } => {
             *Saturation::at_pressure(pressure(p)?, Units::Native)?.vapour()
         }
@@ -101,7 +175,8 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
     let mut next = 0;
     let mut inlet = throttle;
     for (c, casing) in casings.iter().enumerate() {
-        let efficiency = check_efficiency(casing.isentropic_efficiency)?;
+        let part = PlantPart::numbered("casing", c);
+        let efficiency = check_efficiency(casing.isentropic_efficiency, part)?;
         let p_exhaust = pressure(casing.exhaust_pressure)?;
         if let (1, Some(reheat)) = (c, spec.reheat) {
             let hot = State::from_pt(
@@ -110,13 +185,19 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
                 Units::Native,
             )?;
             if hot.native().p > inlet.native().p || hot.native().h <= inlet.native().h {
-                return invalid("hot reheat is above the cold reheat pressure or not hotter");
+                return Err(refuse(
+                    REHEATER,
+                    "its hot reheat is above the cold reheat pressure or not hotter",
+                ));
             }
             reheat_states = Some((inlet, hot));
             inlet = hot;
         }
         if p_exhaust >= inlet.native().p {
-            return invalid("a casing's exhaust pressure is not below its inlet pressure");
+            return Err(refuse(
+                part,
+                "its exhaust pressure is not below its inlet pressure",
+            ));
         }
         let mut current = inlet;
         while next < n {
@@ -125,12 +206,14 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
                 break;
             }
             if p_extraction > current.native().p {
-                return invalid(
-                    "heater extraction pressures are not falling along the expansion, or one lies between the reheater's inlet and outlet pressures",
-                );
+                return Err(refuse(
+                    heater_part(&heaters[next], next),
+                    "its extraction pressure is not below the previous one, or lies between the reheater's inlet and outlet pressures",
+                ));
             }
             if p_extraction < current.native().p {
-                groups[group_count] = stage_group(c, current, p_extraction, efficiency, next)?;
+                groups[group_count] =
+                    stage_group(c, current, p_extraction, efficiency, next).map_err(at(part))?;
                 current = groups[group_count].outlet;
                 group_count += 1;
             }
@@ -139,42 +222,55 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
             next += 1;
         }
         if current.native().p > p_exhaust {
-            groups[group_count] = stage_group(c, current, p_exhaust, efficiency, next)?;
+            groups[group_count] =
+                stage_group(c, current, p_exhaust, efficiency, next).map_err(at(part))?;
             current = groups[group_count].outlet;
             group_count += 1;
         }
         inlet = current;
     }
     if next < n {
-        return invalid("a heater's extraction pressure is below the condenser pressure");
+        return Err(refuse(
+            heater_part(&heaters[next], next),
+            "its extraction pressure is below the condenser pressure",
+        ));
     }
     let exhaust = inlet;
-    let hotwell = condensate(
-        exhaust.native().p,
-        native(
-            Quantity::TemperatureDifference,
-            spec.condensate_subcooling,
-            units,
-        )?,
-        Units::Native,
-    )?;
-
     // Steam at each heater, after its extraction line.
     let mut shell = extraction;
     for (j, heater) in heaters.iter().enumerate() {
         let loss = heater.extraction_line_loss;
         if !(0.0..1.0).contains(&loss) {
-            return invalid("an extraction line loss lies outside [0, 1)");
+            return Err(refuse_with(
+                PlantPart::numbered("extraction line", j),
+                "its fractional pressure loss lies outside [0, 1)",
+                PlantFigure::number("loss", loss, None),
+            ));
+        }
+        if extraction[j].native().p >= CRITICAL_PRESSURE {
+            return Err(refuse_with(
+                heater_part(heater, j),
+                "its steam cannot condense: its pressure is not below the critical pressure",
+                PlantFigure::native(
+                    "extraction pressure",
+                    Quantity::Pressure,
+                    extraction[j].native().p,
+                    Some(CRITICAL_PRESSURE),
+                    units,
+                ),
+            ));
         }
         if loss > 0.0 {
-            shell[j] = throttle_to(&extraction[j], extraction[j].native().p * (1.0 - loss))?;
+            shell[j] = throttle_to(&extraction[j], extraction[j].native().p * (1.0 - loss))
+                .map_err(at(PlantPart::numbered("extraction line", j)))?;
         }
         if j > 0 && shell[j].native().p >= shell[j - 1].native().p
             || shell[j].native().p <= exhaust.native().p
         {
-            return invalid(
-                "heater shell pressures are not falling from heater to heater above the condenser",
-            );
+            return Err(refuse(
+                heater_part(heater, j),
+                "its shell pressure is not below the heater above's and above the condenser's",
+            ));
         }
     }
 
@@ -185,7 +281,10 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
         None => throttle.native().p,
     };
     if feed_pressure < throttle.native().p {
-        return invalid("the feed pressure is below the throttle pressure");
+        return Err(refuse(
+            FEED_PUMP,
+            "its discharge pressure is below the throttle pressure",
+        ));
     }
     let mut above_pressure = [feed_pressure; MAX_HEATERS];
     let mut pumps_to_boiler = [true; MAX_HEATERS];
@@ -200,14 +299,20 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
         }
     }
     let pump_efficiency = |to_boiler: bool| {
-        check_efficiency(if to_boiler {
-            spec.feed_pump_efficiency
+        if to_boiler {
+            check_efficiency(spec.feed_pump_efficiency, FEED_PUMP)
         } else {
-            spec.condensate_pump_efficiency
-        })
+            check_efficiency(spec.condensate_pump_efficiency, CONDENSATE_PUMP)
+        }
     };
-    let condensate_pump = compress(&hotwell, line_pressure, pump_efficiency(to_boiler)?)?;
-    let drain_pump_efficiency = check_efficiency(spec.condensate_pump_efficiency)?;
+    let condensate_pump = compress(&hotwell, line_pressure, pump_efficiency(to_boiler)?).map_err(
+        at(if to_boiler {
+            FEED_PUMP
+        } else {
+            CONDENSATE_PUMP
+        }),
+    )?;
+    let drain_pump_efficiency = check_efficiency(spec.condensate_pump_efficiency, CONDENSATE_PUMP)?;
     let approaches = native_approaches(spec)?;
 
     // The feedwater train, by sweeps.
@@ -250,12 +355,19 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
             match heaters[j].kind {
                 HeaterKind::Closed { drains, .. } => {
                     if !unchanged {
-                        let (out, drain) = end_states(&shell[j], &line, approaches[j])?;
+                        let (out, drain) = end_states(
+                            &shell[j],
+                            &line,
+                            approaches[j],
+                            heater_part(&heaters[j], j),
+                        )?;
                         w.feedwater_out = out;
                         w.drain = drain;
                         if drains == Drains::PumpForward {
                             w.drain_pumped =
-                                compress(&drain, above_pressure[j], drain_pump_efficiency)?.outlet;
+                                compress(&drain, above_pressure[j], drain_pump_efficiency)
+                                    .map_err(at(PlantPart::numbered("drain pump of heater", j)))?
+                                    .outlet;
                         }
                     }
                     line = w.feedwater_out;
@@ -268,7 +380,8 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
                                 ],
                                 above_pressure[j],
                                 Units::Native,
-                            )?
+                            )
+                            .map_err(at(PlantPart::numbered("mixing point after heater", j)))?
                             .1;
                         }
                         w.mixed = line;
@@ -282,7 +395,8 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
                             &w.feedwater_out,
                             above_pressure[j],
                             pump_efficiency(pumps_to_boiler[j])?,
-                        )?
+                        )
+                        .map_err(at(PlantPart::numbered("pump after heater", j)))?
                         .outlet;
                     }
                     line = w.pump_outlet;
@@ -335,9 +449,10 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
                 }
             };
             if m < 0.0 || w.feedwater_flow < 0.0 {
-                return invalid(
-                    "a heater's energy balance needs a negative extraction or feedwater flow",
-                );
+                return Err(refuse(
+                    heater_part(&heaters[j], j),
+                    "its energy balance needs a negative extraction or feedwater flow",
+                ));
             }
             w.outlet_flow = above;
             w.cascaded_in = (c_flow > 0.0).then(|| (c_flow, j.saturating_sub(1)));
@@ -356,6 +471,35 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
         return Err(Error::NotConverged {
             what: "feedwater heater drain flow",
         });
+    }
+
+    // Limits the balances alone do not keep: a heater takes no more steam
+    // than reaches its extraction point from the throttle, and a closed
+    // heater heats its feedwater above saturation only by the superheat.
+    let mut reaching = 1.0;
+    for (j, (heater, w)) in heaters.iter().zip(&water[..n]).enumerate() {
+        let part = heater_part(heater, j);
+        if w.extraction_flow > reaching + FLOW_ROUNDING {
+            return Err(refuse_with(
+                part,
+                "it needs more steam than reaches its extraction point",
+                PlantFigure::number(
+                    "extraction per unit throttle flow",
+                    w.extraction_flow,
+                    Some(reaching.max(0.0)),
+                ),
+            ));
+        }
+        reaching -= w.extraction_flow;
+        if let HeaterKind::Closed { .. } = heater.kind {
+            desuperheating_zone(
+                part,
+                &shell[j],
+                &w.feedwater_out,
+                w.feedwater_flow,
+                w.extraction_flow,
+            )?;
+        }
     }
 
     let mut out = Assembly::new(units, throttle, reheat_states, &hotwell);
@@ -548,6 +692,19 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
         -work,
     );
     let boiler_heat = throttle.native().h - boiler_inlet.native().h;
+    if boiler_inlet.native().t >= throttle.native().t || boiler_heat <= 0.0 {
+        return Err(refuse_with(
+            BOILER,
+            "its feedwater enters no colder than the throttle steam: the feed pump discharges too hot",
+            PlantFigure::native(
+                "feedwater",
+                Quantity::Temperature,
+                boiler_inlet.native().t,
+                Some(throttle.native().t),
+                units,
+            ),
+        ));
+    }
     out.point(PointRole::BoilerInlet, 0, 1.0, &boiler_inlet);
     out.component(
         ComponentKind::Boiler,
@@ -562,7 +719,7 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
     for (f, w) in fractions.iter_mut().zip(&water[..n]) {
         *f = w.extraction_flow;
     }
-    Ok(out.finish(Totals {
+    out.finish(Totals {
         extraction_fractions: fractions,
         heater_count: n,
         turbine_work,
@@ -570,7 +727,7 @@ pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
         boiler_heat,
         reheat_heat,
         condenser_duty,
-    }))
+    })
 }
 
 /// The stage group of casing `casing` from `inlet` down to `p_out`, with
@@ -590,8 +747,25 @@ fn stage_group(
     })
 }
 
-fn invalid<T>(what: &'static str) -> Result<T, Error> {
-    Err(Error::InvalidPlant { what })
+/// A heater as refusals name it: "closed heater 2", "open heater 4".
+fn heater_part(heater: &Heater, index: usize) -> PlantPart {
+    match heater.kind {
+        HeaterKind::Closed { .. } => PlantPart::numbered("closed heater", index),
+        HeaterKind::Open => PlantPart::numbered("open heater", index),
+    }
+}
+
+/// Names a stand-alone component's refusal (which carries no number) by
+/// the `part` of the cycle it is.
+fn at(part: PlantPart) -> impl Fn(Error) -> Error {
+    move |error| match error {
+        Error::InvalidPlant {
+            part: PlantPart { number: 0, .. },
+            what,
+            figure,
+        } => Error::InvalidPlant { part, what, figure },
+        other => other,
+    }
 }
 
 /// The closed heaters' approaches in native temperature differences.
@@ -633,6 +807,8 @@ struct Assembly {
     hottest: f64,
     coldest: f64,
     result: CycleResult,
+    /// The first component found generating negative entropy.
+    second_law_breach: Option<Error>,
 }
 
 impl Assembly {
@@ -663,6 +839,7 @@ impl Assembly {
             units,
             hottest,
             coldest: hotwell.native().t,
+            second_law_breach: None,
             result: CycleResult {
                 units,
                 points: [blank_point; MAX_POINTS],
@@ -723,6 +900,19 @@ impl Assembly {
             self.coldest
         };
         let generation = entropy_flow(outlets) - entropy_flow(inlets) - heat_in / boundary;
+        let throughput = inlets
+            .iter()
+            .chain(outlets)
+            .map(|(m, s)| (m * s.native().s).abs())
+            .sum::<f64>()
+            + (heat_in / boundary).abs();
+        if self.second_law_breach.is_none() {
+            let part = PlantPart {
+                name: kind.name(),
+                number,
+            };
+            self.second_law_breach = second_law(part, generation, throughput, Units::Native).err();
+        }
         let mut c = Component {
             kind,
             number,
@@ -745,11 +935,30 @@ impl Assembly {
         r.component_count += 1;
     }
 
-    fn finish(mut self, t: Totals) -> CycleResult {
+    /// The figures, once every limit in [`solve_cycle`]'s list holds.
+    fn finish(mut self, t: Totals) -> Result<CycleResult, Error> {
+        if let Some(breach) = self.second_law_breach {
+            return Err(breach);
+        }
         let e = |x| self.units.from_native(Quantity::Enthalpy, x);
         let net = t.turbine_work - t.pump_work;
         let heat_input = t.boiler_heat + t.reheat_heat;
         let efficiency = net / heat_input;
+        if net <= 0.0 {
+            return Err(refuse_with(
+                CYCLE,
+                "its pumps absorb at least the work its turbine delivers",
+                PlantFigure::native("net work", Quantity::Enthalpy, net, Some(0.0), self.units),
+            ));
+        }
+        let carnot = 1.0 - self.coldest / self.hottest;
+        if efficiency >= carnot {
+            return Err(refuse_with(
+                CYCLE,
+                "its thermal efficiency reaches the Carnot efficiency between its hotwell and its hottest steam",
+                PlantFigure::number("thermal efficiency", efficiency, Some(carnot)),
+            ));
+        }
         let heat_rate = 3600.0 / efficiency;
         let steam_rate = 3600.0 / net;
         let r = &mut self.result;
@@ -768,7 +977,20 @@ impl Assembly {
         r.steam_rate_kg_per_kwh = steam_rate;
         r.steam_rate_lbm_per_kwh = steam_rate / POUND_MASS_KG;
         r.back_work_ratio = t.pump_work / t.turbine_work;
-        r.carnot_efficiency = 1.0 - self.coldest / self.hottest;
-        self.result
+        r.carnot_efficiency = carnot;
+        finite_figures(
+            CYCLE,
+            &[
+                r.turbine_work,
+                r.pump_work,
+                r.net_work,
+                r.heat_input,
+                r.condenser_duty,
+                r.heat_rate_btu_per_kwh,
+                r.steam_rate_lbm_per_kwh,
+                r.back_work_ratio,
+            ],
+        )?;
+        Ok(self.result)
     }
 }

@@ -4,6 +4,8 @@
 //! crosses the C ABI as one caller-owned block.
 
 use super::closed_heater::HeaterApproach;
+use super::fault::refuse;
+use super::PlantPart;
 use crate::{Error, Units};
 
 /// The most turbine casings a cycle may have (HP, IP, and two LP, say).
@@ -145,9 +147,10 @@ impl CycleSpec {
     /// Appends the next casing downstream.
     pub fn push_casing(&mut self, casing: Casing) -> Result<(), Error> {
         if self.casing_count == MAX_CASINGS {
-            return Err(Error::InvalidPlant {
-                what: "more turbine casings than MAX_CASINGS",
-            });
+            return Err(refuse(
+                PlantPart::single("cycle"),
+                "more turbine casings than MAX_CASINGS",
+            ));
         }
         self.casings[self.casing_count] = casing;
         self.casing_count += 1;
@@ -157,9 +160,10 @@ impl CycleSpec {
     /// Appends the next heater down in pressure.
     pub fn push_heater(&mut self, heater: Heater) -> Result<(), Error> {
         if self.heater_count == MAX_HEATERS {
-            return Err(Error::InvalidPlant {
-                what: "more feedwater heaters than MAX_HEATERS",
-            });
+            return Err(refuse(
+                PlantPart::single("cycle"),
+                "more feedwater heaters than MAX_HEATERS",
+            ));
         }
         self.heaters[self.heater_count] = heater;
         self.heater_count += 1;

@@ -2,8 +2,13 @@
 //! valve or trap (constant enthalpy).
 
 use super::closed_heater::finite_flow;
+use super::fault::{finite_figures, in_caller_units, refuse};
 use super::native;
+use super::PlantPart;
 use crate::{Error, Quantity, State, Units};
+
+const MIXING_POINT: PlantPart = PlantPart::single("mixing point");
+const THROTTLE: PlantPart = PlantPart::single("throttle");
 
 /// Mixes `streams` of (flow, state) adiabatically into one stream at
 /// `pressure` (in `units`): returns the total flow and its state.
@@ -12,16 +17,16 @@ pub fn mix(streams: &[(f64, &State)], pressure: f64, units: Units) -> Result<(f6
     let mut flow = 0.0;
     let mut enthalpy_flow = 0.0;
     for &(m, state) in streams {
-        let m = finite_flow(m)?;
+        let m = finite_flow(m, MIXING_POINT)?;
         flow += m;
         enthalpy_flow += m * state.native().h;
     }
     if flow <= 0.0 {
-        return Err(Error::InvalidPlant {
-            what: "a mixing point has no flow",
-        });
+        return Err(refuse(MIXING_POINT, "it has no flow"));
     }
-    let mixed = State::from_ph(p, enthalpy_flow / flow, Units::Native)?;
+    finite_figures(MIXING_POINT, &[flow, enthalpy_flow])?;
+    let mixed = State::from_ph(p, enthalpy_flow / flow, Units::Native)
+        .map_err(|e| in_caller_units(e, units))?;
     Ok((flow, mixed.in_units(units)))
 }
 
@@ -31,9 +36,12 @@ pub fn throttle(inlet: &State, outlet_pressure: f64) -> Result<State, Error> {
     let units = inlet.units();
     let p = native(Quantity::Pressure, outlet_pressure, units)?;
     if p > inlet.native().p {
-        return Err(Error::InvalidPlant {
-            what: "a throttle's outlet pressure is above its inlet pressure",
-        });
+        return Err(refuse(
+            THROTTLE,
+            "its outlet pressure is above its inlet pressure",
+        ));
     }
-    Ok(State::from_ph(p, inlet.native().h, Units::Native)?.in_units(units))
+    let outlet = State::from_ph(p, inlet.native().h, Units::Native)
+        .map_err(|e| in_caller_units(e, units))?;
+    Ok(outlet.in_units(units))
 }

@@ -17,6 +17,7 @@ mod closed_heater;
 mod cycle;
 mod cycle_result;
 mod cycle_spec;
+pub(crate) mod fault;
 mod heat_transfer;
 mod mixing;
 mod open_heater;
@@ -33,6 +34,7 @@ pub use cycle_result::{
 pub use cycle_spec::{
     Casing, CycleSpec, Drains, Heater, HeaterKind, Reheat, Supply, MAX_CASINGS, MAX_HEATERS,
 };
+pub use fault::{PlantFigure, PlantPart};
 pub use heat_transfer::{condensate, heat_duty};
 pub use mixing::{mix, throttle};
 pub use open_heater::{open_heater, OpenHeater};
@@ -42,16 +44,19 @@ pub use turbine::{expand, section_efficiency, section_efficiency_between, Expans
 use crate::{Error, Quantity, Units};
 
 /// An isentropic efficiency must lie in (0, 1]: 1 is the ideal machine.
-pub(crate) fn check_efficiency(efficiency: f64) -> Result<f64, Error> {
+pub(crate) fn check_efficiency(efficiency: f64, part: PlantPart) -> Result<f64, Error> {
     if !efficiency.is_finite() {
-        return Err(Error::NotFinite {
-            quantity: Quantity::Quality,
-        });
+        return Err(fault::refuse(
+            part,
+            "its isentropic efficiency is not a finite number",
+        ));
     }
     if efficiency <= 0.0 || efficiency > 1.0 {
-        return Err(Error::InvalidPlant {
-            what: "an isentropic efficiency lies outside (0, 1]",
-        });
+        return Err(fault::refuse_with(
+            part,
+            "its isentropic efficiency lies outside (0, 1]",
+            PlantFigure::number("isentropic efficiency", efficiency, None),
+        ));
     }
     Ok(efficiency)
 }

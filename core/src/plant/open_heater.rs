@@ -4,7 +4,11 @@
 //! extraction flow follows from the energy balance.
 
 use super::closed_heater::finite_flow;
+use super::fault::{finite_figures, refuse, second_law};
+use super::PlantPart;
 use crate::{Error, Quantity, Saturation, State, Units};
+
+const OPEN_HEATER: PlantPart = PlantPart::single("open heater");
 
 /// A solved open heater. Flows are in the unit of the outlet flow given.
 #[derive(Clone, Copy, Debug, PartialEq)]
@@ -29,27 +33,38 @@ pub fn open_heater(
     cascaded_drains: Option<(f64, &State)>,
 ) -> Result<OpenHeater, Error> {
     let units = feedwater_in.units();
-    let out_flow = finite_flow(outlet_flow)?;
+    let out_flow = finite_flow(outlet_flow, OPEN_HEATER)?;
     let outlet = *Saturation::at_pressure(extraction.native().p, Units::Native)?.liquid();
     let (e, a, o) = (extraction.native(), feedwater_in.native(), outlet.native());
     let (c_flow, c) = match cascaded_drains {
-        Some((m, state)) => (finite_flow(m)?, *state.native()),
+        Some((m, state)) => (finite_flow(m, OPEN_HEATER)?, *state.native()),
         None => (0.0, *a),
     };
     if e.h <= o.h || a.h >= o.h {
-        return Err(Error::InvalidPlant {
-            what: "an open heater's extraction steam is not hotter than its outlet, or its feedwater not colder",
-        });
+        return Err(refuse(
+            OPEN_HEATER,
+            "its extraction steam is not hotter than its outlet, or its feedwater not colder",
+        ));
     }
     let extraction_flow = (out_flow * (o.h - a.h) - c_flow * (c.h - a.h)) / (e.h - a.h);
     let feedwater_flow = out_flow - extraction_flow - c_flow;
     if extraction_flow < 0.0 || feedwater_flow < 0.0 {
-        return Err(Error::InvalidPlant {
-            what: "an open heater's flows do not balance with positive extraction and feedwater",
-        });
+        return Err(refuse(
+            OPEN_HEATER,
+            "its flows do not balance with positive extraction and feedwater",
+        ));
     }
     let entropy_generation =
         out_flow * o.s - extraction_flow * e.s - c_flow * c.s - feedwater_flow * a.s;
+    finite_figures(
+        OPEN_HEATER,
+        &[extraction_flow, feedwater_flow, entropy_generation],
+    )?;
+    let throughput = (out_flow * o.s).abs()
+        + (extraction_flow * e.s).abs()
+        + (c_flow * c.s).abs()
+        + (feedwater_flow * a.s).abs();
+    second_law(OPEN_HEATER, entropy_generation, throughput, units)?;
     Ok(OpenHeater {
         outlet: outlet.in_units(units),
         extraction_flow,

@@ -2,10 +2,15 @@
 //! from an inlet state to an exhaust pressure at an isentropic efficiency,
 //! and, for performance tests, the efficiency from measured end states.
 
+use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, TOO_SMALL_A_STEP};
 use super::{check_efficiency, native};
+use super::{PlantFigure, PlantPart};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
 use crate::{Error, Quantity, State, Units};
+
+/// How a stand-alone section names itself in a refusal.
+const TURBINE_SECTION: PlantPart = PlantPart::single("turbine section");
 
 /// One expansion through a turbine section. States and specific values
 /// are in the unit system of the inlet state.
@@ -23,7 +28,7 @@ pub struct Expansion {
     pub isentropic_work: f64,
     /// The section's isentropic efficiency, work / isentropic work.
     pub isentropic_efficiency: f64,
-    /// Specific entropy generated, s_out − s_in (never negative).
+    /// Specific entropy generated, s_out − s_in (not negative beyond the rounding of s).
     pub entropy_generation: f64,
 }
 
@@ -35,23 +40,35 @@ pub fn expand(
     isentropic_efficiency: f64,
 ) -> Result<Expansion, Error> {
     let units = inlet.units();
-    let efficiency = check_efficiency(isentropic_efficiency)?;
+    let efficiency = check_efficiency(isentropic_efficiency, TURBINE_SECTION)?;
     let p_out = native(Quantity::Pressure, exhaust_pressure, units)?;
     let start = inlet.native();
     if p_out >= start.p {
-        return Err(Error::InvalidPlant {
-            what: "a turbine section's exhaust pressure is not below its inlet pressure",
-        });
+        return Err(refuse(
+            TURBINE_SECTION,
+            "its exhaust pressure is not below its inlet pressure",
+        ));
     }
-    let ideal = State::from_ps(p_out, start.s, Units::Native)?;
+    let ideal =
+        State::from_ps(p_out, start.s, Units::Native).map_err(|e| in_caller_units(e, units))?;
     let h_out = start.h - efficiency * (start.h - ideal.native().h);
     // At efficiency 1 the isentropic state is the exhaust: no second solve,
     // and no round-off between the two.
     let exhaust = if efficiency == 1.0 {
         ideal
     } else {
-        State::from_ph(p_out, h_out, Units::Native)?
+        State::from_ph(p_out, h_out, Units::Native).map_err(|e| in_caller_units(e, units))?
     };
+    if ideal.native().h >= start.h {
+        return Err(refuse(TURBINE_SECTION, TOO_SMALL_A_STEP));
+    }
+    if exhaust.native().h >= start.h {
+        return Err(refuse_with(
+            TURBINE_SECTION,
+            "its isentropic efficiency is too small for its work to stand above rounding",
+            PlantFigure::number("isentropic efficiency", efficiency, None),
+        ));
+    }
     Ok(between_native(inlet, &exhaust, &ideal, units))
 }
 
@@ -97,12 +114,17 @@ pub fn section_efficiency(
 pub fn section_efficiency_between(inlet: &State, exhaust: &State) -> Result<Expansion, Error> {
     let p_out = exhaust.native().p;
     if p_out >= inlet.native().p {
-        return Err(Error::InvalidPlant {
-            what: "a turbine section's exhaust pressure is not below its inlet pressure",
-        });
+        return Err(refuse(
+            TURBINE_SECTION,
+            "its exhaust pressure is not below its inlet pressure",
+        ));
     }
     let ideal = State::from_ps(p_out, inlet.native().s, Units::Native)?;
-    Ok(between_native(inlet, exhaust, &ideal, inlet.units()))
+    let expansion = between_native(inlet, exhaust, &ideal, inlet.units());
+    // A measured efficiency may lie outside (0, 1] (bad readings show so),
+    // but not be infinite: the isentropic work must not vanish.
+    finite_figures(TURBINE_SECTION, &[expansion.isentropic_efficiency])?;
+    Ok(expansion)
 }
 
 /// A measured (p,T) point, which fixes a state only as single-phase

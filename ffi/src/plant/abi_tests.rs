@@ -795,6 +795,29 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
     };
     assert_eq!(status, EbullioStatus::InvalidPlant);
     assert_eq!(d.status, EbullioStatus::InvalidPlant);
+    // A steam flow so large that the spray flow would overflow to inf.
+    let mut d = blank_detail();
+    // SAFETY: as above.
+    let status = unsafe {
+        ebullio_attemperator_spray(
+            167.0,
+            560.0,
+            f64::MAX,
+            186.0,
+            180.0,
+            538.0,
+            units,
+            &mut o.balance,
+            &mut o.first,
+            &mut d,
+        )
+    };
+    assert_eq!(status, EbullioStatus::InvalidPlant);
+    assert!(
+        detail_text(&d).contains("attemperator"),
+        "{}",
+        detail_text(&d)
+    );
     // A TTD that leaves the feedwater no temperature rise.
     // SAFETY: as above.
     let status = unsafe {

@@ -6,7 +6,7 @@
 
 use core::mem::size_of;
 
-use ebullio::plant::{compress, expand, section_efficiency, Compression, Expansion};
+use ebullio::plant::{compress, expand, section_efficiency, Compression, Expansion, PlantPart};
 use ebullio::{Error, State, Units};
 
 use super::figures::{figures_layout, Figures};
@@ -124,6 +124,8 @@ pub(super) struct Outs<T: Figures> {
 /// defence behind the core's own checks (an input as large as `f64::MAX`
 /// can overflow a flow or a duty).
 const NOT_FINITE_FIGURES: Error = Error::InvalidPlant {
+    part: PlantPart::single("component"),
+    figure: None,
     what: "a figure of the result is not a finite number (an input too large to compute with?)",
 };
 

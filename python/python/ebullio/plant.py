@@ -456,7 +456,9 @@ def throttle(inlet: State, p: float) -> State:
 
 def heat_duty(flow: float, inlet: State, outlet: State) -> float:
     """Heat given to ``flow`` going from ``inlet`` to ``outlet`` (negative
-    when it gives heat away), in the inlet's units times the flow unit."""
+    when it gives heat away), in the inlet's units times the flow unit.
+    A negative or non-finite flow, or a duty too large to be a finite
+    number, raises ``InvalidPlantError``."""
     return _core.heat_duty(flow, inlet, outlet)
 
 

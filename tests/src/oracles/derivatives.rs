@@ -185,7 +185,8 @@ pub fn check_saturation(sat: &Saturation, call: &dyn Fn() -> String, findings: &
         // of Tc (Saturation::liquid_slope's documentation); 1e-4 K is the
         // margin allowed here.
         findings.check(
-            (a.is_some() && b.is_some()) || l.native().t > ebullio::constants::CRITICAL_TEMPERATURE - 1e-4,
+            (a.is_some() && b.is_some())
+                || l.native().t > ebullio::constants::CRITICAL_TEMPERATURE - 1e-4,
             "saturation slope absent away from the critical point",
             || format!("{}: d{z:?}/dT = {a:?}, {b:?}", at()),
         );
