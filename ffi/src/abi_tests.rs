@@ -1058,7 +1058,6 @@ fn a_property_the_core_cannot_give_finite_is_undefined_never_ok() {
 }
 
 #[test]
-#[ignore = "needs the core to read a non-physical cp as absent (issue 12, defect 4, another helper's branch)"]
 fn a_negative_cp_at_the_critical_point_is_undefined() {
     // Issue 12, defect 4: at (322 kg/m³, 647.096 K), beside the critical
     // point, the region 3 equation gives cp = -7.7e11 and κT = -5.3e9;
