@@ -100,27 +100,6 @@ def test_critical_point_properties_agree_between_getters_and_columns(pair, a, b,
 
 
 @pytest.mark.parametrize("pair, a, b, units", CRITICAL, ids=[c[0] for c in CRITICAL])
-def test_critical_point_properties_agree_between_getters_and_columns(pair, a, b, units):
-    constructor = getattr(State, f"from_{pair}")
-    states = constructor(np.array([a]), np.array([b]), units=units)
-    try:
-        state = constructor(a, b, units=units)
-    except ebullio.SteamError as error:
-        # refused (the core may decide so): refused alike, for the same reason
-        assert states.status[0] == error.status and np.isnan(states.h[0])
-        return
-    assert states.status[0] == Status.OK
-    for name in ebullio.PROPERTIES:
-        value = getattr(state, name)
-        assert np.array_equal(getattr(states, name), [np.nan if value is None else value], equal_nan=True), name
-
-
-@pytest.mark.xfail(
-    strict=True,
-    reason="the core decides that cp, alpha_v and kappa_t at the critical point are absent "
-    "(issue 12, defect 4, fixed in the core's branch): remove this marker once merged",
-)
-@pytest.mark.parametrize("pair, a, b, units", CRITICAL, ids=[c[0] for c in CRITICAL])
 def test_critical_point_properties_are_absent_or_physical(pair, a, b, units):
     # physical limits: cp, cv, kappa_T and w finite and > 0, alpha_v finite
     # (RULES: the core reads anything else as absent), or the state refused
