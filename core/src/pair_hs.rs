@@ -469,7 +469,7 @@ fn single_state(place: Place, props: Properties) -> State {
     let (p, t) = (props.p, props.t);
     let (region, phase) = match place {
         Place::One => (Region::One, single_phase(p, t, true)),
-        Place::Three => (Region::Three, region3_phase(p, t)),
+        Place::Three => (Region::Three, region3_phase(&props)),
         Place::Five => (Region::Five, single_phase(p, t, false)),
         _ => (Region::Two, single_phase(p, t, false)),
     };

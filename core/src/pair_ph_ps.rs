@@ -359,7 +359,7 @@ pub(crate) fn solve(
             return Ok(State::single_phase(
                 props,
                 Region::Three,
-                region3_phase(props.p, props.t),
+                region3_phase(&props),
                 units,
             ));
         }

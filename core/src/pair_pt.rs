@@ -1,10 +1,10 @@
 //! States from pressure and temperature, the formulation's own variables:
 //! regions 1, 2 and 5 evaluate directly, region 3 solves for the density.
 
-use crate::backward::sr5_05;
+use crate::backward::sr5_05::{self, SaturationSide};
 use crate::error::{native_input, Error};
 use crate::pair_ph_ps::Method;
-use crate::regions::{locate, single_phase, within_range, Located};
+use crate::regions::{locate, region3_phase, single_phase, within_range, Located};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
 use crate::{region1, region2, region3, region3_density, region5};
@@ -29,20 +29,31 @@ impl State {
     /// the basic equation for the density; [`Method::BackwardOnly`] takes
     /// the density of the IAPWS SR5-05(2016) backward equation v(p,T)
     /// unrefined, and the state at that (ρ, T), whose pressure differs from
-    /// `p` by the backward equation's error (in every subregion 3a … 3z).
-    /// A backward volume that is not finite and positive (an
+    /// `p` by the backward equation's error (in every subregion 3a … 3z;
+    /// up to 1.7 % in v in the near-critical 3y and 3z); its phase is
+    /// named from that state ([`crate::Phase`]), and on the saturation line
+    /// the liquid's subregion is taken, as [`State::from_pt`] takes the
+    /// liquid. A backward volume that is not finite and positive (an
     /// extrapolation at the edge of a subregion's range) is
     /// [`Error::BackwardEquationOutOfRange`].
     pub fn from_pt_with(p: f64, t: f64, units: Units, method: Method) -> Result<State, Error> {
         let given = (Quantity::Pressure, p, Quantity::Temperature, t);
         let p = native_input(units, Quantity::Pressure, p)?;
         let t = native_input(units, Quantity::Temperature, t)?;
-        let (props, region, liquid) = match located(p, t, units, given)? {
-            Located::Region1 => (region1::gibbs(p, t).properties(p, t), Region::One, true),
-            Located::Region2 => (region2::gibbs(p, t).properties(p, t), Region::Two, false),
-            Located::Region5 => (region5::gibbs(p, t).properties(p, t), Region::Five, false),
+        let (props, region) = match located(p, t, units, given)? {
+            Located::Region1 => (region1::gibbs(p, t).properties(p, t), Region::One),
+            Located::Region2 => (region2::gibbs(p, t).properties(p, t), Region::Two),
+            Located::Region5 => (region5::gibbs(p, t).properties(p, t), Region::Five),
             Located::Region3(branch) if method == Method::BackwardOnly => {
-                let rho = 1.0 / sr5_05::specific_volume(p, t);
+                // The side `locate` took, not T against Tsat(p) again: on
+                // the line (within the tolerance) the liquid's subregion.
+                let side = if branch == region3_density::Branch::Liquid {
+                    SaturationSide::Liquid
+                } else {
+                    SaturationSide::Vapour
+                };
+                let sub = sr5_05::locate_on_side(p, t, side);
+                let rho = 1.0 / sr5_05::specific_volume_in(sub, p, t);
                 if !(rho.is_finite() && rho > 0.0) {
                     return Err(Error::BackwardEquationOutOfRange {
                         equation: "v(p,T) region 3",
@@ -55,11 +66,7 @@ impl State {
                         equation: "v(p,T) region 3",
                     });
                 }
-                (
-                    props,
-                    Region::Three,
-                    branch == region3_density::Branch::Liquid,
-                )
+                (props, Region::Three)
             }
             Located::Region3(branch) => {
                 let rho = region3_density::density(p, t, branch)?;
@@ -67,19 +74,17 @@ impl State {
                 // Report the caller's pressure, which the density reproduces
                 // to its last bit or two, rather than the recomputed one.
                 props.p = p;
-                (
-                    props,
-                    Region::Three,
-                    branch == region3_density::Branch::Liquid,
-                )
+                (props, Region::Three)
             }
         };
-        Ok(State::single_phase(
-            props,
-            region,
-            single_phase(p, t, liquid),
-            units,
-        ))
+        // Named from the state returned: a strict region 3 state's own
+        // pressure may lie across pc from the caller's.
+        let phase = match region {
+            Region::One => single_phase(p, t, true),
+            Region::Three => region3_phase(&props),
+            _ => single_phase(p, t, false),
+        };
+        Ok(State::single_phase(props, region, phase, units))
     }
 }
 

@@ -137,7 +137,7 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
         return Ok(State::single_phase(
             props,
             Region::Three,
-            region3_phase(props.p, t),
+            region3_phase(&props),
             units,
         ));
     }

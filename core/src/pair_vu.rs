@@ -473,7 +473,7 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
                     return None;
                 }
             }
-            (Region::Three, region3_phase(props.p, props.t))
+            (Region::Three, region3_phase(props))
         }
         _ => return None,
     };

@@ -4,6 +4,7 @@
 use crate::boundary_b23;
 use crate::constants::*;
 use crate::error::Error;
+use crate::free_energy::Properties;
 use crate::region3_density::Branch;
 use crate::saturation_line::saturation_pressure;
 use crate::state::Phase;
@@ -33,7 +34,7 @@ fn liquid_side(p: f64, t: f64) -> bool {
 
 /// Locates native `p` (MPa) and `t` (K); out-of-range errors are reported
 /// in `units`. A state on the saturation line (within
-/// [`SATURATION_TOLERANCE`]) is taken as liquid.
+/// [`SATURATION_TOLERANCE`]) is taken as liquid, at 623.15 K too.
 pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
     if !(MIN_TEMPERATURE..=MAX_TEMPERATURE).contains(&t) {
         return Err(Error::out_of_range(
@@ -64,6 +65,14 @@ pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
         } else {
             Located::Region2
         }
+    } else if t <= REGION13_TEMPERATURE * (1.0 + SATURATION_TOLERANCE)
+        && p <= boundary_b23::pressure(t)
+        && liquid_side(p, t)
+    {
+        // On the line a few nanokelvin above 623.15 K, where B23 lies
+        // 1.7e-11 MPa above psat (measured) and would make the liquid side
+        // region 2 vapour: the liquid of 623.15 K itself, region 1.
+        Located::Region1
     } else if t <= B23_MAX_TEMPERATURE {
         if p <= boundary_b23::pressure(t) {
             Located::Region2
@@ -81,9 +90,13 @@ pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
     })
 }
 
-/// The phase of a single-phase state off the saturation line: liquid below
-/// Tc, supercritical above both Tc and pc, otherwise vapour or gas
-/// (common practice).
+/// The phase of a single-phase state, named from the state itself (its
+/// own p and T, not the caller's inputs) and the branch it was solved on:
+/// supercritical fluid above both Tc and pc, otherwise compressed liquid
+/// on the liquid branch (region 1; region 3 denser than ρc below Tc) and
+/// superheated vapour on the other (regions 2 and 5 and the rest of region
+/// 3, gas above Tc included). The rule is stated for users at
+/// [`Phase`].
 pub(crate) fn single_phase(p: f64, t: f64, liquid: bool) -> Phase {
     if t > CRITICAL_TEMPERATURE && p > CRITICAL_PRESSURE {
         Phase::SupercriticalFluid
@@ -94,14 +107,14 @@ pub(crate) fn single_phase(p: f64, t: f64, liquid: bool) -> Phase {
     }
 }
 
-/// The phase of a region 3 state at `p` (MPa) and `t` (K): liquid-like at
-/// or above psat(T) below the critical temperature.
-pub(crate) fn region3_phase(p: f64, t: f64) -> Phase {
-    single_phase(
-        p,
-        t,
-        t < CRITICAL_TEMPERATURE && p >= saturation_pressure(t),
-    )
+/// The phase of a region 3 state. Its branch is its density: a stable
+/// state below Tc is at least as dense as the saturated liquid or at most
+/// as dense as the saturated vapour, and ρ'' < ρc < ρ', so ρ against ρc
+/// names the side even on the saturation line itself, where p against
+/// psat(T) is decided by rounding (and named the saturated liquid vapour).
+pub(crate) fn region3_phase(props: &Properties) -> Phase {
+    let liquid = props.t < CRITICAL_TEMPERATURE && props.v < 1.0 / CRITICAL_DENSITY;
+    single_phase(props.p, props.t, liquid)
 }
 
 /// Whether native `p` (MPa) and `t` (K) lie inside the range of validity,

@@ -28,6 +28,16 @@ impl Region {
 }
 
 /// The physical phase of a state.
+///
+/// A single-phase state is named from the state returned (its own p, T
+/// and density, not the caller's inputs: a strict region 3 state's
+/// pressure may differ from the one given): supercritical fluid above both
+/// Tc and pc; otherwise compressed liquid from region 1, and from region 3
+/// below Tc when denser than the critical density; superheated vapour
+/// from regions 2 and 5 and the rest of region 3. So a state at the
+/// saturation line is named by the branch solved, the saturated liquid
+/// liquid and the saturated vapour vapour, whatever rounding says of p
+/// against psat(T).
 #[derive(Clone, Copy, Debug, PartialEq, Eq, Hash)]
 #[repr(u32)]
 pub enum Phase {

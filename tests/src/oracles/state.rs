@@ -286,6 +286,42 @@ pub fn check_state(state: &State, findings: &mut Findings, tag: &str, call: &dyn
             at,
         );
     }
+    if let Some(named) = phase_by_the_naming_rule(state) {
+        findings.check(
+            state.phase() == named,
+            format!("phase is not the one the naming rule gives [{tag}]"),
+            || format!("{}; the rule names it {named}", at()),
+        );
+    }
+}
+
+/// The phase a single-phase state is named by (the rule documented at
+/// `ebullio::Phase`), from the state returned, not the caller's inputs:
+/// supercritical above both Tc and pc (R7-97(2012), Eqs. (1) and (2));
+/// otherwise region 1 is liquid, regions 2 and 5 vapour, and region 3
+/// below Tc liquid when denser than ρc = 322 kg/m³ (R7-97(2012), Eq. (2)):
+/// ρ'' < ρc < ρ' below Tc, so on the saturation line, where the check
+/// against the saturated densities above allows 1e-3 either way, this
+/// names the branch that was solved. `None` for the two-phase and
+/// saturated phases and the metastable vapour, named by how they were
+/// asked for.
+fn phase_by_the_naming_rule(state: &State) -> Option<Phase> {
+    let n = state.native();
+    let liquid = match state.region() {
+        Region::One => true,
+        Region::Two | Region::Five => false,
+        Region::Three => n.t < 647.096 && n.v < 1.0 / 322.0,
+        Region::Four => return None,
+    };
+    Some(match state.phase() {
+        Phase::WetSteam
+        | Phase::SaturatedLiquid
+        | Phase::SaturatedVapour
+        | Phase::MetastableVapour => return None,
+        _ if n.t > 647.096 && n.p > 22.064 => Phase::SupercriticalFluid,
+        _ if liquid => Phase::CompressedLiquid,
+        _ => Phase::SuperheatedVapour,
+    })
 }
 
 /// The pair read back off the state, in the caller's units, against the
