@@ -11,6 +11,7 @@ use ebullio::plant::{
 };
 use ebullio::{InputPair, Method, Property, State, Units};
 
+use crate::abi_tests::blank_state;
 use crate::*;
 
 /// The (invented) demo plant, Tallowmere Unit 3, in metric engineering
@@ -416,14 +417,6 @@ fn blank_compression() -> EbullioCompression {
     }
 }
 
-fn blank_state() -> EbullioState {
-    let mut s = EbullioState::of(&State::from_pt(3.0, 300.0, Units::Native).unwrap());
-    s.pressure = -1.0;
-    s.enthalpy = -1.0;
-    s.quality = -1.0; // not NaN, so that untouched compares equal
-    s
-}
-
 fn same_state(c: &EbullioState, core: &State) {
     for (field, property) in [
         (c.pressure, Property::Pressure),
@@ -665,6 +658,33 @@ impl HeaterOutputs {
         }
     }
 
+    /// `ebullio_attemperator_spray` into these outputs: spray water at
+    /// 186 bar, 180 °C into `steam_flow` of steam at 167 bar, 560 °C, to
+    /// `target` °C (metric engineering units).
+    fn spray(
+        &mut self,
+        steam_flow: f64,
+        target: f64,
+        detail: *mut EbullioErrorDetail,
+    ) -> EbullioStatus {
+        // SAFETY: whole output structs with their sizes set; `detail` is
+        // null or a whole detail.
+        unsafe {
+            ebullio_attemperator_spray(
+                167.0,
+                560.0,
+                steam_flow,
+                186.0,
+                180.0,
+                target,
+                EbullioUnits::MetricEngineering as u32,
+                &mut self.balance,
+                &mut self.first,
+                detail,
+            )
+        }
+    }
+
     /// The balance holds the core's figures, bit for bit, in the test's
     /// units (metric engineering).
     fn same_balance(&self, balancing_flow: f64, through_flow: f64, duty: f64, generation: f64) {
@@ -754,21 +774,7 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
     same_state(&o.first, &core.outlet);
     // Spray from 186 bar, 180 °C feedwater into 167 bar, 560 °C steam.
     let mut o = HeaterOutputs::blank();
-    // SAFETY: as above.
-    let status = unsafe {
-        ebullio_attemperator_spray(
-            167.0,
-            560.0,
-            500.0,
-            186.0,
-            180.0,
-            538.0,
-            units,
-            &mut o.balance,
-            &mut o.first,
-            ptr::null_mut(),
-        )
-    };
+    let status = o.spray(500.0, 538.0, ptr::null_mut());
     assert_eq!(status, EbullioStatus::Ok);
     let steam = State::from_pt(167.0, 560.0, u).unwrap();
     let spray = State::from_pt(186.0, 180.0, u).unwrap();
@@ -778,46 +784,9 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
     // Refusals leave the outputs as they were.
     let mut o = HeaterOutputs::blank();
     let mut d = blank_detail();
-    // SAFETY: as above.
-    let status = unsafe {
-        ebullio_attemperator_spray(
-            167.0,
-            560.0,
-            500.0,
-            186.0,
-            180.0,
-            600.0,
-            units,
-            &mut o.balance,
-            &mut o.first,
-            &mut d,
-        )
-    };
+    let status = o.spray(500.0, 600.0, &mut d);
     assert_eq!(status, EbullioStatus::InvalidPlant);
     assert_eq!(d.status, EbullioStatus::InvalidPlant);
-    // A steam flow so large that the spray flow would overflow to inf.
-    let mut d = blank_detail();
-    // SAFETY: as above.
-    let status = unsafe {
-        ebullio_attemperator_spray(
-            167.0,
-            560.0,
-            f64::MAX,
-            186.0,
-            180.0,
-            538.0,
-            units,
-            &mut o.balance,
-            &mut o.first,
-            &mut d,
-        )
-    };
-    assert_eq!(status, EbullioStatus::InvalidPlant);
-    assert!(
-        detail_text(&d).contains("attemperator"),
-        "{}",
-        detail_text(&d)
-    );
     // A TTD that leaves the feedwater no temperature rise.
     // SAFETY: as above.
     let status = unsafe {
@@ -868,29 +837,17 @@ fn a_component_call_never_returns_a_non_finite_figure_with_status_ok() {
     // spray flow with status OK. Whatever the core says, C writes only
     // finite figures with status 0, and refuses (outputs untouched,
     // detail filled) otherwise.
-    let units = EbullioUnits::MetricEngineering as u32;
     let mut o = HeaterOutputs::blank();
-    let before = o.balance;
     let mut d = blank_detail();
-    // SAFETY: every pointer is to a local of the right type, sizes set.
-    let status = unsafe {
-        ebullio_attemperator_spray(
-            167.0,
-            560.0,
-            f64::MAX,
-            186.0,
-            180.0,
-            538.0,
-            units,
-            &mut o.balance,
-            &mut o.first,
-            &mut d,
-        )
-    };
-    assert_ne!(status, EbullioStatus::Ok, "{:?}", o.balance);
-    assert_eq!(o.balance, before);
+    let status = o.spray(f64::MAX, 538.0, &mut d);
+    assert_eq!(status, EbullioStatus::InvalidPlant, "{:?}", o.balance);
+    assert_eq!(o, HeaterOutputs::blank());
     assert_eq!(d.status, status);
-    assert!(!detail_text(&d).is_empty());
+    assert!(
+        detail_text(&d).contains("attemperator"),
+        "{}",
+        detail_text(&d)
+    );
 }
 
 #[test]
