@@ -867,26 +867,31 @@ fn every_state_and_derivative_path_honours_the_method_with_the_cores_bits() {
 fn several_properties_give_nan_for_an_absent_one_and_keep_the_element_ok() {
     // Issue 12, defect 13: enthalpy and quality of single-phase states.
     use EbullioProperty as P;
-    let props = [P::Enthalpy as u32, P::Quality as u32];
     let p = [3.0, 0.0035, 30.0];
     let t = [300.0, 700.0, 1500.0];
-    let mut out = [0.0; 6];
-    let mut statuses = [EbullioStatus::Panic; 3];
-    // SAFETY: two properties, three states, six outputs, three statuses.
-    let status = unsafe {
-        ebullio_properties_array(
-            props.as_ptr(),
-            2,
-            1,
-            p.as_ptr(),
-            t.as_ptr(),
-            3,
-            0,
-            0,
-            out.as_mut_ptr(),
-            statuses.as_mut_ptr(),
-        )
+    // The several-properties call over these three (p, T) states.
+    let several = |props: &[u32]| {
+        let mut out = vec![0.0; 3 * props.len()];
+        let mut statuses = [EbullioStatus::Panic; 3];
+        // SAFETY: `props.len()` properties, three states, as many outputs
+        // as properties × states, three statuses.
+        let status = unsafe {
+            ebullio_properties_array(
+                props.as_ptr(),
+                props.len(),
+                1,
+                p.as_ptr(),
+                t.as_ptr(),
+                3,
+                0,
+                0,
+                out.as_mut_ptr(),
+                statuses.as_mut_ptr(),
+            )
+        };
+        (status, out, statuses)
     };
+    let (status, out, statuses) = several(&[P::Enthalpy as u32, P::Quality as u32]);
     assert_eq!(status, EbullioStatus::Ok);
     assert_eq!(statuses, [EbullioStatus::Ok; 3]);
     for i in 0..3 {
@@ -897,25 +902,12 @@ fn several_properties_give_nan_for_an_absent_one_and_keep_the_element_ok() {
         assert!(out[2 * i + 1].is_nan());
     }
     // One property asked of the several-properties call: the same rule.
-    let quality = [P::Quality as u32];
-    // SAFETY: one property, three states, three outputs, three statuses.
-    let status = unsafe {
-        ebullio_properties_array(
-            quality.as_ptr(),
-            1,
-            1,
-            p.as_ptr(),
-            t.as_ptr(),
-            3,
-            0,
-            0,
-            out.as_mut_ptr(),
-            statuses.as_mut_ptr(),
-        )
-    };
+    let (status, out, statuses) = several(&[P::Quality as u32]);
     assert_eq!(status, EbullioStatus::Ok);
     assert_eq!(statuses, [EbullioStatus::Ok; 3]);
-    assert!(out[..3].iter().all(|v| v.is_nan()));
+    assert!(out.iter().all(|v| v.is_nan()));
+    let mut out = [0.0; 3];
+    let mut statuses = [EbullioStatus::Panic; 3];
     // The one-property calls say the property is absent.
     // SAFETY: three states, three outputs, three statuses.
     let status = unsafe {

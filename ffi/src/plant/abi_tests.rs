@@ -216,21 +216,39 @@ fn the_cycle_block_holds_the_cores_bits() {
     }
 }
 
-#[test]
-fn a_saturated_supply_without_reheat_or_heaters_decodes_as_the_core_builds_it() {
-    // Moran & Shapiro's Example 8.2 arrangement (tests/tests/plant_textbook_cycles.rs).
+/// A plant of one casing and no reheat or heaters: the supply's (pressure,
+/// temperature), the casing's (exhaust pressure, isentropic efficiency),
+/// a feed pump of efficiency 0.85 and an ideal condensate pump.
+fn one_casing_spec(
+    units: EbullioUnits,
+    supply_kind: EbullioSupplyKind,
+    (supply_pressure, supply_temperature): (f64, f64),
+    (exhaust_pressure, isentropic_efficiency): (f64, f64),
+) -> EbullioCycleSpec {
     let mut c = EbullioCycleSpec::zeroed();
-    c.units = EbullioUnits::MetricEngineering as u32;
-    c.supply_kind = EbullioSupplyKind::SaturatedVapour as u32;
-    c.supply_pressure = 80.0;
-    c.supply_temperature = f64::NAN; // not read
+    c.units = units as u32;
+    c.supply_kind = supply_kind as u32;
+    c.supply_pressure = supply_pressure;
+    c.supply_temperature = supply_temperature;
     c.casing_count = 1;
     c.casings[0] = EbullioCasing {
-        exhaust_pressure: 0.08,
-        isentropic_efficiency: 0.85,
+        exhaust_pressure,
+        isentropic_efficiency,
     };
     c.feed_pump_efficiency = 0.85;
     c.condensate_pump_efficiency = 1.0;
+    c
+}
+
+#[test]
+fn a_saturated_supply_without_reheat_or_heaters_decodes_as_the_core_builds_it() {
+    // Moran & Shapiro's Example 8.2 arrangement (tests/tests/plant_textbook_cycles.rs).
+    let c = one_casing_spec(
+        EbullioUnits::MetricEngineering,
+        EbullioSupplyKind::SaturatedVapour,
+        (80.0, f64::NAN), // the temperature is not read
+        (0.08, 0.85),
+    );
     let mut core = CycleSpec::new(
         Units::MetricEngineering,
         Supply::SaturatedVapour { pressure: 80.0 },
@@ -855,18 +873,12 @@ fn a_cycle_with_a_figure_that_is_not_finite_is_refused() {
     // Issue 12, defect 8: a casing at an isentropic efficiency of 1e-300
     // delivers no work, and the back-work ratio came out infinite with
     // status OK. (Invented plant: 10 MPa, 800 K, one casing to 0.01 MPa.)
-    let mut c = EbullioCycleSpec::zeroed();
-    c.units = EbullioUnits::Native as u32;
-    c.supply_kind = EbullioSupplyKind::Superheated as u32;
-    c.supply_pressure = 10.0;
-    c.supply_temperature = 800.0;
-    c.casing_count = 1;
-    c.casings[0] = EbullioCasing {
-        exhaust_pressure: 0.01,
-        isentropic_efficiency: 1e-300,
-    };
-    c.feed_pump_efficiency = 0.85;
-    c.condensate_pump_efficiency = 1.0;
+    let c = one_casing_spec(
+        EbullioUnits::Native,
+        EbullioSupplyKind::Superheated,
+        (10.0, 800.0),
+        (0.01, 1e-300),
+    );
     let mut r = marked_result();
     let mut d = blank_detail();
     // SAFETY: a whole spec, result and detail, sizes set.
