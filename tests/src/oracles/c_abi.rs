@@ -82,19 +82,10 @@ fn blank_state() -> EbullioState {
 /// against the core's outcome `core`.
 pub fn check_c_scalar(case: &SolveCase, core: &Result<State, Error>, findings: &mut Findings) {
     findings.case();
+    let (pair, a, b, units, method) = c_inputs(case);
     let mut out = blank_state();
     // SAFETY: `out` is a valid EbullioState with its size set; detail null.
-    let status = unsafe {
-        ebullio_solve(
-            case.pair as u32,
-            case.a,
-            case.b,
-            case.units as u32,
-            case.method as u32,
-            &mut out,
-            null_mut(),
-        )
-    };
+    let status = unsafe { ebullio_solve(pair, a, b, units, method, &mut out, null_mut()) };
     let expected = status_of(core);
     findings.check(
         status == expected,
@@ -170,21 +161,18 @@ pub fn check_c_scalar(case: &SolveCase, core: &Result<State, Error>, findings: &
     }
 }
 
+/// `case` as the C calls take it: pair, a, b, units, method.
+fn c_inputs(case: &SolveCase) -> (u32, f64, f64, u32, u32) {
+    let (pair, units, method) = (case.pair as u32, case.units as u32, case.method as u32);
+    (pair, case.a, case.b, units, method)
+}
+
 /// `ebullio_property` number `n` of `case`: the value and the status.
 fn c_property(case: &SolveCase, n: u32) -> (f64, EbullioStatus) {
+    let (pair, a, b, units, method) = c_inputs(case);
     let mut status = EbullioStatus::Ok;
     // SAFETY: `status` is a valid, writable EbullioStatus.
-    let value = unsafe {
-        ebullio_property(
-            n,
-            case.pair as u32,
-            case.a,
-            case.b,
-            case.units as u32,
-            case.method as u32,
-            &mut status,
-        )
-    };
+    let value = unsafe { ebullio_property(n, pair, a, b, units, method, &mut status) };
     (value, status)
 }
 
@@ -193,21 +181,11 @@ type Triple = (Variable, Variable, Variable);
 
 /// `ebullio_derivative` of `case`: the value and the status.
 fn c_derivative(case: &SolveCase, (z, x, y): Triple) -> (f64, EbullioStatus) {
+    let (pair, a, b, units, method) = c_inputs(case);
+    let (z, x, y) = (z as u32, x as u32, y as u32);
     let mut status = EbullioStatus::Ok;
     // SAFETY: `status` is a valid, writable EbullioStatus.
-    let value = unsafe {
-        ebullio_derivative(
-            z as u32,
-            x as u32,
-            y as u32,
-            case.pair as u32,
-            case.a,
-            case.b,
-            case.units as u32,
-            case.method as u32,
-            &mut status,
-        )
-    };
+    let value = unsafe { ebullio_derivative(z, x, y, pair, a, b, units, method, &mut status) };
     (value, status)
 }
 
@@ -240,12 +218,12 @@ struct CBatch<'a> {
 
 impl<'a> CBatch<'a> {
     fn of(cases: &'a [SolveCase]) -> Option<CBatch<'a>> {
-        let first = cases.first()?;
+        let (pair, _, _, units, method) = c_inputs(cases.first()?);
         Some(CBatch {
             cases,
-            pair: first.pair as u32,
-            units: first.units as u32,
-            method: first.method as u32,
+            pair,
+            units,
+            method,
             a: cases.iter().map(|c| c.a).collect(),
             b: cases.iter().map(|c| c.b).collect(),
         })
