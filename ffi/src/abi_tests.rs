@@ -9,28 +9,15 @@ use ebullio::{InputPair, Method, Property, Saturation, State, Units};
 
 use crate::*;
 
-fn blank_state() -> EbullioState {
-    EbullioState {
-        size: size_of::<EbullioState>() as u32,
-        units: EbullioUnits::Native,
-        region: EbullioRegion::One,
-        phase: EbullioPhase::CompressedLiquid,
-        pressure: -1.0,
-        temperature: -1.0,
-        specific_volume: -1.0,
-        density: -1.0,
-        internal_energy: -1.0,
-        enthalpy: -1.0,
-        entropy: -1.0,
-        isobaric_heat_capacity: -1.0,
-        isochoric_heat_capacity: -1.0,
-        speed_of_sound: -1.0,
-        quality: -1.0,
-        expansion_coefficient: -1.0,
-        compressibility: -1.0,
-        gibbs_energy: -1.0,
-        helmholtz_energy: -1.0,
-    }
+/// An output state to hand the calls: a solved (3 MPa, 300 K) with three
+/// fields set to -1, so that a write shows and an untouched one compares
+/// equal (quality is NaN in a single-phase state). The plant tests share it.
+pub(crate) fn blank_state() -> EbullioState {
+    let mut s = EbullioState::of(&State::from_pt(3.0, 300.0, Units::Native).unwrap());
+    s.pressure = -1.0;
+    s.enthalpy = -1.0;
+    s.quality = -1.0;
+    s
 }
 
 fn solve(pair: u32, a: f64, b: f64, units: u32) -> (EbullioStatus, EbullioState) {
@@ -40,42 +27,50 @@ fn solve(pair: u32, a: f64, b: f64, units: u32) -> (EbullioStatus, EbullioState)
     (status, s)
 }
 
-/// A spread of states over every pair and unit system, from (p, T).
-fn cases() -> Vec<(InputPair, f64, f64, Units)> {
+/// Each (p, T) point in every unit system, given by each of `pairs` (the
+/// single-phase pairs: pressure, temperature, density, enthalpy, entropy).
+fn single_phase_cases(
+    points: &[(f64, f64)],
+    pairs: &[InputPair],
+) -> Vec<(InputPair, f64, f64, Units)> {
     let mut v = Vec::new();
     for units in Units::ALL {
-        for &(p, t) in &[(3.0, 300.0), (0.0035, 700.0), (25.0, 650.0), (30.0, 1500.0)] {
+        for &(p, t) in points {
             let s = State::from_pt(p, t, Units::Native).unwrap().in_units(units);
-            v.push((
-                InputPair::PressureTemperature,
-                s.pressure(),
-                s.temperature(),
-                units,
-            ));
-            v.push((
-                InputPair::PressureEnthalpy,
-                s.pressure(),
-                s.enthalpy(),
-                units,
-            ));
-            v.push((InputPair::PressureEntropy, s.pressure(), s.entropy(), units));
-            v.push((
-                InputPair::DensityTemperature,
-                s.density(),
-                s.temperature(),
-                units,
-            ));
+            for &pair in pairs {
+                let (a, b) = match pair {
+                    InputPair::PressureTemperature => (s.pressure(), s.temperature()),
+                    InputPair::PressureEnthalpy => (s.pressure(), s.enthalpy()),
+                    InputPair::PressureEntropy => (s.pressure(), s.entropy()),
+                    InputPair::EnthalpyEntropy => (s.enthalpy(), s.entropy()),
+                    InputPair::DensityTemperature => (s.density(), s.temperature()),
+                    _ => panic!("{pair:?} is not a single-phase pair here"),
+                };
+                v.push((pair, a, b, units));
+            }
         }
+    }
+    v
+}
+
+/// A spread of states over every pair and unit system, from (p, T).
+fn cases() -> Vec<(InputPair, f64, f64, Units)> {
+    use InputPair::*;
+    let mut v = single_phase_cases(
+        &[(3.0, 300.0), (0.0035, 700.0), (25.0, 650.0), (30.0, 1500.0)],
+        &[
+            PressureTemperature,
+            PressureEnthalpy,
+            PressureEntropy,
+            DensityTemperature,
+        ],
+    );
+    for units in Units::ALL {
         let sat = Saturation::at_pressure(1.0, Units::Native)
             .unwrap()
             .in_units(units);
-        v.push((InputPair::PressureQuality, sat.pressure(), 0.25, units));
-        v.push((
-            InputPair::TemperatureQuality,
-            sat.temperature(),
-            0.75,
-            units,
-        ));
+        v.push((PressureQuality, sat.pressure(), 0.25, units));
+        v.push((TemperatureQuality, sat.temperature(), 0.75, units));
     }
     v
 }
@@ -288,10 +283,30 @@ const BEYOND_CORE: [(EbullioProperty, CoreCall); 10] = [
     ),
 ];
 
-fn property(p: u32, pair: u32, a: f64, b: f64, units: u32) -> (f64, EbullioStatus) {
+/// `ebullio_property`: the value and the status it writes.
+fn property(p: u32, pair: u32, a: f64, b: f64, units: u32, method: u32) -> (f64, EbullioStatus) {
     let mut st = EbullioStatus::Panic;
     // SAFETY: `st` is a writable status.
-    let v = unsafe { ebullio_property(p, pair, a, b, units, 0, &mut st) };
+    let v = unsafe { ebullio_property(p, pair, a, b, units, method, &mut st) };
+    (v, st)
+}
+
+/// `ebullio_derivative` of (∂z/∂x)_y: the value and the status it writes.
+fn derivative(
+    [z, x, y]: [ebullio::Variable; 3],
+    pair: u32,
+    a: f64,
+    b: f64,
+    units: u32,
+    method: u32,
+) -> (f64, EbullioStatus) {
+    let mut st = EbullioStatus::Panic;
+    // SAFETY: `st` is a writable status.
+    let v = unsafe {
+        ebullio_derivative(
+            z as u32, x as u32, y as u32, pair, a, b, units, method, &mut st,
+        )
+    };
     (v, st)
 }
 
@@ -301,7 +316,7 @@ fn transport_and_coefficients_give_the_cores_bits_or_its_error() {
     for (pair, a, b, units) in cases() {
         let core = State::solve(pair, a, b, units, Method::Exact).unwrap();
         for (code, call) in BEYOND_CORE {
-            let (v, st) = property(code as u32, pair as u32, a, b, units as u32);
+            let (v, st) = property(code as u32, pair as u32, a, b, units as u32, 0);
             match call(&core) {
                 Ok(expected) => {
                     assert_eq!(st, EbullioStatus::Ok, "{pair:?} {code:?}");
@@ -334,16 +349,16 @@ fn surface_tension_is_the_saturation_points_and_undefined_off_the_line() {
                 .unwrap()
                 .in_units(units);
             let expected = sat.surface_tension();
-            let (v, st) = property(S as u32, 8, sat.pressure(), x, units as u32);
+            let (v, st) = property(S as u32, 8, sat.pressure(), x, units as u32, 0);
             assert_eq!(st, EbullioStatus::Ok);
             assert_eq!(v.to_bits(), expected.to_bits(), "{p} {x} {units:?}");
-            let (v, st) = property(S as u32, 9, sat.temperature(), x, units as u32);
+            let (v, st) = property(S as u32, 9, sat.temperature(), x, units as u32, 0);
             let by_t = Saturation::at_temperature(sat.temperature(), units).unwrap();
             assert_eq!(st, EbullioStatus::Ok);
             assert_eq!(v.to_bits(), by_t.surface_tension().to_bits());
         }
     }
-    let (v, st) = property(S as u32, 1, 3.0, 300.0, 0);
+    let (v, st) = property(S as u32, 1, 3.0, 300.0, 0, 0);
     assert_eq!(st, EbullioStatus::PropertyUndefined);
     assert!(v.is_nan());
 }
@@ -357,21 +372,7 @@ fn derivatives_give_the_cores_bits_or_its_error() {
         for z in Variable::ALL {
             for x in Variable::ALL {
                 for y in Variable::ALL {
-                    let mut st = EbullioStatus::Panic;
-                    // SAFETY: `st` is a writable status.
-                    let v = unsafe {
-                        ebullio_derivative(
-                            z as u32,
-                            x as u32,
-                            y as u32,
-                            pair as u32,
-                            a,
-                            b,
-                            units as u32,
-                            0,
-                            &mut st,
-                        )
-                    };
+                    let (v, st) = derivative([z, x, y], pair as u32, a, b, units as u32, 0);
                     match core.derivative(z, x, y) {
                         Ok(d) => {
                             assert_eq!(st, EbullioStatus::Ok);
@@ -390,7 +391,7 @@ fn derivatives_give_the_cores_bits_or_its_error() {
     }
     assert!(undefined > 0);
     let mut st = EbullioStatus::Ok;
-    // SAFETY: as above.
+    // SAFETY: `st` is a writable status.
     let v = unsafe { ebullio_derivative(6, 1, 10, 1, 3.0, 300.0, 0, 0, &mut st) };
     assert_eq!(st, EbullioStatus::UnknownVariable);
     assert!(v.is_nan());
@@ -658,32 +659,22 @@ fn method_cases() -> Vec<(InputPair, f64, f64, Units)> {
             Units::UsCustomary,
         ),
     ];
-    for units in Units::ALL {
-        for &(p, t) in &[
+    v.extend(single_phase_cases(
+        &[
             (3.0, 300.0),
             (25.0, 650.0),
             (22.5, 647.5),
             (40.0, 700.0),
             (0.0035, 700.0),
             (30.0, 1500.0),
-        ] {
-            let s = State::from_pt(p, t, Units::Native).unwrap().in_units(units);
-            v.push((
-                InputPair::PressureTemperature,
-                s.pressure(),
-                s.temperature(),
-                units,
-            ));
-            v.push((
-                InputPair::PressureEnthalpy,
-                s.pressure(),
-                s.enthalpy(),
-                units,
-            ));
-            v.push((InputPair::PressureEntropy, s.pressure(), s.entropy(), units));
-            v.push((InputPair::EnthalpyEntropy, s.enthalpy(), s.entropy(), units));
-        }
-    }
+        ],
+        &[
+            InputPair::PressureTemperature,
+            InputPair::PressureEnthalpy,
+            InputPair::PressureEntropy,
+            InputPair::EnthalpyEntropy,
+        ],
+    ));
     v
 }
 
@@ -692,9 +683,7 @@ fn strict_enthalpy_from_pt_is_the_strict_states() {
     // Issue 12, defect 6: the one-property call took the exact path for
     // enthalpy from (p, T) whatever the method.
     let (p, t) = (22.06271891067149, 635.1878989437665);
-    let mut st = EbullioStatus::Panic;
-    // SAFETY: `st` is a writable status.
-    let strict = unsafe { ebullio_property(6, 1, p, t, 0, 1, &mut st) };
+    let (strict, st) = property(6, 1, p, t, 0, 1);
     let core = State::from_pt_with(p, t, Units::Native, Method::BackwardOnly).unwrap();
     assert_eq!(st, EbullioStatus::Ok);
     assert_eq!(strict.to_bits(), core.enthalpy().to_bits());
@@ -707,9 +696,7 @@ fn strict_enthalpy_from_pt_is_the_strict_states() {
     // (p, T) share one outcome: both the state's or both its refusal.
     let (p, t) = (3190.1416818449457, 705.102799999255);
     for n in [6, 7] {
-        let mut st = EbullioStatus::Panic;
-        // SAFETY: as above.
-        let v = unsafe { ebullio_property(n, 1, p, t, 3, 1, &mut st) };
+        let (v, st) = property(n, 1, p, t, 3, 1);
         let want = core_property(
             n,
             InputPair::PressureTemperature,
@@ -733,11 +720,7 @@ fn every_property_path_honours_the_method_with_the_cores_bits() {
         let cases = method_cases();
         for &(pair, a, b, units) in &cases {
             for &n in &numbers {
-                let mut st = EbullioStatus::Panic;
-                // SAFETY: `st` is a writable status.
-                let v = unsafe {
-                    ebullio_property(n, pair as u32, a, b, units as u32, method as u32, &mut st)
-                };
+                let (v, st) = property(n, pair as u32, a, b, units as u32, method as u32);
                 let want = core_property(n, pair, a, b, units, method);
                 assert!(
                     same((v, st), want),
@@ -853,21 +836,7 @@ fn every_state_and_derivative_path_honours_the_method_with_the_cores_bits() {
             assert_eq!(s.density.to_bits(), core.density().to_bits());
             for (k, &[z, x, y]) in triples.iter().enumerate() {
                 let want = one_property_outcome(core.derivative(z, x, y).map(Some));
-                let mut st = EbullioStatus::Panic;
-                // SAFETY: `st` is a writable status.
-                let v = unsafe {
-                    ebullio_derivative(
-                        z as u32,
-                        x as u32,
-                        y as u32,
-                        pair as u32,
-                        a,
-                        b,
-                        units as u32,
-                        method as u32,
-                        &mut st,
-                    )
-                };
+                let (v, st) = derivative([z, x, y], pair as u32, a, b, units as u32, method as u32);
                 assert!(same((v, st), want), "{pair:?} {method:?} {z:?} {x:?} {y:?}");
                 let (mut out, mut one) = (0.0, EbullioStatus::Panic);
                 // SAFETY: one element in, one out, one status.
@@ -898,26 +867,31 @@ fn every_state_and_derivative_path_honours_the_method_with_the_cores_bits() {
 fn several_properties_give_nan_for_an_absent_one_and_keep_the_element_ok() {
     // Issue 12, defect 13: enthalpy and quality of single-phase states.
     use EbullioProperty as P;
-    let props = [P::Enthalpy as u32, P::Quality as u32];
     let p = [3.0, 0.0035, 30.0];
     let t = [300.0, 700.0, 1500.0];
-    let mut out = [0.0; 6];
-    let mut statuses = [EbullioStatus::Panic; 3];
-    // SAFETY: two properties, three states, six outputs, three statuses.
-    let status = unsafe {
-        ebullio_properties_array(
-            props.as_ptr(),
-            2,
-            1,
-            p.as_ptr(),
-            t.as_ptr(),
-            3,
-            0,
-            0,
-            out.as_mut_ptr(),
-            statuses.as_mut_ptr(),
-        )
+    // The several-properties call over these three (p, T) states.
+    let several = |props: &[u32]| {
+        let mut out = vec![0.0; 3 * props.len()];
+        let mut statuses = [EbullioStatus::Panic; 3];
+        // SAFETY: `props.len()` properties, three states, as many outputs
+        // as properties × states, three statuses.
+        let status = unsafe {
+            ebullio_properties_array(
+                props.as_ptr(),
+                props.len(),
+                1,
+                p.as_ptr(),
+                t.as_ptr(),
+                3,
+                0,
+                0,
+                out.as_mut_ptr(),
+                statuses.as_mut_ptr(),
+            )
+        };
+        (status, out, statuses)
     };
+    let (status, out, statuses) = several(&[P::Enthalpy as u32, P::Quality as u32]);
     assert_eq!(status, EbullioStatus::Ok);
     assert_eq!(statuses, [EbullioStatus::Ok; 3]);
     for i in 0..3 {
@@ -928,25 +902,12 @@ fn several_properties_give_nan_for_an_absent_one_and_keep_the_element_ok() {
         assert!(out[2 * i + 1].is_nan());
     }
     // One property asked of the several-properties call: the same rule.
-    let quality = [P::Quality as u32];
-    // SAFETY: one property, three states, three outputs, three statuses.
-    let status = unsafe {
-        ebullio_properties_array(
-            quality.as_ptr(),
-            1,
-            1,
-            p.as_ptr(),
-            t.as_ptr(),
-            3,
-            0,
-            0,
-            out.as_mut_ptr(),
-            statuses.as_mut_ptr(),
-        )
-    };
+    let (status, out, statuses) = several(&[P::Quality as u32]);
     assert_eq!(status, EbullioStatus::Ok);
     assert_eq!(statuses, [EbullioStatus::Ok; 3]);
-    assert!(out[..3].iter().all(|v| v.is_nan()));
+    assert!(out.iter().all(|v| v.is_nan()));
+    let mut out = [0.0; 3];
+    let mut statuses = [EbullioStatus::Panic; 3];
     // The one-property calls say the property is absent.
     // SAFETY: three states, three outputs, three statuses.
     let status = unsafe {
@@ -964,7 +925,7 @@ fn several_properties_give_nan_for_an_absent_one_and_keep_the_element_ok() {
     };
     assert_eq!(status, EbullioStatus::SomeElementsFailed);
     assert_eq!(statuses, [EbullioStatus::PropertyUndefined; 3]);
-    let (v, st) = property(P::Quality as u32, 1, 3.0, 300.0, 0);
+    let (v, st) = property(P::Quality as u32, 1, 3.0, 300.0, 0, 0);
     assert_eq!(st, EbullioStatus::PropertyUndefined);
     assert!(v.is_nan());
 }
@@ -1004,7 +965,7 @@ fn a_property_the_core_cannot_give_finite_is_undefined_never_ok() {
         let solved = State::solve(pair, a, b, units, Method::Exact);
         assert!(solved.is_ok(), "{pair:?} {a} {b}: {solved:?}");
         for n in ALL_PROPERTY_NUMBERS {
-            let (v, st) = property(n, pair as u32, a, b, units as u32);
+            let (v, st) = property(n, pair as u32, a, b, units as u32, 0);
             let want = core_property(n, pair, a, b, units, Method::Exact);
             assert!(same((v, st), want), "{pair:?} {n}: {v} {st:?}, {want:?}");
             assert!(
@@ -1014,21 +975,14 @@ fn a_property_the_core_cannot_give_finite_is_undefined_never_ok() {
         }
         for z in Variable::ALL {
             for x in Variable::ALL {
-                let mut st = EbullioStatus::Panic;
-                // SAFETY: `st` is a writable status.
-                let v = unsafe {
-                    ebullio_derivative(
-                        z as u32,
-                        x as u32,
-                        Variable::Temperature as u32,
-                        pair as u32,
-                        a,
-                        b,
-                        units as u32,
-                        0,
-                        &mut st,
-                    )
-                };
+                let (v, st) = derivative(
+                    [z, x, Variable::Temperature],
+                    pair as u32,
+                    a,
+                    b,
+                    units as u32,
+                    0,
+                );
                 assert!(
                     v.is_finite() == (st == EbullioStatus::Ok),
                     "{z:?} {x:?}: {v} {st:?}"
@@ -1052,7 +1006,14 @@ fn a_property_the_core_cannot_give_finite_is_undefined_never_ok() {
         }
     }
     // Wet steam lacks cp: the core says None, C says undefined.
-    let (v, st) = property(EbullioProperty::IsobaricHeatCapacity as u32, 8, 1.0, 0.5, 0);
+    let (v, st) = property(
+        EbullioProperty::IsobaricHeatCapacity as u32,
+        8,
+        1.0,
+        0.5,
+        0,
+        0,
+    );
     assert_eq!(st, EbullioStatus::PropertyUndefined);
     assert!(v.is_nan());
 }
@@ -1066,7 +1027,7 @@ fn a_negative_cp_at_the_critical_point_is_undefined() {
         EbullioProperty::IsobaricHeatCapacity,
         EbullioProperty::Compressibility,
     ] {
-        let (v, st) = property(p as u32, 5, 322.0, 647.096, 0);
+        let (v, st) = property(p as u32, 5, 322.0, 647.096, 0, 0);
         assert_eq!(st, EbullioStatus::PropertyUndefined, "{p:?}: {v}");
         assert!(v.is_nan());
     }

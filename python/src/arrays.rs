@@ -8,8 +8,8 @@
 //! are independent, so splitting them over threads cannot change a single
 //! bit: each element is exactly the scalar core call on its inputs.
 
-use ebullio::{Error, State, Units};
-use numpy::ndarray::Array1;
+use ebullio::{Error, InputPair, Method, State, Units};
+use numpy::ndarray::{Array1, ArrayView1};
 use numpy::{
     Element, PyArray1, PyArrayDyn, PyArrayMethods, PyReadonlyArray1, PyReadwriteArrayDyn,
     PyUntypedArrayMethods,
@@ -246,6 +246,48 @@ fn pool_error(error: rayon::ThreadPoolBuildError) -> PyErr {
     pyo3::exceptions::PyRuntimeError::new_err(format!("could not start the threads: {error}"))
 }
 
+/// The arguments every pair kernel takes, decoded: pair number, inputs of
+/// equal length, units, method and threads.
+struct PairCall<'a> {
+    pair: InputPair,
+    a: ArrayView1<'a, f64>,
+    b: ArrayView1<'a, f64>,
+    units: Units,
+    method: Method,
+    threads: Threads,
+}
+
+impl<'a> PairCall<'a> {
+    fn decode(
+        pair: u32,
+        a: &'a PyReadonlyArray1<'_, f64>,
+        b: &'a PyReadonlyArray1<'_, f64>,
+        units: &Bound<'_, PyAny>,
+        method: Option<&Bound<'_, PyAny>>,
+        threads: Option<usize>,
+    ) -> PyResult<PairCall<'a>> {
+        let call = PairCall {
+            pair: names::pair(pair)?,
+            a: a.as_array(),
+            b: b.as_array(),
+            units: names::unit_system(units)?,
+            method: names::method(method)?,
+            threads: self::threads(threads)?,
+        };
+        same_length(call.a.len(), call.b.len())?;
+        Ok(call)
+    }
+
+    fn len(&self) -> usize {
+        self.a.len()
+    }
+
+    /// Element `i`'s state, in the input units.
+    fn state(&self, i: usize) -> Result<State, Error> {
+        State::solve(self.pair, self.a[i], self.b[i], self.units, self.method)
+    }
+}
+
 /// States from pair number `pair` at (`a[i]`, `b[i]`), equal lengths.
 ///
 /// Returns flat `values` (15 columns of n, column-major), `region`, `phase`
@@ -266,17 +308,12 @@ pub(crate) fn solve_many<'py>(
     read: Option<&Bound<'py, PyAny>>,
     out: Option<Arrays<'py>>,
 ) -> PyResult<Arrays<'py>> {
-    let pair = names::pair(pair)?;
-    let units = names::unit_system(units)?;
-    let read = read_units(read, units)?;
-    let method = names::method(method)?;
-    let threads = self::threads(threads)?;
-    let (a, b) = (a.as_array(), b.as_array());
-    same_length(a.len(), b.len())?;
-    let n = a.len();
+    let call = PairCall::decode(pair, &a, &b, units, method, threads)?;
+    let read = read_units(read, call.units)?;
+    let n = call.len();
     let arrays = out.unwrap_or_else(|| fresh::<1>(py, n));
-    write::<1>(py, &arrays, n, threads, |i| {
-        State::solve(pair, a[i], b[i], units, method).map(|s| [s.in_units(read)])
+    write::<1>(py, &arrays, n, call.threads, |i| {
+        call.state(i).map(|s| [s.in_units(read)])
     })?;
     Ok(arrays)
 }
@@ -399,6 +436,22 @@ fn fill_values<const K: usize>(
 
 type Values<'py> = (Bound<'py, PyArray1<f64>>, Bound<'py, PyArray1<u8>>);
 
+/// [`fill_values`] with the GIL released, handed to numpy.
+fn values_many<const K: usize>(
+    py: Python<'_>,
+    n: usize,
+    threads: Threads,
+    element: impl Fn(usize) -> Result<[f64; K], Error> + Sync + Send,
+) -> PyResult<Values<'_>> {
+    let (values, status) = py
+        .detach(|| fill_values::<K>(n, threads, element))
+        .map_err(pool_error)?;
+    Ok((
+        PyArray1::from_vec(py, values),
+        PyArray1::from_vec(py, status),
+    ))
+}
+
 fn same_length(a: usize, b: usize) -> PyResult<()> {
     if a != b {
         return Err(PyValueError::new_err(format!(
@@ -437,31 +490,18 @@ pub(crate) fn transport_many<'py>(
     threads: Option<usize>,
     read: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Values<'py>> {
-    let pair = names::pair(pair)?;
-    let units = names::unit_system(units)?;
-    let read = read_units(read, units)?;
-    let method = names::method(method)?;
-    let threads = self::threads(threads)?;
-    let (a, b) = (a.as_array(), b.as_array());
-    same_length(a.len(), b.len())?;
-    let (values, status) = py
-        .detach(|| {
-            fill_values::<5>(a.len(), threads, |i| {
-                let s = State::solve(pair, a[i], b[i], units, method)?.in_units(read);
-                Ok([
-                    absent_as_nan(s.viscosity())?,
-                    absent_as_nan(s.thermal_conductivity())?,
-                    absent_as_nan(s.kinematic_viscosity())?,
-                    absent_as_nan(s.thermal_diffusivity())?,
-                    absent_as_nan(s.prandtl_number())?,
-                ])
-            })
-        })
-        .map_err(pool_error)?;
-    Ok((
-        PyArray1::from_vec(py, values),
-        PyArray1::from_vec(py, status),
-    ))
+    let call = PairCall::decode(pair, &a, &b, units, method, threads)?;
+    let read = read_units(read, call.units)?;
+    values_many::<5>(py, call.len(), call.threads, |i| {
+        let s = call.state(i)?.in_units(read);
+        Ok([
+            absent_as_nan(s.viscosity())?,
+            absent_as_nan(s.thermal_conductivity())?,
+            absent_as_nan(s.kinematic_viscosity())?,
+            absent_as_nan(s.thermal_diffusivity())?,
+            absent_as_nan(s.prandtl_number())?,
+        ])
+    })
 }
 
 /// (∂z/∂x)_y of the states from pair number `pair` at (`a[i]`, `b[i]`),
@@ -487,25 +527,11 @@ pub(crate) fn derivative_many<'py>(
         names::variable(x)?,
         names::variable(y)?,
     );
-    let pair = names::pair(pair)?;
-    let units = names::unit_system(units)?;
-    let read = read_units(read, units)?;
-    let method = names::method(method)?;
-    let threads = self::threads(threads)?;
-    let (a, b) = (a.as_array(), b.as_array());
-    same_length(a.len(), b.len())?;
-    let (values, status) = py
-        .detach(|| {
-            fill_values::<1>(a.len(), threads, |i| {
-                let s = State::solve(pair, a[i], b[i], units, method)?.in_units(read);
-                Ok([s.derivative(z, x, y)?])
-            })
-        })
-        .map_err(pool_error)?;
-    Ok((
-        PyArray1::from_vec(py, values),
-        PyArray1::from_vec(py, status),
-    ))
+    let call = PairCall::decode(pair, &a, &b, units, method, threads)?;
+    let read = read_units(read, call.units)?;
+    values_many::<1>(py, call.len(), call.threads, |i| {
+        Ok([call.state(i)?.in_units(read).derivative(z, x, y)?])
+    })
 }
 
 /// Whether each state from pair number `pair` at (`a[i]`, `b[i]`) lies on
@@ -522,24 +548,10 @@ pub(crate) fn near_saturation_many<'py>(
     method: Option<&Bound<'py, PyAny>>,
     threads: Option<usize>,
 ) -> PyResult<Values<'py>> {
-    let pair = names::pair(pair)?;
-    let units = names::unit_system(units)?;
-    let method = names::method(method)?;
-    let threads = self::threads(threads)?;
-    let (a, b) = (a.as_array(), b.as_array());
-    same_length(a.len(), b.len())?;
-    let (values, status) = py
-        .detach(|| {
-            fill_values::<1>(a.len(), threads, |i| {
-                let s = State::solve(pair, a[i], b[i], units, method)?;
-                Ok([f64::from(u8::from(s.is_near_saturation()))])
-            })
-        })
-        .map_err(pool_error)?;
-    Ok((
-        PyArray1::from_vec(py, values),
-        PyArray1::from_vec(py, status),
-    ))
+    let call = PairCall::decode(pair, &a, &b, units, method, threads)?;
+    values_many::<1>(py, call.len(), call.threads, |i| {
+        Ok([f64::from(u8::from(call.state(i)?.is_near_saturation()))])
+    })
 }
 
 /// The surface tension of saturation points (`by` 1: pressure, 2:
@@ -559,12 +571,7 @@ pub(crate) fn surface_tension_many<'py>(
     let read = read_units(read, units)?;
     let threads = self::threads(threads)?;
     let values = values.as_array();
-    let (out, status) = py
-        .detach(|| {
-            fill_values::<1>(values.len(), threads, |i| {
-                Ok([by.solve(values[i], units)?.in_units(read).surface_tension()])
-            })
-        })
-        .map_err(pool_error)?;
-    Ok((PyArray1::from_vec(py, out), PyArray1::from_vec(py, status)))
+    values_many::<1>(py, values.len(), threads, |i| {
+        Ok([by.solve(values[i], units)?.in_units(read).surface_tension()])
+    })
 }

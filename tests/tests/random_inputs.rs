@@ -46,14 +46,21 @@ const C_CASES_PER_COMBINATION: usize = 40;
 
 const METHODS: [Method; 2] = [Method::Exact, Method::BackwardOnly];
 
-fn draw_for(target: &str) -> Seeded {
-    Seeded::for_target(campaign_seed(), target)
+/// A target's reproducible draw and its findings, empty.
+fn start(target: &str) -> (Seeded, Findings) {
+    (Seeded::for_target(campaign_seed(), target), Findings::new())
+}
+
+/// Logs how many cases the target ran and fails on any finding, under
+/// `title`.
+fn finish(findings: Findings, title: &str) {
+    eprintln!("{title}: {} cases", findings.cases());
+    findings.assert_none(title);
 }
 
 #[test]
 fn state_solve_every_pair_units_and_method() {
-    let mut draw = draw_for("state_solve");
-    let mut findings = Findings::new();
+    let (mut draw, mut findings) = start("state_solve");
     for pair in InputPair::ALL {
         let tag = pair_name(pair);
         let mut made = 0;
@@ -130,8 +137,7 @@ fn state_solve_every_pair_units_and_method() {
             }
         }
     }
-    eprintln!("State::solve: {} cases", findings.cases());
-    findings.assert_none("State::solve");
+    finish(findings, "State::solve");
 }
 
 /// The backward equations' own result lies within their releases' stated
@@ -194,8 +200,7 @@ fn strict_near_exact(
 
 #[test]
 fn derivatives_transport_and_coefficients_of_every_kind_of_state() {
-    let mut draw = draw_for("derivatives");
-    let mut derivatives = Findings::new();
+    let (mut draw, mut derivatives) = start("derivatives");
     let mut transport = Findings::new();
     let mut made = 0;
     while made < DERIVATIVE_STATES {
@@ -216,13 +221,12 @@ fn derivatives_transport_and_coefficients_of_every_kind_of_state() {
         transport.cases()
     );
     transport.absorb(derivatives);
-    transport.assert_none("derivatives, transport and coefficients");
+    finish(transport, "derivatives, transport and coefficients");
 }
 
 #[test]
 fn saturation_line_by_pressure_and_temperature() {
-    let mut draw = draw_for("saturation");
-    let mut findings = Findings::new();
+    let (mut draw, mut findings) = start("saturation");
     for units in Units::ALL {
         for _ in 0..SATURATION_POINTS {
             for by_pressure in [true, false] {
@@ -269,14 +273,12 @@ fn saturation_line_by_pressure_and_temperature() {
             }
         }
     }
-    eprintln!("saturation: {} points", findings.cases());
-    findings.assert_none("Saturation");
+    finish(findings, "Saturation");
 }
 
 #[test]
 fn c_abi_scalar_and_array_calls_match_the_core() {
-    let mut draw = draw_for("c_abi");
-    let mut findings = Findings::new();
+    let (mut draw, mut findings) = start("c_abi");
     for pair in InputPair::ALL {
         for units in Units::ALL {
             for method in METHODS {
@@ -302,8 +304,7 @@ fn c_abi_scalar_and_array_calls_match_the_core() {
             }
         }
     }
-    eprintln!("C ABI: {} cases", findings.cases());
-    findings.assert_none("C ABI");
+    finish(findings, "C ABI");
 }
 
 /// Random cycle descriptions, half within sane limits, half spoiled.
@@ -314,24 +315,21 @@ const COMPONENT_CALLS: usize = 20000;
 
 #[test]
 fn plant_components_within_physical_limits() {
-    let mut draw = draw_for("components");
-    let mut findings = Findings::new();
+    let (mut draw, mut findings) = start("components");
     for _ in 0..COMPONENT_CALLS {
         check_component(&mut draw, &mut findings);
     }
-    eprintln!("components: {} calls", findings.cases());
-    findings.assert_none("plant components");
+    finish(findings, "plant components");
 }
 
 #[test]
 fn cycle_solver_within_physical_limits() {
-    let mut draw = draw_for("cycles");
-    let mut findings = Findings::new();
+    let (mut draw, mut findings) = start("cycles");
     let mut solved = 0;
     for _ in 0..CYCLES {
         let spec = cycle(&mut draw);
         solved += usize::from(check_cycle(&spec, &mut findings).is_some());
     }
-    eprintln!("cycles: {} described, {solved} solved", findings.cases());
-    findings.assert_none("cycle solver");
+    eprintln!("cycles: {solved} solved");
+    finish(findings, "cycle solver");
 }

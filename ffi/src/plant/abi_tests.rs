@@ -11,6 +11,7 @@ use ebullio::plant::{
 };
 use ebullio::{InputPair, Method, Property, State, Units};
 
+use crate::abi_tests::blank_state;
 use crate::*;
 
 /// The (invented) demo plant, Tallowmere Unit 3, in metric engineering
@@ -215,21 +216,39 @@ fn the_cycle_block_holds_the_cores_bits() {
     }
 }
 
-#[test]
-fn a_saturated_supply_without_reheat_or_heaters_decodes_as_the_core_builds_it() {
-    // Moran & Shapiro's Example 8.2 arrangement (tests/tests/plant_textbook_cycles.rs).
+/// A plant of one casing and no reheat or heaters: the supply's (pressure,
+/// temperature), the casing's (exhaust pressure, isentropic efficiency),
+/// a feed pump of efficiency 0.85 and an ideal condensate pump.
+fn one_casing_spec(
+    units: EbullioUnits,
+    supply_kind: EbullioSupplyKind,
+    (supply_pressure, supply_temperature): (f64, f64),
+    (exhaust_pressure, isentropic_efficiency): (f64, f64),
+) -> EbullioCycleSpec {
     let mut c = EbullioCycleSpec::zeroed();
-    c.units = EbullioUnits::MetricEngineering as u32;
-    c.supply_kind = EbullioSupplyKind::SaturatedVapour as u32;
-    c.supply_pressure = 80.0;
-    c.supply_temperature = f64::NAN; // not read
+    c.units = units as u32;
+    c.supply_kind = supply_kind as u32;
+    c.supply_pressure = supply_pressure;
+    c.supply_temperature = supply_temperature;
     c.casing_count = 1;
     c.casings[0] = EbullioCasing {
-        exhaust_pressure: 0.08,
-        isentropic_efficiency: 0.85,
+        exhaust_pressure,
+        isentropic_efficiency,
     };
     c.feed_pump_efficiency = 0.85;
     c.condensate_pump_efficiency = 1.0;
+    c
+}
+
+#[test]
+fn a_saturated_supply_without_reheat_or_heaters_decodes_as_the_core_builds_it() {
+    // Moran & Shapiro's Example 8.2 arrangement (tests/tests/plant_textbook_cycles.rs).
+    let c = one_casing_spec(
+        EbullioUnits::MetricEngineering,
+        EbullioSupplyKind::SaturatedVapour,
+        (80.0, f64::NAN), // the temperature is not read
+        (0.08, 0.85),
+    );
     let mut core = CycleSpec::new(
         Units::MetricEngineering,
         Supply::SaturatedVapour { pressure: 80.0 },
@@ -414,14 +433,6 @@ fn blank_compression() -> EbullioCompression {
         temperature_rise: -1.0,
         entropy_generation: -1.0,
     }
-}
-
-fn blank_state() -> EbullioState {
-    let mut s = EbullioState::of(&State::from_pt(3.0, 300.0, Units::Native).unwrap());
-    s.pressure = -1.0;
-    s.enthalpy = -1.0;
-    s.quality = -1.0; // not NaN, so that untouched compares equal
-    s
 }
 
 fn same_state(c: &EbullioState, core: &State) {
@@ -665,6 +676,33 @@ impl HeaterOutputs {
         }
     }
 
+    /// `ebullio_attemperator_spray` into these outputs: spray water at
+    /// 186 bar, 180 °C into `steam_flow` of steam at 167 bar, 560 °C, to
+    /// `target` °C (metric engineering units).
+    fn spray(
+        &mut self,
+        steam_flow: f64,
+        target: f64,
+        detail: *mut EbullioErrorDetail,
+    ) -> EbullioStatus {
+        // SAFETY: whole output structs with their sizes set; `detail` is
+        // null or a whole detail.
+        unsafe {
+            ebullio_attemperator_spray(
+                167.0,
+                560.0,
+                steam_flow,
+                186.0,
+                180.0,
+                target,
+                EbullioUnits::MetricEngineering as u32,
+                &mut self.balance,
+                &mut self.first,
+                detail,
+            )
+        }
+    }
+
     /// The balance holds the core's figures, bit for bit, in the test's
     /// units (metric engineering).
     fn same_balance(&self, balancing_flow: f64, through_flow: f64, duty: f64, generation: f64) {
@@ -754,21 +792,7 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
     same_state(&o.first, &core.outlet);
     // Spray from 186 bar, 180 °C feedwater into 167 bar, 560 °C steam.
     let mut o = HeaterOutputs::blank();
-    // SAFETY: as above.
-    let status = unsafe {
-        ebullio_attemperator_spray(
-            167.0,
-            560.0,
-            500.0,
-            186.0,
-            180.0,
-            538.0,
-            units,
-            &mut o.balance,
-            &mut o.first,
-            ptr::null_mut(),
-        )
-    };
+    let status = o.spray(500.0, 538.0, ptr::null_mut());
     assert_eq!(status, EbullioStatus::Ok);
     let steam = State::from_pt(167.0, 560.0, u).unwrap();
     let spray = State::from_pt(186.0, 180.0, u).unwrap();
@@ -778,46 +802,9 @@ fn the_heater_and_attemperator_calls_give_the_cores_bits() {
     // Refusals leave the outputs as they were.
     let mut o = HeaterOutputs::blank();
     let mut d = blank_detail();
-    // SAFETY: as above.
-    let status = unsafe {
-        ebullio_attemperator_spray(
-            167.0,
-            560.0,
-            500.0,
-            186.0,
-            180.0,
-            600.0,
-            units,
-            &mut o.balance,
-            &mut o.first,
-            &mut d,
-        )
-    };
+    let status = o.spray(500.0, 600.0, &mut d);
     assert_eq!(status, EbullioStatus::InvalidPlant);
     assert_eq!(d.status, EbullioStatus::InvalidPlant);
-    // A steam flow so large that the spray flow would overflow to inf.
-    let mut d = blank_detail();
-    // SAFETY: as above.
-    let status = unsafe {
-        ebullio_attemperator_spray(
-            167.0,
-            560.0,
-            f64::MAX,
-            186.0,
-            180.0,
-            538.0,
-            units,
-            &mut o.balance,
-            &mut o.first,
-            &mut d,
-        )
-    };
-    assert_eq!(status, EbullioStatus::InvalidPlant);
-    assert!(
-        detail_text(&d).contains("attemperator"),
-        "{}",
-        detail_text(&d)
-    );
     // A TTD that leaves the feedwater no temperature rise.
     // SAFETY: as above.
     let status = unsafe {
@@ -868,29 +855,17 @@ fn a_component_call_never_returns_a_non_finite_figure_with_status_ok() {
     // spray flow with status OK. Whatever the core says, C writes only
     // finite figures with status 0, and refuses (outputs untouched,
     // detail filled) otherwise.
-    let units = EbullioUnits::MetricEngineering as u32;
     let mut o = HeaterOutputs::blank();
-    let before = o.balance;
     let mut d = blank_detail();
-    // SAFETY: every pointer is to a local of the right type, sizes set.
-    let status = unsafe {
-        ebullio_attemperator_spray(
-            167.0,
-            560.0,
-            f64::MAX,
-            186.0,
-            180.0,
-            538.0,
-            units,
-            &mut o.balance,
-            &mut o.first,
-            &mut d,
-        )
-    };
-    assert_ne!(status, EbullioStatus::Ok, "{:?}", o.balance);
-    assert_eq!(o.balance, before);
+    let status = o.spray(f64::MAX, 538.0, &mut d);
+    assert_eq!(status, EbullioStatus::InvalidPlant, "{:?}", o.balance);
+    assert_eq!(o, HeaterOutputs::blank());
     assert_eq!(d.status, status);
-    assert!(!detail_text(&d).is_empty());
+    assert!(
+        detail_text(&d).contains("attemperator"),
+        "{}",
+        detail_text(&d)
+    );
 }
 
 #[test]
@@ -898,18 +873,12 @@ fn a_cycle_with_a_figure_that_is_not_finite_is_refused() {
     // Issue 12, defect 8: a casing at an isentropic efficiency of 1e-300
     // delivers no work, and the back-work ratio came out infinite with
     // status OK. (Invented plant: 10 MPa, 800 K, one casing to 0.01 MPa.)
-    let mut c = EbullioCycleSpec::zeroed();
-    c.units = EbullioUnits::Native as u32;
-    c.supply_kind = EbullioSupplyKind::Superheated as u32;
-    c.supply_pressure = 10.0;
-    c.supply_temperature = 800.0;
-    c.casing_count = 1;
-    c.casings[0] = EbullioCasing {
-        exhaust_pressure: 0.01,
-        isentropic_efficiency: 1e-300,
-    };
-    c.feed_pump_efficiency = 0.85;
-    c.condensate_pump_efficiency = 1.0;
+    let c = one_casing_spec(
+        EbullioUnits::Native,
+        EbullioSupplyKind::Superheated,
+        (10.0, 800.0),
+        (0.01, 1e-300),
+    );
     let mut r = marked_result();
     let mut d = blank_detail();
     // SAFETY: a whole spec, result and detail, sizes set.

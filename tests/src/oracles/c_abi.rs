@@ -82,11 +82,10 @@ fn blank_state() -> EbullioState {
 /// against the core's outcome `core`.
 pub fn check_c_scalar(case: &SolveCase, core: &Result<State, Error>, findings: &mut Findings) {
     findings.case();
-    let (pair, units, method) = (case.pair as u32, case.units as u32, case.method as u32);
+    let (pair, a, b, units, method) = c_inputs(case);
     let mut out = blank_state();
     // SAFETY: `out` is a valid EbullioState with its size set; detail null.
-    let status =
-        unsafe { ebullio_solve(pair, case.a, case.b, units, method, &mut out, null_mut()) };
+    let status = unsafe { ebullio_solve(pair, a, b, units, method, &mut out, null_mut()) };
     let expected = status_of(core);
     findings.check(
         status == expected,
@@ -137,10 +136,7 @@ pub fn check_c_scalar(case: &SolveCase, core: &Result<State, Error>, findings: &
         }
     }
     for n in PROPERTY_NUMBERS {
-        let mut status = EbullioStatus::Ok;
-        // SAFETY: `status` is a valid, writable EbullioStatus.
-        let value =
-            unsafe { ebullio_property(n, pair, case.a, case.b, units, method, &mut status) };
+        let (value, status) = c_property(case, n);
         let expected = match core {
             Ok(state) => core_reading(state, n),
             Err(e) => Err(EbullioStatus::from(e)),
@@ -165,35 +161,201 @@ pub fn check_c_scalar(case: &SolveCase, core: &Result<State, Error>, findings: &
     }
 }
 
+/// `case` as the C calls take it: pair, a, b, units, method.
+fn c_inputs(case: &SolveCase) -> (u32, f64, f64, u32, u32) {
+    let (pair, units, method) = (case.pair as u32, case.units as u32, case.method as u32);
+    (pair, case.a, case.b, units, method)
+}
+
+/// `ebullio_property` number `n` of `case`: the value and the status.
+fn c_property(case: &SolveCase, n: u32) -> (f64, EbullioStatus) {
+    let (pair, a, b, units, method) = c_inputs(case);
+    let mut status = EbullioStatus::Ok;
+    // SAFETY: `status` is a valid, writable EbullioStatus.
+    let value = unsafe { ebullio_property(n, pair, a, b, units, method, &mut status) };
+    (value, status)
+}
+
+/// (∂z/∂x)_y as the C calls number it.
+type Triple = (Variable, Variable, Variable);
+
+/// `ebullio_derivative` of `case`: the value and the status.
+fn c_derivative(case: &SolveCase, (z, x, y): Triple) -> (f64, EbullioStatus) {
+    let (pair, a, b, units, method) = c_inputs(case);
+    let (z, x, y) = (z as u32, x as u32, y as u32);
+    let mut status = EbullioStatus::Ok;
+    // SAFETY: `status` is a valid, writable EbullioStatus.
+    let value = unsafe { ebullio_derivative(z, x, y, pair, a, b, units, method, &mut status) };
+    (value, status)
+}
+
+/// The signature `ebullio_properties_array` and `ebullio_derivatives_array`
+/// share: codes for k readings, the pair, n inputs, units, method, n × k
+/// outputs row by row, n statuses.
+type SeveralReadingsCall = unsafe extern "C" fn(
+    *const u32,
+    usize,
+    u32,
+    *const f64,
+    *const f64,
+    usize,
+    u32,
+    u32,
+    *mut f64,
+    *mut EbullioStatus,
+) -> EbullioStatus;
+
+/// A batch of cases that share pair, units and method, as the array
+/// calls take it.
+struct CBatch<'a> {
+    cases: &'a [SolveCase],
+    pair: u32,
+    units: u32,
+    method: u32,
+    a: Vec<f64>,
+    b: Vec<f64>,
+}
+
+impl<'a> CBatch<'a> {
+    fn of(cases: &'a [SolveCase]) -> Option<CBatch<'a>> {
+        let (pair, _, _, units, method) = c_inputs(cases.first()?);
+        Some(CBatch {
+            cases,
+            pair,
+            units,
+            method,
+            a: cases.iter().map(|c| c.a).collect(),
+            b: cases.iter().map(|c| c.b).collect(),
+        })
+    }
+
+    fn len(&self) -> usize {
+        self.cases.len()
+    }
+
+    /// `scalar(case, c)` for each case and each of `k` readings, row by row.
+    fn scalars(
+        &self,
+        k: usize,
+        mut scalar: impl FnMut(&SolveCase, usize) -> (f64, EbullioStatus),
+    ) -> Vec<(f64, EbullioStatus)> {
+        let mut table = Vec::with_capacity(self.len() * k);
+        for case in self.cases {
+            for c in 0..k {
+                table.push(scalar(case, c));
+            }
+        }
+        table
+    }
+
+    /// An array call of one reading per element: `call` gets the output
+    /// and status pointers (n each) and gives the batch status.
+    fn one_reading(
+        &self,
+        call: impl FnOnce(*mut f64, *mut EbullioStatus) -> EbullioStatus,
+    ) -> (EbullioStatus, Vec<f64>, Vec<EbullioStatus>) {
+        let mut out = vec![-1.0; self.len()];
+        let mut statuses = vec![EbullioStatus::Panic; self.len()];
+        let whole = call(out.as_mut_ptr(), statuses.as_mut_ptr());
+        (whole, out, statuses)
+    }
+
+    /// `call` of `k` readings per element given by `codes` (as many as
+    /// `call` reads for `k`): the n × k values and the n statuses.
+    fn several_readings(
+        &self,
+        call: SeveralReadingsCall,
+        codes: &[u32],
+        k: usize,
+    ) -> (Vec<f64>, Vec<EbullioStatus>) {
+        let n = self.len();
+        let mut out = vec![-1.0; n * k];
+        let mut statuses = vec![EbullioStatus::Panic; n];
+        // SAFETY: `codes` holds what `call` reads for k readings; a, b,
+        // statuses n elements; out n × k.
+        unsafe {
+            call(
+                codes.as_ptr(),
+                k,
+                self.pair,
+                self.a.as_ptr(),
+                self.b.as_ptr(),
+                n,
+                self.units,
+                self.method,
+                out.as_mut_ptr(),
+                statuses.as_mut_ptr(),
+            )
+        };
+        (out, statuses)
+    }
+
+    /// Each element of a one-reading array call is the scalar call's value
+    /// and status (`scalar(i)`).
+    fn check_one_reading(
+        &self,
+        title: &str,
+        (out, statuses): (&[f64], &[EbullioStatus]),
+        scalar: impl Fn(usize) -> (f64, EbullioStatus),
+        findings: &mut Findings,
+    ) {
+        for i in 0..self.len() {
+            let (v, s) = scalar(i);
+            findings.check(same_bits(out[i], v) && statuses[i] == s, title, || {
+                format!(
+                    "element {i}, {}: array {:?} {:?}, scalar {v:?} {s:?}",
+                    self.cases[i].call(),
+                    out[i],
+                    statuses[i]
+                )
+            });
+        }
+    }
+
+    /// Each row of a several-readings array call is the scalar calls'
+    /// values, NaN where the scalar call says the reading is absent;
+    /// `reading(c)` names column c.
+    fn check_several_readings(
+        &self,
+        title: &str,
+        out: &[f64],
+        scalars: &[(f64, EbullioStatus)],
+        reading: impl Fn(usize) -> String,
+        findings: &mut Findings,
+    ) {
+        let k = scalars.len() / self.len();
+        for i in 0..self.len() {
+            for c in 0..k {
+                let (v, s) = scalars[i * k + c];
+                let expected = if s == EbullioStatus::Ok { v } else { f64::NAN };
+                findings.check(same_bits(out[i * k + c], expected), title, || {
+                    format!(
+                        "element {i} {}, {}: {:?} vs scalar {v:?} {s:?}",
+                        reading(c),
+                        self.cases[i].call(),
+                        out[i * k + c]
+                    )
+                });
+            }
+        }
+    }
+}
+
 /// The array calls over a batch of cases that share pair, units and
 /// method: each element is the scalar call's bits and status.
 pub fn check_c_arrays(batch: &[SolveCase], findings: &mut Findings) {
-    let Some(first) = batch.first() else { return };
-    findings.case();
-    let (pair, units, method) = (first.pair as u32, first.units as u32, first.method as u32);
-    let a: Vec<f64> = batch.iter().map(|c| c.a).collect();
-    let b: Vec<f64> = batch.iter().map(|c| c.b).collect();
-    let n = batch.len();
-    let call = |i: usize| batch[i].call();
-    let scalar = |p: u32, i: usize| {
-        let mut status = EbullioStatus::Ok;
-        // SAFETY: `status` is a valid, writable EbullioStatus.
-        let v = unsafe { ebullio_property(p, pair, a[i], b[i], units, method, &mut status) };
-        (v, status)
+    let Some(c_batch) = CBatch::of(batch) else {
+        return;
     };
+    findings.case();
+    let (pair, units, method) = (c_batch.pair, c_batch.units, c_batch.method);
+    let (a, b, n) = (&c_batch.a, &c_batch.b, c_batch.len());
     let numbers: Vec<u32> = PROPERTY_NUMBERS.collect();
     let k = numbers.len();
-    let mut scalars = vec![(0.0, EbullioStatus::Ok); n * k];
-    for i in 0..n {
-        for (c, &p) in numbers.iter().enumerate() {
-            scalars[i * k + c] = scalar(p, i);
-        }
-    }
+    let scalars = c_batch.scalars(k, |case, c| c_property(case, numbers[c]));
     for (c, &p) in numbers.iter().enumerate() {
-        let mut out = vec![-1.0; n];
-        let mut statuses = vec![EbullioStatus::Panic; n];
-        // SAFETY: a, b, out, statuses each hold n elements.
-        let whole = unsafe {
+        // SAFETY: a, b, and the output and status each hold n elements.
+        let (whole, out, statuses) = c_batch.one_reading(|out, statuses| unsafe {
             ebullio_property_array(
                 p,
                 pair,
@@ -202,27 +364,18 @@ pub fn check_c_arrays(batch: &[SolveCase], findings: &mut Findings) {
                 n,
                 units,
                 method,
-                out.as_mut_ptr(),
-                statuses.as_mut_ptr(),
+                out,
+                statuses,
             )
-        };
-        let mut all_ok = true;
-        for i in 0..n {
-            let (v, s) = scalars[i * k + c];
-            all_ok &= s == EbullioStatus::Ok;
-            findings.check(
-                same_bits(out[i], v) && statuses[i] == s,
-                format!("C property_array {p} differs from the scalar call"),
-                || {
-                    format!(
-                        "element {i}, {}: array {:?} {:?}, scalar {v:?} {s:?}",
-                        call(i),
-                        out[i],
-                        statuses[i]
-                    )
-                },
-            );
-        }
+        });
+        let column = |i: usize| scalars[i * k + c];
+        c_batch.check_one_reading(
+            &format!("C property_array {p} differs from the scalar call"),
+            (&out, &statuses),
+            column,
+            findings,
+        );
+        let all_ok = (0..n).all(|i| column(i).1 == EbullioStatus::Ok);
         let expected = if all_ok {
             EbullioStatus::Ok
         } else {
@@ -231,26 +384,15 @@ pub fn check_c_arrays(batch: &[SolveCase], findings: &mut Findings) {
         findings.check(
             whole == expected,
             "C property_array batch status wrong",
-            || format!("property {p} over {n} cases from {}: {whole:?}", call(0)),
+            || {
+                format!(
+                    "property {p} over {n} cases from {}: {whole:?}",
+                    batch[0].call()
+                )
+            },
         );
     }
-    let mut out = vec![-1.0; n * k];
-    let mut statuses = vec![EbullioStatus::Panic; n];
-    // SAFETY: numbers holds k codes; a, b, statuses n elements; out n × k.
-    unsafe {
-        ebullio_properties_array(
-            numbers.as_ptr(),
-            k,
-            pair,
-            a.as_ptr(),
-            b.as_ptr(),
-            n,
-            units,
-            method,
-            out.as_mut_ptr(),
-            statuses.as_mut_ptr(),
-        )
-    };
+    let (out, statuses) = c_batch.several_readings(ebullio_properties_array, &numbers, k);
     for i in 0..n {
         let solved = batch[i].run().map(|r| status_of(&r));
         findings.check(
@@ -259,33 +401,24 @@ pub fn check_c_arrays(batch: &[SolveCase], findings: &mut Findings) {
             || {
                 format!(
                     "element {i}, {}: {:?}, solve {solved:?}",
-                    call(i),
+                    batch[i].call(),
                     statuses[i]
                 )
             },
         );
-        for c in 0..k {
-            let (v, s) = scalars[i * k + c];
-            let expected = if s == EbullioStatus::Ok { v } else { f64::NAN };
-            findings.check(
-                same_bits(out[i * k + c], expected),
-                "C properties_array value is not the scalar's (NaN where absent)",
-                || {
-                    format!(
-                        "element {i} property {}, {}: {:?} vs scalar {v:?} {s:?}",
-                        numbers[c],
-                        call(i),
-                        out[i * k + c]
-                    )
-                },
-            );
-        }
     }
-    check_c_derivatives(batch, &a, &b, findings);
+    c_batch.check_several_readings(
+        "C properties_array value is not the scalar's (NaN where absent)",
+        &out,
+        &scalars,
+        |c| format!("property {}", numbers[c]),
+        findings,
+    );
+    check_c_derivatives(&c_batch, findings);
 }
 
 /// A few derivative triples through the three derivative calls.
-fn check_c_derivatives(batch: &[SolveCase], a: &[f64], b: &[f64], findings: &mut Findings) {
+fn check_c_derivatives(c_batch: &CBatch<'_>, findings: &mut Findings) {
     use Variable::*;
     let triples = [
         (Density, Pressure, Enthalpy),
@@ -295,17 +428,42 @@ fn check_c_derivatives(batch: &[SolveCase], a: &[f64], b: &[f64], findings: &mut
         (Pressure, SpecificVolume, Temperature),
         (Temperature, Temperature, Pressure),
     ];
-    let first = batch[0];
-    let (pair, units, method) = (first.pair as u32, first.units as u32, first.method as u32);
-    let n = batch.len();
-    let mut codes = Vec::new();
-    let mut scalars = vec![(0.0, EbullioStatus::Ok); n * triples.len()];
+    let (pair, units, method) = (c_batch.pair, c_batch.units, c_batch.method);
+    let (a, b, n) = (&c_batch.a, &c_batch.b, c_batch.len());
+    let k = triples.len();
+    let scalars = c_batch.scalars(k, |case, c| {
+        let (z, x, y) = triples[c];
+        let (v, status) = c_derivative(case, triples[c]);
+        let core = case.run().map(|r| {
+            r.map_err(|e| EbullioStatus::from(&e))
+                .and_then(|s| s.derivative(z, x, y).map_err(|e| EbullioStatus::from(&e)))
+        });
+        let agrees = match core {
+            Some(Ok(d)) => status == EbullioStatus::Ok && same_bits(v, d),
+            Some(Err(s)) => status == s && v.is_nan(),
+            None => false,
+        };
+        findings.check(agrees, "C derivative is not the core's", || {
+            format!(
+                "ebullio_derivative({z:?}, {x:?}, {y:?}) of {}: {v:?} {status:?}, core {core:?}",
+                case.call()
+            )
+        });
+        findings.check(
+            status != EbullioStatus::Ok || v.is_finite(),
+            "C derivative status 0 with a non-finite value",
+            || {
+                format!(
+                    "ebullio_derivative({z:?}, {x:?}, {y:?}) of {}: {v}",
+                    case.call()
+                )
+            },
+        );
+        (v, status)
+    });
     for (c, &(z, x, y)) in triples.iter().enumerate() {
-        codes.extend([z as u32, x as u32, y as u32]);
-        let mut out = vec![-1.0; n];
-        let mut statuses = vec![EbullioStatus::Panic; n];
-        // SAFETY: a, b, out, statuses each hold n elements.
-        unsafe {
+        // SAFETY: a, b, and the output and status each hold n elements.
+        let (_, out, statuses) = c_batch.one_reading(|out, statuses| unsafe {
             ebullio_derivative_array(
                 z as u32,
                 x as u32,
@@ -316,96 +474,27 @@ fn check_c_derivatives(batch: &[SolveCase], a: &[f64], b: &[f64], findings: &mut
                 n,
                 units,
                 method,
-                out.as_mut_ptr(),
-                statuses.as_mut_ptr(),
+                out,
+                statuses,
             )
-        };
-        for i in 0..n {
-            let mut status = EbullioStatus::Ok;
-            // SAFETY: `status` is a valid, writable EbullioStatus.
-            let v = unsafe {
-                ebullio_derivative(
-                    z as u32,
-                    x as u32,
-                    y as u32,
-                    pair,
-                    a[i],
-                    b[i],
-                    units,
-                    method,
-                    &mut status,
-                )
-            };
-            scalars[i * triples.len() + c] = (v, status);
-            let core = batch[i].run().map(|r| {
-                r.map_err(|e| EbullioStatus::from(&e))
-                    .and_then(|s| s.derivative(z, x, y).map_err(|e| EbullioStatus::from(&e)))
-            });
-            let agrees = match core {
-                Some(Ok(d)) => status == EbullioStatus::Ok && same_bits(v, d),
-                Some(Err(s)) => status == s && v.is_nan(),
-                None => false,
-            };
-            findings.check(agrees, "C derivative is not the core's", || {
-                format!("ebullio_derivative({z:?}, {x:?}, {y:?}) of {}: {v:?} {status:?}, core {core:?}", batch[i].call())
-            });
-            findings.check(
-                status != EbullioStatus::Ok || v.is_finite(),
-                "C derivative status 0 with a non-finite value",
-                || {
-                    format!(
-                        "ebullio_derivative({z:?}, {x:?}, {y:?}) of {}: {v}",
-                        batch[i].call()
-                    )
-                },
-            );
-            findings.check(
-                same_bits(out[i], v) && statuses[i] == status,
-                "C derivative_array differs from the scalar call",
-                || {
-                    format!(
-                        "({z:?}, {x:?}, {y:?}) element {i}, {}: {:?} {:?} vs {v:?} {status:?}",
-                        batch[i].call(),
-                        out[i],
-                        statuses[i]
-                    )
-                },
-            );
-        }
+        });
+        c_batch.check_one_reading(
+            &format!("C derivative_array ({z:?}, {x:?}, {y:?}) differs from the scalar call"),
+            (&out, &statuses),
+            |i| scalars[i * k + c],
+            findings,
+        );
     }
-    let k = triples.len();
-    let mut out = vec![-1.0; n * k];
-    let mut statuses = vec![EbullioStatus::Panic; n];
-    // SAFETY: codes holds 3k numbers; a, b, statuses n elements; out n × k.
-    unsafe {
-        ebullio_derivatives_array(
-            codes.as_ptr(),
-            k,
-            pair,
-            a.as_ptr(),
-            b.as_ptr(),
-            n,
-            units,
-            method,
-            out.as_mut_ptr(),
-            statuses.as_mut_ptr(),
-        )
-    };
-    for i in 0..n {
-        for c in 0..k {
-            let (v, s) = scalars[i * k + c];
-            let expected = if s == EbullioStatus::Ok { v } else { f64::NAN };
-            findings.check(
-                same_bits(out[i * k + c], expected),
-                "C derivatives_array value is not the scalar's",
-                || {
-                    format!(
-                        "element {i} derivative {c}, {}: {:?} vs {v:?} {s:?}",
-                        batch[i].call(),
-                        out[i * k + c]
-                    )
-                },
-            );
-        }
-    }
+    let codes: Vec<u32> = triples
+        .iter()
+        .flat_map(|&(z, x, y)| [z as u32, x as u32, y as u32])
+        .collect();
+    let (out, _) = c_batch.several_readings(ebullio_derivatives_array, &codes, k);
+    c_batch.check_several_readings(
+        "C derivatives_array value is not the scalar's",
+        &out,
+        &scalars,
+        |c| format!("derivative {:?}", triples[c]),
+        findings,
+    );
 }
