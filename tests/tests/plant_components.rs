@@ -194,3 +194,171 @@ fn throttling_keeps_enthalpy_mixing_keeps_energy_and_condensate_is_subcooled() {
     close("subcooling", t_sat - c.temperature(), 1.5, 1e-9);
     assert_eq!(c.phase(), Phase::CompressedLiquid);
 }
+
+/// A state the random-input campaign drew: (p, T) in native units,
+/// handed to a component in `units`.
+fn drawn(p: f64, t: f64, units: Units) -> State {
+    State::from_pt(p, t, N).unwrap().in_units(units)
+}
+
+/// A range error in the caller's units, naming `quantity`, whose range
+/// does not contain its value.
+#[track_caller]
+fn range_error_in(e: Error, quantity: ebullio::Quantity, units: Units) {
+    match e {
+        Error::OutOfRange {
+            quantity: q,
+            value,
+            min,
+            max,
+            units: u,
+        } => {
+            assert_eq!((q, u), (quantity, units), "{e}");
+            assert!(!(min..=max).contains(&value), "{e}");
+        }
+        other => panic!("not a range error: {other:?}: {other}"),
+    }
+}
+
+#[test]
+fn component_range_errors_are_in_the_callers_units() {
+    use ebullio::Quantity::{Entropy, Pressure, Temperature};
+    // Reproducers of the random-input campaign (ISSUE12, item 9): each
+    // reported the range in native units for a caller in other units.
+    let me = Units::MetricEngineering;
+    let steam = drawn(0.00021238916605643233, 280.3856256485922, me);
+    let spray = drawn(0.11898829457499699, 359.2266240294359, me);
+    let e = spray_for_temperature(&steam, 4.032869407546712, &spray, -3.7252152698866325);
+    range_error_in(e.unwrap_err(), Temperature, me);
+
+    let steam = drawn(1.4352412134024623e-11, 1073.15, me);
+    let feedwater = drawn(10.280840406941218, 289.5350425157889, me);
+    let approach = HeaterApproach {
+        terminal_temperature_difference: 0.7006792505523052,
+        drain_cooler_approach: Some(29.035487852452412),
+    };
+    let e = closed_heater(&steam, &feedwater, 6.362451134185626, None, approach);
+    range_error_in(e.unwrap_err(), Pressure, me);
+
+    let us = Units::UsCustomary;
+    let steam = drawn(0.000598568765742164, 937.6502572613293, us);
+    let feedwater = drawn(0.29824619740968156, 357.82646405495194, us);
+    let e = open_heater(&steam, &feedwater, 5.206492383048395, None).unwrap_err();
+    assert!(e.to_string().contains("psia"), "{e}");
+    range_error_in(e, Pressure, us);
+
+    let e = section_efficiency(
+        3200.114028554055,
+        1427.7372861829404,
+        2.2533310014596764e-7,
+        3192.6732276303965,
+        us,
+    )
+    .unwrap_err();
+    assert!(!e.to_string().contains("kJ"), "{e}");
+    range_error_in(e, Entropy, us);
+}
+
+#[test]
+fn an_attemperator_on_water_that_is_not_steam_is_refused() {
+    // Reproducers of the random-input campaign: saturated liquid and
+    // nearly-liquid wet steam at the inlet gave a negative spray flow
+    // (-1.7e-13) instead of a refusal. Spraying cold water into water at
+    // its own temperature cannot reach any target: an attemperator needs
+    // superheated steam (common practice).
+    let liquid = *Saturation::at_pressure(16.5291642489135, N)
+        .unwrap()
+        .liquid();
+    let spray = drawn(0.030891801844940704, 325.8853960563777, N);
+    let e = spray_for_temperature(&liquid, 9.411189491248383, &spray, 623.1499999818064);
+    let text = e.unwrap_err().to_string();
+    assert!(text.contains("attemperator"), "{text}");
+    assert!(text.contains("not superheated"), "{text}");
+
+    let me = Units::MetricEngineering;
+    let wet = Saturation::at_pressure(16.529353903328534, N)
+        .unwrap()
+        .mixture(7.571870502067599e-15)
+        .unwrap()
+        .in_units(me);
+    let spray = drawn(0.0255856596998791, 301.9470284216187, me);
+    let e = spray_for_temperature(&wet, 5.538649677914402, &spray, 350.00093472369326);
+    assert!(e.unwrap_err().to_string().contains("attemperator"));
+
+    // Superheated steam at the same pressure is still desuperheated.
+    let steam = drawn(16.5291642489135, 700.0, N);
+    let s = spray_for_temperature(&steam, 1.0, &spray.in_units(N), 640.0).unwrap();
+    assert!(s.spray_flow > 0.0 && s.entropy_generation > 0.0, "{s:?}");
+}
+
+#[test]
+fn condensate_with_a_vanishing_subcooling_is_saturated_liquid() {
+    // Reproducers of the random-input campaign: at 16.529164252605 MPa,
+    // the saturation pressure at 623.15 K where the region boundary B23
+    // meets the saturation line, a subcooling of 1e-158 K returned
+    // superheated vapour at Tsat. A subcooling below the saturation
+    // line's resolution is no subcooling: the saturated liquid.
+    for (p, dt, units) in [
+        (16.529164252605, 1.2475710382837872e-158, Units::Native),
+        (16529164.252604993, 2.2250738585072014e-308, Units::SiBase),
+        (2397.352589770989, 1e-300, Units::UsCustomary),
+    ] {
+        let c = condensate(p, dt, units).unwrap();
+        assert_eq!(c.phase(), Phase::SaturatedLiquid, "{c:?}");
+        assert_eq!(c.units(), units);
+        let sat = Saturation::at_pressure(p, units).unwrap();
+        assert_eq!(c.enthalpy(), sat.liquid().enthalpy());
+    }
+    // A subcooling above the resolution is compressed liquid below Tsat.
+    let c = condensate(16.529164252605, 1e-6, N).unwrap();
+    assert_eq!(c.phase(), Phase::CompressedLiquid, "{c:?}");
+}
+
+#[test]
+fn an_open_heater_fed_below_its_pressure_is_refused() {
+    // Reproducers of the random-input campaign: an open heater reported
+    // destroying entropy (-2.3e-4 kJ/(kg·K) per unit flow near the
+    // critical point; also for wet inlets at 0.546 MPa). Not IF97's
+    // saturation-line inconsistency (|Δg|/T < 3e-12 kJ/(kg·K) there):
+    // its feedwater came from 16.5 MPa into a 22.06 MPa heater, and the
+    // balance at the heater pressure took the pumping work for free.
+    // Water does not flow into a vessel at higher pressure.
+    let si = Units::SiBase;
+    let near_critical = drawn(22.06399937408001, 647.0960011722779, si);
+    let feedwater = Saturation::at_pressure(16.52916426588782, N)
+        .unwrap()
+        .mixture(2.714188684898271e-5)
+        .unwrap()
+        .in_units(si);
+    let e = open_heater(&near_critical, &feedwater, 2.1215913995953715, None).unwrap_err();
+    let text = e.to_string();
+    assert!(
+        text.contains("open heater") && text.contains("below"),
+        "{text}"
+    );
+    assert!(text.contains("Pa"), "{text}");
+
+    let me = Units::MetricEngineering;
+    let sat = |p: f64, x: f64| {
+        Saturation::at_pressure(p, N)
+            .unwrap()
+            .mixture(x)
+            .unwrap()
+            .in_units(me)
+    };
+    let steam = sat(0.5463394898138969, 0.4790667977709626);
+    let water = sat(0.5440622124907657, 8.652653847339988e-13);
+    let e = open_heater(
+        &steam,
+        &water,
+        6.4134337670019645,
+        Some((4.604174380609161, &water)),
+    );
+    assert!(e.unwrap_err().to_string().contains("open heater"));
+
+    // Fed at the heater pressure or above, the same heater generates
+    // entropy: hot steam and colder water mix irreversibly.
+    let water = drawn(22.1, 623.0, si);
+    let h = open_heater(&near_critical, &water, 1.0, None).unwrap();
+    assert!(h.entropy_generation > 0.0, "{h:?}");
+}

@@ -2,12 +2,12 @@
 //! to bring it down to a target temperature, mixing at the steam pressure.
 
 use super::closed_heater::finite_flow;
-use super::fault::{finite_figures, refuse, second_law};
+use super::fault::{finite_figures, in_caller_units, refuse, second_law};
 use super::native;
 use super::PlantPart;
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
-use crate::{Error, Quantity, State, Units};
+use crate::{Error, Phase, Quantity, State, Units};
 
 const ATTEMPERATOR: PlantPart = PlantPart::single("attemperator");
 
@@ -25,8 +25,10 @@ pub struct Spray {
 
 /// The spray flow of `spray` water that brings `steam_flow` of `steam`
 /// down to `target_temperature` (in the steam's units) at the steam's
-/// pressure. The target must lie below the steam temperature and above
-/// saturation.
+/// pressure. The steam must be superheated vapour or supercritical
+/// fluid, the target below its temperature (and above saturation), and
+/// the spray colder than the target: otherwise no spray flow reaches
+/// the target, and the call is refused.
 pub fn spray_for_temperature(
     steam: &State,
     steam_flow: f64,
@@ -36,6 +38,15 @@ pub fn spray_for_temperature(
     let units = steam.units();
     let flow = finite_flow(steam_flow, ATTEMPERATOR)?;
     let (s, w) = (steam.native(), spray.native());
+    if !matches!(
+        steam.phase(),
+        Phase::SuperheatedVapour | Phase::SupercriticalFluid
+    ) {
+        return Err(refuse(
+            ATTEMPERATOR,
+            "its steam is not superheated: spray cannot desuperheat it",
+        ));
+    }
     let t = native(Quantity::Temperature, target_temperature, units)?;
     if t >= s.t || (s.p < CRITICAL_PRESSURE && t <= saturation_temperature(s.p)) {
         return Err(refuse(
@@ -43,8 +54,16 @@ pub fn spray_for_temperature(
             "its target temperature is not between saturation and the steam temperature",
         ));
     }
-    let outlet = State::from_pt(s.p, t, Units::Native)?;
+    let outlet = State::from_pt(s.p, t, Units::Native).map_err(|e| in_caller_units(e, units))?;
     let o = outlet.native();
+    if o.h >= s.h {
+        // Only a few ulps below the steam temperature, where the steam's
+        // enthalpy and the target's round the other way.
+        return Err(refuse(
+            ATTEMPERATOR,
+            "its target temperature is not below the steam temperature",
+        ));
+    }
     if w.h >= o.h {
         return Err(refuse(
             ATTEMPERATOR,

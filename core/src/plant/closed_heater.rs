@@ -6,7 +6,7 @@
 //! leaves as saturated liquid). The extraction flow follows from the
 //! energy balance. Water-side pressure drop is not modelled.
 
-use super::fault::{finite_figures, refuse, refuse_with, second_law};
+use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
 use super::native;
 use super::{PlantFigure, PlantPart};
 use crate::constants::CRITICAL_PRESSURE;
@@ -107,6 +107,9 @@ pub(crate) fn end_states(
     part: PlantPart,
 ) -> Result<(State, State), Error> {
     let units = feedwater_in.units();
+    // The states below are solved natively; their range errors read in
+    // the caller's units.
+    let caller = |e| in_caller_units(e, units);
     let ttd = native(
         Quantity::TemperatureDifference,
         approach.terminal_temperature_difference,
@@ -121,7 +124,8 @@ pub(crate) fn end_states(
         ));
     }
     if extraction.native().h
-        <= Saturation::at_pressure(shell.p, Units::Native)?
+        <= Saturation::at_pressure(shell.p, Units::Native)
+            .map_err(caller)?
             .liquid()
             .native()
             .h
@@ -156,7 +160,7 @@ pub(crate) fn end_states(
             ),
         ));
     }
-    let fw_out = State::from_pt(fw.p, t_out, Units::Native)?;
+    let fw_out = State::from_pt(fw.p, t_out, Units::Native).map_err(caller)?;
     if fw_out.phase() != Phase::CompressedLiquid {
         return Err(refuse(
             part,
@@ -164,13 +168,15 @@ pub(crate) fn end_states(
         ));
     }
     let drain = match approach.drain_cooler_approach {
-        None => *Saturation::at_pressure(shell.p, Units::Native)?.liquid(),
+        None => *Saturation::at_pressure(shell.p, Units::Native)
+            .map_err(caller)?
+            .liquid(),
         Some(dca) => {
             let t_drain = fw.t + native(Quantity::TemperatureDifference, dca, units)?;
             if dca < 0.0 || t_drain >= t_shell {
                 return Err(refuse(part, "its drain cooler approach is negative or puts the drain at or above the shell saturation temperature"));
             }
-            State::from_pt(shell.p, t_drain, Units::Native)?
+            State::from_pt(shell.p, t_drain, Units::Native).map_err(caller)?
         }
     };
     Ok((fw_out, drain))
@@ -193,9 +199,14 @@ pub(crate) fn desuperheating_zone(
     if b.t <= t_sat {
         return Ok(());
     }
-    let at_saturation = State::from_pt(b.p, t_sat, Units::Native)?.native().h;
+    let caller = |e| in_caller_units(e, shell.units());
+    let at_saturation = State::from_pt(b.p, t_sat, Units::Native)
+        .map_err(caller)?
+        .native()
+        .h;
     let needed = feedwater_flow * (b.h - at_saturation);
-    let h_vapour = Saturation::at_pressure(e.p, Units::Native)?
+    let h_vapour = Saturation::at_pressure(e.p, Units::Native)
+        .map_err(caller)?
         .vapour()
         .native()
         .h;

@@ -29,9 +29,10 @@ pub fn heat_duty(flow: f64, inlet: &State, outlet: &State) -> Result<f64, Error>
 
 /// The condensate leaving a condenser at `pressure`, subcooled below its
 /// saturation temperature by `subcooling` (a temperature difference; 0
-/// for saturated liquid), all in `units`. The subcooling lies between 0
-/// and the saturation temperature less 273.15 K, the formulation's
-/// lowest temperature.
+/// for saturated liquid, as is any subcooling within
+/// [`State::SATURATION_TOLERANCE`] of the saturation temperature), all in
+/// `units`. The subcooling lies between 0 and the saturation temperature
+/// less 273.15 K, the formulation's lowest temperature.
 pub fn condensate(pressure: f64, subcooling: f64, units: Units) -> Result<State, Error> {
     let sat = Saturation::at_pressure(pressure, units)?;
     let dt = native(Quantity::TemperatureDifference, subcooling, units)?;
@@ -51,11 +52,14 @@ pub fn condensate(pressure: f64, subcooling: f64, units: Units) -> Result<State,
             subcooling_figure(0.0),
         ));
     }
-    if dt == 0.0 {
-        return Ok(*sat.liquid());
-    }
     let p = sat.liquid().native().p;
     let t_sat = saturation_temperature(p);
+    // Within the saturation line's resolution a (p, T) state may land on
+    // either side of the line (at 623.15 K, where B23 meets it, on the
+    // vapour side): a subcooling that small is none, saturated liquid.
+    if dt <= State::SATURATION_TOLERANCE * t_sat {
+        return Ok(*sat.liquid());
+    }
     if dt > t_sat - MIN_TEMPERATURE {
         return Err(refuse_with(
             CONDENSER,

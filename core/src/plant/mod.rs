@@ -34,7 +34,7 @@ pub use cycle_result::{
 pub use cycle_spec::{
     Casing, CycleSpec, Drains, Heater, HeaterKind, Reheat, Supply, MAX_CASINGS, MAX_HEATERS,
 };
-pub use fault::{PlantFigure, PlantPart};
+pub use fault::{PlantFigure, PlantPart, ENTROPY_ALLOWANCE};
 pub use heat_transfer::{condensate, heat_duty};
 pub use mixing::{mix, throttle};
 pub use open_heater::{open_heater, OpenHeater};

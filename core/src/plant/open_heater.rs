@@ -4,8 +4,8 @@
 //! extraction flow follows from the energy balance.
 
 use super::closed_heater::finite_flow;
-use super::fault::{finite_figures, refuse, second_law};
-use super::PlantPart;
+use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
+use super::{PlantFigure, PlantPart};
 use crate::{Error, Quantity, Saturation, State, Units};
 
 const OPEN_HEATER: PlantPart = PlantPart::single("open heater");
@@ -25,7 +25,10 @@ pub struct OpenHeater {
 
 /// Solves an open heater at the pressure of `extraction` (its state at
 /// the heater) delivering `outlet_flow`, fed by `feedwater_in` and by
-/// optional `cascaded_drains` (flow, state).
+/// optional `cascaded_drains` (flow, state). The feedwater and drains
+/// enter at the heater pressure or above (they are throttled in): water
+/// does not flow into a vessel at a higher pressure, and a balance that
+/// let it would take its pumping work for free.
 pub fn open_heater(
     extraction: &State,
     feedwater_in: &State,
@@ -34,12 +37,27 @@ pub fn open_heater(
 ) -> Result<OpenHeater, Error> {
     let units = feedwater_in.units();
     let out_flow = finite_flow(outlet_flow, OPEN_HEATER)?;
-    let outlet = *Saturation::at_pressure(extraction.native().p, Units::Native)?.liquid();
+    let outlet = *Saturation::at_pressure(extraction.native().p, Units::Native)
+        .map_err(|e| in_caller_units(e, units))?
+        .liquid();
     let (e, a, o) = (extraction.native(), feedwater_in.native(), outlet.native());
     let (c_flow, c) = match cascaded_drains {
         Some((m, state)) => (finite_flow(m, OPEN_HEATER)?, *state.native()),
         None => (0.0, *a),
     };
+    if a.p.min(c.p) < e.p {
+        return Err(refuse_with(
+            OPEN_HEATER,
+            "its feedwater or drains enter below its pressure",
+            PlantFigure::native(
+                "inlet pressure",
+                Quantity::Pressure,
+                a.p.min(c.p),
+                Some(e.p),
+                units,
+            ),
+        ));
+    }
     if e.h <= o.h || a.h >= o.h {
         return Err(refuse(
             OPEN_HEATER,

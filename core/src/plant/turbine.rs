@@ -119,8 +119,10 @@ pub fn section_efficiency_between(inlet: &State, exhaust: &State) -> Result<Expa
             "its exhaust pressure is not below its inlet pressure",
         ));
     }
-    let ideal = State::from_ps(p_out, inlet.native().s, Units::Native)?;
-    let expansion = between_native(inlet, exhaust, &ideal, inlet.units());
+    let units = inlet.units();
+    let ideal = State::from_ps(p_out, inlet.native().s, Units::Native)
+        .map_err(|e| in_caller_units(e, units))?;
+    let expansion = between_native(inlet, exhaust, &ideal, units);
     // A measured efficiency may lie outside (0, 1] (bad readings show so),
     // but not be infinite: the isentropic work must not vanish.
     finite_figures(TURBINE_SECTION, &[expansion.isentropic_efficiency])?;
