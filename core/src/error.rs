@@ -12,7 +12,8 @@ use crate::units::{Quantity, Units};
 #[derive(Clone, Copy, Debug, PartialEq, thiserror::Error)]
 #[non_exhaustive]
 pub enum Error {
-    /// An input was NaN or infinite.
+    /// An input was NaN or infinite, or (for a pair whose range at the
+    /// other input is not given) overflows on conversion to native units.
     #[error("{quantity} is not a finite number")]
     NotFinite {
         /// The input that was not finite.
@@ -179,7 +180,16 @@ pub(crate) fn solve_given<T>(
 ) -> Result<T, Error> {
     let native_a = native_input(units, a.0, a.1)?;
     let native_b = native_input(units, b.0, b.1)?;
-    solve(native_a, native_b).map_err(|e| e.with_given(a).with_given(b))
+    solve(native_a, native_b).map_err(|e| match e {
+        // A pair with no range to give (v, u; h, s beyond the range's
+        // extremes) names an input that overflowed rather than saying
+        // "no state": that input is not finite in native units.
+        Error::NoStateInRange { .. } => [a, b]
+            .into_iter()
+            .find(|&(quantity, value)| !units.to_native(quantity, value).is_finite())
+            .map_or(e, |(quantity, _)| Error::NotFinite { quantity }),
+        _ => e.with_given(a).with_given(b),
+    })
 }
 
 /// The caller's own number as typed, shortest round-trip digits, in

@@ -938,31 +938,34 @@ fn solve_exact(h: f64, s: f64, indicated: Place, units: Units) -> Result<State, 
     }
 }
 
-/// The error for a point that has no state: the enthalpy range valid at
+/// The error for a point that has no state: no state in range for an
+/// entropy beyond the range's extremes; the enthalpy range valid at
 /// this entropy if h lies outside it; otherwise, where the solution lies
 /// beyond the range (the cold pockets inside the enthalpy band, where the
 /// valid h at s is not one interval), no state in range; otherwise
 /// non-convergence.
 fn refusal(h: f64, s: f64, beyond: bool, units: Units) -> Error {
+    const NO_STATE: Error = Error::NoStateInRange {
+        pair: "specific enthalpy and specific entropy",
+    };
+    // Beyond the range's extremes of s, the range of s at this h (not
+    // computed) is not theirs: no state, not a range.
     let s_min = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE).s;
     let s_max = Equation::Region5
         .evaluate(LOWEST_PRESSURE, MAX_TEMPERATURE)
         .s;
-    let entropy_error = || Error::out_of_range(Quantity::Entropy, s, s_min, s_max, units);
     if !(s_min..=s_max).contains(&s) {
-        return entropy_error();
+        return NO_STATE;
     }
     let Some((h_min, h_max)) = enthalpy_range(s) else {
-        return entropy_error();
+        return NO_STATE;
     };
     let slack = 1e-10 * h.abs().max(1.0);
     if !(h_min - slack..=h_max + slack).contains(&h) {
         return Error::out_of_range(Quantity::Enthalpy, h, h_min, h_max, units);
     }
     if beyond {
-        Error::NoStateInRange {
-            pair: "specific enthalpy and specific entropy",
-        }
+        NO_STATE
     } else {
         NOT_CONVERGED
     }
@@ -1132,8 +1135,11 @@ impl State {
     /// enthalpy, with the lowest and highest enthalpy valid at the given
     /// entropy (on the 273.15 K isotherm and on the 100 MPa isobar, the
     /// 1073.15 K isotherm, the 50 MPa isobar or the 2273.15 K isotherm);
-    /// below the lowest entropy of the range, s(100 MPa, 273.15 K), it is
-    /// for the entropy. Inside that enthalpy band lie a few tiny pockets
+    /// an entropy beyond the range's extremes, s(100 MPa, 273.15 K) and
+    /// s(2273.15 K, the lowest pressure), is [`Error::NoStateInRange`] (the
+    /// range of s at the given h is not computed; an entropy that
+    /// overflows on conversion is [`Error::NotFinite`]). Inside that
+    /// enthalpy band lie a few tiny pockets
     /// colder than 273.15 K (cold water near s = 0, where isentropic
     /// compression cools it); there the error is [`Error::NoStateInRange`],
     /// the valid enthalpies at that entropy being no single interval. A NaN or infinite input is [`Error::NotFinite`];

@@ -36,6 +36,11 @@ use crate::variable::Variable;
 impl State {
     /// The state at specific volume `v` and specific internal energy `u`,
     /// in `units`, reproducing both to relative 1e-10 or better.
+    ///
+    /// A pair with no state in the range is [`Error::NoStateInRange`]
+    /// (the valid v at a given u is not computed, so no range is given);
+    /// a NaN or infinite input, or one that overflows on conversion to
+    /// native units, is [`Error::NotFinite`].
     pub fn from_vu(v: f64, u: f64, units: Units) -> Result<State, Error> {
         let (v, u) = ((Quantity::SpecificVolume, v), (Quantity::InternalEnergy, u));
         solve_given(units, v, u, |v, u| solve(v, u, units))
@@ -46,17 +51,13 @@ impl State {
 pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
     // The range's smallest v, at 100 MPa and 273.15 K (water's density
     // falls with T there), and its largest, at 2273.15 K and the lowest
-    // pressure; the conformance suite checks both are the extremes.
+    // pressure; the conformance suite checks both are the extremes. They
+    // are not the range of v at this u (1000 m³/kg at 2000 kJ/kg would be
+    // colder than 273.15 K), which is not computed: no state, not a range.
     let v_min = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE).v;
     let v_max = Equation::Region5.evaluate(MIN_PRESSURE, MAX_TEMPERATURE).v;
     if !(v_min..=v_max).contains(&v) {
-        return Err(Error::out_of_range(
-            Quantity::SpecificVolume,
-            v,
-            v_min,
-            v_max,
-            units,
-        ));
+        return Err(NO_STATE);
     }
     let liquid_like = v < 1.0 / CRITICAL_DENSITY;
     let order: [Equation; 4] = if liquid_like {

@@ -92,8 +92,9 @@ fn assert_honest(what: &str, pair: InputPair, (a, b): (f64, f64), err: &Error, u
         }
         Error::NotFinite { quantity } => {
             let given = if quantity == qa { a } else { b };
+            // NaN or infinite as given, or overflowing in native units.
             assert!(
-                (quantity == qa || quantity == qb) && !given.is_finite(),
+                (quantity == qa || quantity == qb) && !units.to_native(quantity, given).is_finite(),
                 "{what}: {text}"
             );
         }
@@ -129,15 +130,13 @@ fn inputs_that_overflow_on_conversion_are_refused() {
         Method::Exact,
     )
     .unwrap_err();
-    assert!(
-        matches!(
-            err,
-            Error::OutOfRange {
-                quantity: Quantity::InternalEnergy,
-                ..
-            } | Error::NoStateInRange { .. }
-        ),
-        "{err:?}"
+    // (v, u) gives no range at the other input: the overflowing u is
+    // named as not finite in native units.
+    assert_eq!(
+        err,
+        Error::NotFinite {
+            quantity: Quantity::InternalEnergy
+        }
     );
     // Every pair, unit system and method, a huge value in either slot,
     // beside a value that is valid for the pair in native units.
@@ -419,12 +418,12 @@ fn specific_volume_extremes_of_the_range() {
             }
         }
     }
-    let err = State::from_vu(0.999 * v_min, 0.0, Units::Native).unwrap_err();
-    assert!(
-        matches!(err, Error::OutOfRange { quantity: Quantity::SpecificVolume, min, max, .. }
-            if min == v_min && max == v_max),
-        "{err:?}"
-    );
+    // Beyond them no u has a state; the range of v at a given u is
+    // narrower (not computed), so the error gives none.
+    for v in [0.999 * v_min, 1.001 * v_max] {
+        let err = State::from_vu(v, 0.0, Units::Native).unwrap_err();
+        assert!(matches!(err, Error::NoStateInRange { .. }), "{err:?}");
+    }
 }
 
 /// Found by a random-input run: (h, s) and (v, u) a hair past the hottest
@@ -460,6 +459,115 @@ fn h_s_and_v_u_beyond_the_temperature_limits_are_refused() {
                 Ok(state) => assert_in_range(&format!("{pair:?}"), &state),
                 Err(e) => assert_honest(&format!("{pair:?}"), pair, (a, b), &e, units),
             }
+        }
+    }
+}
+
+/// A range in an error is true at the other input's value: just inside
+/// either end (1e-9 of the span), with the other input kept, the same call
+/// does not refuse that quantity again (ISSUE 12, item 9).
+#[track_caller]
+fn assert_range_true_at_the_other_input(pair: InputPair, (a, b): (f64, f64), units: Units) {
+    for method in [Method::Exact, Method::BackwardOnly] {
+        let what = format!("{pair:?} ({a:e}, {b:e}) {units:?} {method:?}");
+        let err = match State::solve(pair, a, b, units, method) {
+            Ok(state) => panic!("{what}: solved as {state:?}"),
+            Err(e) => e,
+        };
+        assert_honest(&what, pair, (a, b), &err, units);
+        let Error::OutOfRange {
+            quantity, min, max, ..
+        } = err
+        else {
+            continue;
+        };
+        let step = 1e-9 * (max - min);
+        for inside in [min + step, max - step] {
+            let probe = if quantity == quantities(pair).0 {
+                (inside, b)
+            } else {
+                (a, inside)
+            };
+            match State::solve(pair, probe.0, probe.1, units, method) {
+                Err(Error::OutOfRange { quantity: q, .. }) if q == quantity => {
+                    panic!("{what}: {err}, yet {inside} is refused too")
+                }
+                Err(e @ Error::NoStateInRange { .. }) => {
+                    panic!("{what}: {err}, yet {inside} gives {e}")
+                }
+                _ => {}
+            }
+        }
+    }
+}
+
+/// Found by the random-input campaign: a specific volume outside the
+/// range's extremes was refused with the range of v over all internal
+/// energies, and a v just inside it at the given u has no state either
+/// (v = 1049 m³/kg at 2015.7 kJ/kg would be colder than 273.15 K). The
+/// valid v at a given u is not computed, so the honest error is
+/// `NoStateInRange`; likewise for (h, s) with s outside the range's
+/// extremes beside the critical enthalpy.
+#[test]
+fn v_u_and_h_s_ranges_are_true_at_the_other_input() {
+    let cases = [
+        (
+            InputPair::VolumeInternalEnergy,
+            -9.667808832491281e-303,
+            2015.7345241778337,
+        ),
+        (
+            InputPair::VolumeInternalEnergy,
+            -7.615636878896539e188,
+            2180.486303514872,
+        ),
+        (
+            InputPair::VolumeInternalEnergy,
+            -f64::MAX,
+            500.89276547619875,
+        ),
+        (InputPair::EnthalpyEntropy, 2087.546845, -1.0),
+        (InputPair::EnthalpyEntropy, 2087.546845, 1e300),
+        (InputPair::EnthalpyEntropy, 2399.2896372244163, -1.0),
+    ];
+    for (pair, a, b) in cases {
+        assert_range_true_at_the_other_input(pair, (a, b), Units::Native);
+    }
+}
+
+/// Found by the random-input campaign: an internal energy of ±f64::MAX
+/// Btu/lbm overflows in kJ/kg, and was reported as "no state" instead of
+/// naming the internal energy.
+#[test]
+fn an_overflowing_internal_energy_is_named() {
+    let cases = [
+        (0.019203412707062766, f64::MAX),
+        (74193349.83615585, f64::MAX),
+        (4315066808.948667, -f64::MAX),
+        (0.01601846337396013, -f64::MAX),
+    ];
+    for (v, u) in cases {
+        for method in [Method::Exact, Method::BackwardOnly] {
+            let err = State::solve(
+                InputPair::VolumeInternalEnergy,
+                v,
+                u,
+                Units::UsCustomary,
+                method,
+            )
+            .unwrap_err();
+            assert!(
+                matches!(
+                    err,
+                    Error::NotFinite {
+                        quantity: Quantity::InternalEnergy
+                    } | Error::OutOfRange {
+                        quantity: Quantity::InternalEnergy,
+                        ..
+                    }
+                ),
+                "({v}, {u}) {method:?}: {err:?}"
+            );
         }
     }
 }
