@@ -120,13 +120,44 @@ impl Error {
         max: f64,
         units: Units,
     ) -> Error {
+        let value = units.from_native(quantity, value);
+        let (min, max) = outside(
+            value,
+            units.from_native(quantity, min),
+            units.from_native(quantity, max),
+        );
         Error::OutOfRange {
             quantity,
-            value: units.from_native(quantity, value),
-            min: units.from_native(quantity, min),
-            max: units.from_native(quantity, max),
+            value,
+            min,
+            max,
             units,
         }
+    }
+}
+
+/// The range `[min, max]` with the bound nearer to a refused `value` moved
+/// past it by one ulp if the conversion to the caller's units (or the
+/// caller's own number) rounded the value into the range: a refused value
+/// a rounding beyond a bound is never inside the range it is told.
+fn outside(value: f64, min: f64, max: f64) -> (f64, f64) {
+    if !(min..=max).contains(&value) {
+        (min, max)
+    } else if value - min <= max - value {
+        (next_up(value), max)
+    } else {
+        (min, -next_up(-value))
+    }
+}
+
+/// The next f64 above finite `x`.
+fn next_up(x: f64) -> f64 {
+    if x == 0.0 {
+        f64::from_bits(1)
+    } else if x > 0.0 {
+        f64::from_bits(x.to_bits() + 1)
+    } else {
+        f64::from_bits(x.to_bits() - 1)
     }
 }
 
@@ -142,13 +173,16 @@ impl Error {
                 max,
                 units,
                 ..
-            } if refused == quantity => Error::OutOfRange {
-                quantity,
-                value: given,
-                min,
-                max,
-                units,
-            },
+            } if refused == quantity => {
+                let (min, max) = outside(given, min, max);
+                Error::OutOfRange {
+                    quantity,
+                    value: given,
+                    min,
+                    max,
+                    units,
+                }
+            }
             other => other,
         }
     }

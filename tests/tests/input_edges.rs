@@ -571,3 +571,37 @@ fn an_overflowing_internal_energy_is_named() {
         }
     }
 }
+
+/// Found by the random-input campaign: a value refused a rounding below
+/// (or above) the bound in native units came back inside the range once
+/// the bound was converted to the caller's units; the range keeps the
+/// refused value outside, in the caller's units too.
+#[test]
+fn a_value_refused_at_a_bound_stays_outside_the_converted_range() {
+    let cases = [
+        (
+            InputPair::PressureEnthalpy,
+            5.8054492314314435e-8,
+            1075.416633833871,
+        ),
+        (
+            InputPair::PressureEnthalpy,
+            0.7017705862284397,
+            -0.016027953660313385,
+        ),
+        (
+            InputPair::PressureEntropy,
+            3.917223164731127,
+            2.903524760342553,
+        ),
+    ];
+    for (pair, a, b) in cases {
+        for method in [Method::Exact, Method::BackwardOnly] {
+            let what = format!("{pair:?} ({a}, {b}) {method:?}");
+            match State::solve(pair, a, b, Units::UsCustomary, method) {
+                Ok(state) => assert_in_range(&what, &state),
+                Err(e) => assert_honest(&what, pair, (a, b), &e, Units::UsCustomary),
+            }
+        }
+    }
+}
