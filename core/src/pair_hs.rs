@@ -91,10 +91,9 @@ const LINE_MARGIN: f64 = 1e-5;
 /// a margin. Below it the 2/5 split need not be computed.
 const H_REGION5_BELOW: f64 = 3_900.0;
 
-/// The lowest pressure at which (h, s) states are sought, MPa: IF97 has no
-/// lower limit, this one keeps ln p and its powers far from underflow. It
-/// bounds the entropy of the range from above: s of region 5 at 2273.15 K
-/// and this pressure, about 220 kJ/(kg·K).
+/// The lowest pressure at which the 1073.15 K isotherm is searched for the
+/// 2/5 split, MPa: far below the range's floor ([`MIN_PRESSURE`], where
+/// states are refused), keeping ln p and its powers far from underflow.
 const LOWEST_PRESSURE: f64 = 1e-200;
 
 /// Relative tolerance of the membership checks in (p, T): what the
@@ -540,7 +539,8 @@ fn check(place: Place, props: Properties) -> Attempt {
     };
     let beyond_range = -over(t, MIN_TEMPERATURE) > TEMPERATURE_EDGE
         || over(t, MAX_TEMPERATURE) > TEMPERATURE_EDGE
-        || over(p, max_p) > INSIDE;
+        || over(p, max_p) > INSIDE
+        || -over(p, MIN_PRESSURE) > INSIDE;
     match (beyond_range, worst) {
         (false, None) => Attempt::Inside(single_state(place, props)),
         (false, Some((next, excess))) => Attempt::Outside {
@@ -951,9 +951,7 @@ fn refusal(h: f64, s: f64, beyond: bool, units: Units) -> Error {
     // Beyond the range's extremes of s, the range of s at this h (not
     // computed) is not theirs: no state, not a range.
     let s_min = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE).s;
-    let s_max = Equation::Region5
-        .evaluate(LOWEST_PRESSURE, MAX_TEMPERATURE)
-        .s;
+    let s_max = Equation::Region5.evaluate(MIN_PRESSURE, MAX_TEMPERATURE).s;
     if !(s_min..=s_max).contains(&s) {
         return NO_STATE;
     }
@@ -983,32 +981,31 @@ fn enthalpy_range(s: f64) -> Option<(f64, f64)> {
     let triple = Saturation::at_temperature(MIN_TEMPERATURE, Units::Native).ok()?;
     let (l, g) = (*triple.liquid().native(), *triple.vapour().native());
     let p_min = min_saturation_pressure();
-    // The 273.15 K isotherm (liquid from 100 MPa down, then the wet
-    // states at 273.15 K, then vapour down to vanishing pressure).
-    let lowest = if s < l.s {
-        isotherm_pressure(Equation::Region1, MIN_TEMPERATURE, s, (p_min, MAX_PRESSURE))
-            .map(|p| Equation::Region1.evaluate(p, MIN_TEMPERATURE).h)
-    } else if s <= g.s {
-        Some(l.h + (s - l.s) * (g.h - l.h) / (g.s - l.s))
-    } else {
-        isotherm_pressure(
-            Equation::Region2,
-            MIN_TEMPERATURE,
-            s,
-            (LOWEST_PRESSURE, p_min),
-        )
-        .map(|p| Equation::Region2.evaluate(p, MIN_TEMPERATURE).h)
-    };
-    // The 100 MPa isobar to 1073.15 K, that isotherm to 50 MPa, the
-    // 50 MPa isobar to 2273.15 K, and that isotherm to vanishing pressure.
-    let hot_100 = Equation::Region2.evaluate(MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
-    let hot_50 = Equation::Region2.evaluate(REGION5_MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
-    let hottest_50 = Equation::Region5.evaluate(REGION5_MAX_PRESSURE, MAX_TEMPERATURE);
     let on_isobar = |p: f64| {
         State::from_ps(p, s, Units::Native)
             .ok()
             .map(|st| st.native().h)
     };
+    // The 273.15 K isotherm (liquid from 100 MPa down, then the wet
+    // states at 273.15 K, then vapour down to the pressure floor), then
+    // the floor's isobar.
+    let coldest_vapour = Equation::Region2.evaluate(MIN_PRESSURE, MIN_TEMPERATURE);
+    let lowest = if s < l.s {
+        isotherm_pressure(Equation::Region1, MIN_TEMPERATURE, s, (p_min, MAX_PRESSURE))
+            .map(|p| Equation::Region1.evaluate(p, MIN_TEMPERATURE).h)
+    } else if s <= g.s {
+        Some(l.h + (s - l.s) * (g.h - l.h) / (g.s - l.s))
+    } else if s <= coldest_vapour.s {
+        isotherm_pressure(Equation::Region2, MIN_TEMPERATURE, s, (MIN_PRESSURE, p_min))
+            .map(|p| Equation::Region2.evaluate(p, MIN_TEMPERATURE).h)
+    } else {
+        on_isobar(MIN_PRESSURE)
+    };
+    // The 100 MPa isobar to 1073.15 K, that isotherm to 50 MPa, the
+    // 50 MPa isobar to 2273.15 K, and that isotherm to the floor.
+    let hot_100 = Equation::Region2.evaluate(MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
+    let hot_50 = Equation::Region2.evaluate(REGION5_MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
+    let hottest_50 = Equation::Region5.evaluate(REGION5_MAX_PRESSURE, MAX_TEMPERATURE);
     let highest = if s <= hot_100.s {
         on_isobar(MAX_PRESSURE)
     } else if s <= hot_50.s {
@@ -1026,7 +1023,7 @@ fn enthalpy_range(s: f64) -> Option<(f64, f64)> {
             Equation::Region5,
             MAX_TEMPERATURE,
             s,
-            (LOWEST_PRESSURE, REGION5_MAX_PRESSURE),
+            (MIN_PRESSURE, REGION5_MAX_PRESSURE),
         )
         .map(|p| Equation::Region5.evaluate(p, MAX_TEMPERATURE).h)
     };
@@ -1126,17 +1123,17 @@ impl State {
     ///
     /// Valid over the whole range of IF97 — every single-phase state of
     /// regions 1, 2, 3 and 5 (273.15 K ≤ T ≤ 1073.15 K at p ≤ 100 MPa,
-    /// up to 2273.15 K at p ≤ 50 MPa, down to any positive pressure) and
+    /// up to 2273.15 K at p ≤ 50 MPa, down to 1e-12 MPa) and
     /// wet steam from 273.15 K to the critical point. Wet steam comes back
     /// as [`Saturation::mixture`] of the saturation temperature found, a
     /// point on a saturation line as the saturated phase itself.
     ///
     /// Outside the range the error is [`Error::OutOfRange`] for the
     /// enthalpy, with the lowest and highest enthalpy valid at the given
-    /// entropy (on the 273.15 K isotherm and on the 100 MPa isobar, the
+    /// entropy (on the 273.15 K isotherm or the 1e-12 MPa isobar, and on the 100 MPa isobar, the
     /// 1073.15 K isotherm, the 50 MPa isobar or the 2273.15 K isotherm);
     /// an entropy beyond the range's extremes, s(100 MPa, 273.15 K) and
-    /// s(2273.15 K, the lowest pressure), is [`Error::NoStateInRange`] (the
+    /// s(1e-12 MPa, 2273.15 K), is [`Error::NoStateInRange`] (the
     /// range of s at the given h is not computed; an entropy that
     /// overflows on conversion is [`Error::NotFinite`]). Inside that
     /// enthalpy band lie a few tiny pockets
