@@ -33,6 +33,14 @@ pub struct Saturation {
     vapour: State,
 }
 
+/// The saturation pressure at native `t` ≤ Tc, MPa: R7-97 Eq. 30, which
+/// gives about 3e-10 MPa above pc (Eq. 2) within about 1e-9 K below Tc,
+/// held at pc, so that a saturated state's own pressure is one the line
+/// accepts.
+fn line_pressure(t: f64) -> f64 {
+    saturation_pressure(t).min(CRITICAL_PRESSURE)
+}
+
 impl Saturation {
     /// Saturation at pressure `p`, from psat(273.15 K) to the critical
     /// pressure, in `units`.
@@ -69,12 +77,7 @@ impl Saturation {
             )
             .with_given(given));
         }
-        let p = if t == CRITICAL_TEMPERATURE {
-            CRITICAL_PRESSURE
-        } else {
-            saturation_pressure(t)
-        };
-        Saturation::at(p, t, units)
+        Saturation::at(line_pressure(t), t, units)
     }
 
     /// Saturation at native `t`, as [`Saturation::at_temperature`] gives
@@ -91,7 +94,7 @@ impl Saturation {
         if !close {
             return Saturation::at_temperature(t, Units::Native);
         }
-        let p = saturation_pressure(t);
+        let p = line_pressure(t);
         let dp = saturation_pressure_slope(t_near);
         let phase = |branch: Branch, previous: &State, phase: Phase| -> Result<State, Error> {
             let n = previous.native();

@@ -634,3 +634,29 @@ fn h_s_below_the_pressure_floor_is_refused() {
         }
     }
 }
+
+/// Found by the random-input campaign: R7-97 Eq. 30 gives psat a rounding
+/// above pc = 22.064 MPa (Eq. 2) within about 1e-10 K below Tc, so the
+/// pressure of a saturated state there was refused by (p, x), whose range
+/// ends at pc. The saturation line's pressure never exceeds pc, so every
+/// saturated state's own (p, x) solves, in every unit system.
+#[test]
+fn the_saturation_line_never_gives_a_pressure_above_critical() {
+    for k in 0..=200 {
+        let t = 647.096 - 1e-12 * f64::from(k);
+        for x in [0.0, 0.5673802506080554, 0.9999999999999967, 1.0] {
+            let state = State::from_tx(t, x, Units::Native).unwrap();
+            for units in Units::ALL {
+                let p = state.in_units(units).pressure();
+                let back = State::solve(InputPair::PressureQuality, p, x, units, Method::Exact);
+                assert!(back.is_ok(), "T = {t} K, x = {x}, {units:?}: {back:?}");
+            }
+        }
+    }
+    // Above pc the pressure is refused, with the range ending at pc.
+    let err = State::from_px(22.064000000028894, 0.9999999999999967, Units::Native).unwrap_err();
+    assert!(
+        matches!(err, Error::OutOfRange { quantity: Quantity::Pressure, max, .. } if max == 22.064),
+        "{err:?}"
+    );
+}
