@@ -42,11 +42,11 @@ use crate::boundary_b23;
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{refine, Bounds, Equation, Given};
+use crate::inverse::{refine, within_promise, Bounds, Equation, Given};
 use crate::math::{exp, ln};
 use crate::pair_ph_ps::Method;
 use crate::regions::{region3_phase, single_phase, within_range};
-use crate::saturation::{min_saturation_pressure, Saturation};
+use crate::saturation::{min_saturation_pressure, Saturation, UNRESOLVED_BELOW_CRITICAL};
 use crate::saturation_line::{saturation_pressure, saturation_pressure_slope_and_curvature};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
@@ -114,6 +114,9 @@ const WET_AIMED: (f64, f64) = (1e-13, 1e-12);
 /// Upper end of the wet iteration, K: just below the critical point, where
 /// the two saturated phases are still distinct.
 const WET_MAX_TEMPERATURE: f64 = CRITICAL_TEMPERATURE - 1e-6;
+/// Steps of the wet iteration: bisection alone closes its bracket in
+/// about 60, and takes at least every other step where Newton crawls.
+const WET_STEPS: u32 = 150;
 /// How far the backward equations' own state may miss the given h
 /// (relative, absolute kJ/kg) or s (relative, absolute kJ/(kg·K)) before
 /// BackwardOnly treats the point as outside their range: a few times what
@@ -802,7 +805,11 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // On [273.15 K, T_sat(s)] the difference rises with T; above T_sat(s)
     // (quality below 0, liquid side) it counts as "too hot".
     let mut previous = None;
-    for _ in 0..100 {
+    // |f| one and two steps back: where it does not halve over two steps
+    // (near Tc, where the slopes along the line are not resolved and the
+    // steps crawl), bisection takes the step.
+    let mut residuals = [f64::INFINITY; 2];
+    for _ in 0..WET_STEPS {
         let WetPoint {
             sat,
             x,
@@ -822,9 +829,11 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
         } else {
             lo = t;
         }
+        let crawling = f.abs() > 0.5 * residuals[1];
+        residuals = [f.abs(), residuals[0]];
         let step = halley_step(f, slope, curvature);
         let next = t - step;
-        t = if x >= 0.0 && slope > 0.0 && next > lo && next < hi {
+        t = if x >= 0.0 && slope > 0.0 && !crawling && next > lo && next < hi {
             next
         } else {
             0.5 * (lo + hi)
@@ -838,7 +847,13 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // differs from the saturated liquid in h and s) belongs to the
     // single-phase neighbour, which reproduces its p and T.
     let WetPoint { sat, x, f, .. } = wet_at(t, h, s, previous.as_ref())?;
-    if x >= 0.0 && within(f, h, WET_AIMED) {
+    let unresolved = t > CRITICAL_TEMPERATURE - UNRESOLVED_BELOW_CRITICAL;
+    let met = if unresolved {
+        within_promise(Given::Enthalpy, h + f, h)
+    } else {
+        within(f, h, WET_AIMED)
+    };
+    if x >= 0.0 && met {
         found(sat, x, t, s)
     } else if x < 0.0 || t < hi {
         // The bracket closed on T_sat(s) from the cold side without a
