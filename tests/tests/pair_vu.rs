@@ -124,3 +124,21 @@ fn wet_steam_near_critical_is_not_a_state_inside_the_loop() {
         State::from_vu(0.049723419576972024, 867.9295280685429, Units::UsCustomary).unwrap();
     assert_eq!(state.phase(), Phase::WetSteam, "{state:?}");
 }
+
+/// Found by the random-input campaign: a compressed liquid 2.3e-9 K below
+/// Tc, inside the band (about 2e-5 K) where the saturation line is not
+/// resolved to the promise, was refused as "no state". It is solved to the
+/// promise or reported as an iteration that did not converge (README,
+/// "Errors"), never as no state.
+#[test]
+fn a_state_where_the_line_is_unresolved_is_not_called_no_state() {
+    let (v, u) = (0.0031055601457367424, 2019.0205730761204);
+    match State::from_vu(v, u, NATIVE) {
+        Ok(state) => {
+            let close = |x: f64, y: f64| (x - y).abs() <= 1e-10 * y.abs();
+            assert!(close(state.specific_volume(), v), "{state:?}");
+            assert!(close(state.internal_energy(), u), "{state:?}");
+        }
+        Err(e) => assert!(matches!(e, ebullio::Error::NotConverged { .. }), "{e:?}"),
+    }
+}
