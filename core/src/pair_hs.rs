@@ -853,8 +853,17 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     } else {
         within(f, h, WET_AIMED)
     };
+    let at_seam = (lo - REGION13_TEMPERATURE).abs() <= 4.0 * f64::EPSILON * REGION13_TEMPERATURE
+        && hi - lo <= 8.0 * f64::EPSILON * hi;
     if x >= 0.0 && met {
         found(sat, x, t, s)
+    } else if at_seam && (0.0..=1.0).contains(&x) {
+        // The bracket closed on 623.15 K without a root: (h, s) lies in
+        // the gap the formulation's inconsistency leaves between the wet
+        // isotherms of 623.15 K of regions 1/2 and of region 3 (2.2e-3
+        // kJ/kg wide at s = 4.34 kJ/(kg·K), measured). No state has it, as
+        // for a point beyond the range.
+        Ok(Attempt::Beyond(None))
     } else if x < 0.0 || t < hi {
         // The bracket closed on T_sat(s) from the cold side without a
         // root: h lies above the saturated liquid.
@@ -1145,17 +1154,22 @@ impl State {
     ///
     /// Outside the range the error is [`Error::OutOfRange`] for the
     /// enthalpy, with the lowest and highest enthalpy valid at the given
-    /// entropy (on the 273.15 K isotherm or the 1e-12 MPa isobar, and on the 100 MPa isobar, the
-    /// 1073.15 K isotherm, the 50 MPa isobar or the 2273.15 K isotherm);
-    /// an entropy beyond the range's extremes, s(100 MPa, 273.15 K) and
-    /// s(1e-12 MPa, 2273.15 K), is [`Error::NoStateInRange`] (the
-    /// range of s at the given h is not computed; an entropy that
-    /// overflows on conversion is [`Error::NotFinite`]). Inside that
-    /// enthalpy band lie a few tiny pockets
-    /// colder than 273.15 K (cold water near s = 0, where isentropic
-    /// compression cools it); there the error is [`Error::NoStateInRange`],
-    /// the valid enthalpies at that entropy being no single interval. A NaN or infinite input is [`Error::NotFinite`];
-    /// an iteration that fails is [`Error::NotConverged`], never an
+    /// entropy (on the 273.15 K isotherm or the 1e-12 MPa isobar, and on
+    /// the 100 MPa isobar, the 1073.15 K isotherm, the 50 MPa isobar or the
+    /// 2273.15 K isotherm); an entropy beyond the range's extremes,
+    /// s(100 MPa, 273.15 K) and s(1e-12 MPa, 2273.15 K), is
+    /// [`Error::NoStateInRange`] (the range of s at the given h is not
+    /// computed; an entropy that overflows on conversion is
+    /// [`Error::NotFinite`]). Inside that enthalpy band lie a few tiny
+    /// pockets colder than 273.15 K (cold water near s = 0, where
+    /// isentropic compression cools it), and the gap the formulation's
+    /// inconsistency leaves between the wet isotherms of 623.15 K of
+    /// regions 1/2 and of region 3 (2.2e-3 kJ/kg at 4.34 kJ/(kg·K)); there the
+    /// error is [`Error::NoStateInRange`], the valid enthalpies at that
+    /// entropy being no single interval. A NaN or infinite input is
+    /// [`Error::NotFinite`]; an iteration that fails is
+    /// [`Error::NotConverged`] (within about 2e-5 K below Tc, where the
+    /// saturation line is not resolved to the promise, it may), never an
     /// approximate state.
     pub fn from_hs(h: f64, s: f64, units: Units) -> Result<State, Error> {
         State::from_hs_with(h, s, units, Method::Exact)

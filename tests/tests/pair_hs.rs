@@ -752,3 +752,19 @@ fn wet_steam_just_below_critical_comes_back() {
         assert!(close(state.entropy(), s), "s of {what}: {state:?}");
     }
 }
+
+/// Found by the random-input campaign: (h, s) between the wet isotherms of
+/// 623.15 K of regions 1/2 and of region 3, which the formulation's
+/// inconsistency at that temperature leaves 2.2e-3 kJ/kg apart at
+/// s = 4.34 kJ/(kg·K) (IAPWS R7-97(2012) allows it), was "did not
+/// converge". No state of the formulation has it: the error says so.
+#[test]
+fn a_point_in_the_seam_gap_at_623_15_k_has_no_state() {
+    for method in [Method::Exact, Method::BackwardOnly] {
+        let result = State::from_hs_with(2021.899086770873, 4.341607419121642, NATIVE, method);
+        assert!(
+            matches!(result, Err(Error::NoStateInRange { .. })),
+            "{method:?}: {result:?}"
+        );
+    }
+}
