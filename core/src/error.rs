@@ -12,7 +12,8 @@ use crate::units::{Quantity, Units};
 #[derive(Clone, Copy, Debug, PartialEq, thiserror::Error)]
 #[non_exhaustive]
 pub enum Error {
-    /// An input was NaN or infinite.
+    /// An input was NaN or infinite, or (for a pair whose range at the
+    /// other input is not given) overflows on conversion to native units.
     #[error("{quantity} is not a finite number")]
     NotFinite {
         /// The input that was not finite.
@@ -119,13 +120,44 @@ impl Error {
         max: f64,
         units: Units,
     ) -> Error {
+        let value = units.from_native(quantity, value);
+        let (min, max) = outside(
+            value,
+            units.from_native(quantity, min),
+            units.from_native(quantity, max),
+        );
         Error::OutOfRange {
             quantity,
-            value: units.from_native(quantity, value),
-            min: units.from_native(quantity, min),
-            max: units.from_native(quantity, max),
+            value,
+            min,
+            max,
             units,
         }
+    }
+}
+
+/// The range `[min, max]` with the bound nearer to a refused `value` moved
+/// past it by one ulp if the conversion to the caller's units (or the
+/// caller's own number) rounded the value into the range: a refused value
+/// a rounding beyond a bound is never inside the range it is told.
+fn outside(value: f64, min: f64, max: f64) -> (f64, f64) {
+    if !(min..=max).contains(&value) {
+        (min, max)
+    } else if value - min <= max - value {
+        (next_up(value), max)
+    } else {
+        (min, -next_up(-value))
+    }
+}
+
+/// The next f64 above finite `x`.
+fn next_up(x: f64) -> f64 {
+    if x == 0.0 {
+        f64::from_bits(1)
+    } else if x > 0.0 {
+        f64::from_bits(x.to_bits() + 1)
+    } else {
+        f64::from_bits(x.to_bits() - 1)
     }
 }
 
@@ -141,13 +173,16 @@ impl Error {
                 max,
                 units,
                 ..
-            } if refused == quantity => Error::OutOfRange {
-                quantity,
-                value: given,
-                min,
-                max,
-                units,
-            },
+            } if refused == quantity => {
+                let (min, max) = outside(given, min, max);
+                Error::OutOfRange {
+                    quantity,
+                    value: given,
+                    min,
+                    max,
+                    units,
+                }
+            }
             other => other,
         }
     }
@@ -179,7 +214,16 @@ pub(crate) fn solve_given<T>(
 ) -> Result<T, Error> {
     let native_a = native_input(units, a.0, a.1)?;
     let native_b = native_input(units, b.0, b.1)?;
-    solve(native_a, native_b).map_err(|e| e.with_given(a).with_given(b))
+    solve(native_a, native_b).map_err(|e| match e {
+        // A pair with no range to give (v, u; h, s beyond the range's
+        // extremes) names an input that overflowed rather than saying
+        // "no state": that input is not finite in native units.
+        Error::NoStateInRange { .. } => [a, b]
+            .into_iter()
+            .find(|&(quantity, value)| !units.to_native(quantity, value).is_finite())
+            .map_or(e, |(quantity, _)| Error::NotFinite { quantity }),
+        _ => e.with_given(a).with_given(b),
+    })
 }
 
 /// The caller's own number as typed, shortest round-trip digits, in

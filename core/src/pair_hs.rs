@@ -42,11 +42,11 @@ use crate::boundary_b23;
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{refine, Bounds, Equation, Given};
+use crate::inverse::{refine, within_promise, Bounds, Equation, Given};
 use crate::math::{exp, ln};
 use crate::pair_ph_ps::Method;
 use crate::regions::{region3_phase, single_phase, within_range};
-use crate::saturation::{min_saturation_pressure, Saturation};
+use crate::saturation::{min_saturation_pressure, Saturation, UNRESOLVED_BELOW_CRITICAL};
 use crate::saturation_line::{saturation_pressure, saturation_pressure_slope_and_curvature};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
@@ -91,10 +91,9 @@ const LINE_MARGIN: f64 = 1e-5;
 /// a margin. Below it the 2/5 split need not be computed.
 const H_REGION5_BELOW: f64 = 3_900.0;
 
-/// The lowest pressure at which (h, s) states are sought, MPa: IF97 has no
-/// lower limit, this one keeps ln p and its powers far from underflow. It
-/// bounds the entropy of the range from above: s of region 5 at 2273.15 K
-/// and this pressure, about 220 kJ/(kg·K).
+/// The lowest pressure at which the 1073.15 K isotherm is searched for the
+/// 2/5 split, MPa: far below the range's floor ([`MIN_PRESSURE`], where
+/// states are refused), keeping ln p and its powers far from underflow.
 const LOWEST_PRESSURE: f64 = 1e-200;
 
 /// Relative tolerance of the membership checks in (p, T): what the
@@ -115,6 +114,9 @@ const WET_AIMED: (f64, f64) = (1e-13, 1e-12);
 /// Upper end of the wet iteration, K: just below the critical point, where
 /// the two saturated phases are still distinct.
 const WET_MAX_TEMPERATURE: f64 = CRITICAL_TEMPERATURE - 1e-6;
+/// Steps of the wet iteration: bisection alone closes its bracket in
+/// about 60, and takes at least every other step where Newton crawls.
+const WET_STEPS: u32 = 150;
 /// How far the backward equations' own state may miss the given h
 /// (relative, absolute kJ/kg) or s (relative, absolute kJ/(kg·K)) before
 /// BackwardOnly treats the point as outside their range: a few times what
@@ -540,7 +542,8 @@ fn check(place: Place, props: Properties) -> Attempt {
     };
     let beyond_range = -over(t, MIN_TEMPERATURE) > TEMPERATURE_EDGE
         || over(t, MAX_TEMPERATURE) > TEMPERATURE_EDGE
-        || over(p, max_p) > INSIDE;
+        || over(p, max_p) > INSIDE
+        || -over(p, MIN_PRESSURE) > INSIDE;
     match (beyond_range, worst) {
         (false, None) => Attempt::Inside(single_state(place, props)),
         (false, Some((next, excess))) => Attempt::Outside {
@@ -802,7 +805,11 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // On [273.15 K, T_sat(s)] the difference rises with T; above T_sat(s)
     // (quality below 0, liquid side) it counts as "too hot".
     let mut previous = None;
-    for _ in 0..100 {
+    // |f| one and two steps back: where it does not halve over two steps
+    // (near Tc, where the slopes along the line are not resolved and the
+    // steps crawl), bisection takes the step.
+    let mut residuals = [f64::INFINITY; 2];
+    for _ in 0..WET_STEPS {
         let WetPoint {
             sat,
             x,
@@ -822,9 +829,11 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
         } else {
             lo = t;
         }
+        let crawling = f.abs() > 0.5 * residuals[1];
+        residuals = [f.abs(), residuals[0]];
         let step = halley_step(f, slope, curvature);
         let next = t - step;
-        t = if x >= 0.0 && slope > 0.0 && next > lo && next < hi {
+        t = if x >= 0.0 && slope > 0.0 && !crawling && next > lo && next < hi {
             next
         } else {
             0.5 * (lo + hi)
@@ -838,8 +847,23 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // differs from the saturated liquid in h and s) belongs to the
     // single-phase neighbour, which reproduces its p and T.
     let WetPoint { sat, x, f, .. } = wet_at(t, h, s, previous.as_ref())?;
-    if x >= 0.0 && within(f, h, WET_AIMED) {
+    let unresolved = t > CRITICAL_TEMPERATURE - UNRESOLVED_BELOW_CRITICAL;
+    let met = if unresolved {
+        within_promise(Given::Enthalpy, h + f, h)
+    } else {
+        within(f, h, WET_AIMED)
+    };
+    let at_seam = (lo - REGION13_TEMPERATURE).abs() <= 4.0 * f64::EPSILON * REGION13_TEMPERATURE
+        && hi - lo <= 8.0 * f64::EPSILON * hi;
+    if x >= 0.0 && met {
         found(sat, x, t, s)
+    } else if at_seam && (0.0..=1.0).contains(&x) {
+        // The bracket closed on 623.15 K without a root: (h, s) lies in
+        // the gap the formulation's inconsistency leaves between the wet
+        // isotherms of 623.15 K of regions 1/2 and of region 3 (2.2e-3
+        // kJ/kg wide at s = 4.34 kJ/(kg·K), measured). No state has it, as
+        // for a point beyond the range.
+        Ok(Attempt::Beyond(None))
     } else if x < 0.0 || t < hi {
         // The bracket closed on T_sat(s) from the cold side without a
         // root: h lies above the saturated liquid.
@@ -938,31 +962,32 @@ fn solve_exact(h: f64, s: f64, indicated: Place, units: Units) -> Result<State, 
     }
 }
 
-/// The error for a point that has no state: the enthalpy range valid at
+/// The error for a point that has no state: no state in range for an
+/// entropy beyond the range's extremes; the enthalpy range valid at
 /// this entropy if h lies outside it; otherwise, where the solution lies
 /// beyond the range (the cold pockets inside the enthalpy band, where the
 /// valid h at s is not one interval), no state in range; otherwise
 /// non-convergence.
 fn refusal(h: f64, s: f64, beyond: bool, units: Units) -> Error {
+    const NO_STATE: Error = Error::NoStateInRange {
+        pair: "specific enthalpy and specific entropy",
+    };
+    // Beyond the range's extremes of s, the range of s at this h (not
+    // computed) is not theirs: no state, not a range.
     let s_min = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE).s;
-    let s_max = Equation::Region5
-        .evaluate(LOWEST_PRESSURE, MAX_TEMPERATURE)
-        .s;
-    let entropy_error = || Error::out_of_range(Quantity::Entropy, s, s_min, s_max, units);
+    let s_max = Equation::Region5.evaluate(MIN_PRESSURE, MAX_TEMPERATURE).s;
     if !(s_min..=s_max).contains(&s) {
-        return entropy_error();
+        return NO_STATE;
     }
     let Some((h_min, h_max)) = enthalpy_range(s) else {
-        return entropy_error();
+        return NO_STATE;
     };
     let slack = 1e-10 * h.abs().max(1.0);
     if !(h_min - slack..=h_max + slack).contains(&h) {
         return Error::out_of_range(Quantity::Enthalpy, h, h_min, h_max, units);
     }
     if beyond {
-        Error::NoStateInRange {
-            pair: "specific enthalpy and specific entropy",
-        }
+        NO_STATE
     } else {
         NOT_CONVERGED
     }
@@ -980,32 +1005,31 @@ fn enthalpy_range(s: f64) -> Option<(f64, f64)> {
     let triple = Saturation::at_temperature(MIN_TEMPERATURE, Units::Native).ok()?;
     let (l, g) = (*triple.liquid().native(), *triple.vapour().native());
     let p_min = min_saturation_pressure();
-    // The 273.15 K isotherm (liquid from 100 MPa down, then the wet
-    // states at 273.15 K, then vapour down to vanishing pressure).
-    let lowest = if s < l.s {
-        isotherm_pressure(Equation::Region1, MIN_TEMPERATURE, s, (p_min, MAX_PRESSURE))
-            .map(|p| Equation::Region1.evaluate(p, MIN_TEMPERATURE).h)
-    } else if s <= g.s {
-        Some(l.h + (s - l.s) * (g.h - l.h) / (g.s - l.s))
-    } else {
-        isotherm_pressure(
-            Equation::Region2,
-            MIN_TEMPERATURE,
-            s,
-            (LOWEST_PRESSURE, p_min),
-        )
-        .map(|p| Equation::Region2.evaluate(p, MIN_TEMPERATURE).h)
-    };
-    // The 100 MPa isobar to 1073.15 K, that isotherm to 50 MPa, the
-    // 50 MPa isobar to 2273.15 K, and that isotherm to vanishing pressure.
-    let hot_100 = Equation::Region2.evaluate(MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
-    let hot_50 = Equation::Region2.evaluate(REGION5_MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
-    let hottest_50 = Equation::Region5.evaluate(REGION5_MAX_PRESSURE, MAX_TEMPERATURE);
     let on_isobar = |p: f64| {
         State::from_ps(p, s, Units::Native)
             .ok()
             .map(|st| st.native().h)
     };
+    // The 273.15 K isotherm (liquid from 100 MPa down, then the wet
+    // states at 273.15 K, then vapour down to the pressure floor), then
+    // the floor's isobar.
+    let coldest_vapour = Equation::Region2.evaluate(MIN_PRESSURE, MIN_TEMPERATURE);
+    let lowest = if s < l.s {
+        isotherm_pressure(Equation::Region1, MIN_TEMPERATURE, s, (p_min, MAX_PRESSURE))
+            .map(|p| Equation::Region1.evaluate(p, MIN_TEMPERATURE).h)
+    } else if s <= g.s {
+        Some(l.h + (s - l.s) * (g.h - l.h) / (g.s - l.s))
+    } else if s <= coldest_vapour.s {
+        isotherm_pressure(Equation::Region2, MIN_TEMPERATURE, s, (MIN_PRESSURE, p_min))
+            .map(|p| Equation::Region2.evaluate(p, MIN_TEMPERATURE).h)
+    } else {
+        on_isobar(MIN_PRESSURE)
+    };
+    // The 100 MPa isobar to 1073.15 K, that isotherm to 50 MPa, the
+    // 50 MPa isobar to 2273.15 K, and that isotherm to the floor.
+    let hot_100 = Equation::Region2.evaluate(MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
+    let hot_50 = Equation::Region2.evaluate(REGION5_MAX_PRESSURE, REGION2_MAX_TEMPERATURE);
+    let hottest_50 = Equation::Region5.evaluate(REGION5_MAX_PRESSURE, MAX_TEMPERATURE);
     let highest = if s <= hot_100.s {
         on_isobar(MAX_PRESSURE)
     } else if s <= hot_50.s {
@@ -1023,7 +1047,7 @@ fn enthalpy_range(s: f64) -> Option<(f64, f64)> {
             Equation::Region5,
             MAX_TEMPERATURE,
             s,
-            (LOWEST_PRESSURE, REGION5_MAX_PRESSURE),
+            (MIN_PRESSURE, REGION5_MAX_PRESSURE),
         )
         .map(|p| Equation::Region5.evaluate(p, MAX_TEMPERATURE).h)
     };
@@ -1123,21 +1147,29 @@ impl State {
     ///
     /// Valid over the whole range of IF97 — every single-phase state of
     /// regions 1, 2, 3 and 5 (273.15 K ≤ T ≤ 1073.15 K at p ≤ 100 MPa,
-    /// up to 2273.15 K at p ≤ 50 MPa, down to any positive pressure) and
+    /// up to 2273.15 K at p ≤ 50 MPa, down to 1e-12 MPa) and
     /// wet steam from 273.15 K to the critical point. Wet steam comes back
     /// as [`Saturation::mixture`] of the saturation temperature found, a
     /// point on a saturation line as the saturated phase itself.
     ///
     /// Outside the range the error is [`Error::OutOfRange`] for the
     /// enthalpy, with the lowest and highest enthalpy valid at the given
-    /// entropy (on the 273.15 K isotherm and on the 100 MPa isobar, the
-    /// 1073.15 K isotherm, the 50 MPa isobar or the 2273.15 K isotherm);
-    /// below the lowest entropy of the range, s(100 MPa, 273.15 K), it is
-    /// for the entropy. Inside that enthalpy band lie a few tiny pockets
-    /// colder than 273.15 K (cold water near s = 0, where isentropic
-    /// compression cools it); there the error is [`Error::NoStateInRange`],
-    /// the valid enthalpies at that entropy being no single interval. A NaN or infinite input is [`Error::NotFinite`];
-    /// an iteration that fails is [`Error::NotConverged`], never an
+    /// entropy (on the 273.15 K isotherm or the 1e-12 MPa isobar, and on
+    /// the 100 MPa isobar, the 1073.15 K isotherm, the 50 MPa isobar or the
+    /// 2273.15 K isotherm); an entropy beyond the range's extremes,
+    /// s(100 MPa, 273.15 K) and s(1e-12 MPa, 2273.15 K), is
+    /// [`Error::NoStateInRange`] (the range of s at the given h is not
+    /// computed; an entropy that overflows on conversion is
+    /// [`Error::NotFinite`]). Inside that enthalpy band lie a few tiny
+    /// pockets colder than 273.15 K (cold water near s = 0, where
+    /// isentropic compression cools it), and the gap the formulation's
+    /// inconsistency leaves between the wet isotherms of 623.15 K of
+    /// regions 1/2 and of region 3 (2.2e-3 kJ/kg at 4.34 kJ/(kg·K)); there the
+    /// error is [`Error::NoStateInRange`], the valid enthalpies at that
+    /// entropy being no single interval. A NaN or infinite input is
+    /// [`Error::NotFinite`]; an iteration that fails is
+    /// [`Error::NotConverged`] (within about 2e-5 K below Tc, where the
+    /// saturation line is not resolved to the promise, it may), never an
     /// approximate state.
     pub fn from_hs(h: f64, s: f64, units: Units) -> Result<State, Error> {
         State::from_hs_with(h, s, units, Method::Exact)

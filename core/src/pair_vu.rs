@@ -6,8 +6,9 @@
 //! region is tried with Newton's method on its basic equation from a
 //! physically reasonable start, in the order the specific volume makes
 //! likely, and a solution is accepted only where that region's equation is
-//! the stable one — its (p, T) lies in the region, and in region 3 the
-//! (p, T) state has the same density. Otherwise the state is wet steam: the
+//! the stable one — its (p, T) lies in the region, and in region 3 below
+//! Tc it lies on its own side of the saturation line with κT > 0.
+//! Otherwise the state is wet steam: the
 //! temperature where the lever rules on v and on u give the same quality,
 //! found by Newton's method on the logarithms of the two qualities, kept
 //! inside a bisection bracket along the saturation line (where, at
@@ -27,7 +28,7 @@ use crate::inverse::{refine, within_promise, Bounds, Equation, Given};
 use crate::math::ln;
 use crate::region3_density::Branch;
 use crate::regions::{locate, region3_phase, single_phase, Located};
-use crate::saturation::Saturation;
+use crate::saturation::{Saturation, UNRESOLVED_BELOW_CRITICAL};
 use crate::saturation_line::{saturation_pressure, saturation_pressure_slope};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
@@ -36,6 +37,11 @@ use crate::variable::Variable;
 impl State {
     /// The state at specific volume `v` and specific internal energy `u`,
     /// in `units`, reproducing both to relative 1e-10 or better.
+    ///
+    /// A pair with no state in the range is [`Error::NoStateInRange`]
+    /// (the valid v at a given u is not computed, so no range is given);
+    /// a NaN or infinite input, or one that overflows on conversion to
+    /// native units, is [`Error::NotFinite`].
     pub fn from_vu(v: f64, u: f64, units: Units) -> Result<State, Error> {
         let (v, u) = ((Quantity::SpecificVolume, v), (Quantity::InternalEnergy, u));
         solve_given(units, v, u, |v, u| solve(v, u, units))
@@ -46,17 +52,13 @@ impl State {
 pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
     // The range's smallest v, at 100 MPa and 273.15 K (water's density
     // falls with T there), and its largest, at 2273.15 K and the lowest
-    // pressure; the conformance suite checks both are the extremes.
+    // pressure; the conformance suite checks both are the extremes. They
+    // are not the range of v at this u (1000 m³/kg at 2000 kJ/kg would be
+    // colder than 273.15 K), which is not computed: no state, not a range.
     let v_min = Equation::Region1.evaluate(MAX_PRESSURE, MIN_TEMPERATURE).v;
     let v_max = Equation::Region5.evaluate(MIN_PRESSURE, MAX_TEMPERATURE).v;
     if !(v_min..=v_max).contains(&v) {
-        return Err(Error::out_of_range(
-            Quantity::SpecificVolume,
-            v,
-            v_min,
-            v_max,
-            units,
-        ));
+        return Err(NO_STATE);
     }
     let liquid_like = v < 1.0 / CRITICAL_DENSITY;
     let order: [Equation; 4] = if liquid_like {
@@ -184,7 +186,7 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
             let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
             refine(equation, targets.0, targets.1, (rho, 700.0), bounds).ok()?
         }
-        Equation::Region1 => liquid(v, u)?,
+        Equation::Region1 => onto_saturated_liquid(liquid(v, u)?, v, u),
         Equation::Region2 => {
             // u rises with T along the isochore: above its u at 1073.15 K
             // the state is region 5's, if any (one isotherm solve, where
@@ -239,6 +241,29 @@ fn liquid(v: f64, u: f64) -> Option<Properties> {
         (10.0, t0),
         (MIN_TEMPERATURE, REGION13_TEMPERATURE),
     )
+}
+
+/// A region 1 solution a hair below psat(T) — (v, u) fix a liquid's
+/// pressure only loosely, dv = −v·κT·dp, κT ≈ 5e-4 /MPa — is the saturated
+/// liquid at its T when that reproduces v and u to the promise (a
+/// saturated liquid's own (v, u) otherwise finds no state: the liquid
+/// lands in region 2, the wet iteration at x = 0 misses).
+fn onto_saturated_liquid(props: Properties, v: f64, u: f64) -> Properties {
+    if props.t > REGION13_TEMPERATURE {
+        return props;
+    }
+    let p_sat = saturation_pressure(props.t);
+    if props.p >= p_sat {
+        return props;
+    }
+    let saturated = Equation::Region1.evaluate(p_sat, props.t);
+    if within_promise(Given::SpecificVolume, saturated.v, v)
+        && within_promise(Given::InternalEnergy, saturated.u, u)
+    {
+        saturated
+    } else {
+        props
+    }
 }
 
 /// Newton in (p, T) together on `equation` from `start`, T kept within a
@@ -465,13 +490,8 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
             (Region::Five, single_phase(props.p, props.t, false))
         }
         (Equation::Region3, Located::Region3(branch)) => {
-            // Inside the van der Waals loop the Helmholtz equation has
-            // states that are not the stable ones at their (p, T).
-            if branch != Branch::Supercritical {
-                let stable = crate::State::from_pt(p, t, Units::Native).ok()?;
-                if (stable.native().v / props.v - 1.0).abs() > 1e-9 {
-                    return None;
-                }
+            if branch != Branch::Supercritical && !stable_below_critical(props, branch) {
+                return None;
             }
             (Region::Three, region3_phase(props))
         }
@@ -480,7 +500,31 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
     Some(State::single_phase(*props, region, phase, units))
 }
 
-const WET_STEPS: u32 = 100;
+/// Whether a region 3 solution is the stable state at its (p, T), whose
+/// branch `locate` names: inside the van der Waals loop below Tc the
+/// Helmholtz equation also has metastable and unstable states. Stable
+/// means κT > 0, the side of the saturation line (p, T) places it on
+/// (within `State::SATURATION_TOLERANCE`, as every pair decides it) its
+/// own — liquid-like (denser than critical) on the liquid side — and a
+/// density outside the dome at its T. Decided on (p, T) and the saturated
+/// densities, not by solving ρ(p, T) again: near the critical point κT is
+/// so large that the density at (p, T) is not resolved to compare.
+fn stable_below_critical(props: &Properties, branch: Branch) -> bool {
+    let liquid_like = 1.0 / props.v > CRITICAL_DENSITY;
+    if !(props.kappa_t > 0.0 && (branch == Branch::Liquid) == liquid_like) {
+        return false;
+    }
+    let Ok(sat) = Saturation::at_temperature(props.t, Units::Native) else {
+        return false;
+    };
+    if liquid_like {
+        props.v <= sat.liquid().native().v * (1.0 + 1e-9)
+    } else {
+        props.v >= sat.vapour().native().v * (1.0 - 1e-9)
+    }
+}
+
+const WET_STEPS: u32 = 150;
 
 /// Wet steam with this (v, u), if there is such a state at or below
 /// `t_max`.
@@ -507,6 +551,10 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     // 1/T and dF/d(1/T) of the last point with a Newton step, for the
     // curvature of Halley's correction.
     let mut last_slope: Option<(f64, f64)> = None;
+    // |u_mix − u| one and two steps back: where it does not halve over two
+    // steps (within about 2e-5 K of Tc the slopes along the line are not
+    // resolved and the Newton steps crawl), bisection takes the step.
+    let mut residuals = [f64::INFINITY; 2];
     for _ in 0..WET_STEPS {
         // The previous point starts region 3's density iterations.
         let sat = match &previous {
@@ -526,12 +574,14 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
             if f.abs() <= (1e-13 * u.abs()).max(1e-12) {
                 break;
             }
+            let crawling = f.abs() > 0.5 * residuals[1];
+            residuals = [f.abs(), residuals[0]];
             if f < 0.0 {
                 lo = t;
             } else {
                 hi = t;
             }
-            if let Some((f, slope)) = quality_match(l, g, v, u) {
+            if let Some((f, slope)) = quality_match(l, g, v, u).filter(|_| !crawling) {
                 let y = 1.0 / t;
                 let mut step = f / slope;
                 if let Some((y_last, slope_last)) = last_slope {
@@ -557,13 +607,22 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
             break;
         }
     }
-    let Some((sat, x, u_mix)) = found else {
-        return Ok(None);
-    };
-    if !within_promise(Given::InternalEnergy, u_mix, u) {
-        return Ok(None);
+    let met = found.filter(|&(_, _, u_mix)| within_promise(Given::InternalEnergy, u_mix, u));
+    match met {
+        Some((sat, x, _)) => sat.mixture(x).map(Some),
+        // Where the line is not resolved a point this near a mixture (1e-6,
+        // far beyond the line's scatter there, far inside the gaps its
+        // failures left, measured 2.5e-8) may well be wet steam: say the
+        // iteration failed, not that there is no state.
+        None if lo > CRITICAL_TEMPERATURE - UNRESOLVED_BELOW_CRITICAL
+            && found.is_some_and(|(_, _, u_mix)| (u_mix - u).abs() <= 1e-6 * u.abs()) =>
+        {
+            Err(Error::NotConverged {
+                what: "volume-energy",
+            })
+        }
+        None => Ok(None),
     }
-    sat.mixture(x).map(Some)
 }
 
 /// F = ln x_v − ln x_u, the logarithms of the qualities the lever rule

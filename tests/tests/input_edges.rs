@@ -7,7 +7,8 @@
 use ebullio::{Error, InputPair, Method, Quantity, State, Units};
 
 /// The range of validity, IAPWS R7-97(2012), section 1, with the rounding
-/// a state may carry (its T and p from an iteration on a boundary).
+/// a state may carry (its T and p from an iteration on a boundary), and
+/// ebullio's own pressure floor, 1e-12 MPa (core constants::MIN_PRESSURE).
 fn assert_in_range(what: &str, state: &State) {
     let s = state.native();
     let slack = 1e-12;
@@ -22,7 +23,7 @@ fn assert_in_range(what: &str, state: &State) {
         s.t
     );
     assert!(
-        s.p > 0.0 && s.p <= 100.0 * (1.0 + slack),
+        s.p >= 1e-12 * (1.0 - 1e-9) && s.p <= 100.0 * (1.0 + slack),
         "{what}: p = {} MPa outside the range",
         s.p
     );
@@ -92,8 +93,9 @@ fn assert_honest(what: &str, pair: InputPair, (a, b): (f64, f64), err: &Error, u
         }
         Error::NotFinite { quantity } => {
             let given = if quantity == qa { a } else { b };
+            // NaN or infinite as given, or overflowing in native units.
             assert!(
-                (quantity == qa || quantity == qb) && !given.is_finite(),
+                (quantity == qa || quantity == qb) && !units.to_native(quantity, given).is_finite(),
                 "{what}: {text}"
             );
         }
@@ -129,15 +131,13 @@ fn inputs_that_overflow_on_conversion_are_refused() {
         Method::Exact,
     )
     .unwrap_err();
-    assert!(
-        matches!(
-            err,
-            Error::OutOfRange {
-                quantity: Quantity::InternalEnergy,
-                ..
-            } | Error::NoStateInRange { .. }
-        ),
-        "{err:?}"
+    // (v, u) gives no range at the other input: the overflowing u is
+    // named as not finite in native units.
+    assert_eq!(
+        err,
+        Error::NotFinite {
+            quantity: Quantity::InternalEnergy
+        }
     );
     // Every pair, unit system and method, a huge value in either slot,
     // beside a value that is valid for the pair in native units.
@@ -419,12 +419,12 @@ fn specific_volume_extremes_of_the_range() {
             }
         }
     }
-    let err = State::from_vu(0.999 * v_min, 0.0, Units::Native).unwrap_err();
-    assert!(
-        matches!(err, Error::OutOfRange { quantity: Quantity::SpecificVolume, min, max, .. }
-            if min == v_min && max == v_max),
-        "{err:?}"
-    );
+    // Beyond them no u has a state; the range of v at a given u is
+    // narrower (not computed), so the error gives none.
+    for v in [0.999 * v_min, 1.001 * v_max] {
+        let err = State::from_vu(v, 0.0, Units::Native).unwrap_err();
+        assert!(matches!(err, Error::NoStateInRange { .. }), "{err:?}");
+    }
 }
 
 /// Found by a random-input run: (h, s) and (v, u) a hair past the hottest
@@ -462,4 +462,201 @@ fn h_s_and_v_u_beyond_the_temperature_limits_are_refused() {
             }
         }
     }
+}
+
+/// A range in an error is true at the other input's value: just inside
+/// either end (1e-9 of the span), with the other input kept, the same call
+/// does not refuse that quantity again (ISSUE 12, item 9).
+#[track_caller]
+fn assert_range_true_at_the_other_input(pair: InputPair, (a, b): (f64, f64), units: Units) {
+    for method in [Method::Exact, Method::BackwardOnly] {
+        let what = format!("{pair:?} ({a:e}, {b:e}) {units:?} {method:?}");
+        let err = match State::solve(pair, a, b, units, method) {
+            Ok(state) => panic!("{what}: solved as {state:?}"),
+            Err(e) => e,
+        };
+        assert_honest(&what, pair, (a, b), &err, units);
+        let Error::OutOfRange {
+            quantity, min, max, ..
+        } = err
+        else {
+            continue;
+        };
+        let step = 1e-9 * (max - min);
+        for inside in [min + step, max - step] {
+            let probe = if quantity == quantities(pair).0 {
+                (inside, b)
+            } else {
+                (a, inside)
+            };
+            match State::solve(pair, probe.0, probe.1, units, method) {
+                Err(Error::OutOfRange { quantity: q, .. }) if q == quantity => {
+                    panic!("{what}: {err}, yet {inside} is refused too")
+                }
+                Err(e @ Error::NoStateInRange { .. }) => {
+                    panic!("{what}: {err}, yet {inside} gives {e}")
+                }
+                _ => {}
+            }
+        }
+    }
+}
+
+/// Found by the random-input campaign: a specific volume outside the
+/// range's extremes was refused with the range of v over all internal
+/// energies, and a v just inside it at the given u has no state either
+/// (v = 1049 m³/kg at 2015.7 kJ/kg would be colder than 273.15 K). The
+/// valid v at a given u is not computed, so the honest error is
+/// `NoStateInRange`; likewise for (h, s) with s outside the range's
+/// extremes beside the critical enthalpy.
+#[test]
+fn v_u_and_h_s_ranges_are_true_at_the_other_input() {
+    let cases = [
+        (
+            InputPair::VolumeInternalEnergy,
+            -9.667808832491281e-303,
+            2015.7345241778337,
+        ),
+        (
+            InputPair::VolumeInternalEnergy,
+            -7.615636878896539e188,
+            2180.486303514872,
+        ),
+        (
+            InputPair::VolumeInternalEnergy,
+            -f64::MAX,
+            500.89276547619875,
+        ),
+        (InputPair::EnthalpyEntropy, 2087.546845, -1.0),
+        (InputPair::EnthalpyEntropy, 2087.546845, 1e300),
+        (InputPair::EnthalpyEntropy, 2399.2896372244163, -1.0),
+    ];
+    for (pair, a, b) in cases {
+        assert_range_true_at_the_other_input(pair, (a, b), Units::Native);
+    }
+}
+
+/// Found by the random-input campaign: an internal energy of ±f64::MAX
+/// Btu/lbm overflows in kJ/kg, and was reported as "no state" instead of
+/// naming the internal energy.
+#[test]
+fn an_overflowing_internal_energy_is_named() {
+    let cases = [
+        (0.019203412707062766, f64::MAX),
+        (74193349.83615585, f64::MAX),
+        (4315066808.948667, -f64::MAX),
+        (0.01601846337396013, -f64::MAX),
+    ];
+    for (v, u) in cases {
+        for method in [Method::Exact, Method::BackwardOnly] {
+            let err = State::solve(
+                InputPair::VolumeInternalEnergy,
+                v,
+                u,
+                Units::UsCustomary,
+                method,
+            )
+            .unwrap_err();
+            assert!(
+                matches!(
+                    err,
+                    Error::NotFinite {
+                        quantity: Quantity::InternalEnergy
+                    } | Error::OutOfRange {
+                        quantity: Quantity::InternalEnergy,
+                        ..
+                    }
+                ),
+                "({v}, {u}) {method:?}: {err:?}"
+            );
+        }
+    }
+}
+
+/// Found by the random-input campaign: a value refused a rounding below
+/// (or above) the bound in native units came back inside the range once
+/// the bound was converted to the caller's units; the range keeps the
+/// refused value outside, in the caller's units too.
+#[test]
+fn a_value_refused_at_a_bound_stays_outside_the_converted_range() {
+    let cases = [
+        (
+            InputPair::PressureEnthalpy,
+            5.8054492314314435e-8,
+            1075.416633833871,
+        ),
+        (
+            InputPair::PressureEnthalpy,
+            0.7017705862284397,
+            -0.016027953660313385,
+        ),
+        (
+            InputPair::PressureEntropy,
+            3.917223164731127,
+            2.903524760342553,
+        ),
+    ];
+    for (pair, a, b) in cases {
+        for method in [Method::Exact, Method::BackwardOnly] {
+            let what = format!("{pair:?} ({a}, {b}) {method:?}");
+            match State::solve(pair, a, b, Units::UsCustomary, method) {
+                Ok(state) => assert_in_range(&what, &state),
+                Err(e) => assert_honest(&what, pair, (a, b), &e, Units::UsCustomary),
+            }
+        }
+    }
+}
+
+/// Found by the random-input campaign: (h, s) of steam a hair below the
+/// pressure floor, 1e-12 MPa, came back as states at 0.99999993e-12 MPa,
+/// outside the range; they are refused, with an enthalpy range true at
+/// the given entropy.
+#[test]
+fn h_s_below_the_pressure_floor_is_refused() {
+    let cases = [
+        (4818742.486502606, 21804.321637173332, Units::SiBase),
+        (4543.810537875429, 21.590819090950955, Units::Native),
+        (
+            6244.760321506838,
+            22.695331777377024,
+            Units::MetricEngineering,
+        ),
+    ];
+    for (h, s, units) in cases {
+        for method in [Method::Exact, Method::BackwardOnly] {
+            let what = format!("({h}, {s}) {units:?} {method:?}");
+            match State::solve(InputPair::EnthalpyEntropy, h, s, units, method) {
+                Ok(state) => assert_in_range(&what, &state),
+                Err(_) => {
+                    assert_range_true_at_the_other_input(InputPair::EnthalpyEntropy, (h, s), units)
+                }
+            }
+        }
+    }
+}
+
+/// Found by the random-input campaign: R7-97 Eq. 30 gives psat a rounding
+/// above pc = 22.064 MPa (Eq. 2) within about 1e-10 K below Tc, so the
+/// pressure of a saturated state there was refused by (p, x), whose range
+/// ends at pc. The saturation line's pressure never exceeds pc, so every
+/// saturated state's own (p, x) solves, in every unit system.
+#[test]
+fn the_saturation_line_never_gives_a_pressure_above_critical() {
+    for k in 0..=200 {
+        let t = 647.096 - 1e-12 * f64::from(k);
+        for x in [0.0, 0.5673802506080554, 0.9999999999999967, 1.0] {
+            let state = State::from_tx(t, x, Units::Native).unwrap();
+            for units in Units::ALL {
+                let p = state.in_units(units).pressure();
+                let back = State::solve(InputPair::PressureQuality, p, x, units, Method::Exact);
+                assert!(back.is_ok(), "T = {t} K, x = {x}, {units:?}: {back:?}");
+            }
+        }
+    }
+    // Above pc the pressure is refused, with the range ending at pc.
+    let err = State::from_px(22.064000000028894, 0.9999999999999967, Units::Native).unwrap_err();
+    assert!(
+        matches!(err, Error::OutOfRange { quantity: Quantity::Pressure, max, .. } if max == 22.064),
+        "{err:?}"
+    );
 }

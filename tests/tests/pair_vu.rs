@@ -76,3 +76,69 @@ fn wet_steam_beside_623_15_k_comes_back_on_the_lower_side() {
         assert!((back.quality().unwrap() - x).abs() <= 1e-4, "{back:?}");
     }
 }
+
+/// Found by the random-input campaign: in-range states refused as "no
+/// state". Near the critical point (T within 1e-9 K of Tc = 647.096 K,
+/// R7-97(2012) Eq. 3) the region 3 solution was checked against ρ(p, T),
+/// which κT's divergence leaves unresolved there; a saturated liquid at
+/// 275 K (the density anomaly) landed a rounding of p below psat, in
+/// region 2; and a compressed liquid at 623.15 K, on the 1/3 seam. Each
+/// comes back, reproducing (v, u) to the promise in the caller's units.
+#[test]
+fn in_range_states_the_campaign_found_refused_come_back() {
+    let cases = [
+        (
+            0.0010001028647492606,
+            8.8735022895715,
+            Units::MetricEngineering,
+        ),
+        (0.016020111109178642, 3.8149192990419167, Units::UsCustomary),
+        (0.0031047162913372234, 2018.8926990806344, Units::Native),
+        (0.049732784199322665, 867.967626431915, Units::UsCustomary),
+        (0.003115876810618347, 2020581.7353551844, Units::SiBase),
+        (0.0031010329960438152, 2018.3342315951832, Units::Native),
+        (0.001315599905128121, 1425.3368599390087, Units::Native),
+        // Wet steam 8.7e-6 K, 1.1e-9 K and 3.6e-6 K below Tc: the wet
+        // iteration's Newton steps crawled on slopes the line does not
+        // resolve there, and densities carried along the line found the
+        // other phase's root.
+        (0.003102096019401542, 2018.495422677593, Units::Native),
+        (0.0031039290291863864, 2018.7733764208504, Units::Native),
+        (0.00310656905606679, 2019.173406996989, Units::Native),
+    ];
+    for (v, u, units) in cases {
+        let what = format!("({v}, {u}) {units:?}");
+        let state = State::from_vu(v, u, units).unwrap_or_else(|e| panic!("{what}: {e}"));
+        let close = |x: f64, y: f64| (x - y).abs() <= 1e-10 * y.abs();
+        assert!(close(state.specific_volume(), v), "v of {what}: {state:?}");
+        assert!(close(state.internal_energy(), u), "u of {what}: {state:?}");
+    }
+}
+
+/// Found by the random-input campaign: wet steam 1.8e-7 K below Tc (x =
+/// 0.16) came back as a region 3 state inside the van der Waals loop,
+/// 2.4e-6 K below Tc, whose density lies between the saturated phases'.
+#[test]
+fn wet_steam_near_critical_is_not_a_state_inside_the_loop() {
+    let state =
+        State::from_vu(0.049723419576972024, 867.9295280685429, Units::UsCustomary).unwrap();
+    assert_eq!(state.phase(), Phase::WetSteam, "{state:?}");
+}
+
+/// Found by the random-input campaign: a compressed liquid 2.3e-9 K below
+/// Tc, inside the band (about 2e-5 K) where the saturation line is not
+/// resolved to the promise, was refused as "no state". It is solved to the
+/// promise or reported as an iteration that did not converge (README,
+/// "Errors"), never as no state.
+#[test]
+fn a_state_where_the_line_is_unresolved_is_not_called_no_state() {
+    let (v, u) = (0.0031055601457367424, 2019.0205730761204);
+    match State::from_vu(v, u, NATIVE) {
+        Ok(state) => {
+            let close = |x: f64, y: f64| (x - y).abs() <= 1e-10 * y.abs();
+            assert!(close(state.specific_volume(), v), "{state:?}");
+            assert!(close(state.internal_energy(), u), "{state:?}");
+        }
+        Err(e) => assert!(matches!(e, ebullio::Error::NotConverged { .. }), "{e:?}"),
+    }
+}
