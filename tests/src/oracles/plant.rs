@@ -278,6 +278,11 @@ fn no_entropy_destroyed(generated: f64, booked: f64, allowance: f64) -> bool {
     generated.is_finite() && generated >= -allowance * booked.abs().max(1e-300)
 }
 
+/// A drawn source state in `units`.
+fn source_in(draw: &mut impl Draw, units: Units) -> Option<State> {
+    source(draw).map(|s| s.state.in_units(units))
+}
+
 /// A liquid state in `units`, or any state.
 fn liquid_or_any(draw: &mut impl Draw, units: Units) -> Option<State> {
     if draw.chance(0.7) {
@@ -287,14 +292,14 @@ fn liquid_or_any(draw: &mut impl Draw, units: Units) -> Option<State> {
             .ok()
             .map(|s| s.in_units(units))
     } else {
-        source(draw).map(|s| s.state.in_units(units))
+        source_in(draw, units)
     }
 }
 
 /// One component called with drawn inputs, and its outcome checked.
 pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
     let units = draw.pick(&Units::ALL);
-    let Some(a) = source(draw).map(|s| s.state.in_units(units)) else {
+    let Some(a) = source_in(draw, units) else {
         return;
     };
     let Some(liquid) = liquid_or_any(draw, units) else {
@@ -391,7 +396,7 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                     units.from_native(Quantity::TemperatureDifference, draw.range(-5.0, 30.0))
                 }),
             };
-            let Some(steam) = source(draw).map(|s| s.state.in_units(units)) else {
+            let Some(steam) = source_in(draw, units) else {
                 return;
             };
             let call = || {
@@ -451,7 +456,7 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
         3 => {
             let out_flow = flow(draw);
             let drains = draw.chance(0.4).then(|| (flow(draw), liquid));
-            let Some(steam) = source(draw).map(|s| s.state.in_units(units)) else {
+            let Some(steam) = source_in(draw, units) else {
                 return;
             };
             let call = || {
