@@ -176,40 +176,35 @@ fn caloric_at(p: f64, t: f64) -> (f64, f64) {
     (s.enthalpy(), s.entropy())
 }
 
+/// `err` is a range error on `quantity` from `min` to `max`, each within
+/// `tolerance`.
+fn assert_range(err: Error, quantity: Quantity, (min, max): (f64, f64), tolerance: f64) {
+    let Error::OutOfRange {
+        quantity: refused,
+        min: low,
+        max: high,
+        ..
+    } = err
+    else {
+        panic!("{err:?}")
+    };
+    assert!(refused == quantity, "{err:?}");
+    assert!(
+        (low - min).abs() < tolerance && (high - max).abs() < tolerance,
+        "{err}"
+    );
+}
+
 #[test]
 fn absurd_enthalpy_or_entropy_near_100_mpa_is_refused_with_the_range_at_p() {
     let err = State::from_ph(100.0, -771471705.8529421, Units::Native).unwrap_err();
     let (h_cold, _) = caloric_at(100.0, 273.15);
     let (h_hot, _) = caloric_at(100.0, 1073.15);
-    let Error::OutOfRange {
-        quantity: Quantity::Enthalpy,
-        min,
-        max,
-        ..
-    } = err
-    else {
-        panic!("{err:?}")
-    };
-    assert!(
-        (min - h_cold).abs() < 1e-9 && (max - h_hot).abs() < 1e-9,
-        "{err}"
-    );
+    assert_range(err, Quantity::Enthalpy, (h_cold, h_hot), 1e-9);
     let err = State::from_ps(99.99999, -1e5, Units::Native).unwrap_err();
     let (_, s_cold) = caloric_at(99.99999, 273.15);
     let (_, s_hot) = caloric_at(99.99999, 1073.15);
-    let Error::OutOfRange {
-        quantity: Quantity::Entropy,
-        min,
-        max,
-        ..
-    } = err
-    else {
-        panic!("{err:?}")
-    };
-    assert!(
-        (min - s_cold).abs() < 1e-12 && (max - s_hot).abs() < 1e-12,
-        "{err}"
-    );
+    assert_range(err, Quantity::Entropy, (s_cold, s_hot), 1e-12);
 }
 
 #[test]

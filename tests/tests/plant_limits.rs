@@ -10,6 +10,7 @@ use ebullio::plant::{
     Heater, HeaterApproach, HeaterKind, Supply, ENTROPY_ALLOWANCE,
 };
 use ebullio::{Error, Quantity, State, Units};
+use ebullio_conformance::oracles::plant::cycle_figures;
 
 /// The limits every solved cycle keeps (the second law and mass
 /// conservation; the list of impossible results).
@@ -25,23 +26,8 @@ fn assert_physical(r: &CycleResult) {
     for f in r.extraction_fractions() {
         assert!((0.0..=1.0).contains(f), "extraction fraction {f}");
     }
-    let figures = [
-        r.turbine_work,
-        r.pump_work,
-        r.net_work,
-        r.boiler_heat,
-        r.reheat_heat,
-        r.heat_input,
-        r.condenser_duty,
-        r.thermal_efficiency,
-        r.heat_rate_kj_per_kwh,
-        r.heat_rate_btu_per_kwh,
-        r.steam_rate_kg_per_kwh,
-        r.steam_rate_lbm_per_kwh,
-        r.back_work_ratio,
-        r.carnot_efficiency,
-    ];
-    assert!(figures.iter().all(|x| x.is_finite()), "{figures:?}");
+    let figures = cycle_figures(r);
+    assert!(figures.iter().all(|(_, x)| x.is_finite()), "{figures:?}");
     assert!(r.heat_input > 0.0 && r.boiler_heat > 0.0);
     assert!(r.net_work > 0.0);
     // Carnot: no cycle between two reservoirs beats 1 − T_cold/T_hot.
@@ -96,9 +82,17 @@ fn closed(pressure: f64, ttd: f64) -> Heater {
     }
 }
 
-/// A plain single-casing cycle in native units.
-fn simple(supply: Supply, exhaust: f64, efficiency: f64) -> CycleSpec {
-    let mut spec = CycleSpec::new(Units::Native, supply);
+/// Superheated throttle steam.
+fn superheated(pressure: f64, temperature: f64) -> Supply {
+    Supply::Superheated {
+        pressure,
+        temperature,
+    }
+}
+
+/// A plain single-casing cycle.
+fn single_casing(units: Units, supply: Supply, exhaust: f64, efficiency: f64) -> CycleSpec {
+    let mut spec = CycleSpec::new(units, supply);
     spec.push_casing(casing(exhaust, efficiency)).unwrap();
     spec
 }
@@ -108,32 +102,28 @@ fn heater_needing_more_steam_than_the_throttle_supplies() {
     // Saturated throttle steam at 20 MPa barely condenses at 19 MPa
     // (latent heat ~ 600 kJ/kg, recalled from steam tables) while the
     // feedwater would take it from the hotwell to 19 MPa saturation.
-    let mut spec = simple(Supply::SaturatedVapour { pressure: 20.0 }, 0.01, 0.85);
+    let mut spec = single_casing(
+        Units::Native,
+        Supply::SaturatedVapour { pressure: 20.0 },
+        0.01,
+        0.85,
+    );
     spec.push_heater(closed(19.0, 0.0)).unwrap();
     refused(&spec, &["closed heater 1", "throttle"]);
 }
 
 #[test]
 fn superheated_supply_that_is_compressed_liquid() {
-    let spec = simple(
-        Supply::Superheated {
-            pressure: 10.0,
-            temperature: 300.0,
-        },
-        0.01,
-        0.85,
-    );
+    let spec = single_casing(Units::Native, superheated(10.0, 300.0), 0.01, 0.85);
     refused(&spec, &["supply", "liquid"]);
     // 125 bar, 300 °C: below the 327.8 °C saturation temperature at 125 bar
     // (recalled from steam tables).
-    let mut spec = CycleSpec::new(
+    let spec = single_casing(
         Units::MetricEngineering,
-        Supply::Superheated {
-            pressure: 125.0,
-            temperature: 300.0,
-        },
+        superheated(125.0, 300.0),
+        0.1,
+        0.85,
     );
-    spec.push_casing(casing(0.1, 0.85)).unwrap();
     refused(
         &spec,
         &[
@@ -148,14 +138,7 @@ fn superheated_supply_that_is_compressed_liquid() {
 fn feed_pump_discharging_hotter_than_the_throttle() {
     // A 3 % feed pump to 100 MPa heats the feedwater past the 200 °C
     // throttle steam: the boiler would take heat out (efficiency 4.06).
-    let mut spec = simple(
-        Supply::Superheated {
-            pressure: 1.0,
-            temperature: 473.15,
-        },
-        0.01,
-        0.85,
-    );
+    let mut spec = single_casing(Units::Native, superheated(1.0, 473.15), 0.01, 0.85);
     spec.feed_pressure = Some(100.0);
     spec.feed_pump_efficiency = 0.03;
     refused(&spec, &["boiler", "feed pump", "limit 473.15 K"]);
@@ -167,14 +150,7 @@ fn feed_pump_discharging_hotter_than_the_throttle() {
 
 /// A 10 MPa, 500 °C cycle to 0.01 MPa with one closed heater at 0.65 MPa.
 fn one_heater(ttd: f64) -> CycleSpec {
-    let mut spec = simple(
-        Supply::Superheated {
-            pressure: 10.0,
-            temperature: 773.15,
-        },
-        0.01,
-        0.85,
-    );
+    let mut spec = single_casing(Units::Native, superheated(10.0, 773.15), 0.01, 0.85);
     spec.push_heater(closed(0.65, ttd)).unwrap();
     spec
 }
@@ -195,14 +171,12 @@ fn closed_heater_feedwater_hotter_than_its_steam() {
     // A −1.5 K TTD is what a desuperheating zone does (common practice).
     assert_physical(&solve_cycle(&one_heater(-1.5)).unwrap());
     // In a metric cycle the figures are in °C: 222 °C against 180 °C.
-    let mut spec = CycleSpec::new(
+    let mut spec = single_casing(
         Units::MetricEngineering,
-        Supply::Superheated {
-            pressure: 100.0,
-            temperature: 500.0,
-        },
+        superheated(100.0, 500.0),
+        0.1,
+        0.85,
     );
-    spec.push_casing(casing(0.1, 0.85)).unwrap();
     spec.push_heater(closed(6.5, -60.0)).unwrap();
     let text = refused(&spec, &["closed heater 1", "°C"]);
     assert!(
@@ -224,14 +198,7 @@ fn closed_heater_feedwater_hotter_than_its_steam() {
 fn vanishing_casing_efficiency_gives_no_cycle() {
     // 1e-300 is inside (0, 1] but the casing then delivers next to no
     // work: back-work ratio 1.1e13, negative efficiency today.
-    let spec = simple(
-        Supply::Superheated {
-            pressure: 10.0,
-            temperature: 773.15,
-        },
-        0.01,
-        1e-300,
-    );
+    let spec = single_casing(Units::Native, superheated(10.0, 773.15), 0.01, 1e-300);
     refused(&spec, &["cycle", "net work"]);
     // Alone, the section's work is at the enthalpy's rounding: refused
     // naming the efficiency, or positive.
@@ -247,14 +214,7 @@ fn vanishing_casing_efficiency_gives_no_cycle() {
 
 #[test]
 fn vanishing_pump_efficiency_gives_no_cycle() {
-    let mut spec = simple(
-        Supply::Superheated {
-            pressure: 10.0,
-            temperature: 773.15,
-        },
-        0.01,
-        0.85,
-    );
+    let mut spec = single_casing(Units::Native, superheated(10.0, 773.15), 0.01, 0.85);
     spec.feed_pump_efficiency = 1e-300;
     refused(&spec, &["feed pump", "isentropic efficiency 1e-300"]);
 }
@@ -273,14 +233,7 @@ fn spray_flow_that_overflows() {
 
 #[test]
 fn nan_casing_efficiency_is_named_as_an_efficiency() {
-    let spec = simple(
-        Supply::Superheated {
-            pressure: 10.0,
-            temperature: 773.15,
-        },
-        0.01,
-        f64::NAN,
-    );
+    let spec = single_casing(Units::Native, superheated(10.0, 773.15), 0.01, f64::NAN);
     let text = refused(
         &spec,
         &["casing 1", "isentropic efficiency is not a finite number"],
@@ -291,14 +244,12 @@ fn nan_casing_efficiency_is_named_as_an_efficiency() {
 #[test]
 fn metric_cycle_errors_are_in_bar() {
     // An exhaust of −1 bar in a metric cycle.
-    let mut spec = CycleSpec::new(
+    let spec = single_casing(
         Units::MetricEngineering,
-        Supply::Superheated {
-            pressure: 100.0,
-            temperature: 500.0,
-        },
+        superheated(100.0, 500.0),
+        -1.0,
+        0.85,
     );
-    spec.push_casing(casing(-1.0, 0.85)).unwrap();
     let e = solve_cycle(&spec).unwrap_err();
     let text = e.to_string();
     assert!(
@@ -313,14 +264,12 @@ fn metric_cycle_errors_are_in_bar() {
     );
     assert!(text.contains("-1 bar") && !text.contains("MPa"), "{text}");
     // A throttle at −1 bar likewise.
-    let mut spec = CycleSpec::new(
+    let spec = single_casing(
         Units::MetricEngineering,
-        Supply::Superheated {
-            pressure: -1.0,
-            temperature: 500.0,
-        },
+        superheated(-1.0, 500.0),
+        0.1,
+        0.85,
     );
-    spec.push_casing(casing(0.1, 0.85)).unwrap();
     let text = solve_cycle(&spec).unwrap_err().to_string();
     assert!(text.contains("-1 bar") && !text.contains("MPa"), "{text}");
 }
@@ -329,14 +278,12 @@ fn metric_cycle_errors_are_in_bar() {
 fn subcooling_is_reported_as_a_subcooling() {
     // 100 K below the 45.8 °C saturation at 0.1 bar (recalled from steam
     // tables) is below 0 °C.
-    let mut spec = CycleSpec::new(
+    let mut spec = single_casing(
         Units::MetricEngineering,
-        Supply::Superheated {
-            pressure: 100.0,
-            temperature: 500.0,
-        },
+        superheated(100.0, 500.0),
+        0.1,
+        0.85,
     );
-    spec.push_casing(casing(0.1, 0.85)).unwrap();
     spec.condensate_subcooling = 100.0;
     let text = refused(&spec, &["condenser", "subcooling 100 °C"]);
     assert!(!text.contains("temperature 214"), "{text}");
@@ -347,14 +294,7 @@ fn subcooling_is_reported_as_a_subcooling() {
     // In US units the subcooling is in °F of difference: 180 °F is 100 K,
     // and at 1 psia (saturation 101.69 °F, recalled from steam tables) the
     // limit is 101.69 − 32 = 69.69 °F, not a reading offset by 459.67.
-    let mut spec = CycleSpec::new(
-        Units::UsCustomary,
-        Supply::Superheated {
-            pressure: 1800.0,
-            temperature: 1000.0,
-        },
-    );
-    spec.push_casing(casing(1.0, 0.85)).unwrap();
+    let mut spec = single_casing(Units::UsCustomary, superheated(1800.0, 1000.0), 1.0, 0.85);
     spec.condensate_subcooling = 180.0;
     refused(&spec, &["condenser", "subcooling 180 °F, limit 69.69"]);
 }
@@ -363,14 +303,7 @@ fn subcooling_is_reported_as_a_subcooling() {
 fn condenser_below_the_triple_point_is_a_range_error() {
     // 0.08 psia lies below the triple-point pressure, 611.657 Pa =
     // 0.0887 psia (IAPWS R7-97(2012), section 2).
-    let mut spec = CycleSpec::new(
-        Units::UsCustomary,
-        Supply::Superheated {
-            pressure: 1800.0,
-            temperature: 1000.0,
-        },
-    );
-    spec.push_casing(casing(0.08, 0.85)).unwrap();
+    let spec = single_casing(Units::UsCustomary, superheated(1800.0, 1000.0), 0.08, 0.85);
     let e = solve_cycle(&spec).unwrap_err();
     assert!(
         matches!(
@@ -394,26 +327,17 @@ fn every_solved_cycle_of_a_grid_keeps_the_limits() {
     // ideal. Before the limits, this grid held cycles above Carnot
     // (efficiency 4.06), with extraction 2.456 and negative heat input.
     let supplies = [
-        Supply::Superheated {
-            pressure: 1.0,
-            temperature: 473.15,
-        },
+        superheated(1.0, 473.15),
         Supply::SaturatedVapour { pressure: 20.0 },
-        Supply::Superheated {
-            pressure: 10.0,
-            temperature: 773.15,
-        },
-        Supply::Superheated {
-            pressure: 25.0,
-            temperature: 873.15,
-        },
+        superheated(10.0, 773.15),
+        superheated(25.0, 873.15),
     ];
     let (mut solved, mut refused) = (0, 0);
     for supply in supplies {
         for pump in [0.03, 0.05, 0.8, 1.0] {
             for ttd in [-60.0, -15.0, 0.0, 3.0] {
                 for eta in [1e-300, 0.5, 0.85, 1.0] {
-                    let mut spec = simple(supply, 0.01, eta);
+                    let mut spec = single_casing(Units::Native, supply, 0.01, eta);
                     spec.feed_pressure = Some(30.0);
                     spec.feed_pump_efficiency = pump;
                     spec.push_heater(closed(0.9, ttd)).unwrap();
@@ -511,14 +435,7 @@ fn casing_exhausting_below_the_condenser_is_refused_by_name() {
     // An HP casing exhausting at 0.0004 MPa, below the triple point and
     // below the 0.007 MPa condenser after it: its expansion has no state
     // to reach (NotConverged before), and the pressures do not fall.
-    let mut spec = simple(
-        Supply::Superheated {
-            pressure: 0.6,
-            temperature: 460.0,
-        },
-        0.0004,
-        0.9,
-    );
+    let mut spec = single_casing(Units::Native, superheated(0.6, 460.0), 0.0004, 0.9);
     spec.push_casing(casing(0.007, 0.85)).unwrap();
     refused(&spec, &["casing 1", "exhaust pressure"]);
 }
@@ -527,14 +444,7 @@ fn casing_exhausting_below_the_condenser_is_refused_by_name() {
 fn heater_above_the_critical_pressure_is_refused_by_name() {
     // A deaerator at 24 MPa on a 30 MPa, 600 °C throttle: no saturation
     // above the 22.064 MPa critical pressure (IAPWS R7-97(2012), Eq. 2).
-    let mut spec = simple(
-        Supply::Superheated {
-            pressure: 30.0,
-            temperature: 873.15,
-        },
-        0.01,
-        0.85,
-    );
+    let mut spec = single_casing(Units::Native, superheated(30.0, 873.15), 0.01, 0.85);
     spec.push_heater(Heater {
         extraction_pressure: 24.0,
         extraction_line_loss: 0.0,
@@ -570,10 +480,7 @@ fn a_reversible_condenser_reads_within_the_documented_allowance() {
     // core/src/plant/fault.rs), inside the plant layer's one allowance.
     let mut spec = CycleSpec::new(
         Units::MetricEngineering,
-        Supply::Superheated {
-            pressure: 208.238842099763,
-            temperature: 605.4829097169421,
-        },
+        superheated(208.238842099763, 605.4829097169421),
     );
     spec.feed_pump_efficiency = 0.7271031631730582;
     spec.condensate_subcooling = 0.0;

@@ -73,44 +73,9 @@ pub fn check_plant_error(
     }
 }
 
-/// The Carnot efficiency between the coldest and the hottest state of a
-/// solved cycle, from its own points.
-fn carnot_of_points(r: &CycleResult) -> f64 {
-    let temperatures = r.points().iter().map(|p| p.state.native().t);
-    let (lo, hi) = temperatures.fold((f64::INFINITY, 0.0f64), |(lo, hi), t| {
-        (lo.min(t), hi.max(t))
-    });
-    1.0 - lo / hi
-}
-
-/// Solves `spec` and checks the outcome.
-pub fn check_cycle(spec: &CycleSpec, findings: &mut Findings) -> Option<CycleResult> {
-    findings.case();
-    let call = || format!("solve_cycle(&{spec:?})");
-    let Ok(outcome) = catch_unwind(AssertUnwindSafe(|| solve_cycle(spec))) else {
-        findings.record("cycle: panic", call);
-        return None;
-    };
-    let r = match outcome {
-        Ok(r) => r,
-        Err(e) => {
-            check_plant_error(
-                &e,
-                spec.units,
-                "cycle",
-                &|| format!("{}: {e}", call()),
-                findings,
-            );
-            return None;
-        }
-    };
-    let say = |what: String| move || format!("{}: {what}", call());
-    findings.check(
-        r.units == spec.units,
-        "cycle: result in other units",
-        say(format!("{:?}", r.units)),
-    );
-    let figures = [
+/// Every figure of a solved cycle, named.
+pub fn cycle_figures(r: &CycleResult) -> [(&'static str, f64); 14] {
+    [
         ("turbine work", r.turbine_work),
         ("pump work", r.pump_work),
         ("net work", r.net_work),
@@ -125,8 +90,87 @@ pub fn check_cycle(spec: &CycleSpec, findings: &mut Findings) -> Option<CycleRes
         ("steam rate lbm/kWh", r.steam_rate_lbm_per_kwh),
         ("back work ratio", r.back_work_ratio),
         ("Carnot efficiency", r.carnot_efficiency),
-    ];
-    for (name, x) in figures {
+    ]
+}
+
+/// Calls the plant layer under `catch_unwind`: a panic, or an error
+/// (checked by [`check_plant_error`]), is recorded as `what`'s and gives
+/// `None`; a result is handed back for the caller's own checks.
+fn run_plant_call<T>(
+    findings: &mut Findings,
+    units: Units,
+    what: &str,
+    call: &dyn Fn() -> String,
+    plant_call: impl FnOnce() -> Result<T, Error>,
+) -> Option<T> {
+    match catch_unwind(AssertUnwindSafe(plant_call)) {
+        Err(_) => {
+            findings.record(format!("{what}: panic"), call);
+            None
+        }
+        Ok(Err(e)) => {
+            check_plant_error(&e, units, what, &|| format!("{}: {e}", call()), findings);
+            None
+        }
+        Ok(Ok(x)) => Some(x),
+    }
+}
+
+/// Every figure of a component's result finite.
+fn check_figures_finite(
+    findings: &mut Findings,
+    what: &str,
+    figures: &[f64],
+    result: &impl std::fmt::Debug,
+    call: &dyn Fn() -> String,
+) {
+    findings.check(
+        figures.iter().all(|v| v.is_finite()),
+        format!("{what}: a figure not finite"),
+        || format!("{}: {result:?}", call()),
+    );
+}
+
+/// A machine's work not below zero (but for rounding) and no entropy
+/// destroyed across it from `inlet`.
+fn check_machine_work(
+    findings: &mut Findings,
+    what: &str,
+    work: f64,
+    entropy_generation: f64,
+    inlet: &State,
+    call: &dyn Fn() -> String,
+) {
+    findings.check(
+        work >= -WORK_ROUNDING * inlet.enthalpy().abs()
+            && no_entropy_destroyed(entropy_generation, inlet.entropy(), ENTROPY_ROUNDING),
+        format!("{what}: negative work or entropy destroyed"),
+        || format!("{}: work {work}, s_gen {entropy_generation}", call()),
+    );
+}
+
+/// The Carnot efficiency between the coldest and the hottest state of a
+/// solved cycle, from its own points.
+fn carnot_of_points(r: &CycleResult) -> f64 {
+    let temperatures = r.points().iter().map(|p| p.state.native().t);
+    let (lo, hi) = temperatures.fold((f64::INFINITY, 0.0f64), |(lo, hi), t| {
+        (lo.min(t), hi.max(t))
+    });
+    1.0 - lo / hi
+}
+
+/// Solves `spec` and checks the outcome.
+pub fn check_cycle(spec: &CycleSpec, findings: &mut Findings) -> Option<CycleResult> {
+    findings.case();
+    let call = || format!("solve_cycle(&{spec:?})");
+    let r = run_plant_call(findings, spec.units, "cycle", &call, || solve_cycle(spec))?;
+    let say = |what: String| move || format!("{}: {what}", call());
+    findings.check(
+        r.units == spec.units,
+        "cycle: result in other units",
+        say(format!("{:?}", r.units)),
+    );
+    for (name, x) in cycle_figures(&r) {
         findings.check(
             x.is_finite(),
             format!("cycle: {name} not finite"),
@@ -234,6 +278,11 @@ fn no_entropy_destroyed(generated: f64, booked: f64, allowance: f64) -> bool {
     generated.is_finite() && generated >= -allowance * booked.abs().max(1e-300)
 }
 
+/// A drawn source state in `units`.
+fn source_in(draw: &mut impl Draw, units: Units) -> Option<State> {
+    source(draw).map(|s| s.state.in_units(units))
+}
+
 /// A liquid state in `units`, or any state.
 fn liquid_or_any(draw: &mut impl Draw, units: Units) -> Option<State> {
     if draw.chance(0.7) {
@@ -243,14 +292,14 @@ fn liquid_or_any(draw: &mut impl Draw, units: Units) -> Option<State> {
             .ok()
             .map(|s| s.in_units(units))
     } else {
-        source(draw).map(|s| s.state.in_units(units))
+        source_in(draw, units)
     }
 }
 
 /// One component called with drawn inputs, and its outcome checked.
 pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
     let units = draw.pick(&Units::ALL);
-    let Some(a) = source(draw).map(|s| s.state.in_units(units)) else {
+    let Some(a) = source_in(draw, units) else {
         return;
     };
     let Some(liquid) = liquid_or_any(draw, units) else {
@@ -275,53 +324,25 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                     literal(eff)
                 )
             };
-            match catch_unwind(AssertUnwindSafe(|| expand(&a, p, eff))) {
-                Err(_) => findings.record("turbine: panic", call),
-                Ok(Err(e)) => check_plant_error(
-                    &e,
-                    units,
-                    "turbine",
-                    &|| format!("{}: {e}", call()),
-                    findings,
-                ),
-                Ok(Ok(x)) => {
-                    let all = [
-                        x.work,
-                        x.isentropic_work,
-                        x.isentropic_efficiency,
-                        x.entropy_generation,
-                    ];
-                    findings.check(
-                        all.iter().all(|v| v.is_finite()),
-                        "turbine: a figure not finite",
-                        || format!("{}: {x:?}", call()),
-                    );
-                    findings.check(
-                        x.work >= -WORK_ROUNDING * a.enthalpy().abs()
-                            && no_entropy_destroyed(
-                                x.entropy_generation,
-                                a.entropy(),
-                                ENTROPY_ROUNDING,
-                            ),
-                        "turbine: negative work or entropy destroyed",
-                        || {
-                            format!(
-                                "{}: work {}, s_gen {}",
-                                call(),
-                                x.work,
-                                x.entropy_generation
-                            )
-                        },
-                    );
-                    check_state(&x.exhaust, findings, "turbine exhaust", &call);
-                    check_state(
-                        &x.isentropic_exhaust,
-                        findings,
-                        "turbine isentropic exhaust",
-                        &call,
-                    );
-                }
-            }
+            let Some(x) = run_plant_call(findings, units, "turbine", &call, || expand(&a, p, eff))
+            else {
+                return;
+            };
+            let figures = [
+                x.work,
+                x.isentropic_work,
+                x.isentropic_efficiency,
+                x.entropy_generation,
+            ];
+            check_figures_finite(findings, "turbine", &figures, &x, &call);
+            check_machine_work(findings, "turbine", x.work, x.entropy_generation, &a, &call);
+            check_state(&x.exhaust, findings, "turbine exhaust", &call);
+            check_state(
+                &x.isentropic_exhaust,
+                findings,
+                "turbine isentropic exhaust",
+                &call,
+            );
         }
         1 => {
             let p = if draw.chance(0.8) {
@@ -338,45 +359,29 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                     literal(eff)
                 )
             };
-            match catch_unwind(AssertUnwindSafe(|| compress(&liquid, p, eff))) {
-                Err(_) => findings.record("pump: panic", call),
-                Ok(Err(e)) => {
-                    check_plant_error(&e, units, "pump", &|| format!("{}: {e}", call()), findings)
-                }
-                Ok(Ok(x)) => {
-                    let all = [
-                        x.work,
-                        x.isentropic_work,
-                        x.incompressible_work,
-                        x.isentropic_efficiency,
-                        x.temperature_rise,
-                        x.entropy_generation,
-                    ];
-                    findings.check(
-                        all.iter().all(|v| v.is_finite()),
-                        "pump: a figure not finite",
-                        || format!("{}: {x:?}", call()),
-                    );
-                    findings.check(
-                        x.work >= -WORK_ROUNDING * liquid.enthalpy().abs()
-                            && no_entropy_destroyed(
-                                x.entropy_generation,
-                                liquid.entropy(),
-                                ENTROPY_ROUNDING,
-                            ),
-                        "pump: negative work or entropy destroyed",
-                        || {
-                            format!(
-                                "{}: work {}, s_gen {}",
-                                call(),
-                                x.work,
-                                x.entropy_generation
-                            )
-                        },
-                    );
-                    check_state(&x.outlet, findings, "pump outlet", &call);
-                }
-            }
+            let Some(x) =
+                run_plant_call(findings, units, "pump", &call, || compress(&liquid, p, eff))
+            else {
+                return;
+            };
+            let figures = [
+                x.work,
+                x.isentropic_work,
+                x.incompressible_work,
+                x.isentropic_efficiency,
+                x.temperature_rise,
+                x.entropy_generation,
+            ];
+            check_figures_finite(findings, "pump", &figures, &x, &call);
+            check_machine_work(
+                findings,
+                "pump",
+                x.work,
+                x.entropy_generation,
+                &liquid,
+                &call,
+            );
+            check_state(&x.outlet, findings, "pump outlet", &call);
         }
         2 => {
             let fw_flow = flow(draw);
@@ -391,7 +396,7 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                     units.from_native(Quantity::TemperatureDifference, draw.range(-5.0, 30.0))
                 }),
             };
-            let Some(steam) = source(draw).map(|s| s.state.in_units(units)) else {
+            let Some(steam) = source_in(draw, units) else {
                 return;
             };
             let call = || {
@@ -402,74 +407,56 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                     literal(fw_flow)
                 )
             };
-            let outcome = catch_unwind(AssertUnwindSafe(|| {
-                closed_heater(
-                    &steam,
-                    &liquid,
-                    fw_flow,
-                    drains.as_ref().map(|(m, s)| (*m, s)),
-                    approach,
-                )
-            }));
-            match outcome {
-                Err(_) => findings.record("closed heater: panic", call),
-                Ok(Err(e)) => check_plant_error(
-                    &e,
-                    units,
-                    "closed heater",
-                    &|| format!("{}: {e}", call()),
-                    findings,
-                ),
-                Ok(Ok(x)) => {
-                    let all = [x.extraction_flow, x.duty, x.entropy_generation];
-                    findings.check(
-                        all.iter().all(|v| v.is_finite())
-                            && x.extraction_flow >= 0.0
-                            && x.duty >= 0.0,
-                        "closed heater: a flow or duty negative or not finite",
-                        || format!("{}: {x:?}", call()),
-                    );
-                    // Recomputed from the states it returns (the same balance
-                    // as the heater's own, so a booking error shows).
-                    let (e, d, b, i) = (
-                        steam.native(),
-                        x.drain_out.native(),
-                        x.feedwater_out.native(),
-                        liquid.native(),
-                    );
-                    let c = drains.map_or((0.0, d.s), |(m, s)| (m, s.native().s));
-                    let generated =
-                        x.extraction_flow * (d.s - e.s) + c.0 * (d.s - c.1) + fw_flow * (b.s - i.s);
-                    let booked = x.extraction_flow * e.s.abs()
-                        + c.0 * c.1.abs()
-                        + fw_flow * (b.s.abs() + i.s.abs());
-                    findings.check(
-                        no_entropy_destroyed(generated, booked, ENTROPY_ALLOWANCE),
-                        "closed heater: entropy destroyed",
-                        || {
-                            format!(
-                                "{}: recomputed s_gen {generated}, reported {}",
-                                call(),
-                                x.entropy_generation
-                            )
-                        },
-                    );
-                    // Heat flows from hot to cold: the feedwater leaves no
-                    // hotter than the steam that heats it.
-                    findings.check(
-                        b.t <= e.t.max(d.t) + 1e-9,
-                        "closed heater: feedwater leaves hotter than its heating steam",
-                        || format!("{}: feedwater out {} K, steam {} K", call(), b.t, e.t),
-                    );
-                    check_state(&x.feedwater_out, findings, "closed heater feedwater", &call);
-                    check_state(&x.drain_out, findings, "closed heater drain", &call);
-                }
-            }
+            let drains_in = drains.as_ref().map(|(m, s)| (*m, s));
+            let Some(x) = run_plant_call(findings, units, "closed heater", &call, || {
+                closed_heater(&steam, &liquid, fw_flow, drains_in, approach)
+            }) else {
+                return;
+            };
+            let all = [x.extraction_flow, x.duty, x.entropy_generation];
+            findings.check(
+                all.iter().all(|v| v.is_finite()) && x.extraction_flow >= 0.0 && x.duty >= 0.0,
+                "closed heater: a flow or duty negative or not finite",
+                || format!("{}: {x:?}", call()),
+            );
+            // Recomputed from the states it returns (the same balance
+            // as the heater's own, so a booking error shows).
+            let (e, d, b, i) = (
+                steam.native(),
+                x.drain_out.native(),
+                x.feedwater_out.native(),
+                liquid.native(),
+            );
+            let c = drains.map_or((0.0, d.s), |(m, s)| (m, s.native().s));
+            let generated =
+                x.extraction_flow * (d.s - e.s) + c.0 * (d.s - c.1) + fw_flow * (b.s - i.s);
+            let booked =
+                x.extraction_flow * e.s.abs() + c.0 * c.1.abs() + fw_flow * (b.s.abs() + i.s.abs());
+            findings.check(
+                no_entropy_destroyed(generated, booked, ENTROPY_ALLOWANCE),
+                "closed heater: entropy destroyed",
+                || {
+                    format!(
+                        "{}: recomputed s_gen {generated}, reported {}",
+                        call(),
+                        x.entropy_generation
+                    )
+                },
+            );
+            // Heat flows from hot to cold: the feedwater leaves no
+            // hotter than the steam that heats it.
+            findings.check(
+                b.t <= e.t.max(d.t) + 1e-9,
+                "closed heater: feedwater leaves hotter than its heating steam",
+                || format!("{}: feedwater out {} K, steam {} K", call(), b.t, e.t),
+            );
+            check_state(&x.feedwater_out, findings, "closed heater feedwater", &call);
+            check_state(&x.drain_out, findings, "closed heater drain", &call);
         }
         3 => {
             let out_flow = flow(draw);
             let drains = draw.chance(0.4).then(|| (flow(draw), liquid));
-            let Some(steam) = source(draw).map(|s| s.state.in_units(units)) else {
+            let Some(steam) = source_in(draw, units) else {
                 return;
             };
             let call = || {
@@ -480,45 +467,31 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                     literal(out_flow)
                 )
             };
-            let outcome = catch_unwind(AssertUnwindSafe(|| {
-                open_heater(
-                    &steam,
-                    &liquid,
-                    out_flow,
-                    drains.as_ref().map(|(m, s)| (*m, s)),
-                )
-            }));
-            match outcome {
-                Err(_) => findings.record("open heater: panic", call),
-                Ok(Err(e)) => check_plant_error(
-                    &e,
-                    units,
-                    "open heater",
-                    &|| format!("{}: {e}", call()),
-                    findings,
-                ),
-                Ok(Ok(x)) => {
-                    let c = drains.map_or(0.0, |(m, _)| m);
-                    let balance = x.extraction_flow + x.feedwater_flow + c - out_flow;
-                    findings.check(
-                        x.extraction_flow >= 0.0
-                            && x.feedwater_flow >= 0.0
-                            && balance.abs() <= 1e-12 * out_flow.abs().max(1.0)
-                            && x.entropy_generation.is_finite(),
-                        "open heater: flows negative, unbalanced or not finite",
-                        || format!("{}: {x:?}", call()),
-                    );
-                    let booked = out_flow * x.outlet.entropy().abs()
-                        + x.extraction_flow * steam.entropy().abs()
-                        + (x.feedwater_flow + c) * liquid.entropy().abs();
-                    findings.check(
-                        no_entropy_destroyed(x.entropy_generation, booked, ENTROPY_ALLOWANCE),
-                        "open heater: entropy destroyed",
-                        || format!("{}: {}", call(), x.entropy_generation),
-                    );
-                    check_state(&x.outlet, findings, "open heater outlet", &call);
-                }
-            }
+            let drains_in = drains.as_ref().map(|(m, s)| (*m, s));
+            let Some(x) = run_plant_call(findings, units, "open heater", &call, || {
+                open_heater(&steam, &liquid, out_flow, drains_in)
+            }) else {
+                return;
+            };
+            let c = drains.map_or(0.0, |(m, _)| m);
+            let balance = x.extraction_flow + x.feedwater_flow + c - out_flow;
+            findings.check(
+                x.extraction_flow >= 0.0
+                    && x.feedwater_flow >= 0.0
+                    && balance.abs() <= 1e-12 * out_flow.abs().max(1.0)
+                    && x.entropy_generation.is_finite(),
+                "open heater: flows negative, unbalanced or not finite",
+                || format!("{}: {x:?}", call()),
+            );
+            let booked = out_flow * x.outlet.entropy().abs()
+                + x.extraction_flow * steam.entropy().abs()
+                + (x.feedwater_flow + c) * liquid.entropy().abs();
+            findings.check(
+                no_entropy_destroyed(x.entropy_generation, booked, ENTROPY_ALLOWANCE),
+                "open heater: entropy destroyed",
+                || format!("{}: {}", call(), x.entropy_generation),
+            );
+            check_state(&x.outlet, findings, "open heater outlet", &call);
         }
         4 => {
             let steam_flow = flow(draw);
@@ -542,36 +515,25 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                     literal(target)
                 )
             };
-            match catch_unwind(AssertUnwindSafe(|| {
+            let Some(x) = run_plant_call(findings, units, "attemperator", &call, || {
                 spray_for_temperature(&a, steam_flow, &liquid, target)
-            })) {
-                Err(_) => findings.record("attemperator: panic", call),
-                Ok(Err(e)) => check_plant_error(
-                    &e,
-                    units,
-                    "attemperator",
-                    &|| format!("{}: {e}", call()),
-                    findings,
-                ),
-                Ok(Ok(x)) => {
-                    findings.check(
-                        x.spray_flow.is_finite()
-                            && x.spray_flow >= 0.0
-                            && x.entropy_generation.is_finite(),
-                        "attemperator: spray flow negative or not finite",
-                        || format!("{}: {x:?}", call()),
-                    );
-                    let booked = (steam_flow + x.spray_flow) * x.outlet.entropy().abs()
-                        + steam_flow * a.entropy().abs()
-                        + x.spray_flow * liquid.entropy().abs();
-                    findings.check(
-                        no_entropy_destroyed(x.entropy_generation, booked, ENTROPY_ALLOWANCE),
-                        "attemperator: entropy destroyed",
-                        || format!("{}: {}", call(), x.entropy_generation),
-                    );
-                    check_state(&x.outlet, findings, "attemperator outlet", &call);
-                }
-            }
+            }) else {
+                return;
+            };
+            findings.check(
+                x.spray_flow.is_finite() && x.spray_flow >= 0.0 && x.entropy_generation.is_finite(),
+                "attemperator: spray flow negative or not finite",
+                || format!("{}: {x:?}", call()),
+            );
+            let booked = (steam_flow + x.spray_flow) * x.outlet.entropy().abs()
+                + steam_flow * a.entropy().abs()
+                + x.spray_flow * liquid.entropy().abs();
+            findings.check(
+                no_entropy_destroyed(x.entropy_generation, booked, ENTROPY_ALLOWANCE),
+                "attemperator: entropy destroyed",
+                || format!("{}: {}", call(), x.entropy_generation),
+            );
+            check_state(&x.outlet, findings, "attemperator outlet", &call);
         }
         5 => {
             let streams = [(flow(draw), a), (flow(draw), liquid)];
@@ -589,50 +551,35 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                 )
             };
             let refs: Vec<(f64, &State)> = streams[..count].iter().map(|(m, s)| (*m, s)).collect();
-            match catch_unwind(AssertUnwindSafe(|| mix(&refs, p, units))) {
-                Err(_) => findings.record("mixing: panic", call),
-                Ok(Err(e)) => check_plant_error(
-                    &e,
-                    units,
-                    "mixing",
-                    &|| format!("{}: {e}", call()),
-                    findings,
-                ),
-                Ok(Ok((total, out))) => {
-                    findings.check(
-                        total.is_finite() && total > 0.0,
-                        "mixing: total flow not finite and positive",
-                        || format!("{}: {total}", call()),
-                    );
-                    check_state(&out, findings, "mixed stream", &call);
-                }
-            }
+            let Some((total, out)) =
+                run_plant_call(findings, units, "mixing", &call, || mix(&refs, p, units))
+            else {
+                return;
+            };
+            findings.check(
+                total.is_finite() && total > 0.0,
+                "mixing: total flow not finite and positive",
+                || format!("{}: {total}", call()),
+            );
+            check_state(&out, findings, "mixed stream", &call);
         }
         6 => {
             let p = lower(draw, &a);
             let call = || format!("throttle(&{}, {}) in {units:?}", describe(&a), literal(p));
-            match catch_unwind(AssertUnwindSafe(|| throttle(&a, p))) {
-                Err(_) => findings.record("throttle: panic", call),
-                Ok(Err(e)) => check_plant_error(
-                    &e,
-                    units,
-                    "throttle",
-                    &|| format!("{}: {e}", call()),
-                    findings,
-                ),
-                Ok(Ok(out)) => {
-                    let (i, o) = (a.native(), out.native());
-                    let allowed = if a.region() == out.region() {
-                        ENTROPY_ROUNDING * i.s.abs().max(1e-3)
-                    } else {
-                        SEAM_ENTROPY
-                    };
-                    findings.check(o.s >= i.s - allowed, "throttle: entropy destroyed", || {
-                        format!("{}: s {} → {}", call(), i.s, o.s)
-                    });
-                    check_state(&out, findings, "throttled stream", &call);
-                }
-            }
+            let Some(out) = run_plant_call(findings, units, "throttle", &call, || throttle(&a, p))
+            else {
+                return;
+            };
+            let (i, o) = (a.native(), out.native());
+            let allowed = if a.region() == out.region() {
+                ENTROPY_ROUNDING * i.s.abs().max(1e-3)
+            } else {
+                SEAM_ENTROPY
+            };
+            findings.check(o.s >= i.s - allowed, "throttle: entropy destroyed", || {
+                format!("{}: s {} → {}", call(), i.s, o.s)
+            });
+            check_state(&out, findings, "throttled stream", &call);
         }
         _ => {
             let (p, dt) = (
@@ -648,26 +595,18 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                     literal(dt)
                 )
             };
-            match catch_unwind(AssertUnwindSafe(|| condensate(p, dt, units))) {
-                Err(_) => findings.record("condensate: panic", call),
-                Ok(Err(e)) => check_plant_error(
-                    &e,
-                    units,
-                    "condensate",
-                    &|| format!("{}: {e}", call()),
-                    findings,
-                ),
-                Ok(Ok(out)) => {
-                    findings.check(
-                        matches!(
-                            out.phase(),
-                            Phase::CompressedLiquid | Phase::SaturatedLiquid
-                        ),
-                        "condensate: not liquid",
-                        || format!("{}: {}", call(), describe(&out)),
-                    );
-                    check_state(&out, findings, "condensate", &call);
-                }
+            if let Some(out) = run_plant_call(findings, units, "condensate", &call, || {
+                condensate(p, dt, units)
+            }) {
+                findings.check(
+                    matches!(
+                        out.phase(),
+                        Phase::CompressedLiquid | Phase::SaturatedLiquid
+                    ),
+                    "condensate: not liquid",
+                    || format!("{}: {}", call(), describe(&out)),
+                );
+                check_state(&out, findings, "condensate", &call);
             }
             let (pin, tin, pout, tout) = (
                 value(draw, Quantity::Pressure, units),
@@ -684,30 +623,16 @@ pub fn check_component(draw: &mut impl Draw, findings: &mut Findings) {
                     literal(tout)
                 )
             };
-            match catch_unwind(AssertUnwindSafe(|| {
+            if let Some(x) = run_plant_call(findings, units, "section efficiency", &call, || {
                 section_efficiency(pin, tin, pout, tout, units)
-            })) {
-                Err(_) => findings.record("section efficiency: panic", call),
-                Ok(Err(e)) => check_plant_error(
-                    &e,
-                    units,
-                    "section efficiency",
-                    &|| format!("{}: {e}", call()),
-                    findings,
-                ),
-                Ok(Ok(x)) => {
-                    let all = [
-                        x.work,
-                        x.isentropic_work,
-                        x.isentropic_efficiency,
-                        x.entropy_generation,
-                    ];
-                    findings.check(
-                        all.iter().all(|v| v.is_finite()),
-                        "section efficiency: a figure not finite",
-                        || format!("{}: {x:?}", call()),
-                    );
-                }
+            }) {
+                let figures = [
+                    x.work,
+                    x.isentropic_work,
+                    x.isentropic_efficiency,
+                    x.entropy_generation,
+                ];
+                check_figures_finite(findings, "section efficiency", &figures, &x, &call);
             }
         }
     }

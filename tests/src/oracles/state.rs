@@ -200,7 +200,7 @@ pub fn check_state(state: &State, findings: &mut Findings, tag: &str, call: &dyn
         ("w", state.speed_of_sound()),
         ("kappa_T", state.compressibility()),
     ];
-    for (name, value) in positive {
+    for &(name, value) in &positive {
         if let Some(v) = value {
             findings.check(
                 v.is_finite() && v > 0.0,
@@ -209,30 +209,25 @@ pub fn check_state(state: &State, findings: &mut Findings, tag: &str, call: &dyn
             );
         }
     }
-    if let Some(alpha) = state.expansion_coefficient() {
+    let alpha = state.expansion_coefficient();
+    if let Some(alpha) = alpha {
         findings.check(
             alpha.is_finite(),
             format!("alpha_v present but not finite [{tag}]"),
             || format!("{}: alpha_v = {alpha}", at()),
         );
     }
-    let single_phase_set = [
-        state.isobaric_heat_capacity(),
-        state.isochoric_heat_capacity(),
-        state.speed_of_sound(),
-        state.compressibility(),
-        state.expansion_coefficient(),
-    ];
+    let mut single_phase_set = positive.iter().map(|&(_, v)| v).chain([alpha]);
     let wet = state.phase() == Phase::WetSteam;
     if wet {
         findings.check(
-            single_phase_set.iter().all(Option::is_none),
+            single_phase_set.all(|v| v.is_none()),
             format!("wet steam has a single-phase property [{tag}]"),
             at,
         );
     } else if !near_critical(n.p, n.t) {
         findings.check(
-            single_phase_set.iter().all(Option::is_some),
+            single_phase_set.all(|v| v.is_some()),
             format!("single-phase property absent away from the critical point [{tag}]"),
             at,
         );
