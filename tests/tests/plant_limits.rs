@@ -509,3 +509,70 @@ fn a_reversible_condenser_reads_within_the_documented_allowance() {
     // And it is no more than the line's inconsistency per unit flow.
     assert!(generated.abs() <= 3.2e-5, "{generated}");
 }
+
+#[test]
+fn pumped_forward_drains_near_the_critical_point_converge_to_rounding() {
+    // Reproducer of the fuzzing campaign (US customary units): three
+    // closed heaters pumping their drains forward into a 3229.5 psia feed
+    // line, with negative TTDs. It was refused as a drain flow iteration
+    // that did not converge, yet the sweeps reach 3e-14 in four: the
+    // mixed feedwater (near 629 K at 22.3 MPa, close to the critical
+    // point) is solved from (p, h) a few 1e-14 relative off its aim, and
+    // the fractions then alternate between two neighbours 3.3e-14 apart,
+    // above the 1e-14 the solver asked for. A valid plant, so solved.
+    let mut spec = CycleSpec::new(
+        Units::UsCustomary,
+        Supply::Superheated {
+            pressure: 3229.5069601259925,
+            temperature: 979.9549999999999,
+        },
+    );
+    spec.feed_pump_efficiency = 0.9518887701444327;
+    spec.condensate_pump_efficiency = 0.99613052005816;
+    spec.condensate_subcooling = 5.399999770137759;
+    spec.push_casing(casing(0.4351132131906362, 0.9999999999999183))
+        .unwrap();
+    let pumped = |pressure, loss, ttd, dca| Heater {
+        extraction_pressure: pressure,
+        extraction_line_loss: loss,
+        kind: HeaterKind::Closed {
+            approach: HeaterApproach {
+                terminal_temperature_difference: ttd,
+                drain_cooler_approach: dca,
+            },
+            drains: Drains::PumpForward,
+        },
+    };
+    for heater in [
+        pumped(
+            2906.5551628243006,
+            0.07999877929693526,
+            -5.340673982978251,
+            None,
+        ),
+        pumped(2812.717127340231, 0.0797607421875, 5.875677645206434, None),
+        pumped(
+            1795.551208518838,
+            0.0799988317489584,
+            -5.399974894536111,
+            Some(17.999999999991328),
+        ),
+    ] {
+        spec.push_heater(heater).unwrap();
+    }
+    let r = solve_cycle(&spec).unwrap();
+    assert_physical(&r);
+    // First law for every component, drain pumps and mixing points
+    // included: what flows in plus heat equals what flows out plus work,
+    // to the rounding of flows (1e-12 of the throttle flow) times the
+    // enthalpies.
+    for c in r.components() {
+        let enthalpy_flow = |streams: &[ebullio::plant::Stream]| {
+            streams.iter().map(|s| s.flow * s.enthalpy).sum::<f64>()
+        };
+        let imbalance =
+            enthalpy_flow(c.inlets()) + c.heat_in - enthalpy_flow(c.outlets()) - c.work_out;
+        let scale = enthalpy_flow(c.inlets()).abs() + c.heat_in.abs() + c.work_out.abs();
+        assert!(imbalance.abs() <= 1e-12 * scale, "{c:?}: {imbalance}");
+    }
+}

@@ -32,6 +32,10 @@ use crate::{Error, Phase, Quantity, Saturation, State, Units};
 const MAX_SWEEPS: usize = 60;
 /// Extraction fractions that move less than this between sweeps are
 /// converged (they are fractions of the throttle flow, so absolute).
+/// The mixing points' states are solved from (p, h), whose enthalpy
+/// comes back a few 1e-14 relative off its aim near the critical point;
+/// that moves the fractions by as much, so sweeps may stop contracting
+/// above this: once they do within [`FLOW_ROUNDING`] they are converged.
 const SWEEP_TOLERANCE: f64 = 1e-14;
 const MAX_GROUPS: usize = MAX_CASINGS + MAX_HEATERS;
 /// Flows are fractions of the throttle flow summed from a few terms each
@@ -342,6 +346,7 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
     let mut condensate_flow = 1.0;
     let mut to_condenser: Option<(f64, usize)> = None;
     let mut converged = false;
+    let mut last_change = f64::INFINITY;
     for sweep in 0..MAX_SWEEPS {
         // Upward: water states from the hotwell to the boiler. A heater
         // whose inlet water is the same as in the last sweep keeps its
@@ -462,10 +467,12 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
         }
         condensate_flow = above;
         to_condenser = cascade;
-        if !pumped_forward || change <= SWEEP_TOLERANCE {
+        let at_rounding_floor = change <= FLOW_ROUNDING && change >= last_change;
+        if !pumped_forward || change <= SWEEP_TOLERANCE || at_rounding_floor {
             converged = true;
             break;
         }
+        last_change = change;
     }
     if !converged {
         return Err(Error::NotConverged {
