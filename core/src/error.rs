@@ -195,11 +195,23 @@ impl Error {
 /// [`Error::with_given`].
 #[inline]
 pub(crate) fn native_input(units: Units, quantity: Quantity, value: f64) -> Result<f64, Error> {
-    if value.is_finite() {
-        Ok(units.to_native(quantity, value).clamp(-f64::MAX, f64::MAX))
-    } else {
-        Err(Error::NotFinite { quantity })
+    if !value.is_finite() {
+        return Err(Error::NotFinite { quantity });
     }
+    // The conversion of a finite number is finite or infinite, never NaN.
+    let native = units.to_native(quantity, value);
+    Ok(if native.is_finite() {
+        native
+    } else {
+        overflowed(native)
+    })
+}
+
+/// The largest finite number of an overflowed conversion's sign.
+#[cold]
+#[inline(never)]
+fn overflowed(native: f64) -> f64 {
+    native.clamp(-f64::MAX, f64::MAX)
 }
 
 /// Solves a pair from the caller's `a` and `b`: both converted to native
@@ -214,7 +226,15 @@ pub(crate) fn solve_given<T>(
 ) -> Result<T, Error> {
     let native_a = native_input(units, a.0, a.1)?;
     let native_b = native_input(units, b.0, b.1)?;
-    solve(native_a, native_b).map_err(|e| match e {
+    solve(native_a, native_b).map_err(|e| given_in_error(e, units, a, b))
+}
+
+/// A pair's error with the caller's own `a` and `b` ([`solve_given`]);
+/// out of line, off the hot path.
+#[cold]
+#[inline(never)]
+fn given_in_error(e: Error, units: Units, a: (Quantity, f64), b: (Quantity, f64)) -> Error {
+    match e {
         // A pair with no range to give (v, u; h, s beyond the range's
         // extremes) names an input that overflowed rather than saying
         // "no state": that input is not finite in native units.
@@ -223,7 +243,7 @@ pub(crate) fn solve_given<T>(
             .find(|&(quantity, value)| !units.to_native(quantity, value).is_finite())
             .map_or(e, |(quantity, _)| Error::NotFinite { quantity }),
         _ => e.with_given(a).with_given(b),
-    })
+    }
 }
 
 /// The caller's own number as typed, shortest round-trip digits, in
