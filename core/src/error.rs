@@ -195,23 +195,11 @@ impl Error {
 /// [`Error::with_given`].
 #[inline]
 pub(crate) fn native_input(units: Units, quantity: Quantity, value: f64) -> Result<f64, Error> {
-    if !value.is_finite() {
-        return Err(Error::NotFinite { quantity });
-    }
-    // The conversion of a finite number is finite or infinite, never NaN.
-    let native = units.to_native(quantity, value);
-    Ok(if native.is_finite() {
-        native
+    if value.is_finite() {
+        Ok(units.to_native(quantity, value).clamp(-f64::MAX, f64::MAX))
     } else {
-        overflowed(native)
-    })
-}
-
-/// The largest finite number of an overflowed conversion's sign.
-#[cold]
-#[inline(never)]
-fn overflowed(native: f64) -> f64 {
-    native.clamp(-f64::MAX, f64::MAX)
+        Err(Error::NotFinite { quantity })
+    }
 }
 
 /// Solves a pair from the caller's `a` and `b`: both converted to native
