@@ -214,7 +214,15 @@ pub(crate) fn solve_given<T>(
 ) -> Result<T, Error> {
     let native_a = native_input(units, a.0, a.1)?;
     let native_b = native_input(units, b.0, b.1)?;
-    solve(native_a, native_b).map_err(|e| match e {
+    solve(native_a, native_b).map_err(|e| given_in_error(e, units, a, b))
+}
+
+/// A pair's error with the caller's own `a` and `b` ([`solve_given`]);
+/// out of line, off the hot path.
+#[cold]
+#[inline(never)]
+fn given_in_error(e: Error, units: Units, a: (Quantity, f64), b: (Quantity, f64)) -> Error {
+    match e {
         // A pair with no range to give (v, u; h, s beyond the range's
         // extremes) names an input that overflowed rather than saying
         // "no state": that input is not finite in native units.
@@ -223,7 +231,7 @@ pub(crate) fn solve_given<T>(
             .find(|&(quantity, value)| !units.to_native(quantity, value).is_finite())
             .map_or(e, |(quantity, _)| Error::NotFinite { quantity }),
         _ => e.with_given(a).with_given(b),
-    })
+    }
 }
 
 /// The caller's own number as typed, shortest round-trip digits, in

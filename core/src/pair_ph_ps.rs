@@ -249,21 +249,26 @@ pub(crate) fn solve(
     // 273.15 K state (liquid at or above psat(273.15 K), vapour below) to
     // the hottest. Outside it no state lies in the range (a wet z, between
     // z' and z'', lies inside).
-    let lowest = z_at(
-        if below_triple_line {
+    let lowest = || {
+        let cold_equation = if below_triple_line {
             Equation::Region2
         } else {
             Equation::Region1
-        },
-        MIN_TEMPERATURE,
-    );
+        };
+        z_at(cold_equation, MIN_TEMPERATURE)
+    };
     let highest = if p <= REGION5_MAX_PRESSURE {
         z_at(Equation::Region5, MAX_TEMPERATURE)
     } else {
         z_at(Equation::Region2, REGION2_MAX_TEMPERATURE)
     };
-    if !(lowest..=highest).contains(&z) {
-        return Err(out_of_range(lowest, highest));
+    // Only a region 1 z and one below the triple line can lie below the
+    // cold end: every other location has z above a value at a higher T
+    // on this isobar (z'', or region 1's at 623.15 K), so the 273.15 K
+    // value is spared on the hot paths.
+    let may_be_too_cold = below_triple_line || equation == Equation::Region1;
+    if z > highest || (may_be_too_cold && z < lowest()) {
+        return Err(out_of_range(lowest(), highest));
     }
 
     // Past region 2's hot end lies region 5 (the range check has refused
@@ -534,11 +539,13 @@ fn refined_in_expected_region(
 impl State {
     /// The state at pressure `p` and specific enthalpy `h`, in `units`,
     /// refined to reproduce both to relative 1e-10 or better.
+    #[inline]
     pub fn from_ph(p: f64, h: f64, units: Units) -> Result<State, Error> {
         State::from_ph_with(p, h, units, Method::Exact)
     }
 
     /// [`State::from_ph`] with the choice of [`Method`].
+    #[inline]
     pub fn from_ph_with(p: f64, h: f64, units: Units, method: Method) -> Result<State, Error> {
         let (p, h) = ((Quantity::Pressure, p), (Quantity::Enthalpy, h));
         solve_given(units, p, h, |p, h| {
@@ -548,11 +555,13 @@ impl State {
 
     /// The state at pressure `p` and specific entropy `s`, in `units`,
     /// refined to reproduce both to relative 1e-10 or better.
+    #[inline]
     pub fn from_ps(p: f64, s: f64, units: Units) -> Result<State, Error> {
         State::from_ps_with(p, s, units, Method::Exact)
     }
 
     /// [`State::from_ps`] with the choice of [`Method`].
+    #[inline]
     pub fn from_ps_with(p: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
         let (p, s) = ((Quantity::Pressure, p), (Quantity::Entropy, s));
         solve_given(units, p, s, |p, s| {

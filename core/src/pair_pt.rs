@@ -37,10 +37,10 @@ impl State {
     /// extrapolation at the edge of a subregion's range) is
     /// [`Error::BackwardEquationOutOfRange`].
     pub fn from_pt_with(p: f64, t: f64, units: Units, method: Method) -> Result<State, Error> {
-        let given = (Quantity::Pressure, p, Quantity::Temperature, t);
+        let (p_given, t_given) = (p, t);
         let p = native_input(units, Quantity::Pressure, p)?;
         let t = native_input(units, Quantity::Temperature, t)?;
-        let (props, region) = match located(p, t, units, given)? {
+        let (props, region) = match located(p, t, units, (p_given, t_given))? {
             Located::Region1 => (region1::gibbs(p, t).properties(p, t), Region::One),
             Located::Region2 => (region2::gibbs(p, t).properties(p, t), Region::Two),
             Located::Region5 => (region5::gibbs(p, t).properties(p, t), Region::Five),
@@ -92,10 +92,9 @@ impl State {
 /// the cheap path for batches that need nothing else. Same value, bit for
 /// bit, as `State::from_pt(p, t, units)?.enthalpy()` in regions 1, 2 and 5.
 pub fn enthalpy_from_pt(p: f64, t: f64, units: Units) -> Result<f64, Error> {
-    let given = (Quantity::Pressure, p, Quantity::Temperature, t);
     let p_native = native_input(units, Quantity::Pressure, p)?;
     let t_native = native_input(units, Quantity::Temperature, t)?;
-    let h = match located(p_native, t_native, units, given)? {
+    let h = match located(p_native, t_native, units, (p, t))? {
         Located::Region1 => region1::enthalpy(p_native, t_native),
         Located::Region2 => region2::enthalpy(p_native, t_native),
         Located::Region5 => region5::enthalpy(p_native, t_native),
@@ -105,11 +104,16 @@ pub fn enthalpy_from_pt(p: f64, t: f64, units: Units) -> Result<f64, Error> {
 }
 
 /// [`locate`], its range errors carrying the caller's own p and T.
-fn located(
-    p: f64,
-    t: f64,
-    units: Units,
-    (qp, p_given, qt, t_given): (Quantity, f64, Quantity, f64),
-) -> Result<Located, Error> {
-    locate(p, t, units).map_err(|e| e.with_given((qp, p_given)).with_given((qt, t_given)))
+#[inline]
+fn located(p: f64, t: f64, units: Units, given: (f64, f64)) -> Result<Located, Error> {
+    locate(p, t, units).map_err(|e| with_given_pt(e, given))
+}
+
+/// A range error of [`locate`] with the caller's own p and T; out of line,
+/// off the hot path.
+#[cold]
+#[inline(never)]
+fn with_given_pt(e: Error, (p, t): (f64, f64)) -> Error {
+    e.with_given((Quantity::Pressure, p))
+        .with_given((Quantity::Temperature, t))
 }

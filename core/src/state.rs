@@ -200,8 +200,9 @@ impl State {
         self.units.from_native(quantity, value)
     }
 
-    /// A response property of [`State::physical`]: NaN there (wet steam,
-    /// or not finite and physical) reads as `None`.
+    /// A response property as [`State::physical`] has it
+    /// ([`Properties::kept`]): NaN there (wet steam, or not finite and
+    /// physical) reads as `None`.
     #[inline]
     fn read_response(&self, quantity: Quantity, value: f64) -> Option<f64> {
         (!value.is_nan()).then(|| self.read(quantity, value))
@@ -271,32 +272,44 @@ impl State {
     /// `None`. Close to the critical point they are present, large and
     /// physical.
     pub fn isobaric_heat_capacity(&self) -> Option<f64> {
-        self.read_response(Quantity::SpecificEntropy, self.physical().cp)
+        self.read_response(
+            Quantity::SpecificEntropy,
+            self.props.kept(self.props.cp, true),
+        )
     }
 
     /// Specific isochoric heat capacity cv; `None` for wet steam and where
     /// the state is not stable (see [`State::isobaric_heat_capacity`]).
     pub fn isochoric_heat_capacity(&self) -> Option<f64> {
-        self.read_response(Quantity::SpecificEntropy, self.physical().cv)
+        self.read_response(
+            Quantity::SpecificEntropy,
+            self.props.kept(self.props.cv, true),
+        )
     }
 
     /// Speed of sound; `None` for wet steam and where the state is not
     /// stable (see [`State::isobaric_heat_capacity`]).
     pub fn speed_of_sound(&self) -> Option<f64> {
-        self.read_response(Quantity::Speed, self.physical().w)
+        self.read_response(Quantity::Speed, self.props.kept(self.props.w, true))
     }
 
     /// Isobaric cubic expansion coefficient αv = (∂v/∂T)_p / v; `None` for
     /// wet steam and at and next to the critical point (see
     /// [`State::isobaric_heat_capacity`]).
     pub fn expansion_coefficient(&self) -> Option<f64> {
-        self.read_response(Quantity::ExpansionCoefficient, self.physical().alpha_v)
+        self.read_response(
+            Quantity::ExpansionCoefficient,
+            self.props.kept(self.props.alpha_v, false),
+        )
     }
 
     /// Isothermal compressibility κT = −(∂v/∂p)_T / v; `None` for wet steam
     /// and at and next to the critical point (see
     /// [`State::isobaric_heat_capacity`]).
     pub fn compressibility(&self) -> Option<f64> {
-        self.read_response(Quantity::Compressibility, self.physical().kappa_t)
+        self.read_response(
+            Quantity::Compressibility,
+            self.props.kept(self.props.kappa_t, true),
+        )
     }
 }
