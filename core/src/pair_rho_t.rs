@@ -79,6 +79,10 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
     };
     let rho_min = 1e3 * MIN_PRESSURE / (SPECIFIC_GAS_CONSTANT * t);
     let out_of_range = || Error::out_of_range(Quantity::Density, rho, rho_min, rho_max(), units);
+    // Denser than the isotherm's densest state beyond rounding: a volume
+    // read at the pressure limit and given back in other units (its T a
+    // rounding off) must still solve, like the pressure limit itself.
+    let too_dense = || rho > rho_max() * (1.0 + PRESSURE_SLACK);
     if rho < rho_min {
         return Err(out_of_range());
     }
@@ -97,7 +101,7 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
         if t <= REGION13_TEMPERATURE {
             // Liquid side is region 1, vapour side region 2.
             let (equation, p0, p_range) = if v <= vl {
-                if rho > rho_max() {
+                if too_dense() {
                     return Err(out_of_range());
                 }
                 let liquid = sat.liquid().native();
@@ -126,7 +130,7 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
             let p0 = ideal_gas_pressure(rho, t).min(p_b23);
             return gibbs_state(Equation::Region2, rho, t, p0, (0.0, p_b23 * 1.001), units);
         }
-        if rho > rho_max() {
+        if too_dense() {
             return Err(out_of_range());
         }
         let props = Equation::Region3.evaluate(rho, t);
@@ -146,7 +150,7 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
     } else {
         Equation::Region5
     };
-    if rho > rho_max() {
+    if too_dense() {
         return Err(out_of_range());
     }
     let p0 = ideal_gas_pressure(rho, t).min(p_max);

@@ -655,3 +655,29 @@ fn the_saturation_line_never_gives_a_pressure_above_critical() {
         "{err:?}"
     );
 }
+
+/// Found by the solve fuzz target: the densest state of an isotherm above
+/// 1073.15 K is at 50 MPa (IAPWS R7-97(2012), section 1), and a specific
+/// volume equal to it, to its last digits, must solve rather than be
+/// refused with a range whose bound prints as that same value.
+#[test]
+fn the_densest_state_of_an_isotherm_solves_from_its_own_volume() {
+    let refused = State::solve(
+        InputPair::VolumeTemperature,
+        0.012483467718834306,
+        1095.3672170649265,
+        Units::MetricEngineering,
+        Method::Exact,
+    );
+    assert!(refused.is_ok(), "{refused:?}");
+    for t in [600.0, 900.0, 1073.15, 1100.0, 1500.0, 2273.15] {
+        let p_max = if t <= 1073.15 { 100.0 } else { 50.0 };
+        let densest = State::from_pt(p_max, t, Units::Native).unwrap();
+        for units in Units::ALL {
+            let s = densest.in_units(units);
+            let back = State::from_vt(s.specific_volume(), s.temperature(), units);
+            assert!(back.is_ok(), "T = {t} K, {units:?}: {back:?}");
+            assert_in_range("densest state from (v, T)", &back.unwrap());
+        }
+    }
+}
