@@ -262,9 +262,14 @@ pub(crate) fn solve(
     } else {
         z_at(Equation::Region2, REGION2_MAX_TEMPERATURE)
     };
-    if !(lowest..=highest).contains(&z) {
+    // The bounds are the formulation's own values at the edge; a z a few
+    // rounding steps past one (the same state's value on another path of
+    // evaluation) is that edge's state.
+    let edge_rounding = EDGE_ROUNDING * z.abs().max(1.0);
+    if !(lowest - edge_rounding..=highest + edge_rounding).contains(&z) {
         return Err(out_of_range(lowest, highest));
     }
+    let z = z.clamp(lowest, highest);
 
     // Past region 2's hot end lies region 5 (the range check has refused
     // such z above 50 MPa).
@@ -380,6 +385,10 @@ pub(crate) fn solve(
 /// How far (K) a backward temperature may stray past its region's limits:
 /// the releases promise 25 mK or better inside them.
 const BACKWARD_SLACK: f64 = 1.0;
+
+/// Relative rounding, in z, at which the range's own edge values are still
+/// taken as the edge: a state's value there computed along another path.
+const EDGE_ROUNDING: f64 = 8.0 * f64::EPSILON;
 
 /// Refuses a backward-equation temperature that is no state of the region
 /// (the equation used far outside the range it was fitted to).

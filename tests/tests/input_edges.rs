@@ -655,3 +655,25 @@ fn the_saturation_line_never_gives_a_pressure_above_critical() {
         "{err:?}"
     );
 }
+
+/// Found by the solve fuzz target: just above 50 MPa the range tops out at
+/// 1073.15 K (IAPWS R7-97(2012), section 1), and the entropy of the state
+/// there, fed back to (p, s), was refused as outside the range it bounds.
+#[test]
+fn the_entropy_at_the_hot_end_above_50_mpa_solves() {
+    let p = 50.00345349720759;
+    let edge = State::from_pt(p, 1073.15, Units::Native).unwrap();
+    // The exact iteration finds the edge; the backward equation lies within
+    // its permissible deviation, 25 mK (recalled from IAPWS R7-97(2012),
+    // section 6, region 2 T(p, s)).
+    for s in [6.522598179419287, edge.native().s] {
+        for (method, deviation) in [(Method::Exact, 1e-6), (Method::BackwardOnly, 0.025)] {
+            let state = State::solve(InputPair::PressureEntropy, p, s, Units::Native, method);
+            let state = state.unwrap_or_else(|e| panic!("s = {s}, {method:?}: {e}"));
+            assert!((state.native().t - 1073.15).abs() < deviation, "{state:?}");
+            if method == Method::Exact {
+                assert_in_range("(p, s) at the hot end", &state);
+            }
+        }
+    }
+}
