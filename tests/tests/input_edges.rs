@@ -677,3 +677,25 @@ fn the_entropy_at_the_hot_end_above_50_mpa_solves() {
         }
     }
 }
+
+/// Found by the solve fuzz target: a cold liquid near the triple point,
+/// where the exact (h, s) iteration does not settle. With
+/// `Method::BackwardOnly` the answer is the backward equations' state or
+/// `BackwardEquationOutOfRange` (DEVELOPERS.md), never `NotConverged`;
+/// the state returned lies in the range (IAPWS R7-97(2012), section 1).
+#[test]
+fn a_cold_liquid_near_the_triple_point_solves_backward_only() {
+    let (h, s) = (0.7771347776373376, 0.0015787407853886254);
+    let units = Units::UsCustomary;
+    match State::solve(
+        InputPair::EnthalpyEntropy,
+        h,
+        s,
+        units,
+        Method::BackwardOnly,
+    ) {
+        Ok(state) => assert_in_range("(h, s) backward near the triple point", &state),
+        Err(Error::BackwardEquationOutOfRange { .. }) => {}
+        Err(e) => panic!("{e:?}"),
+    }
+}
