@@ -699,3 +699,44 @@ fn a_cold_liquid_near_the_triple_point_solves_backward_only() {
         Err(e) => panic!("{e:?}"),
     }
 }
+
+/// Found by the solve fuzz target: at an entropy a rounding below region 2's
+/// on the 1e-12 MPa floor at 1073.15 K, the enthalpies valid are a tip of
+/// region 2 and then region 5 from its own, higher, 1073.15 K value (the
+/// two equations differ at the seam, IAPWS R7-97(2012) section 2): no single
+/// interval, so a point in the gap is NoStateInRange (DEVELOPERS.md) and
+/// the campaign's oracle no longer calls that range untrue.
+#[test]
+fn the_hs_gap_at_the_region5_seam_on_the_pressure_floor_is_no_state() {
+    use ebullio_conformance::oracles::state::{check_solve, SolveCase};
+    use ebullio_conformance::oracles::Findings;
+    let s = 21.258169111132666;
+    let solve = |h: f64| State::from_hs_with(h, s, Units::Native, Method::BackwardOnly);
+    // Below the hull: the enthalpy is out of range.
+    assert!(matches!(
+        solve(4160.663689415188),
+        Err(Error::OutOfRange {
+            quantity: Quantity::Enthalpy,
+            ..
+        })
+    ));
+    // In the gap: no state.
+    assert!(matches!(
+        solve(4160.663693225655),
+        Err(Error::NoStateInRange { .. })
+    ));
+    // Region 5 starts where the floor and the 1073.15 K isotherm meet.
+    let region5 = State::from_pt(1e-12, 1073.150000001, Units::Native).unwrap();
+    assert_eq!(region5.region(), ebullio::Region::Five);
+    let above = solve(region5.native().h + 0.001).unwrap();
+    assert_in_range("(h, s) in region 5 above the gap", &above);
+    // The oracle accepts the refusal.
+    let case = SolveCase {
+        pair: InputPair::EnthalpyEntropy,
+        a: 4160.663689415188,
+        b: s,
+        units: Units::Native,
+        method: Method::BackwardOnly,
+    };
+    check_solve(&case, false, &mut Findings::stopping_at_first());
+}
