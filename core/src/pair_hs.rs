@@ -1113,6 +1113,11 @@ fn solve_backward(h: f64, s: f64, indicated: Place) -> Option<State> {
     close(state.native()).then_some(state)
 }
 
+/// The strict answer where the backward equations give no state in range.
+const BACKWARD_OUT_OF_RANGE: Error = Error::BackwardEquationOutOfRange {
+    equation: "p(h,s), T(p,h)",
+};
+
 /// Solves (h, s), native, with the chosen method.
 fn solve(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
     let indicated = place_by_boundary_equations(h, s);
@@ -1123,18 +1128,27 @@ fn solve(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
             // state decides whether the point is in range, so that both
             // methods refuse the same points; a backward state outside
             // the range with an exact one inside is the backward
-            // equations' failure.
+            // equations' failure. An exact iteration that does not settle
+            // decides nothing: the backward state's own place does.
             let (p, t) = (state.native().p, state.native().t);
             if p >= 0.99 * MAX_PRESSURE || t <= MIN_TEMPERATURE + 0.5 {
-                solve_exact(h, s, indicated, units)?;
+                match solve_exact(h, s, indicated, units) {
+                    Ok(_) | Err(Error::NotConverged { .. }) => {}
+                    Err(e) => return Err(e),
+                }
             }
             if !within_range(p, t) {
-                return Err(Error::BackwardEquationOutOfRange {
-                    equation: "p(h,s), T(p,h)",
-                });
+                return Err(BACKWARD_OUT_OF_RANGE);
             }
             return Ok(state.in_units(units));
         }
+        // No backward state: the exact one, if found, decides the point's
+        // place; one that does not settle leaves only the backward
+        // equations' failure to report.
+        return match solve_exact(h, s, indicated, units) {
+            Err(Error::NotConverged { .. }) => Err(BACKWARD_OUT_OF_RANGE),
+            other => other,
+        };
     }
     solve_exact(h, s, indicated, units)
 }

@@ -265,10 +265,20 @@ pub(crate) fn solve(
     // Only a region 1 z and one below the triple line can lie below the
     // cold end: every other location has z above a value at a higher T
     // on this isobar (z'', or region 1's at 623.15 K), so the 273.15 K
-    // value is spared on the hot paths.
-    let may_be_too_cold = below_triple_line || equation == Equation::Region1;
-    if z > highest || (may_be_too_cold && z < lowest()) {
+    // value is spared on the hot paths. The bounds are the formulation's
+    // own values at the edge; a z a few rounding steps past one (the same
+    // state's value on another path of evaluation) is that edge's state.
+    let edge_rounding = EDGE_ROUNDING * z.abs().max(1.0);
+    if z > highest + edge_rounding {
         return Err(out_of_range(lowest(), highest));
+    }
+    let mut z = z.min(highest);
+    if below_triple_line || equation == Equation::Region1 {
+        let lowest = lowest();
+        if z < lowest - edge_rounding {
+            return Err(out_of_range(lowest, highest));
+        }
+        z = z.max(lowest);
     }
 
     // Past region 2's hot end lies region 5 (the range check has refused
@@ -385,6 +395,10 @@ pub(crate) fn solve(
 /// How far (K) a backward temperature may stray past its region's limits:
 /// the releases promise 25 mK or better inside them.
 const BACKWARD_SLACK: f64 = 1.0;
+
+/// Relative rounding, in z, at which the range's own edge values are still
+/// taken as the edge: a state's value there computed along another path.
+const EDGE_ROUNDING: f64 = 8.0 * f64::EPSILON;
 
 /// Refuses a backward-equation temperature that is no state of the region
 /// (the equation used far outside the range it was fitted to).

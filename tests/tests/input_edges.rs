@@ -681,3 +681,88 @@ fn the_densest_state_of_an_isotherm_solves_from_its_own_volume() {
         }
     }
 }
+
+/// Found by the solve fuzz target: just above 50 MPa the range tops out at
+/// 1073.15 K (IAPWS R7-97(2012), section 1), and the entropy of the state
+/// there, fed back to (p, s), was refused as outside the range it bounds.
+#[test]
+fn the_entropy_at_the_hot_end_above_50_mpa_solves() {
+    let p = 50.00345349720759;
+    let edge = State::from_pt(p, 1073.15, Units::Native).unwrap();
+    // The exact iteration finds the edge; the backward equation lies within
+    // its permissible deviation, 25 mK (recalled from IAPWS R7-97(2012),
+    // section 6, region 2 T(p, s)).
+    for s in [6.522598179419287, edge.native().s] {
+        for (method, deviation) in [(Method::Exact, 1e-6), (Method::BackwardOnly, 0.025)] {
+            let state = State::solve(InputPair::PressureEntropy, p, s, Units::Native, method);
+            let state = state.unwrap_or_else(|e| panic!("s = {s}, {method:?}: {e}"));
+            assert!((state.native().t - 1073.15).abs() < deviation, "{state:?}");
+            if method == Method::Exact {
+                assert_in_range("(p, s) at the hot end", &state);
+            }
+        }
+    }
+}
+
+/// Found by the solve fuzz target: a cold liquid near the triple point,
+/// where the exact (h, s) iteration does not settle. With
+/// `Method::BackwardOnly` the answer is the backward equations' state or
+/// `BackwardEquationOutOfRange` (DEVELOPERS.md), never `NotConverged`;
+/// the state returned lies in the range (IAPWS R7-97(2012), section 1).
+#[test]
+fn a_cold_liquid_near_the_triple_point_solves_backward_only() {
+    let (h, s) = (0.7771347776373376, 0.0015787407853886254);
+    let units = Units::UsCustomary;
+    match State::solve(
+        InputPair::EnthalpyEntropy,
+        h,
+        s,
+        units,
+        Method::BackwardOnly,
+    ) {
+        Ok(state) => assert_in_range("(h, s) backward near the triple point", &state),
+        Err(Error::BackwardEquationOutOfRange { .. }) => {}
+        Err(e) => panic!("{e:?}"),
+    }
+}
+
+/// Found by the solve fuzz target: at an entropy a rounding below region 2's
+/// on the 1e-12 MPa floor at 1073.15 K, the enthalpies valid are a tip of
+/// region 2 and then region 5 from its own, higher, 1073.15 K value (the
+/// two equations differ at the seam, IAPWS R7-97(2012) section 2): no single
+/// interval, so a point in the gap is NoStateInRange (DEVELOPERS.md) and
+/// the campaign's oracle no longer calls that range untrue.
+#[test]
+fn the_hs_gap_at_the_region5_seam_on_the_pressure_floor_is_no_state() {
+    use ebullio_conformance::oracles::state::{check_solve, SolveCase};
+    use ebullio_conformance::oracles::Findings;
+    let s = 21.258169111132666;
+    let solve = |h: f64| State::from_hs_with(h, s, Units::Native, Method::BackwardOnly);
+    // Below the hull: the enthalpy is out of range.
+    assert!(matches!(
+        solve(4160.663689415188),
+        Err(Error::OutOfRange {
+            quantity: Quantity::Enthalpy,
+            ..
+        })
+    ));
+    // In the gap: no state.
+    assert!(matches!(
+        solve(4160.663693225655),
+        Err(Error::NoStateInRange { .. })
+    ));
+    // Region 5 starts where the floor and the 1073.15 K isotherm meet.
+    let region5 = State::from_pt(1e-12, 1073.150000001, Units::Native).unwrap();
+    assert_eq!(region5.region(), ebullio::Region::Five);
+    let above = solve(region5.native().h + 0.001).unwrap();
+    assert_in_range("(h, s) in region 5 above the gap", &above);
+    // The oracle accepts the refusal.
+    let case = SolveCase {
+        pair: InputPair::EnthalpyEntropy,
+        a: 4160.663689415188,
+        b: s,
+        units: Units::Native,
+        method: Method::BackwardOnly,
+    };
+    check_solve(&case, false, &mut Findings::stopping_at_first());
+}
