@@ -625,6 +625,33 @@ fn states_colder_than_273_15_k_are_refused() {
     refused_enthalpy(2400.0, 9.5, Method::BackwardOnly);
 }
 
+/// Found by the random-input campaign (seeds 2, 3, 5, 7, 8): at the
+/// entropy of the saturated liquid at 273.15 K the enthalpy band starts at
+/// that liquid, and isentropic compression cools it (αv < 0 below the
+/// density maximum), so 1e-7 kJ/kg above the band's end lies the cold
+/// pocket `State::from_hs` documents as no state, up to where the
+/// isentrope re-enters the range near 38 MPa. The band's ends are states;
+/// the pocket is `NoStateInRange`, not a range error.
+#[test]
+fn the_cold_pocket_beside_the_saturated_liquid_at_273_15_k() {
+    let liquid = *Saturation::at_temperature(MIN_TEMPERATURE, NATIVE)
+        .unwrap()
+        .liquid()
+        .native();
+    let (min, max) = refused_enthalpy(liquid.h - 1e-9, liquid.s, Method::Exact);
+    assert_eq!(min, liquid.h);
+    for end in [min, max] {
+        let state = State::from_hs(end, liquid.s, NATIVE).unwrap();
+        assert!(state.temperature() >= MIN_TEMPERATURE * (1.0 - 1e-12));
+    }
+    for above in [1e-7, 1e-3, 10.0] {
+        match State::from_hs(min + above, liquid.s, NATIVE) {
+            Err(Error::NoStateInRange { .. }) => {}
+            other => panic!("{above} kJ/kg above the end: {other:?}"),
+        }
+    }
+}
+
 #[test]
 fn entropy_below_the_range_is_refused() {
     // The lowest entropy of the range is at 100 MPa and 273.15 K.
