@@ -780,6 +780,41 @@ fn wet_steam_just_below_critical_comes_back() {
     }
 }
 
+/// Found by the random-input campaign (seed 5): the saturated vapour 3.0e-5
+/// K below Tc = 647.096 K (R7-97(2012) Eq. 3), just outside the band where
+/// the line is not resolved, did not converge. The region 3 solution there
+/// has κT < 0 (the formulation's own instability so near Tc), and the wet
+/// iteration stopped on a Newton step from a slope of the wrong sign (f
+/// rises with T, 0.83 kJ/(kg·K) measured, the computed slope read −131),
+/// leaving the quality 7.8e-7 past 1; at the root the quality is 1 +
+/// 3.7e-8, and the saturated vapour there reproduces (h, s) to 3e-11.
+/// Each comes back, reproducing (h, s) to the promise in the caller's units.
+#[test]
+fn the_saturated_vapour_3e_5_k_below_critical_comes_back() {
+    let cases = [
+        (2088.042770107975, 4.412787906523224, Units::Native),
+        (
+            2088.042770107975,
+            4.412787906523224,
+            Units::MetricEngineering,
+        ),
+        (2088042.7701079738, 4412.787906523225, Units::SiBase),
+        (
+            2088.040113941777,
+            4.41278380136064,
+            Units::MetricEngineering,
+        ),
+        (897.6968057213992, 1.0539762841605103, Units::UsCustomary),
+    ];
+    for (h, s, units) in cases {
+        let what = format!("({h}, {s}) {units:?}");
+        let state = State::from_hs(h, s, units).unwrap_or_else(|e| panic!("{what}: {e}"));
+        let close = |x: f64, y: f64| (x - y).abs() <= 1e-10 * y.abs();
+        assert!(close(state.enthalpy(), h), "h of {what}: {state:?}");
+        assert!(close(state.entropy(), s), "s of {what}: {state:?}");
+    }
+}
+
 /// Found by the random-input campaign: (h, s) between the wet isotherms of
 /// 623.15 K of regions 1/2 and of region 3, which the formulation's
 /// inconsistency at that temperature leaves 2.2e-3 kJ/kg apart at
