@@ -724,16 +724,34 @@ fn x_slack(sat: &Saturation, s: f64) -> f64 {
     1e-12 * s.abs().max(1.0) / (g.s - l.s)
 }
 
-/// The attempt's outcome for a root at T of quality x (entropy s).
-fn found(sat: Saturation, x: f64, t: f64, s: f64) -> Result<Attempt, Error> {
+/// The attempt's outcome for a root at T of quality x, for (h, s).
+fn found(sat: Saturation, x: f64, t: f64, h: f64, s: f64) -> Result<Attempt, Error> {
     let slack = x_slack(&sat, s);
-    Ok(if x < -slack {
+    let edge = x.clamp(0.0, 1.0);
+    let phase = sat.mixture(edge)?;
+    if (-slack..=1.0 + slack).contains(&x) {
+        return Ok(Attempt::Inside(phase));
+    }
+    // Past the line the neighbour's single-phase state comes first; the
+    // saturated phase stands as the candidate if it reproduces (h, s) to
+    // the promise, for where the neighbour has none (near Tc region 3's
+    // can be unstable, κT < 0, where the quality leaves [0, 1] by 4e-8).
+    let mut side = if x < 0.0 {
         liquid_side(t)
-    } else if x > 1.0 + slack {
-        vapour_side(t)
     } else {
-        Attempt::Inside(sat.mixture(x.clamp(0.0, 1.0))?)
-    })
+        vapour_side(t)
+    };
+    let props = phase.native();
+    if within_promise(Given::Enthalpy, props.h, h) && within_promise(Given::Entropy, props.s, s) {
+        if let Attempt::Outside {
+            excess, candidate, ..
+        } = &mut side
+        {
+            *excess = (x - edge).abs();
+            *candidate = Some(phase);
+        }
+    }
+    Ok(side)
 }
 
 /// The 273.15 K end of the wet iteration, evaluated: the outcome if the
@@ -751,7 +769,7 @@ fn wet_edge_at_273(h: f64, s: f64) -> Result<Option<Attempt>, Error> {
         return Ok(Some(liquid_side(lo)));
     }
     if within(f, h, WET_AIMED) {
-        return found(sat, x, lo, s).map(Some);
+        return found(sat, x, lo, h, s).map(Some);
     }
     if f > 0.0 {
         // Below the 273.15 K isotherm, the lower edge of the wet region.
@@ -821,8 +839,11 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
         // Near x = 0 the difference hardly depends on T (all wet isobars
         // touch the liquid line), so T is settled only when the Newton
         // step, not just the difference, is at rounding level.
-        if x >= 0.0 && within(f, h, WET_AIMED) && (f / slope).abs() <= 1e-13 * t {
-            return found(sat, x, t, s);
+        // A slope of the wrong sign (f rises with T), as the line's
+        // derivatives can read near Tc (−131 for 0.83 kJ/(kg·K) at 3e-5 K
+        // below it, measured), settles nothing: bisection goes on.
+        if x >= 0.0 && within(f, h, WET_AIMED) && slope > 0.0 && (f / slope).abs() <= 1e-13 * t {
+            return found(sat, x, t, h, s);
         }
         if x < 0.0 || f > 0.0 {
             hi = t;
@@ -856,7 +877,7 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     let at_seam = (lo - REGION13_TEMPERATURE).abs() <= 4.0 * f64::EPSILON * REGION13_TEMPERATURE
         && hi - lo <= 8.0 * f64::EPSILON * hi;
     if x >= 0.0 && met {
-        found(sat, x, t, s)
+        found(sat, x, t, h, s)
     } else if at_seam && (0.0..=1.0).contains(&x) {
         // The bracket closed on 623.15 K without a root: (h, s) lies in
         // the gap the formulation's inconsistency leaves between the wet

@@ -566,7 +566,16 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
         let x = (v - l.v) / (g.v - l.v);
         let mut newton = f64::NAN;
         if !(0.0..=1.0).contains(&x) {
-            hi = t;
+            // Outside the dome's width at this T: too hot, except below
+            // the liquid's density maximum (about 277 K), where v' falls
+            // as T rises and a v below it means too cold.
+            let colder = x < 0.0
+                && Variable::SpecificVolume.along_saturation(l, saturation_pressure_slope(t)) < 0.0;
+            if colder {
+                lo = t;
+            } else {
+                hi = t;
+            }
         } else {
             let u_mix = (1.0 - x) * l.u + x * g.u;
             let f = u_mix - u;

@@ -625,6 +625,33 @@ fn states_colder_than_273_15_k_are_refused() {
     refused_enthalpy(2400.0, 9.5, Method::BackwardOnly);
 }
 
+/// Found by the random-input campaign (seeds 2, 3, 5, 7, 8): at the
+/// entropy of the saturated liquid at 273.15 K the enthalpy band starts at
+/// that liquid, and isentropic compression cools it (αv < 0 below the
+/// density maximum), so 1e-7 kJ/kg above the band's end lies the cold
+/// pocket `State::from_hs` documents as no state, up to where the
+/// isentrope re-enters the range near 38 MPa. The band's ends are states;
+/// the pocket is `NoStateInRange`, not a range error.
+#[test]
+fn the_cold_pocket_beside_the_saturated_liquid_at_273_15_k() {
+    let liquid = *Saturation::at_temperature(MIN_TEMPERATURE, NATIVE)
+        .unwrap()
+        .liquid()
+        .native();
+    let (min, max) = refused_enthalpy(liquid.h - 1e-9, liquid.s, Method::Exact);
+    assert_eq!(min, liquid.h);
+    for end in [min, max] {
+        let state = State::from_hs(end, liquid.s, NATIVE).unwrap();
+        assert!(state.temperature() >= MIN_TEMPERATURE * (1.0 - 1e-12));
+    }
+    for above in [1e-7, 1e-3, 10.0] {
+        match State::from_hs(min + above, liquid.s, NATIVE) {
+            Err(Error::NoStateInRange { .. }) => {}
+            other => panic!("{above} kJ/kg above the end: {other:?}"),
+        }
+    }
+}
+
 #[test]
 fn entropy_below_the_range_is_refused() {
     // The lowest entropy of the range is at 100 MPa and 273.15 K.
@@ -743,6 +770,41 @@ fn wet_steam_just_below_critical_comes_back() {
         (2087.581897058721, 4.412075662947843, Units::Native),
         (2087.4321487200987, 4.411844240854318, Units::Native),
         (2087.8979676842664, 4.412564114474302, Units::Native),
+    ];
+    for (h, s, units) in cases {
+        let what = format!("({h}, {s}) {units:?}");
+        let state = State::from_hs(h, s, units).unwrap_or_else(|e| panic!("{what}: {e}"));
+        let close = |x: f64, y: f64| (x - y).abs() <= 1e-10 * y.abs();
+        assert!(close(state.enthalpy(), h), "h of {what}: {state:?}");
+        assert!(close(state.entropy(), s), "s of {what}: {state:?}");
+    }
+}
+
+/// Found by the random-input campaign (seed 5): the saturated vapour 3.0e-5
+/// K below Tc = 647.096 K (R7-97(2012) Eq. 3), just outside the band where
+/// the line is not resolved, did not converge. The region 3 solution there
+/// has κT < 0 (the formulation's own instability so near Tc), and the wet
+/// iteration stopped on a Newton step from a slope of the wrong sign (f
+/// rises with T, 0.83 kJ/(kg·K) measured, the computed slope read −131),
+/// leaving the quality 7.8e-7 past 1; at the root the quality is 1 +
+/// 3.7e-8, and the saturated vapour there reproduces (h, s) to 3e-11.
+/// Each comes back, reproducing (h, s) to the promise in the caller's units.
+#[test]
+fn the_saturated_vapour_3e_5_k_below_critical_comes_back() {
+    let cases = [
+        (2088.042770107975, 4.412787906523224, Units::Native),
+        (
+            2088.042770107975,
+            4.412787906523224,
+            Units::MetricEngineering,
+        ),
+        (2088042.7701079738, 4412.787906523225, Units::SiBase),
+        (
+            2088.040113941777,
+            4.41278380136064,
+            Units::MetricEngineering,
+        ),
+        (897.6968057213992, 1.0539762841605103, Units::UsCustomary),
     ];
     for (h, s, units) in cases {
         let what = format!("({h}, {s}) {units:?}");

@@ -142,3 +142,30 @@ fn a_state_where_the_line_is_unresolved_is_not_called_no_state() {
         Err(e) => assert!(matches!(e, ebullio::Error::NotConverged { .. }), "{e:?}"),
     }
 }
+
+/// Found by the random-input campaign (seeds 4 to 7): wet steam a hair
+/// off the saturated liquid at 275–277 K was refused as "no state". There
+/// the saturated liquid's v falls as T rises (the density anomaly, below
+/// the liquid's density maximum near 277 K), so a v below the liquid's
+/// means the temperature is too low, not too high; the wet iteration's
+/// bracket had it the other way and closed on the wrong side of the root.
+/// Each comes back, reproducing (v, u) to the promise in the caller's units.
+#[test]
+fn wet_steam_in_the_density_anomaly_comes_back() {
+    let cases = [
+        (0.0010000888074435336, 11.124239627678143, NATIVE),
+        (0.0010000888074435336, 11124.239627678144, Units::SiBase),
+        (0.016019885932741715, 4.7825621787094335, Units::UsCustomary),
+        (0.0010001185714744215, 6.969242118534207, NATIVE),
+        (0.016020362706780356, 2.996234788707741, Units::UsCustomary),
+        (0.0010001015375990083, 9.060234783306477, NATIVE),
+        (0.001000078133367994, 13.860230234033692, NATIVE),
+    ];
+    for (v, u, units) in cases {
+        let what = format!("({v}, {u}) {units:?}");
+        let state = State::from_vu(v, u, units).unwrap_or_else(|e| panic!("{what}: {e}"));
+        let close = |x: f64, y: f64| (x - y).abs() <= 1e-10 * y.abs();
+        assert!(close(state.specific_volume(), v), "v of {what}: {state:?}");
+        assert!(close(state.internal_energy(), u), "u of {what}: {state:?}");
+    }
+}

@@ -99,6 +99,26 @@ pub fn unresolved_near_critical(pair: InputPair, a: f64, b: f64) -> bool {
     }
 }
 
+/// Whether, at native entropy `s`, the cold pocket inside the (h, s)
+/// enthalpy band (`State::from_hs`: states colder than 273.15 K, refused
+/// as no state) begins within `step` kJ/kg above the band's lower end.
+/// At s at or just above the saturated liquid's at 273.15 K the lowest
+/// state is that liquid (or wet steam at 273.15 K), and compressing it
+/// along the isentrope cools it ((∂T/∂p)_s = T·v·αv/cp, αv ≈ −6.8e-5 /K
+/// there, below the density maximum), so the valid states above the end
+/// span only Δh = v·Δp = (s − s')/(−αv) before T drops below 273.15 K
+/// ((∂s/∂p)_T = −v·αv); measured, 1.47e4·(s − s') plus ~6e-8 kJ/kg that
+/// the solved T's rounding admits. Below s' the lowest state is the
+/// liquid re-entering the range at ~38 MPa, with no pocket beside it.
+pub fn cold_pocket_beside_the_lowest_enthalpy(s: f64, step: f64) -> bool {
+    let Ok(sat) = Saturation::at_temperature(273.15, Units::Native) else {
+        return false;
+    };
+    let liquid = sat.liquid().native();
+    let above = s - liquid.s;
+    liquid.alpha_v < 0.0 && above >= 0.0 && above / -liquid.alpha_v < step
+}
+
 /// How much negative entropy generation rounding explains, relative to
 /// the entropies booked (flow × specific entropy summed in magnitude).
 pub const ENTROPY_ROUNDING: f64 = 1e-9;

@@ -8,7 +8,8 @@ use ebullio::{Error, InputPair, Method, Phase, Quantity, Region, Saturation, Sta
 
 use super::findings::{literal, Findings};
 use super::limits::{
-    in_range, near_critical, round_trip_tolerance, unresolved_near_critical, SEAM_TWIN_KELVIN,
+    cold_pocket_beside_the_lowest_enthalpy, in_range, near_critical, round_trip_tolerance,
+    unit_factor, unresolved_near_critical, SEAM_TWIN_KELVIN,
 };
 use crate::random_inputs::states::property_of;
 use crate::random_inputs::values::pair_quantities;
@@ -493,7 +494,7 @@ fn check_range_is_true(
     findings: &mut Findings,
 ) {
     let step = 1e-9 * (max - min);
-    for inside in [min + step, max - step] {
+    for (inside, lower) in [(min + step, true), (max - step, false)] {
         let mut probe = *case;
         if k == 0 {
             probe.a = inside;
@@ -504,7 +505,19 @@ fn check_range_is_true(
             Some(Err(Error::OutOfRange { quantity, .. })) => {
                 quantity == pair_quantities(case.pair)[k]
             }
-            Some(Err(Error::NoStateInRange { .. })) => !in_hs_seam_gap(&probe),
+            // Documented no-state places beside a range's end: the (h,s)
+            // seam gap on the floor isobar at 1073.15 K, and the cold pocket
+            // beside the band's lower end at s'(273.15 K) (`State::from_hs`).
+            Some(Err(Error::NoStateInRange { .. })) => {
+                let cold_pocket = case.pair == InputPair::EnthalpyEntropy
+                    && k == 0
+                    && lower
+                    && cold_pocket_beside_the_lowest_enthalpy(
+                        case.units.to_native(Quantity::Entropy, case.b),
+                        step / unit_factor(case.units, Quantity::Enthalpy),
+                    );
+                !(in_hs_seam_gap(&probe) || cold_pocket)
+            }
             _ => false,
         };
         findings.check(
