@@ -616,7 +616,14 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
             break;
         }
     }
-    let met = found.filter(|&(_, _, u_mix)| within_promise(Given::InternalEnergy, u_mix, u));
+    let mut met = found.filter(|&(_, _, u_mix)| within_promise(Given::InternalEnergy, u_mix, u));
+    if met.is_none() && lo == MIN_TEMPERATURE {
+        // The bracket closed on 273.15 K without evaluating it: the
+        // isochore leaves the dome there, at the range's floor (the
+        // saturated phases of 273.15 K themselves), where no point of the
+        // dome lies below to approach the root from.
+        met = at_the_floor(v, u)?;
+    }
     match met {
         Some((sat, x, _)) => sat.mixture(x).map(Some),
         // Where the line is not resolved a point this near a mixture (1e-6,
@@ -632,6 +639,27 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
         }
         None => Ok(None),
     }
+}
+
+/// The mixture of 273.15 K with this (v, u), to the promise, if any: the
+/// quality from v, held to [0, 1] where v is the saturated phase's within
+/// the promise.
+fn at_the_floor(v: f64, u: f64) -> Result<Option<(Saturation, f64, f64)>, Error> {
+    let sat = Saturation::at_temperature(MIN_TEMPERATURE, Units::Native)?;
+    let (l, g) = (sat.liquid().native(), sat.vapour().native());
+    let x = (v - l.v) / (g.v - l.v);
+    let x = if x > 1.0 && within_promise(Given::SpecificVolume, g.v, v) {
+        1.0
+    } else if x < 0.0 && within_promise(Given::SpecificVolume, l.v, v) {
+        0.0
+    } else {
+        x
+    };
+    if !(0.0..=1.0).contains(&x) {
+        return Ok(None);
+    }
+    let u_mix = (1.0 - x) * l.u + x * g.u;
+    Ok(within_promise(Given::InternalEnergy, u_mix, u).then_some((sat, x, u_mix)))
 }
 
 /// F = ln x_v − ln x_u, the logarithms of the qualities the lever rule

@@ -169,3 +169,35 @@ fn wet_steam_in_the_density_anomaly_comes_back() {
         assert!(close(state.internal_energy(), u), "u of {what}: {state:?}");
     }
 }
+
+/// Found by fuzzing `State::solve` (VolumeInternalEnergy, exact): the
+/// saturated vapour of 273.15 K, the range's floor, (v, u) = (206.1397...
+/// m³/kg, 2374.897... kJ/kg), was refused as "no state". Its isochore
+/// leaves the dome exactly at the floor, so no wet point lies below to
+/// approach the root from, and region 2's solution sits on the saturation
+/// line, which is the liquid's side. Around it, along the same isochore
+/// (u up to 50 kJ/kg above, states on R7-97(2012) region 2 from (v, T))
+/// and on neighbouring isochores and qualities at 273.15 K, each state
+/// comes back to the promise.
+#[test]
+fn states_at_the_dew_point_of_the_floor_come_back() {
+    let (v, u) = (206.13971630064617, 2374.897409889437);
+    let state = State::from_vu(v, u, NATIVE).unwrap_or_else(|e| panic!("{e}"));
+    let close = |x: f64, y: f64| (x - y).abs() <= 1e-10 * y.abs();
+    assert!(close(state.specific_volume(), v), "{state:?}");
+    assert!(close(state.internal_energy(), u), "{state:?}");
+    assert!((state.temperature() - 273.15).abs() <= 1e-9, "{state:?}");
+
+    for v in [v, v * (1.0 + 1e-12), v * (1.0 + 1e-9), v * 1.001, v * 1.1] {
+        for k in 0..=40 {
+            // Up to about 50 kJ/kg above u'' at cv ≈ 1.4 kJ/(kg·K).
+            let t = 273.15 + 36.0 * f64::from(k) / 40.0;
+            let a = State::from_vt(v, t, NATIVE).unwrap();
+            comes_back(&format!("v = {v} at {t} K"), &a);
+        }
+    }
+    for x in [0.0, 1e-6, 0.5, 1.0 - 1e-9, 1.0] {
+        let a = State::from_tx(273.15, x, NATIVE).unwrap();
+        comes_back(&format!("x = {x} at 273.15 K"), &a);
+    }
+}
