@@ -535,7 +535,9 @@ fn check(place: Place, props: Properties) -> Attempt {
         Place::Five => note(Place::Two, -over(t, REGION2_MAX_TEMPERATURE)),
         Place::Wet => {}
     }
-    let max_p = if place == Place::Five {
+    // Above 1073.15 K the range ends at 50 MPa whichever equation got
+    // there (a region 2 state a hair past its hot end is no exception).
+    let max_p = if place == Place::Five || over(t, REGION2_MAX_TEMPERATURE) > TEMPERATURE_EDGE {
         REGION5_MAX_PRESSURE
     } else {
         MAX_PRESSURE

@@ -766,3 +766,36 @@ fn the_hs_gap_at_the_region5_seam_on_the_pressure_floor_is_no_state() {
     };
     check_solve(&case, false, &mut Findings::stopping_at_first());
 }
+
+/// Found by the solve fuzz target: (h, s) just beyond the corner of the
+/// range at 1073.15 K and 50 MPa (IAPWS R7-97(2012), section 1: above
+/// 1073.15 K only to 50 MPa) was solved on region 2's equation as a state
+/// at 50.0008 MPa and 1073.1512 K, outside the range; it is refused with
+/// either method, and the corner's own state still solves.
+#[test]
+fn h_s_beyond_the_corner_at_1073_15_k_and_50_mpa_is_refused() {
+    for method in [Method::Exact, Method::BackwardOnly] {
+        let beyond = State::solve(
+            InputPair::EnthalpyEntropy,
+            1687.8591614571144,
+            1.5579047935515773,
+            Units::UsCustomary,
+            method,
+        );
+        match beyond {
+            Ok(state) => assert_in_range("beyond the corner", &state),
+            Err(e) => assert!(
+                matches!(
+                    e,
+                    Error::NoStateInRange { .. }
+                        | Error::OutOfRange { .. }
+                        | Error::BackwardEquationOutOfRange { .. }
+                ),
+                "{method:?}: {e:?}"
+            ),
+        }
+    }
+    let corner = State::from_pt(50.0, 1073.15, Units::Native).unwrap();
+    let back = State::from_hs(corner.enthalpy(), corner.entropy(), Units::Native).unwrap();
+    assert_in_range("the corner", &back);
+}
