@@ -829,6 +829,9 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // (near Tc, where the slopes along the line are not resolved and the
     // steps crawl), bisection takes the step.
     let mut residuals = [f64::INFINITY; 2];
+    // Whether the difference was seen above zero inside the dome: the root
+    // is then wet steam, bracketed from both sides.
+    let mut crossed = false;
     for _ in 0..WET_STEPS {
         let WetPoint {
             sat,
@@ -847,6 +850,7 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
         if x >= 0.0 && within(f, h, WET_AIMED) && slope > 0.0 && (f / slope).abs() <= 1e-13 * t {
             return found(sat, x, t, h, s);
         }
+        crossed |= x >= 0.0 && f > 0.0;
         if x < 0.0 || f > 0.0 {
             hi = t;
         } else {
@@ -868,10 +872,14 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // A root to rounding level only: a point off the saturation line by
     // less than the promise (compressed liquid at low pressure barely
     // differs from the saturated liquid in h and s) belongs to the
-    // single-phase neighbour, which reproduces its p and T.
+    // single-phase neighbour, which reproduces its p and T. A root
+    // bracketed inside the dome is wet steam, though, met to the promise:
+    // near x = 0 and 273.15 K f hardly changes with T (6.3e-5 kJ/(kg·K) at
+    // x = 1.3e-6, measured) and its rounding (1e-12 kJ/kg) may never let
+    // it reach the aim.
     let WetPoint { sat, x, f, .. } = wet_at(t, h, s, previous.as_ref())?;
     let unresolved = t > CRITICAL_TEMPERATURE - UNRESOLVED_BELOW_CRITICAL;
-    let met = if unresolved {
+    let met = if unresolved || crossed {
         within_promise(Given::Enthalpy, h + f, h)
     } else {
         within(f, h, WET_AIMED)

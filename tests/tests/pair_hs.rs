@@ -830,3 +830,55 @@ fn a_point_in_the_seam_gap_at_623_15_k_has_no_state() {
         );
     }
 }
+
+/// Found by fuzzing `State::solve`: (h, s) = (0.7771347776373376 Btu/lbm,
+/// 0.0015787407853886254 Btu/(lbm·°R)), 1.8076 kJ/kg and 0.00661
+/// kJ/(kg·K), was "did not converge". It is wet steam at 273.5875 K of
+/// quality 1.27e-6 (checked by bisection on T along the saturation line:
+/// the lever-rule enthalpy at this s crosses h there), 4.5e-8 kJ/kg below
+/// the saturated liquid of that entropy; near x = 0 the enthalpy barely
+/// changes with T (6.3e-5 kJ/(kg·K)), so rounding (1e-12 kJ/kg in h near
+/// 0 °C) leaves T unresolved by 1e-8 K, and the iteration's aim of 1e-12
+/// kJ/kg was never met although the root was bracketed. The point and its
+/// neighbours (wet steam below, compressed liquid above) each come back,
+/// reproducing (h, s) to the README's round-trip promise (relative 1e-10,
+/// near zero absolute 1e-9 kJ/kg and 1e-11 kJ/(kg·K)).
+#[test]
+fn wet_steam_of_quality_1e_6_near_273_15_k_comes_back() {
+    use ebullio::InputPair;
+    use ebullio_conformance::oracles::state::{check_solve, SolveCase};
+    use ebullio_conformance::oracles::Findings;
+    let us = Units::UsCustomary;
+    let (h_us, s_us) = (0.7771347776373376, 0.0015787407853886254);
+    let promise = |actual: f64, given: f64, absolute: f64| {
+        (actual - given).abs() <= (1e-10 * given.abs()).max(absolute)
+    };
+    let state = State::from_hs(h_us, s_us, us).unwrap_or_else(|e| panic!("{e}"));
+    assert!(promise(state.enthalpy(), h_us, 1e-9), "{state:?}");
+    assert!(promise(state.entropy(), s_us, 1e-11), "{state:?}");
+    assert_eq!(state.region(), Region::Four, "{state:?}");
+    // The campaign's oracle, told a state exists, accepts both methods'
+    // answers (each is this wet state).
+    for method in [Method::Exact, Method::BackwardOnly] {
+        let case = SolveCase {
+            pair: InputPair::EnthalpyEntropy,
+            a: h_us,
+            b: s_us,
+            units: us,
+            method,
+        };
+        check_solve(&case, true, &mut Findings::stopping_at_first());
+    }
+    let h = us.to_native(Quantity::Enthalpy, h_us);
+    let s = us.to_native(Quantity::Entropy, s_us);
+    for dh in [-1e-4, -1e-6, -1e-8, -1e-10, 0.0, 1e-10, 1e-8, 1e-6, 1e-4] {
+        for ds in [-1e-7, -1e-9, 0.0, 1e-9, 1e-7] {
+            let (h, s) = (h + dh, s + ds);
+            let what = format!("h={h}, s={s}");
+            let state = State::from_hs(h, s, NATIVE).unwrap_or_else(|e| panic!("{what}: {e}"));
+            assert!(promise(state.enthalpy(), h, 1e-9), "{what}: {state:?}");
+            assert!(promise(state.entropy(), s, 1e-11), "{what}: {state:?}");
+            assert!(state.temperature() > MIN_TEMPERATURE, "{what}: {state:?}");
+        }
+    }
+}
