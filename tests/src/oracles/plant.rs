@@ -14,7 +14,7 @@ use ebullio::saturation_line::saturation_temperature;
 use ebullio::{Error, Phase, Quantity, State, Units};
 
 use super::findings::{literal, Findings};
-use super::limits::{ENTROPY_ROUNDING, SEAM_ENTROPY};
+use super::limits::{ENTROPY_ROUNDING, SEAM_ENTROPY, SEAM_TWIN_KELVIN};
 use super::state::{check_state, describe, error_kind};
 use crate::random_inputs::draw::Draw;
 use crate::random_inputs::plant::{efficiency, flow};
@@ -157,13 +157,21 @@ fn check_machine_work(
 
 /// How much entropy (native, kJ/(kg·K)) a one-stream process from `a` to
 /// `b` may seem to destroy: rounding when both are computed on one
-/// equation, IF97's permissible inconsistency ([`SEAM_ENTROPY`]) when they
-/// are not — different regions, or wet steam on the two sides of
-/// 623.15 K, whose saturated phases come from regions 1 and 2 below it and
-/// from region 3 above.
+/// equation inside its own region, IF97's permissible inconsistency
+/// ([`SEAM_ENTROPY`]) when they are not — different regions, wet steam on
+/// the two sides of 623.15 K (its saturated phases come from regions 1
+/// and 2 below it and from region 3 above), or a seam twin: a state an
+/// inverse pair solved on one region's equation up to
+/// [`SEAM_TWIN_KELVIN`] past its boundary at 623.15 K or 1073.15 K
+/// (DEVELOPERS.md, "Recorded pitfalls").
 fn seam_allowance(a: &State, b: &State) -> f64 {
     let side = |s: &State| s.native().t <= 623.15;
-    let one_equation = a.region() == b.region() && side(a) == side(b);
+    let near_seam = |s: &State| {
+        let t = s.native().t;
+        (t - 623.15).abs() <= SEAM_TWIN_KELVIN || (t - 1073.15).abs() <= SEAM_TWIN_KELVIN
+    };
+    let one_equation =
+        a.region() == b.region() && side(a) == side(b) && !(near_seam(a) || near_seam(b));
     if one_equation {
         ENTROPY_ROUNDING * a.native().s.abs().max(1e-3)
     } else {
