@@ -535,9 +535,7 @@ fn check(place: Place, props: Properties) -> Attempt {
         Place::Five => note(Place::Two, -over(t, REGION2_MAX_TEMPERATURE)),
         Place::Wet => {}
     }
-    // Above 1073.15 K the range ends at 50 MPa whichever equation got
-    // there (a region 2 state a hair past its hot end is no exception).
-    let max_p = if place == Place::Five || over(t, REGION2_MAX_TEMPERATURE) > TEMPERATURE_EDGE {
+    let max_p = if place == Place::Five {
         REGION5_MAX_PRESSURE
     } else {
         MAX_PRESSURE
@@ -928,8 +926,9 @@ fn vapour_side(t: f64) -> Attempt {
     }
 }
 
-/// Solves (h, s), native, on the basic equations.
-fn solve_exact(h: f64, s: f64, indicated: Place, units: Units) -> Result<State, Error> {
+/// Solves (h, s), native, on the basic equations ([`solve_exact`] then
+/// refuses what lies past the range's corner at 1073.15 K and 50 MPa).
+fn solve_exact_anywhere(h: f64, s: f64, indicated: Place, units: Units) -> Result<State, Error> {
     // Every place is tried at most once: first the one the boundary
     // equations indicate, then the neighbour each solution points to, and
     // when a solution points nowhere new (or fails), the places not yet
@@ -1182,6 +1181,22 @@ fn solve(h: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
         };
     }
     solve_exact(h, s, indicated, units)
+}
+
+/// The exact solution, refused where it lies past the corner of the range
+/// at 1073.15 K and 50 MPa (above 1073.15 K only to 50 MPa, R7-97(2012)
+/// section 1): a region 2 state a hair past its hot end above 50 MPa is
+/// no state of the formulation, while a seam twin below 1073.15 K is.
+fn solve_exact(h: f64, s: f64, indicated: Place, units: Units) -> Result<State, Error> {
+    let state = solve_exact_anywhere(h, s, indicated, units)?;
+    let (p, t) = (state.native().p, state.native().t);
+    if over(t, REGION2_MAX_TEMPERATURE) > TEMPERATURE_EDGE && over(p, REGION5_MAX_PRESSURE) > INSIDE
+    {
+        return Err(Error::NoStateInRange {
+            pair: "specific enthalpy and specific entropy",
+        });
+    }
+    Ok(state)
 }
 
 impl State {
