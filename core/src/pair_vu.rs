@@ -24,7 +24,7 @@
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{refine, within_promise, Bounds, Equation, Given};
+use crate::inverse::{refine, reproduces_as_promised, within_promise, Bounds, Equation, Given};
 use crate::math::ln;
 use crate::region3_density::Branch;
 use crate::regions::{locate, region3_phase, single_phase, Located};
@@ -184,7 +184,8 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
                 t: (REGION13_TEMPERATURE - 10.0, B23_MAX_TEMPERATURE + 10.0),
             };
             let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
-            refine(equation, targets.0, targets.1, (rho, 700.0), bounds).ok()?
+            let props = refine(equation, targets.0, targets.1, (rho, 700.0), bounds).ok()?;
+            just_inside_region3(props, rho, targets)
         }
         Equation::Region1 => onto_saturated_liquid(liquid(v, u)?, v, u),
         Equation::Region2 => {
@@ -205,6 +206,27 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
         Equation::Region5 => hot_gas(v, u)?,
     };
     accept(equation, &props, units)
+}
+
+/// A region 3 root a rounding at or below 623.15 K (the iteration fixes T
+/// to about 1e-14 relative) is the state one ulp above it, where region 3
+/// begins, when that state reproduces (v, u) too; otherwise the stability
+/// test would compare it with region 1's saturated liquid and refuse a
+/// state that exists (found by fuzzing `State::solve`).
+fn just_inside_region3(
+    props: Properties,
+    rho: f64,
+    targets: ((Given, f64), (Given, f64)),
+) -> Properties {
+    if props.t > REGION13_TEMPERATURE {
+        return props;
+    }
+    let above = Equation::Region3.evaluate(rho, f64::from_bits(REGION13_TEMPERATURE.to_bits() + 1));
+    if reproduces_as_promised(&above, targets.0, targets.1) {
+        above
+    } else {
+        props
+    }
 }
 
 /// Whether a region can hold a state with this v and u at all, by the

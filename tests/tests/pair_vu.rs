@@ -195,3 +195,27 @@ fn states_at_the_dew_point_of_the_floor_come_back() {
         comes_back(&format!("x = {x} at 273.15 K"), &a);
     }
 }
+
+/// Found by fuzzing `State::solve` (VolumeInternalEnergy, exact): a region
+/// 3 liquid one ulp above 623.15 K, (v, u) = (0.0017401033915683047 m³/kg,
+/// 1642.1169877069349 kJ/kg), was refused as "no state". Region 3's
+/// iteration fixed T a few 1e-12 K below 623.15 K, where the stability
+/// test compared v with region 1's saturated liquid (0.00174007 m³/kg) and
+/// refused it. Region 3's states from a few ulps to a millikelvin above
+/// 623.15 K, on isochores from just denser than its saturated liquid there
+/// to 700 kg/m³ (states from (ρ, T) on R7-97(2012) region 3), come back.
+#[test]
+fn region3_liquid_just_above_623_15_k_comes_back() {
+    let (v, u) = (0.0017401033915683047, 1642.1169877069349);
+    let state = comes_back_from("the fuzz finding", v, u, NATIVE);
+    assert!(state.temperature() > 623.15, "{state:?}");
+
+    let seam = 623.15_f64;
+    for rho in [574.7, 574.8, 580.0, 600.0, 650.0, 700.0] {
+        for ulps in [1_u64, 2, 8, 64, 1 << 20, 1 << 30] {
+            let t = f64::from_bits(seam.to_bits() + ulps);
+            let a = State::from_rho_t(rho, t, NATIVE).unwrap();
+            comes_back(&format!("ρ = {rho} at {t} K"), &a);
+        }
+    }
+}
