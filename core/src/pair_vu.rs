@@ -205,7 +205,7 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
         }
         Equation::Region5 => hot_gas(v, u)?,
     };
-    accept(equation, &props, units)
+    accept(equation, &props, (v, u), units)
 }
 
 /// A region 3 root a rounding at or below 623.15 K (the iteration fixes T
@@ -466,11 +466,24 @@ fn pressure_on_isotherm(
 }
 
 /// The state if `equation` is the stable one at the solution's (p, T).
-fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State> {
+fn accept(
+    equation: Equation,
+    props: &Properties,
+    (v, u): (f64, f64),
+    units: Units,
+) -> Option<State> {
     // A solution at the range's edge may sit a hair outside it (the pair
     // fixes p only to its conditioning); that is not extrapolation. T it
-    // fixes to the iteration's precision: beyond 1e-12 it is.
-    let t = props.t.clamp(MIN_TEMPERATURE, MAX_TEMPERATURE);
+    // fixes to the iteration's precision: beyond 1e-12 it is. The edge is
+    // the equation's own: regions 1 to 3 end at 1073.15 K, where p may
+    // reach 100 MPa (a region 2 root a few ulps past that corner is its
+    // state; found by fuzzing `State::solve`).
+    let t_max = if equation == Equation::Region5 {
+        MAX_TEMPERATURE
+    } else {
+        REGION2_MAX_TEMPERATURE
+    };
+    let t = props.t.clamp(MIN_TEMPERATURE, t_max);
     let p_max = if t <= REGION2_MAX_TEMPERATURE {
         MAX_PRESSURE
     } else {
@@ -480,6 +493,19 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
     if (t - props.t).abs() > 1e-12 * t || (p - props.p).abs() > 1e-9 * p {
         return None;
     }
+    // Returned on the edge itself, inside the range, when that reproduces
+    // (v, u) too (region 3's variable is ρ, not p: its state stays).
+    let on_edge;
+    let props = if (p, t) != (props.p, props.t) && equation != Equation::Region3 {
+        on_edge = equation.evaluate(p, t);
+        let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
+        if !reproduces_as_promised(&on_edge, targets.0, targets.1) {
+            return None;
+        }
+        &on_edge
+    } else {
+        props
+    };
     // A solution on a region boundary may land a rounding on the
     // neighbour's side: look a hair around it before refusing.
     let nudges = [

@@ -219,3 +219,31 @@ fn region3_liquid_just_above_623_15_k_comes_back() {
         }
     }
 }
+
+/// Found by fuzzing `State::solve` (VolumeInternalEnergy, exact): region
+/// 2's corner at 100 MPa and 1073.15 K, given in US customary units as
+/// (0.06944817055108968 ft³/lbm, 1410.8504635480635 Btu/lbm), was refused
+/// as "no state". Newton's root lay 8e-13 K past 1073.15 K, and the range
+/// check then took region 5's 50 MPa limit for it. States on the range's
+/// edges around the corner (R7-97(2012) region 2 from (p, T)) come back,
+/// inside the range: T ≤ 1073.15 K and p ≤ 100 MPa.
+#[test]
+fn region2_states_at_the_top_corner_come_back_inside_the_range() {
+    let fuzzed = comes_back_from(
+        "the fuzz finding",
+        0.06944817055108968,
+        1410.8504635480635,
+        Units::UsCustomary,
+    );
+    let mut edge_states = vec![fuzzed];
+    for p in [100.0, 100.0 - 1e-9, 99.99, 99.0, 90.0] {
+        for t in [1073.15, 1073.15 - 1e-9, 1073.0, 1050.0] {
+            let a = State::from_pt(p, t, NATIVE).unwrap();
+            edge_states.push(comes_back(&format!("({p} MPa, {t} K)"), &a));
+        }
+    }
+    for state in edge_states.iter().map(|s| s.in_units(NATIVE)) {
+        assert!(state.temperature() <= 1073.15, "{state:?}");
+        assert!(state.pressure() <= 100.0, "{state:?}");
+    }
+}
