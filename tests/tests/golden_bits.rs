@@ -1247,18 +1247,22 @@ fn cycles() -> Vec<CycleSpec> {
 }
 
 /// The recorded (hash, results) of each family, computed on commit
-/// 38c018a. Never re-record these in a refactor; see the module comment.
+/// 38c018a and re-recorded once on 3933bd0, whose (v, u) fix returns
+/// states a rounding past region 2's corner on the range's edge (meant to
+/// change results: those states had p or T a hair outside the range, and
+/// their transport now reads). Never re-record these in a refactor; see
+/// the module comment.
 const RECORDED: [(&str, u64, u64); 6] = [
-    ("pairs", 0x9ca4_9cea_dff8_d79a, 60817),
+    ("pairs", 0xf0d4_1e23_960a_c4df, 60817),
     ("saturation", 0x707c_2a99_54c1_3289, 4145),
-    ("derivatives", 0xb1db_294c_74a3_6546, 1055364),
-    ("transport", 0x1367_66e1_a23b_aa00, 307280),
+    ("derivatives", 0x6b96_fce4_9608_37cc, 1055364),
+    ("transport", 0xd668_7dd3_ac2d_b9dd, 307280),
     ("plant", 0x83f1_7866_25f4_643a, 1211),
-    ("equations", 0xb24c_450b_0aab_b23d, 54221),
+    ("equations", 0xa026_9be1_18a7_d432, 54221),
 ];
 
 /// The hash of all families together, over their hashes and counts.
-const RECORDED_TOTAL: u64 = 0xbe37_d87b_228a_ee43;
+const RECORDED_TOTAL: u64 = 0xb842_db6d_3638_b3ca;
 
 #[test]
 fn every_result_is_bitwise_the_recorded_one() {
