@@ -9,8 +9,10 @@
 //! by the standard relations (Maxwell's, and dh = T ds + v dp); the (p, T)
 //! ones live with [`Variable`].
 
+use crate::constants::REGION13_TEMPERATURE;
 use crate::error::Error;
 use crate::free_energy::{IsobarGibbs, Properties, ReducedGibbs};
+use crate::saturation_line::saturation_pressure;
 use crate::variable::Variable;
 use crate::{region1, region2, region3, region5};
 
@@ -137,6 +139,33 @@ pub(crate) fn reaches_aim(given: Given, actual: f64, target: f64) -> bool {
 #[inline]
 pub(crate) fn reproduces_as_promised(props: &Properties, a: (Given, f64), b: (Given, f64)) -> bool {
     reproduces(props, a, b, PROMISED)
+}
+
+/// A region 1 solution a hair below psat(T) is the saturated liquid at its
+/// T when that reproduces both given values to the promise. A liquid's
+/// pressure is fixed only loosely by most pairs (dv = −v·κT·dp, dh = v·dp
+/// at constant T), so near the line Newton's root may land on the vapour
+/// side; the saturated liquid's own values would then find no state (the
+/// liquid lands in region 2, the wet iteration at x = 0 misses). Used by
+/// (v, u) and (h, s).
+pub(crate) fn onto_saturated_liquid(
+    props: Properties,
+    a: (Given, f64),
+    b: (Given, f64),
+) -> Properties {
+    if props.t > REGION13_TEMPERATURE {
+        return props;
+    }
+    let p_sat = saturation_pressure(props.t);
+    if props.p >= p_sat {
+        return props;
+    }
+    let saturated = Equation::Region1.evaluate(p_sat, props.t);
+    if reproduces_as_promised(&saturated, a, b) {
+        saturated
+    } else {
+        props
+    }
 }
 
 /// Whether `props` reproduces both given values to `tolerance`.

@@ -42,7 +42,7 @@ use crate::boundary_b23;
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{refine, within_promise, Bounds, Equation, Given};
+use crate::inverse::{onto_saturated_liquid, refine, within_promise, Bounds, Equation, Given};
 use crate::math::{exp, ln};
 use crate::pair_ph_ps::Method;
 use crate::regions::{region3_phase, single_phase, within_range};
@@ -986,10 +986,27 @@ fn solve_exact_anywhere(h: f64, s: f64, indicated: Place, units: Units) -> Resul
             nearest = Some((*excess, *state));
         }
     }
-    match nearest {
-        Some((_, state)) => Ok(state.in_units(units)),
-        None => Err(refusal(h, s, beyond, units)),
+    if let Some((_, state)) = nearest {
+        return Ok(state.in_units(units));
     }
+    // A liquid root a hair below psat(T) that pointed to wet steam, where
+    // the wet iteration closed on the liquid side without a root: the
+    // saturated liquid at its T, when that reproduces (h, s). Only as a
+    // last resort: near x = 0, (h, s) barely tell a saturated liquid from
+    // wet steam a few microkelvin away, and the wet root, where found, is
+    // the state the point came from.
+    let liquid_below_line = outside
+        .iter()
+        .flatten()
+        .find(|(place, next, _, _)| *place == Place::One && *next == Place::Wet);
+    if let Some((_, _, _, state)) = liquid_below_line {
+        let given = ((Given::Enthalpy, h), (Given::Entropy, s));
+        let saturated = onto_saturated_liquid(*state.native(), given.0, given.1);
+        if saturated.p != state.native().p {
+            return Ok(single_state(Place::One, saturated).in_units(units));
+        }
+    }
+    Err(refusal(h, s, beyond, units))
 }
 
 /// The error for a point that has no state: no state in range for an

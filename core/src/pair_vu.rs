@@ -24,7 +24,9 @@
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{refine, reproduces_as_promised, within_promise, Bounds, Equation, Given};
+use crate::inverse::{
+    onto_saturated_liquid, refine, reproduces_as_promised, within_promise, Bounds, Equation, Given,
+};
 use crate::math::ln;
 use crate::region3_density::Branch;
 use crate::regions::{locate, region3_phase, single_phase, Located};
@@ -187,7 +189,10 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
             let props = refine(equation, targets.0, targets.1, (rho, 700.0), bounds).ok()?;
             just_inside_region3(props, rho, targets)
         }
-        Equation::Region1 => onto_saturated_liquid(liquid(v, u)?, v, u),
+        Equation::Region1 => {
+            let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
+            onto_saturated_liquid(liquid(v, u)?, targets.0, targets.1)
+        }
         Equation::Region2 => {
             // u rises with T along the isochore: above its u at 1073.15 K
             // the state is region 5's, if any (one isotherm solve, where
@@ -263,29 +268,6 @@ fn liquid(v: f64, u: f64) -> Option<Properties> {
         (10.0, t0),
         (MIN_TEMPERATURE, REGION13_TEMPERATURE),
     )
-}
-
-/// A region 1 solution a hair below psat(T) — (v, u) fix a liquid's
-/// pressure only loosely, dv = −v·κT·dp, κT ≈ 5e-4 /MPa — is the saturated
-/// liquid at its T when that reproduces v and u to the promise (a
-/// saturated liquid's own (v, u) otherwise finds no state: the liquid
-/// lands in region 2, the wet iteration at x = 0 misses).
-fn onto_saturated_liquid(props: Properties, v: f64, u: f64) -> Properties {
-    if props.t > REGION13_TEMPERATURE {
-        return props;
-    }
-    let p_sat = saturation_pressure(props.t);
-    if props.p >= p_sat {
-        return props;
-    }
-    let saturated = Equation::Region1.evaluate(p_sat, props.t);
-    if within_promise(Given::SpecificVolume, saturated.v, v)
-        && within_promise(Given::InternalEnergy, saturated.u, u)
-    {
-        saturated
-    } else {
-        props
-    }
 }
 
 /// Newton in (p, T) together on `equation` from `start`, T kept within a

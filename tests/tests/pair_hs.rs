@@ -882,3 +882,31 @@ fn assert_each_comes_back(cases: &[(f64, f64, Units)]) {
         assert!(close(state.entropy(), s), "s of {what}: {state:?}");
     }
 }
+
+/// Found by fuzzing `State::solve` (EnthalpyEntropy, exact): (h, s) =
+/// (1.8076291595381142 kJ/kg, 0.006609921714672585 kJ/(kg·K)), the
+/// saturated liquid near 273.59 K, was `NotConverged`. Region 1's root lay
+/// 1.3e-9 (relative) below psat(T), so it pointed to wet steam, and the
+/// wet iteration closed on the liquid side without a root. The saturated
+/// liquid at the root's T reproduces (h, s) to the promise and is the
+/// state. Saturated liquids from 273.16 K to 400 K (R7-97(2012) region 1
+/// at psat(T), the triple point's neighbourhood where h ≈ v·p matters
+/// most) and liquids a few ulps of p above them come back.
+#[test]
+fn saturated_liquid_near_the_triple_point_comes_back() {
+    let (h, s) = (1.8076291595381142, 0.006609921714672585);
+    let state = State::from_hs(h, s, NATIVE).unwrap();
+    assert!(reproduces(state.enthalpy(), h), "{state:?}");
+    assert!(reproduces(state.entropy(), s), "{state:?}");
+
+    for t in span(273.16, 400.0, 200) {
+        let p_sat = saturation_pressure(t);
+        for p in [p_sat, p_sat * (1.0 + 1e-15), p_sat * (1.0 + 1e-12)] {
+            let a = State::from_pt(p, t, NATIVE).unwrap();
+            let b = State::from_hs(a.enthalpy(), a.entropy(), NATIVE)
+                .unwrap_or_else(|e| panic!("({p} MPa, {t} K): {e}"));
+            assert!(reproduces(b.enthalpy(), a.enthalpy()), "{a:?} → {b:?}");
+            assert!(reproduces(b.entropy(), a.entropy()), "{a:?} → {b:?}");
+        }
+    }
+}
