@@ -10,18 +10,21 @@
 //! exact; with them the mixing points couple the two, and the sweeps
 //! repeat until the extraction fractions stop changing.
 
-use super::closed_heater::{desuperheating_zone, end_states, HeaterApproach};
-use super::cycle_result::{
+use self::result::{
     Component, ComponentKind, CycleResult, PointLabel, PointRole, StatePoint, Stream,
     MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
 };
-use super::cycle_spec::{CycleSpec, Drains, Heater, HeaterKind, Supply, MAX_CASINGS, MAX_HEATERS};
-use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
-use super::heat_transfer::condensate;
-use super::mixing::{mix, throttle as throttle_to};
-use super::pump::compress;
-use super::turbine::expand;
-use super::{check_efficiency, native, PlantFigure, PlantPart};
+use self::spec::{CycleSpec, Drains, Heater, HeaterKind, Supply, MAX_CASINGS, MAX_HEATERS};
+use crate::plant::closed_heater::{desuperheating_zone, end_states, HeaterApproach};
+use crate::plant::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
+use crate::plant::heat_transfer::condensate;
+use crate::plant::mixing::{mix, throttle as throttle_to};
+use crate::plant::pump::compress;
+use crate::plant::turbine::expand;
+use crate::plant::{check_efficiency, native, PlantFigure, PlantPart};
+pub(super) mod result;
+pub(super) mod spec;
+
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
 use crate::units::{BTU_KJ, POUND_MASS_KG};

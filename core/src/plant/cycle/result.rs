@@ -1,7 +1,7 @@
 //! What a cycle solve returns: the state points, every component's
 //! streams and balances, and the cycle's performance figures.
 
-use super::cycle_spec::{MAX_CASINGS, MAX_HEATERS};
+use super::spec::{MAX_CASINGS, MAX_HEATERS};
 use crate::{State, Units};
 
 /// The most state points a result holds.
