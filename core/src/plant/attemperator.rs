@@ -76,9 +76,8 @@ pub fn spray_for_temperature(
         ATTEMPERATOR,
         &[spray_flow, flow + spray_flow, entropy_generation],
     )?;
-    let throughput =
-        ((flow + spray_flow) * o.s).abs() + (flow * s.s).abs() + (spray_flow * w.s).abs();
-    second_law(ATTEMPERATOR, entropy_generation, throughput, units)?;
+    let entropy_flows = [(flow + spray_flow) * o.s, flow * s.s, spray_flow * w.s];
+    second_law(ATTEMPERATOR, entropy_generation, entropy_flows, units)?;
     Ok(Spray {
         spray_flow,
         outlet: outlet.in_units(units),

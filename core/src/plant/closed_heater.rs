@@ -73,7 +73,7 @@ pub fn closed_heater(
         None => (0.0, *d),
     };
     let duty = flow * (b.h - a.h);
-    let extraction_flow = (duty - c_flow * (c.h - d.h)) / (e.h - d.h);
+    let extraction_flow = steam_for_duty(duty, c_flow, c.h, d.h, e.h);
     if extraction_flow < 0.0 {
         return Err(refuse(
             CLOSED_HEATER,
@@ -84,11 +84,8 @@ pub fn closed_heater(
     let entropy_generation =
         extraction_flow * (d.s - e.s) + c_flow * (d.s - c.s) + flow * (b.s - a.s);
     finite_figures(CLOSED_HEATER, &[duty, extraction_flow, entropy_generation])?;
-    let throughput = (extraction_flow * e.s).abs()
-        + (c_flow * c.s).abs()
-        + (flow * a.s).abs()
-        + (flow * b.s).abs();
-    second_law(CLOSED_HEATER, entropy_generation, throughput, units)?;
+    let entropy_flows = [extraction_flow * e.s, c_flow * c.s, flow * a.s, flow * b.s];
+    second_law(CLOSED_HEATER, entropy_generation, entropy_flows, units)?;
     Ok(ClosedHeater {
         feedwater_out: fw_out.in_units(units),
         drain_out: drain.in_units(units),
@@ -96,6 +93,20 @@ pub fn closed_heater(
         duty: units.from_native(Quantity::Enthalpy, duty),
         entropy_generation: units.from_native(Quantity::Entropy, entropy_generation),
     })
+}
+
+/// The steam a closed heater condenses, from its energy balance: the
+/// `duty` its feedwater takes, less what `cascaded_flow` of drains at
+/// `h_cascaded` give up falling to the drain enthalpy `h_drain`, over
+/// what each unit of steam at `h_steam` gives up.
+pub(crate) fn steam_for_duty(
+    duty: f64,
+    cascaded_flow: f64,
+    h_cascaded: f64,
+    h_drain: f64,
+    h_steam: f64,
+) -> f64 {
+    (duty - cascaded_flow * (h_cascaded - h_drain)) / (h_steam - h_drain)
 }
 
 /// The feedwater outlet and drain states (native units) that the

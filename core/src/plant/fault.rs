@@ -194,14 +194,18 @@ pub const ENTROPY_ALLOWANCE: f64 = 2e-5;
 
 /// The second law for one component: the entropy it generates
 /// (native, flow × kJ/(kg·K)) is not negative beyond [`ENTROPY_ALLOWANCE`]
-/// of its `throughput` (the sum of |flow × s| of its streams); reported
-/// in `units`.
+/// of its throughput, the sum of the sizes of its `entropy_flows` (each
+/// stream's flow × s, and any heat over the temperature it crosses at,
+/// in the order given); reported in `units`.
 pub(crate) fn second_law(
     part: PlantPart,
     generation: f64,
-    throughput: f64,
+    entropy_flows: impl IntoIterator<Item = f64>,
     units: Units,
 ) -> Result<(), Error> {
+    let throughput = entropy_flows
+        .into_iter()
+        .fold(0.0, |sum, flow: f64| sum + flow.abs());
     if generation >= -ENTROPY_ALLOWANCE * throughput {
         Ok(())
     } else {

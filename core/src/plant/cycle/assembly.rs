@@ -131,18 +131,18 @@ impl Assembly {
             self.coldest
         };
         let generation = entropy_flow(outlets) - entropy_flow(inlets) - heat_in / boundary;
-        let throughput = inlets
+        let entropy_flows = inlets
             .iter()
             .chain(outlets)
-            .map(|(m, s)| (m * s.native().s).abs())
-            .sum::<f64>()
-            + (heat_in / boundary).abs();
+            .map(|(m, s)| m * s.native().s)
+            .chain([heat_in / boundary]);
         if self.second_law_breach.is_none() {
             let part = PlantPart {
                 name: kind.name(),
                 number,
             };
-            self.second_law_breach = second_law(part, generation, throughput, Units::Native).err();
+            self.second_law_breach =
+                second_law(part, generation, entropy_flows, Units::Native).err();
         }
         let mut c = Component {
             kind,

@@ -9,7 +9,7 @@ use super::{at, heater_part, REHEATER};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::plant::fault::{refuse, refuse_with};
 use crate::plant::mixing::throttle as throttle_to;
-use crate::plant::turbine::expand;
+use crate::plant::turbine::{check_pressure_falls, expand};
 use crate::plant::{check_efficiency, native, PlantFigure, PlantPart};
 use crate::{Error, Quantity, State, Units};
 
@@ -69,12 +69,7 @@ impl ExpansionLine {
             if let (1, Some(reheat)) = (c, spec.reheat) {
                 inlet = line.reheat(inlet, reheat, units)?;
             }
-            if p_exhaust >= inlet.native().p {
-                return Err(refuse(
-                    part,
-                    "its exhaust pressure is not below its inlet pressure",
-                ));
-            }
+            check_pressure_falls(part, inlet.native().p, p_exhaust)?;
             inlet = line.expand_casing(spec, c, inlet, p_exhaust, efficiency, &mut next)?;
         }
         if next < heaters.len() {

@@ -7,9 +7,10 @@
 use super::spec::{CycleSpec, Drains, Heater, HeaterKind, MAX_HEATERS};
 use super::train::{pump_efficiency, FeedwaterTrain};
 use super::{at, heater_part, FLOW_ROUNDING};
-use crate::plant::closed_heater::end_states;
+use crate::plant::closed_heater::{end_states, steam_for_duty};
 use crate::plant::fault::refuse;
 use crate::plant::mixing::mix;
+use crate::plant::open_heater::open_heater_balance;
 use crate::plant::pump::compress;
 use crate::plant::PlantPart;
 use crate::{Error, Saturation, State, Units};
@@ -274,12 +275,16 @@ fn closed_heater_flows(
     let h_out = w.feedwater_out.native().h;
     let h_drain = w.drain.native().h;
     let rise = h_out - h_in;
-    let recovered = c_flow * (h_cascade - h_drain);
     let (m, tubes) = match drains {
-        Drains::CascadeBackward => ((above * rise - recovered) / (h_steam - h_drain), above),
+        Drains::CascadeBackward => (
+            steam_for_duty(above * rise, c_flow, h_cascade, h_drain, h_steam),
+            above,
+        ),
         // The drains join the feedwater after the tubes, so the tubes
-        // carry what leaves less the steam and drains condensed here.
+        // carry what leaves less the steam and drains condensed here, and
+        // the steam also heats its own condensate by the rise.
         Drains::PumpForward => {
+            let recovered = c_flow * (h_cascade - h_drain);
             let m = ((above - c_flow) * rise - recovered) / (h_steam - h_drain + rise);
             (m, above - m - c_flow)
         }
@@ -302,8 +307,8 @@ fn open_heater_flows(
     let h_in = w.feedwater_in.native().h;
     let h_out = w.feedwater_out.native().h;
     let h_cascade = if c_flow > 0.0 { h_cascade } else { h_in };
-    let m = (above * (h_out - h_in) - c_flow * (h_cascade - h_in)) / (h_steam - h_in);
-    w.feedwater_flow = above - m - c_flow;
+    let (m, feedwater_flow) = open_heater_balance(above, h_out, h_in, (c_flow, h_cascade), h_steam);
+    w.feedwater_flow = feedwater_flow;
     w.drain_flow = 0.0;
     m
 }
