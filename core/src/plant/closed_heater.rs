@@ -178,19 +178,40 @@ pub(crate) fn end_states(
             "its feedwater would boil: its pressure is too low for its outlet temperature",
         ));
     }
-    let drain = match approach.drain_cooler_approach {
-        None => *Saturation::at_pressure(shell.p, Units::Native)
+    let drain = drain_state(
+        approach.drain_cooler_approach,
+        (shell.p, t_shell),
+        fw.t,
+        units,
+        part,
+    )?;
+    Ok((fw_out, drain))
+}
+
+/// The drain leaving a shell at pressure and saturation temperature
+/// `(p_shell, t_shell)` (native): saturated liquid without a drain
+/// cooler, else `drain_cooler_approach` (in `units`) above the feedwater
+/// inlet temperature `t_feedwater_in`, below `t_shell`.
+fn drain_state(
+    drain_cooler_approach: Option<f64>,
+    (p_shell, t_shell): (f64, f64),
+    t_feedwater_in: f64,
+    units: Units,
+    part: PlantPart,
+) -> Result<State, Error> {
+    let caller = |e| in_caller_units(e, units);
+    match drain_cooler_approach {
+        None => Ok(*Saturation::at_pressure(p_shell, Units::Native)
             .map_err(caller)?
-            .liquid(),
+            .liquid()),
         Some(dca) => {
-            let t_drain = fw.t + native(Quantity::TemperatureDifference, dca, units)?;
+            let t_drain = t_feedwater_in + native(Quantity::TemperatureDifference, dca, units)?;
             if dca < 0.0 || t_drain >= t_shell {
                 return Err(refuse(part, "its drain cooler approach is negative or puts the drain at or above the shell saturation temperature"));
             }
-            State::from_pt(shell.p, t_drain, Units::Native).map_err(caller)?
+            Ok(State::from_pt(p_shell, t_drain, Units::Native).map_err(caller)?)
         }
-    };
-    Ok((fw_out, drain))
+    }
 }
 
 /// With a negative TTD the feedwater leaves above the shell saturation
