@@ -17,6 +17,11 @@ use crate::{Error, Saturation, State, Units};
 
 /// Sweeps allowed for the pumped-forward drains' fixed point; it
 /// contracts by roughly the drain-to-feedwater flow ratio per sweep.
+/// Measured (issue 13): the 461 pumped-forward trains of the random
+/// cycle campaign (`random_inputs.rs`, `cycle_solver_within_physical_limits`,
+/// which fails on any cycle refused as not converged) settle in at most
+/// 23 sweeps, 2962 more drawn the same way from another seed in at most
+/// 25, those of the plant tests in at most 9: 60 is more than twice that.
 const MAX_SWEEPS: usize = 60;
 /// Extraction fractions that move less than this between sweeps are
 /// converged (they are fractions of the throttle flow, so absolute).
