@@ -1,10 +1,9 @@
 //! An attemperator (desuperheater): water sprayed into superheated steam
 //! to bring it down to a target temperature, mixing at the steam pressure.
 
-use super::closed_heater::finite_flow;
 use super::fault::{finite_figures, in_caller_units, refuse, second_law};
-use super::native;
 use super::PlantPart;
+use super::{finite_flow, native};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
 use crate::{Error, Phase, Quantity, State, Units};

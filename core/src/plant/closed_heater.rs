@@ -7,7 +7,7 @@
 //! energy balance. Water-side pressure drop is not modelled.
 
 use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
-use super::native;
+use super::{finite_flow, native};
 use super::{PlantFigure, PlantPart};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
@@ -258,12 +258,4 @@ pub(crate) fn desuperheating_zone(
         ));
     }
     Ok(())
-}
-
-/// A mass flow given to `part`: finite and not negative.
-pub(crate) fn finite_flow(flow: f64, part: PlantPart) -> Result<f64, Error> {
-    if !flow.is_finite() || flow < 0.0 {
-        return Err(refuse(part, "a mass flow is negative or not finite"));
-    }
-    Ok(flow)
 }

@@ -59,6 +59,14 @@ pub(crate) fn check_efficiency(efficiency: f64, part: PlantPart) -> Result<f64, 
     Ok(efficiency)
 }
 
+/// A mass flow given to `part`: finite and not negative.
+pub(crate) fn finite_flow(flow: f64, part: PlantPart) -> Result<f64, Error> {
+    if !flow.is_finite() || flow < 0.0 {
+        return Err(fault::refuse(part, "a mass flow is negative or not finite"));
+    }
+    Ok(flow)
+}
+
 /// A finite input in the caller's units, converted to native units.
 pub(crate) fn native(quantity: Quantity, value: f64, units: Units) -> Result<f64, Error> {
     if !value.is_finite() {

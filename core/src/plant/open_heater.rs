@@ -3,9 +3,8 @@
 //! saturated liquid (common practice for a heater at equilibrium). The
 //! extraction flow follows from the energy balance.
 
-use super::closed_heater::finite_flow;
 use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
-use super::{PlantFigure, PlantPart};
+use super::{finite_flow, PlantFigure, PlantPart};
 use crate::{Error, Quantity, Saturation, State, Units};
 
 const OPEN_HEATER: PlantPart = PlantPart::single("open heater");
