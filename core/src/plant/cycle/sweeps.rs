@@ -232,32 +232,33 @@ fn sweep_down(
     let mut change: f64 = 0.0;
     for j in 0..heaters.len() {
         let h_steam = shell[j].native().h;
-        let (c_flow, h_cascade) = match cascade {
-            Some((m, from)) => (m, water[from].drain.native().h),
+        let (cascaded_flow, h_cascaded) = match cascade {
+            Some((flow, from)) => (flow, water[from].drain.native().h),
             None => (0.0, 0.0),
         };
         let w = &mut water[j];
-        let m = match heaters[j].kind {
+        let extraction = match heaters[j].kind {
             HeaterKind::Closed { drains, .. } => {
-                let m = closed_heater_flows(w, drains, above, c_flow, h_cascade, h_steam);
+                let extraction =
+                    closed_heater_flows(w, drains, above, cascaded_flow, h_cascaded, h_steam);
                 cascade = (drains == Drains::CascadeBackward).then_some((w.drain_flow, j));
-                m
+                extraction
             }
             HeaterKind::Open => {
                 cascade = None;
-                open_heater_flows(w, above, c_flow, h_cascade, h_steam)
+                open_heater_flows(w, above, cascaded_flow, h_cascaded, h_steam)
             }
         };
-        if m < 0.0 || w.feedwater_flow < 0.0 {
+        if extraction < 0.0 || w.feedwater_flow < 0.0 {
             return Err(refuse(
                 heater_part(&heaters[j], j),
                 "its energy balance needs a negative extraction or feedwater flow",
             ));
         }
         w.outlet_flow = above;
-        w.cascaded_in = (c_flow > 0.0).then(|| (c_flow, j.saturating_sub(1)));
-        change = change.max((m - w.extraction_flow).abs());
-        w.extraction_flow = m;
+        w.cascaded_in = (cascaded_flow > 0.0).then(|| (cascaded_flow, j.saturating_sub(1)));
+        change = change.max((extraction - w.extraction_flow).abs());
+        w.extraction_flow = extraction;
         above = w.feedwater_flow;
     }
     flows.condensate_flow = above;
@@ -267,53 +268,59 @@ fn sweep_down(
 
 /// A closed heater's extraction flow, which it returns, and its tube and
 /// drain flows, from its energy balance: `above` leaves toward the
-/// boiler, `c_flow` of drains at `h_cascade` flash into its shell.
+/// boiler, `cascaded_flow` of drains at `h_cascaded` flash into its shell.
 fn closed_heater_flows(
     w: &mut HeaterWater,
     drains: Drains,
     above: f64,
-    c_flow: f64,
-    h_cascade: f64,
+    cascaded_flow: f64,
+    h_cascaded: f64,
     h_steam: f64,
 ) -> f64 {
     let h_in = w.feedwater_in.native().h;
     let h_out = w.feedwater_out.native().h;
     let h_drain = w.drain.native().h;
     let rise = h_out - h_in;
-    let (m, tubes) = match drains {
+    let (extraction, tubes) = match drains {
         Drains::CascadeBackward => (
-            steam_for_duty(above * rise, c_flow, h_cascade, h_drain, h_steam),
+            steam_for_duty(above * rise, cascaded_flow, h_cascaded, h_drain, h_steam),
             above,
         ),
         // The drains join the feedwater after the tubes, so the tubes
         // carry what leaves less the steam and drains condensed here, and
         // the steam also heats its own condensate by the rise.
         Drains::PumpForward => {
-            let recovered = c_flow * (h_cascade - h_drain);
-            let m = ((above - c_flow) * rise - recovered) / (h_steam - h_drain + rise);
-            (m, above - m - c_flow)
+            let recovered = cascaded_flow * (h_cascaded - h_drain);
+            let extraction =
+                ((above - cascaded_flow) * rise - recovered) / (h_steam - h_drain + rise);
+            (extraction, above - extraction - cascaded_flow)
         }
     };
     w.feedwater_flow = tubes;
-    w.drain_flow = m + c_flow;
-    m
+    w.drain_flow = extraction + cascaded_flow;
+    extraction
 }
 
 /// An open heater's extraction flow, which it returns, and its condensate
 /// flow in from below, from its energy balance: `above` leaves as
-/// saturated liquid, `c_flow` of drains at `h_cascade` flash into it.
+/// saturated liquid, `cascaded_flow` of drains at `h_cascaded` flash into it.
 fn open_heater_flows(
     w: &mut HeaterWater,
     above: f64,
-    c_flow: f64,
-    h_cascade: f64,
+    cascaded_flow: f64,
+    h_cascaded: f64,
     h_steam: f64,
 ) -> f64 {
     let h_in = w.feedwater_in.native().h;
     let h_out = w.feedwater_out.native().h;
-    let h_cascade = if c_flow > 0.0 { h_cascade } else { h_in };
-    let (m, feedwater_flow) = open_heater_balance(above, h_out, h_in, (c_flow, h_cascade), h_steam);
+    let h_cascaded = if cascaded_flow > 0.0 {
+        h_cascaded
+    } else {
+        h_in
+    };
+    let (extraction, feedwater_flow) =
+        open_heater_balance(above, h_out, h_in, (cascaded_flow, h_cascaded), h_steam);
     w.feedwater_flow = feedwater_flow;
     w.drain_flow = 0.0;
-    m
+    extraction
 }
