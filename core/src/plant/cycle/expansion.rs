@@ -42,12 +42,11 @@ pub(super) struct ExpansionLine {
 }
 
 impl ExpansionLine {
-    /// Expands `throttle` through every casing of `spec`, reheating
-    /// before the second, and finds the steam at each extraction point.
-    pub(super) fn solve(spec: &CycleSpec, throttle: State) -> Result<ExpansionLine, Error> {
-        let units = spec.units;
-        let heaters = spec.heaters();
-        let mut line = ExpansionLine {
+    /// A line not yet expanded, every state in it `throttle`. (Built in
+    /// the caller's frame and filled by [`ExpansionLine::expand`]: a line
+    /// returned by value inside a `Result` is copied once more.)
+    pub(super) fn new(throttle: State) -> ExpansionLine {
+        ExpansionLine {
             groups: [Group {
                 casing: 0,
                 inlet: throttle,
@@ -59,7 +58,14 @@ impl ExpansionLine {
             extraction_casing: [0usize; MAX_HEATERS],
             reheat: None,
             exhaust: throttle,
-        };
+        }
+    }
+
+    /// Expands `throttle` through every casing of `spec`, reheating
+    /// before the second, and finds the steam at each extraction point.
+    pub(super) fn expand(&mut self, spec: &CycleSpec, throttle: State) -> Result<(), Error> {
+        let units = spec.units;
+        let heaters = spec.heaters();
         let mut next = 0;
         let mut inlet = throttle;
         for (c, casing) in spec.casings().iter().enumerate() {
@@ -67,10 +73,10 @@ impl ExpansionLine {
             let efficiency = check_efficiency(casing.isentropic_efficiency, part)?;
             let p_exhaust = native(Quantity::Pressure, casing.exhaust_pressure, units)?;
             if let (1, Some(reheat)) = (c, spec.reheat) {
-                inlet = line.reheat(inlet, reheat, units)?;
+                inlet = self.reheat(inlet, reheat, units)?;
             }
             check_pressure_falls(part, inlet.native().p, p_exhaust)?;
-            inlet = line.expand_casing(spec, c, inlet, p_exhaust, efficiency, &mut next)?;
+            inlet = self.expand_casing(spec, c, inlet, p_exhaust, efficiency, &mut next)?;
         }
         if next < heaters.len() {
             return Err(refuse(
@@ -78,8 +84,8 @@ impl ExpansionLine {
                 "its extraction pressure is below the condenser pressure",
             ));
         }
-        line.exhaust = inlet;
-        Ok(line)
+        self.exhaust = inlet;
+        Ok(())
     }
 
     /// The stage groups, from the throttle down.

@@ -5,10 +5,10 @@
 
 use super::assembly::{Assembly, Totals};
 use super::expansion::ExpansionLine;
-use super::result::{ComponentKind, CycleResult, PointRole, MAX_STREAMS};
+use super::result::{ComponentKind, PointRole, MAX_STREAMS};
 use super::spec::{Drains, Heater, HeaterKind, MAX_HEATERS};
 use super::sweeps::{HeaterWater, TrainFlows};
-use crate::{Error, State, Units};
+use crate::State;
 
 /// Everything the solve found, native units per unit throttle flow.
 pub(super) struct SolvedCycle<'a> {
@@ -24,14 +24,13 @@ pub(super) struct SolvedCycle<'a> {
 }
 
 impl SolvedCycle<'_> {
-    /// The result in `units`, once every limit in
-    /// [`solve_cycle`](super::solve_cycle)'s list holds.
-    pub(super) fn record(&self, units: Units) -> Result<CycleResult, Error> {
-        let mut out = Assembly::new(units, self.throttle, self.line.reheat, &self.hotwell);
-        let turbine_work = self.record_turbine(&mut out);
+    /// Records every point and component into `out` and returns the
+    /// cycle's totals.
+    pub(super) fn record(&self, out: &mut Assembly) -> Totals {
+        let turbine_work = self.record_turbine(out);
         let reheat_heat = self.reheat_heat();
-        let mut pump_work = self.record_heaters(&mut out);
-        let (condensate_flow, condenser_duty) = self.record_condenser(&mut out);
+        let mut pump_work = self.record_heaters(out);
+        let (condensate_flow, condenser_duty) = self.record_condenser(out);
         pump_work += out.pump(
             ComponentKind::CondensatePump,
             PointRole::CondensatePumpOutlet,
@@ -57,7 +56,7 @@ impl SolvedCycle<'_> {
         {
             *f = w.extraction_flow;
         }
-        out.finish(Totals {
+        Totals {
             extraction_fractions: fractions,
             heater_count: self.heaters.len(),
             turbine_work,
@@ -65,7 +64,7 @@ impl SolvedCycle<'_> {
             boiler_heat: self.boiler_heat,
             reheat_heat,
             condenser_duty,
-        })
+        }
     }
 
     /// The throttle, each stage group (the reheater before the second

@@ -65,37 +65,45 @@ pub(super) struct TrainFlows {
 }
 
 impl TrainFlows {
+    /// A train not yet swept: the hotwell's water everywhere, no steam
+    /// extracted. (Built in the caller's frame and filled by
+    /// [`solve_train`]: flows returned by value inside a `Result` are
+    /// copied once more.)
+    pub(super) fn new(train: &FeedwaterTrain, hotwell: &State) -> TrainFlows {
+        TrainFlows {
+            water: [HeaterWater {
+                feedwater_in: *hotwell,
+                feedwater_out: *hotwell,
+                drain: *hotwell,
+                drain_pumped: *hotwell,
+                mixed: *hotwell,
+                pump_outlet: *hotwell,
+                extraction_flow: 0.0,
+                feedwater_flow: 1.0,
+                outlet_flow: 1.0,
+                drain_flow: 0.0,
+                cascaded_in: None,
+            }; MAX_HEATERS],
+            boiler_inlet: train.condensate_pump_outlet,
+            condensate_flow: 1.0,
+            to_condenser: None,
+        }
+    }
+
     /// The steam the first `k` heaters extract.
     pub(super) fn extracted_before(&self, k: usize) -> f64 {
         self.water[..k].iter().map(|w| w.extraction_flow).sum()
     }
 }
 
-/// Sweeps the train of `spec` until its extraction flows settle.
+/// Sweeps the train of `spec`, starting from `flows` as
+/// [`TrainFlows::new`] leaves them, until its extraction flows settle.
 pub(super) fn solve_train(
     spec: &CycleSpec,
     train: &FeedwaterTrain,
     shell: &[State; MAX_HEATERS],
-    hotwell: &State,
-) -> Result<TrainFlows, Error> {
-    let mut flows = TrainFlows {
-        water: [HeaterWater {
-            feedwater_in: *hotwell,
-            feedwater_out: *hotwell,
-            drain: *hotwell,
-            drain_pumped: *hotwell,
-            mixed: *hotwell,
-            pump_outlet: *hotwell,
-            extraction_flow: 0.0,
-            feedwater_flow: 1.0,
-            outlet_flow: 1.0,
-            drain_flow: 0.0,
-            cascaded_in: None,
-        }; MAX_HEATERS],
-        boiler_inlet: train.condensate_pump_outlet,
-        condensate_flow: 1.0,
-        to_condenser: None,
-    };
+    flows: &mut TrainFlows,
+) -> Result<(), Error> {
     let pumped_forward = spec.heaters().iter().any(|h| {
         matches!(
             h.kind,
@@ -108,10 +116,10 @@ pub(super) fn solve_train(
     let mut last_change = f64::INFINITY;
     for sweep in 0..MAX_SWEEPS {
         flows.boiler_inlet = sweep_up(spec, train, shell, &mut flows.water, sweep)?;
-        let change = sweep_down(spec.heaters(), shell, &mut flows)?;
+        let change = sweep_down(spec.heaters(), shell, flows)?;
         let at_rounding_floor = change <= FLOW_ROUNDING && change >= last_change;
         if !pumped_forward || change <= SWEEP_TOLERANCE || at_rounding_floor {
-            return Ok(flows);
+            return Ok(());
         }
         last_change = change;
     }
