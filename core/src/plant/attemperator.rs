@@ -1,10 +1,9 @@
 //! An attemperator (desuperheater): water sprayed into superheated steam
 //! to bring it down to a target temperature, mixing at the steam pressure.
 
-use super::closed_heater::finite_flow;
 use super::fault::{finite_figures, in_caller_units, refuse, second_law};
-use super::native;
 use super::PlantPart;
+use super::{finite_flow, native};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
 use crate::{Error, Phase, Quantity, State, Units};
@@ -76,9 +75,8 @@ pub fn spray_for_temperature(
         ATTEMPERATOR,
         &[spray_flow, flow + spray_flow, entropy_generation],
     )?;
-    let throughput =
-        ((flow + spray_flow) * o.s).abs() + (flow * s.s).abs() + (spray_flow * w.s).abs();
-    second_law(ATTEMPERATOR, entropy_generation, throughput, units)?;
+    let entropy_flows = [(flow + spray_flow) * o.s, flow * s.s, spray_flow * w.s];
+    second_law(ATTEMPERATOR, entropy_generation, entropy_flows, units)?;
     Ok(Spray {
         spray_flow,
         outlet: outlet.in_units(units),

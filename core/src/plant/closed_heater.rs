@@ -7,7 +7,7 @@
 //! energy balance. Water-side pressure drop is not modelled.
 
 use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
-use super::native;
+use super::{finite_flow, native};
 use super::{PlantFigure, PlantPart};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::saturation_line::saturation_temperature;
@@ -73,7 +73,7 @@ pub fn closed_heater(
         None => (0.0, *d),
     };
     let duty = flow * (b.h - a.h);
-    let extraction_flow = (duty - c_flow * (c.h - d.h)) / (e.h - d.h);
+    let extraction_flow = steam_for_duty(duty, c_flow, c.h, d.h, e.h);
     if extraction_flow < 0.0 {
         return Err(refuse(
             CLOSED_HEATER,
@@ -84,11 +84,8 @@ pub fn closed_heater(
     let entropy_generation =
         extraction_flow * (d.s - e.s) + c_flow * (d.s - c.s) + flow * (b.s - a.s);
     finite_figures(CLOSED_HEATER, &[duty, extraction_flow, entropy_generation])?;
-    let throughput = (extraction_flow * e.s).abs()
-        + (c_flow * c.s).abs()
-        + (flow * a.s).abs()
-        + (flow * b.s).abs();
-    second_law(CLOSED_HEATER, entropy_generation, throughput, units)?;
+    let entropy_flows = [extraction_flow * e.s, c_flow * c.s, flow * a.s, flow * b.s];
+    second_law(CLOSED_HEATER, entropy_generation, entropy_flows, units)?;
     Ok(ClosedHeater {
         feedwater_out: fw_out.in_units(units),
         drain_out: drain.in_units(units),
@@ -96,6 +93,20 @@ pub fn closed_heater(
         duty: units.from_native(Quantity::Enthalpy, duty),
         entropy_generation: units.from_native(Quantity::Entropy, entropy_generation),
     })
+}
+
+/// The steam a closed heater condenses, from its energy balance: the
+/// `duty` its feedwater takes, less what `cascaded_flow` of drains at
+/// `h_cascaded` give up falling to the drain enthalpy `h_drain`, over
+/// what each unit of steam at `h_steam` gives up.
+pub(crate) fn steam_for_duty(
+    duty: f64,
+    cascaded_flow: f64,
+    h_cascaded: f64,
+    h_drain: f64,
+    h_steam: f64,
+) -> f64 {
+    (duty - cascaded_flow * (h_cascaded - h_drain)) / (h_steam - h_drain)
 }
 
 /// The feedwater outlet and drain states (native units) that the
@@ -167,19 +178,40 @@ pub(crate) fn end_states(
             "its feedwater would boil: its pressure is too low for its outlet temperature",
         ));
     }
-    let drain = match approach.drain_cooler_approach {
-        None => *Saturation::at_pressure(shell.p, Units::Native)
+    let drain = drain_state(
+        approach.drain_cooler_approach,
+        (shell.p, t_shell),
+        fw.t,
+        units,
+        part,
+    )?;
+    Ok((fw_out, drain))
+}
+
+/// The drain leaving a shell at pressure and saturation temperature
+/// `(p_shell, t_shell)` (native): saturated liquid without a drain
+/// cooler, else `drain_cooler_approach` (in `units`) above the feedwater
+/// inlet temperature `t_feedwater_in`, below `t_shell`.
+fn drain_state(
+    drain_cooler_approach: Option<f64>,
+    (p_shell, t_shell): (f64, f64),
+    t_feedwater_in: f64,
+    units: Units,
+    part: PlantPart,
+) -> Result<State, Error> {
+    let caller = |e| in_caller_units(e, units);
+    match drain_cooler_approach {
+        None => Ok(*Saturation::at_pressure(p_shell, Units::Native)
             .map_err(caller)?
-            .liquid(),
+            .liquid()),
         Some(dca) => {
-            let t_drain = fw.t + native(Quantity::TemperatureDifference, dca, units)?;
+            let t_drain = t_feedwater_in + native(Quantity::TemperatureDifference, dca, units)?;
             if dca < 0.0 || t_drain >= t_shell {
                 return Err(refuse(part, "its drain cooler approach is negative or puts the drain at or above the shell saturation temperature"));
             }
-            State::from_pt(shell.p, t_drain, Units::Native).map_err(caller)?
+            Ok(State::from_pt(p_shell, t_drain, Units::Native).map_err(caller)?)
         }
-    };
-    Ok((fw_out, drain))
+    }
 }
 
 /// With a negative TTD the feedwater leaves above the shell saturation
@@ -226,12 +258,4 @@ pub(crate) fn desuperheating_zone(
         ));
     }
     Ok(())
-}
-
-/// A mass flow given to `part`: finite and not negative.
-pub(crate) fn finite_flow(flow: f64, part: PlantPart) -> Result<f64, Error> {
-    if !flow.is_finite() || flow < 0.0 {
-        return Err(refuse(part, "a mass flow is negative or not finite"));
-    }
-    Ok(flow)
 }

@@ -2,9 +2,8 @@
 //! reheater heat input, condenser duty; and the condensate a condenser
 //! delivers.
 
-use super::closed_heater::finite_flow;
 use super::fault::{finite_figures, refuse_with};
-use super::native;
+use super::{finite_flow, native};
 use super::{PlantFigure, PlantPart};
 use crate::constants::MIN_TEMPERATURE;
 use crate::saturation_line::saturation_temperature;

@@ -1,10 +1,9 @@
 //! Adiabatic mixing of streams at one pressure, and throttling through a
 //! valve or trap (constant enthalpy).
 
-use super::closed_heater::finite_flow;
 use super::fault::{finite_figures, in_caller_units, refuse};
-use super::native;
 use super::PlantPart;
+use super::{finite_flow, native};
 use crate::{Error, Quantity, State, Units};
 
 const MIXING_POINT: PlantPart = PlantPart::single("mixing point");

@@ -15,8 +15,6 @@
 mod attemperator;
 mod closed_heater;
 mod cycle;
-mod cycle_result;
-mod cycle_spec;
 pub(crate) mod fault;
 mod heat_transfer;
 mod mixing;
@@ -26,12 +24,12 @@ mod turbine;
 
 pub use attemperator::{spray_for_temperature, Spray};
 pub use closed_heater::{closed_heater, ClosedHeater, HeaterApproach};
-pub use cycle::solve_cycle;
-pub use cycle_result::{
+pub use cycle::result::{
     Component, ComponentKind, CycleResult, PointLabel, PointRole, StatePoint, Stream,
     MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
 };
-pub use cycle_spec::{
+pub use cycle::solve_cycle;
+pub use cycle::spec::{
     Casing, CycleSpec, Drains, Heater, HeaterKind, Reheat, Supply, MAX_CASINGS, MAX_HEATERS,
 };
 pub use fault::{PlantFigure, PlantPart, ENTROPY_ALLOWANCE};
@@ -59,6 +57,14 @@ pub(crate) fn check_efficiency(efficiency: f64, part: PlantPart) -> Result<f64, 
         ));
     }
     Ok(efficiency)
+}
+
+/// A mass flow given to `part`: finite and not negative.
+pub(crate) fn finite_flow(flow: f64, part: PlantPart) -> Result<f64, Error> {
+    if !flow.is_finite() || flow < 0.0 {
+        return Err(fault::refuse(part, "a mass flow is negative or not finite"));
+    }
+    Ok(flow)
 }
 
 /// A finite input in the caller's units, converted to native units.

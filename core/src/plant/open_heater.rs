@@ -3,9 +3,8 @@
 //! saturated liquid (common practice for a heater at equilibrium). The
 //! extraction flow follows from the energy balance.
 
-use super::closed_heater::finite_flow;
 use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
-use super::{PlantFigure, PlantPart};
+use super::{finite_flow, PlantFigure, PlantPart};
 use crate::{Error, Quantity, Saturation, State, Units};
 
 const OPEN_HEATER: PlantPart = PlantPart::single("open heater");
@@ -64,8 +63,8 @@ pub fn open_heater(
             "its extraction steam is not hotter than its outlet, or its feedwater not colder",
         ));
     }
-    let extraction_flow = (out_flow * (o.h - a.h) - c_flow * (c.h - a.h)) / (e.h - a.h);
-    let feedwater_flow = out_flow - extraction_flow - c_flow;
+    let (extraction_flow, feedwater_flow) =
+        open_heater_balance(out_flow, o.h, a.h, (c_flow, c.h), e.h);
     if extraction_flow < 0.0 || feedwater_flow < 0.0 {
         return Err(refuse(
             OPEN_HEATER,
@@ -78,15 +77,35 @@ pub fn open_heater(
         OPEN_HEATER,
         &[extraction_flow, feedwater_flow, entropy_generation],
     )?;
-    let throughput = (out_flow * o.s).abs()
-        + (extraction_flow * e.s).abs()
-        + (c_flow * c.s).abs()
-        + (feedwater_flow * a.s).abs();
-    second_law(OPEN_HEATER, entropy_generation, throughput, units)?;
+    let entropy_flows = [
+        out_flow * o.s,
+        extraction_flow * e.s,
+        c_flow * c.s,
+        feedwater_flow * a.s,
+    ];
+    second_law(OPEN_HEATER, entropy_generation, entropy_flows, units)?;
     Ok(OpenHeater {
         outlet: outlet.in_units(units),
         extraction_flow,
         feedwater_flow,
         entropy_generation: units.from_native(Quantity::Entropy, entropy_generation),
     })
+}
+
+/// An open heater's energy and mass balances: the extraction steam at
+/// `h_steam` and the feedwater in from below at `h_feedwater` that,
+/// with the `cascaded` drains (flow, enthalpy), leave as `outlet_flow` at
+/// `h_outlet`. Returns (extraction flow, feedwater flow).
+pub(crate) fn open_heater_balance(
+    outlet_flow: f64,
+    h_outlet: f64,
+    h_feedwater: f64,
+    cascaded: (f64, f64),
+    h_steam: f64,
+) -> (f64, f64) {
+    let (c_flow, h_cascaded) = cascaded;
+    let extraction_flow = (outlet_flow * (h_outlet - h_feedwater)
+        - c_flow * (h_cascaded - h_feedwater))
+        / (h_steam - h_feedwater);
+    (extraction_flow, outlet_flow - extraction_flow - c_flow)
 }

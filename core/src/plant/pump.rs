@@ -8,6 +8,9 @@ use super::{check_efficiency, native};
 use super::{PlantFigure, PlantPart};
 use crate::{Error, Phase, Quantity, State, Units};
 
+/// MPa · m³/kg = MJ/kg: a thousand kJ/kg.
+const KJ_PER_MPA_M3: f64 = 1e3;
+
 /// How a stand-alone pump names itself in a refusal.
 const PUMP: PlantPart = PlantPart::single("pump");
 
@@ -97,8 +100,7 @@ pub fn compress(
     if b.h <= a.h {
         return Err(refuse(PUMP, TOO_SMALL_A_STEP));
     }
-    // MPa · m³/kg = MJ/kg: a thousand kJ/kg.
-    let incompressible_work = 1e3 * a.v * (p_out - a.p);
+    let incompressible_work = KJ_PER_MPA_M3 * a.v * (p_out - a.p);
     let energy = |x| units.from_native(Quantity::Enthalpy, x);
     Ok(Compression {
         inlet: *inlet,

@@ -43,12 +43,7 @@ pub fn expand(
     let efficiency = check_efficiency(isentropic_efficiency, TURBINE_SECTION)?;
     let p_out = native(Quantity::Pressure, exhaust_pressure, units)?;
     let start = inlet.native();
-    if p_out >= start.p {
-        return Err(refuse(
-            TURBINE_SECTION,
-            "its exhaust pressure is not below its inlet pressure",
-        ));
-    }
+    check_pressure_falls(TURBINE_SECTION, start.p, p_out)?;
     let ideal =
         State::from_ps(p_out, start.s, Units::Native).map_err(|e| in_caller_units(e, units))?;
     let h_out = start.h - efficiency * (start.h - ideal.native().h);
@@ -113,12 +108,7 @@ pub fn section_efficiency(
 /// balance when wet). In the inlet's units.
 pub fn section_efficiency_between(inlet: &State, exhaust: &State) -> Result<Expansion, Error> {
     let p_out = exhaust.native().p;
-    if p_out >= inlet.native().p {
-        return Err(refuse(
-            TURBINE_SECTION,
-            "its exhaust pressure is not below its inlet pressure",
-        ));
-    }
+    check_pressure_falls(TURBINE_SECTION, inlet.native().p, p_out)?;
     let units = inlet.units();
     let ideal = State::from_ps(p_out, inlet.native().s, Units::Native)
         .map_err(|e| in_caller_units(e, units))?;
@@ -127,6 +117,18 @@ pub fn section_efficiency_between(inlet: &State, exhaust: &State) -> Result<Expa
     // but not be infinite: the isentropic work must not vanish.
     finite_figures(TURBINE_SECTION, &[expansion.isentropic_efficiency])?;
     Ok(expansion)
+}
+
+/// Steam expands only toward a lower pressure: `part`'s exhaust
+/// pressure `p_out` lies below its inlet pressure `p_in`.
+pub(crate) fn check_pressure_falls(part: PlantPart, p_in: f64, p_out: f64) -> Result<(), Error> {
+    if p_out >= p_in {
+        return Err(refuse(
+            part,
+            "its exhaust pressure is not below its inlet pressure",
+        ));
+    }
+    Ok(())
 }
 
 /// A measured (p,T) point, which fixes a state only as single-phase

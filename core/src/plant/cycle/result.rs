@@ -1,14 +1,22 @@
 //! What a cycle solve returns: the state points, every component's
 //! streams and balances, and the cycle's performance figures.
 
-use super::cycle_spec::{MAX_CASINGS, MAX_HEATERS};
+use super::spec::{MAX_CASINGS, MAX_HEATERS};
 use crate::{State, Units};
 
-/// The most state points a result holds.
+/// The most state points a result holds. A cycle records at most five
+/// outside its casings and heaters (throttle, hot reheat, hotwell,
+/// condensate pump outlet, boiler inlet), one exhaust per casing and six
+/// per heater (extraction, steam at heater, feedwater out, drain, drain
+/// pumped, feedwater mixed; an open heater four): this leaves room.
 pub const MAX_POINTS: usize = 4 + MAX_CASINGS + 7 * MAX_HEATERS;
-/// The most components a result holds.
+/// The most components a result holds. A cycle records four outside its
+/// turbine and heaters (reheater, condenser, condensate pump, boiler), a
+/// stage group per casing and per extraction point at most, and four per
+/// heater at most (extraction line, heater, drain pump, mixing point).
 pub const MAX_COMPONENTS: usize = 4 + MAX_CASINGS + 6 * MAX_HEATERS;
-/// The most inlet (or outlet) streams of one component.
+/// The most inlet (or outlet) streams of one component: a closed
+/// heater's steam, cascaded drains and feedwater.
 pub const MAX_STREAMS: usize = 3;
 
 /// What a state point is.

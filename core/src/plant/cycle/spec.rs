@@ -3,9 +3,9 @@
 //! and the pumps. Fixed capacity, so a description lives on the stack and
 //! crosses the C ABI as one caller-owned block.
 
-use super::closed_heater::HeaterApproach;
-use super::fault::refuse;
-use super::PlantPart;
+use crate::plant::closed_heater::HeaterApproach;
+use crate::plant::fault::refuse;
+use crate::plant::PlantPart;
 use crate::{Error, Units};
 
 /// The most turbine casings a cycle may have (HP, IP, and two LP, say).
