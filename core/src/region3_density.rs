@@ -18,10 +18,12 @@
 //! saturated-density estimates.
 
 use crate::backward::sr5_05::{self, SaturationSide};
+use crate::bracketed_root::{bracketed_root, End, Step, Verdict};
 use crate::constants::{CRITICAL_DENSITY, SPECIFIC_GAS_CONSTANT};
 use crate::error::Error;
 use crate::region3::pressure_and_slope;
 use crate::saturated_density_estimate as estimate;
+use core::convert::Infallible;
 
 /// Which root of p(ρ, T) = p a caller wants.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -241,53 +243,56 @@ struct Root {
 }
 
 /// Newton's method on p(ρ) = p, falling back to bisection whenever a step
-/// would leave the bracket [lo, hi] that holds the root.
-fn newton_in_bracket(p: f64, t: f64, mut lo: f64, mut hi: f64, start: f64) -> Option<Root> {
-    let mut rho = start;
+/// would leave the bracket [lo, hi] that holds the root. Every density
+/// evaluated lies in [lo, hi] (the start is in it, each next point
+/// strictly inside or the midpoint), so the evaluated one replaces the end
+/// on the root's far side.
+fn newton_in_bracket(p: f64, t: f64, lo: f64, hi: f64, start: f64) -> Option<Root> {
+    // p − target and ∂p/∂ρ at the last density evaluated.
+    let (mut excess, mut slope) = (f64::NAN, f64::NAN);
     let mut last_excess = f64::INFINITY;
-    for _ in 0..MAX_NEWTON_STEPS {
-        let (pressure, slope) = pressure_and_slope(rho, t);
-        let excess = pressure - p;
-        if excess == 0.0 {
-            return Some(Root { rho, excess, slope });
-        }
-        if excess > 0.0 {
-            hi = hi.min(rho);
-        } else {
-            lo = lo.max(rho);
-        }
-        let newton = rho - excess / slope;
-        let newton_inside = slope > 0.0 && newton > lo && newton < hi;
-        let step = (newton - rho).abs();
-        if newton_inside && (step <= SETTLED * rho || excess.abs() <= SETTLED_PRESSURE * p) {
-            return Some(Root {
-                rho: newton,
-                excess,
-                slope,
-            });
-        }
-        // Beside the critical point the isotherm is nearly flat and Newton
-        // crawls: a sizeable step that did not halve the excess is followed
-        // by a bisection, so the bracket shrinks at least every other step.
-        // (At the rounding level the excess stops halving too, but the steps
-        // are tiny.)
-        let crawling = excess.abs() > 0.5 * last_excess && step > 1e-10 * rho;
-        last_excess = excess.abs();
-        let next = if newton_inside && !crawling {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 2.0 * f64::EPSILON * hi {
-            return Some(Root {
-                rho: next,
-                excess,
-                slope,
-            });
-        }
-        rho = next;
-    }
-    None
+    let ended = bracketed_root(
+        (lo, hi),
+        start,
+        MAX_NEWTON_STEPS,
+        |rho| {
+            let (pressure, dp) = pressure_and_slope(rho, t);
+            (excess, slope) = (pressure - p, dp);
+            if excess == 0.0 {
+                return Ok::<_, Infallible>(Verdict::Done(rho));
+            }
+            let newton = rho - excess / slope;
+            let step = (newton - rho).abs();
+            // Beside the critical point the isotherm is nearly flat and
+            // Newton crawls: a sizeable step that did not halve the excess
+            // is followed by a bisection, so the bracket shrinks at least
+            // every other step. (At the rounding level the excess stops
+            // halving too, but the steps are tiny.)
+            let crawling = excess.abs() > 0.5 * last_excess && step > 1e-10 * rho;
+            last_excess = excess.abs();
+            let settled = step <= SETTLED * rho || excess.abs() <= SETTLED_PRESSURE * p;
+            let next = if slope > 0.0 && settled {
+                Step::last(newton)
+            } else if slope > 0.0 && !crawling {
+                Step::to(newton)
+            } else {
+                Step::BISECT
+            };
+            Ok(if excess > 0.0 {
+                Verdict::RootBelow(next)
+            } else {
+                Verdict::RootAbove(next)
+            })
+        },
+        |lo, hi, _| hi - lo <= 2.0 * f64::EPSILON * hi,
+    );
+    let Ok(ended) = ended;
+    let rho = match ended.end {
+        End::Done(rho) => rho,
+        End::Closed => ended.x,
+        End::Exhausted => return None,
+    };
+    Some(Root { rho, excess, slope })
 }
 
 #[cfg(test)]
