@@ -39,6 +39,7 @@
 
 use crate::backward::{r7_97, sr2_01, sr3_03, sr4_04};
 use crate::boundary_b23;
+use crate::bracketed_root::{bracketed_root, End, Step, Verdict};
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
@@ -252,6 +253,10 @@ fn is_region5(h: f64, s: f64) -> bool {
     }
 }
 
+/// Steps of [`isotherm_pressure`]: bisection alone closes its bracket in
+/// ln p (at most 1e-200 to 100 MPa, 465 wide) to 1e-15 in under 60.
+const ISOTHERM_STEPS: u32 = 200;
+
 /// The pressure at which the isotherm `t` of a Gibbs equation has entropy
 /// `s`, within `range` (MPa), where s(range.0) ≥ s ≥ s(range.1): bisection
 /// in ln p, accelerated by Newton steps where they stay in the bracket.
@@ -261,38 +266,43 @@ fn isotherm_pressure(equation: Equation, t: f64, s: f64, range: (f64, f64)) -> O
         // (s − target, ∂s/∂ln p at constant T)
         (props.s - s, -1e3 * p * props.v * props.alpha_v)
     };
-    let (mut lo, mut hi) = (ln(range.0), ln(range.1));
+    let (lo, hi) = (ln(range.0), ln(range.1));
     let (f_lo, _) = excess(range.0);
     let (f_hi, _) = excess(range.1);
     if !(f_lo >= 0.0 && f_hi <= 0.0) {
         return None;
     }
     // Ideal-gas guess from the high end: s falls by R per unit of ln p.
-    let mut x = (hi + f_hi / SPECIFIC_GAS_CONSTANT).clamp(lo, hi);
-    for _ in 0..200 {
-        let (f, slope) = excess(exp(x));
-        if !f.is_finite() {
-            return None;
-        }
-        if f.abs() <= 1e-14 * s.abs().max(1.0) {
-            break;
-        }
-        if f > 0.0 {
-            lo = x;
-        } else {
-            hi = x;
-        }
-        let newton = x - f / slope;
-        x = if slope < 0.0 && newton > lo && newton < hi {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 1e-15 * x.abs().max(1.0) {
-            break;
-        }
-    }
-    let p = exp(x);
+    let start = (hi + f_hi / SPECIFIC_GAS_CONSTANT).clamp(lo, hi);
+    let ended = bracketed_root(
+        (lo, hi),
+        start,
+        ISOTHERM_STEPS,
+        |x| {
+            let (f, slope) = excess(exp(x));
+            if !f.is_finite() {
+                return Err(());
+            }
+            if f.abs() <= 1e-14 * s.abs().max(1.0) {
+                return Ok(Verdict::Done(()));
+            }
+            let newton = x - f / slope;
+            let next = if slope < 0.0 {
+                Step::to(newton)
+            } else {
+                Step::BISECT
+            };
+            // s falls with p: above the target, the root lies at higher p.
+            Ok(if f > 0.0 {
+                Verdict::RootAbove(next)
+            } else {
+                Verdict::RootBelow(next)
+            })
+        },
+        |lo, hi, x| hi - lo <= 1e-15 * x.abs().max(1.0),
+    )
+    .ok()?;
+    let p = exp(ended.x);
     (p > 0.0 && p.is_finite()).then_some(p)
 }
 
@@ -816,7 +826,7 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     } else {
         wet_temperature_start(h, s)
     };
-    let mut t = match start {
+    let start = match start {
         Some(t0) if t0 > lo && t0 < hi => t0,
         _ => 0.5 * (lo + hi),
     };
@@ -830,42 +840,49 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // Whether the difference was seen above zero inside the dome: the root
     // is then wet steam, bracketed from both sides.
     let mut crossed = false;
-    for _ in 0..WET_STEPS {
-        let WetPoint {
-            sat,
-            x,
-            f,
-            slope,
-            curvature,
-        } = wet_at(t, h, s, previous.as_ref())?;
-        previous = Some(sat);
-        // Near x = 0 the difference hardly depends on T (all wet isobars
-        // touch the liquid line), so T is settled only when the Newton
-        // step, not just the difference, is at rounding level.
-        // A slope of the wrong sign (f rises with T), as the line's
-        // derivatives can read near Tc (−131 for 0.83 kJ/(kg·K) at 3e-5 K
-        // below it, measured), settles nothing: bisection goes on.
-        if x >= 0.0 && within(f, h, WET_AIMED) && slope > 0.0 && (f / slope).abs() <= 1e-13 * t {
-            return found(sat, x, t, h, s);
-        }
-        crossed |= x >= 0.0 && f > 0.0;
-        if x < 0.0 || f > 0.0 {
-            hi = t;
-        } else {
-            lo = t;
-        }
-        let crawling = f.abs() > 0.5 * residuals[1];
-        residuals = [f.abs(), residuals[0]];
-        let step = halley_step(f, slope, curvature);
-        let next = t - step;
-        t = if x >= 0.0 && slope > 0.0 && !crawling && next > lo && next < hi {
-            next
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 4.0 * f64::EPSILON * t {
-            break;
-        }
+    let ended = bracketed_root(
+        (lo, hi),
+        start,
+        WET_STEPS,
+        |t| {
+            let WetPoint {
+                sat,
+                x,
+                f,
+                slope,
+                curvature,
+            } = wet_at(t, h, s, previous.as_ref())?;
+            previous = Some(sat);
+            // Near x = 0 the difference hardly depends on T (all wet
+            // isobars touch the liquid line), so T is settled only when the
+            // Newton step, not just the difference, is at rounding level.
+            // A slope of the wrong sign (f rises with T), as the line's
+            // derivatives can read near Tc (−131 for 0.83 kJ/(kg·K) at
+            // 3e-5 K below it, measured), settles nothing: bisection goes on.
+            if x >= 0.0 && within(f, h, WET_AIMED) && slope > 0.0 && (f / slope).abs() <= 1e-13 * t
+            {
+                return Ok(Verdict::Done(found(sat, x, t, h, s)));
+            }
+            crossed |= x >= 0.0 && f > 0.0;
+            let crawling = f.abs() > 0.5 * residuals[1];
+            residuals = [f.abs(), residuals[0]];
+            let next = t - halley_step(f, slope, curvature);
+            let step = if x >= 0.0 && slope > 0.0 && !crawling {
+                Step::to(next)
+            } else {
+                Step::BISECT
+            };
+            Ok(if x < 0.0 || f > 0.0 {
+                Verdict::RootBelow(step)
+            } else {
+                Verdict::RootAbove(step)
+            })
+        },
+        |lo, hi, t| hi - lo <= 4.0 * f64::EPSILON * t,
+    )?;
+    let (t, lo, hi) = (ended.x, ended.lo, ended.hi);
+    if let End::Done(outcome) = ended.end {
+        return outcome;
     }
     // A root to rounding level only: a point off the saturation line by
     // less than the promise (compressed liquid at low pressure barely
