@@ -21,6 +21,7 @@
 //! pair costs more than the others (microseconds for wet steam); see the
 //! benchmarks.
 
+use crate::bracketed_root::{bracketed_root, End, Step, Verdict};
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
@@ -33,6 +34,7 @@ use crate::saturation_line::{saturation_pressure, saturation_pressure_slope};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
 use crate::variable::Variable;
+use core::convert::Infallible;
 
 impl State {
     /// The state at specific volume `v` and specific internal energy `u`,
@@ -366,52 +368,52 @@ const HOT_STEAM_MIN_ENERGY: f64 = 2_375.0 + 1.61 * (800.0 - MIN_TEMPERATURE);
 /// cv > 0, so u rises with T), kept inside a shrinking bracket of
 /// `t_range`, with the pressure at each T from v(p, T) = v.
 fn along_isochore(equation: Equation, v: f64, u: f64, t_range: (f64, f64)) -> Option<Properties> {
-    let (mut lo, mut hi) = t_range;
-    let mut t = 0.5 * (lo + hi);
+    let start = 0.5 * (t_range.0 + t_range.1);
     let mut p = match equation {
         Equation::Region1 => 10.0,
-        _ => (SPECIFIC_GAS_CONSTANT * t / (1e3 * v)).min(MAX_PRESSURE),
+        _ => (SPECIFIC_GAS_CONSTANT * start / (1e3 * v)).min(MAX_PRESSURE),
     };
     let mut best: Option<Properties> = None;
-    for _ in 0..ISOCHORE_STEPS {
-        let next = match pressure_on_isotherm(equation, v, t, p) {
-            Ok(props) => {
-                let excess = props.u - u;
-                if excess.abs() <= (1e-13 * u.abs()).max(1e-12) {
-                    return Some(props);
+    let ended = bracketed_root(
+        t_range,
+        start,
+        ISOCHORE_STEPS,
+        |t| {
+            Ok::<_, Infallible>(match pressure_on_isotherm(equation, v, t, p) {
+                Ok(props) => {
+                    let excess = props.u - u;
+                    if excess.abs() <= (1e-13 * u.abs()).max(1e-12) {
+                        return Ok(Verdict::Done(props));
+                    }
+                    if best.is_none_or(|b| excess.abs() < (b.u - u).abs()) {
+                        best = Some(props);
+                    }
+                    p = props.p;
+                    let newton = Step::to(t - excess / props.cv);
+                    if excess > 0.0 {
+                        Verdict::RootBelow(newton)
+                    } else {
+                        Verdict::RootAbove(newton)
+                    }
                 }
-                if best.is_none_or(|b| excess.abs() < (b.u - u).abs()) {
-                    best = Some(props);
+                // (∂p/∂T) at constant v is αv/κT: where αv > 0, needing a
+                // pressure below the range means T is too low, above it too
+                // high; in the liquid's density anomaly (αv < 0, below
+                // 277 K) the other way round.
+                Err((bound, alpha)) => {
+                    if (bound == PressureBound::Low) == (alpha > 0.0) {
+                        Verdict::RootAbove(Step::BISECT)
+                    } else {
+                        Verdict::RootBelow(Step::BISECT)
+                    }
                 }
-                p = props.p;
-                if excess > 0.0 {
-                    hi = t;
-                } else {
-                    lo = t;
-                }
-                t - excess / props.cv
-            }
-            // (∂p/∂T) at constant v is αv/κT: where αv > 0, needing a
-            // pressure below the range means T is too low, above it too
-            // high; in the liquid's density anomaly (αv < 0, below 277 K)
-            // the other way round.
-            Err((bound, alpha)) => {
-                if (bound == PressureBound::Low) == (alpha > 0.0) {
-                    lo = t;
-                } else {
-                    hi = t;
-                }
-                f64::NAN
-            }
-        };
-        t = if next > lo && next < hi {
-            next
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 4.0 * f64::EPSILON * hi {
-            break;
-        }
+            })
+        },
+        |lo, hi, _| hi - lo <= 4.0 * f64::EPSILON * hi,
+    );
+    let Ok(ended) = ended;
+    if let End::Done(props) = ended.end {
+        return Some(props);
     }
     // The bracket has closed to the last bit of T: keep the best state if
     // it meets the promised precision.
@@ -562,8 +564,7 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     // by the formulation's inconsistency at that line, and a point within
     // it may have a root on each side (millikelvins apart); this way the
     // root below wins, whichever way the steps would have gone.
-    let (mut lo, mut hi) = (MIN_TEMPERATURE, t_max);
-    let mut t = if t_max > REGION13_TEMPERATURE {
+    let start = if t_max > REGION13_TEMPERATURE {
         REGION13_TEMPERATURE
     } else {
         t_max
@@ -577,67 +578,66 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     // steps (within about 2e-5 K of Tc the slopes along the line are not
     // resolved and the Newton steps crawl), bisection takes the step.
     let mut residuals = [f64::INFINITY; 2];
-    for _ in 0..WET_STEPS {
-        // The previous point starts region 3's density iterations.
-        let sat = match &previous {
-            Some(near) => Saturation::at_temperature_near(t, near)?,
-            None => Saturation::at_temperature(t, Units::Native)?,
-        };
-        previous = Some(sat);
-        let (l, g) = (sat.liquid().native(), sat.vapour().native());
-        let x = (v - l.v) / (g.v - l.v);
-        let mut newton = f64::NAN;
-        if !(0.0..=1.0).contains(&x) {
-            // Outside the dome's width at this T: too hot, except below
-            // the liquid's density maximum (about 277 K), where v' falls
-            // as T rises and a v below it means too cold.
-            let colder = x < 0.0
-                && Variable::SpecificVolume.along_saturation(l, saturation_pressure_slope(t)) < 0.0;
-            if colder {
-                lo = t;
-            } else {
-                hi = t;
+    let ended = bracketed_root(
+        (MIN_TEMPERATURE, t_max),
+        start,
+        WET_STEPS,
+        |t| {
+            // The previous point starts region 3's density iterations.
+            let sat = match &previous {
+                Some(near) => Saturation::at_temperature_near(t, near)?,
+                None => Saturation::at_temperature(t, Units::Native)?,
+            };
+            previous = Some(sat);
+            let (l, g) = (sat.liquid().native(), sat.vapour().native());
+            let x = (v - l.v) / (g.v - l.v);
+            if !(0.0..=1.0).contains(&x) {
+                // Outside the dome's width at this T: too hot, except below
+                // the liquid's density maximum (about 277 K), where v' falls
+                // as T rises and a v below it means too cold.
+                let colder = x < 0.0
+                    && Variable::SpecificVolume.along_saturation(l, saturation_pressure_slope(t))
+                        < 0.0;
+                return Ok(if colder {
+                    Verdict::RootAbove(Step::BISECT)
+                } else {
+                    Verdict::RootBelow(Step::BISECT)
+                });
             }
-        } else {
             let u_mix = (1.0 - x) * l.u + x * g.u;
             let f = u_mix - u;
             found = Some((sat, x, u_mix));
             if f.abs() <= (1e-13 * u.abs()).max(1e-12) {
-                break;
+                return Ok(Verdict::Done(()));
             }
             let crawling = f.abs() > 0.5 * residuals[1];
             residuals = [f.abs(), residuals[0]];
-            if f < 0.0 {
-                lo = t;
-            } else {
-                hi = t;
-            }
+            let mut step = Step::BISECT;
             if let Some((f, slope)) = quality_match(l, g, v, u).filter(|_| !crawling) {
                 let y = 1.0 / t;
-                let mut step = f / slope;
+                let mut dy = f / slope;
                 if let Some((y_last, slope_last)) = last_slope {
                     // Halley's correction with the curvature measured
                     // between this point and the last: good once the steps
                     // are small, bounded where they are not.
                     let curvature = (slope - slope_last) / (y - y_last);
-                    let denominator = 1.0 - 0.5 * step * curvature / slope;
+                    let denominator = 1.0 - 0.5 * dy * curvature / slope;
                     if denominator > 0.5 && denominator < 2.0 {
-                        step /= denominator;
+                        dy /= denominator;
                     }
                 }
                 last_slope = Some((y, slope));
-                newton = 1.0 / (y - step);
+                step = Step::to(1.0 / (y - dy));
             }
-        }
-        t = if newton > lo && newton < hi {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 4.0 * f64::EPSILON * hi {
-            break;
-        }
-    }
+            Ok(if f < 0.0 {
+                Verdict::RootAbove(step)
+            } else {
+                Verdict::RootBelow(step)
+            })
+        },
+        |lo, hi, _| hi - lo <= 4.0 * f64::EPSILON * hi,
+    )?;
+    let lo = ended.lo;
     let mut met = found.filter(|&(_, _, u_mix)| within_promise(Given::InternalEnergy, u_mix, u));
     if met.is_none() && lo == MIN_TEMPERATURE {
         // The bracket closed on 273.15 K without evaluating it: the
