@@ -43,7 +43,7 @@ use crate::bracketed_root::{bracketed_root, End, Step, Verdict};
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{refine, within_promise, Bounds, Equation, Given};
+use crate::inverse::{newton_step, refine, within_promise, Bounds, Equation, Given};
 use crate::math::{exp, ln};
 use crate::pair_ph_ps::Method;
 use crate::regions::{region3_phase, single_phase, within_range};
@@ -335,16 +335,15 @@ fn gas_start(equation: Equation, h: f64, s: f64) -> Option<(f64, f64)> {
             return None;
         }
         let props = equation.evaluate(p, t);
-        let (fh, fs) = (props.h - h, props.s - s);
+        // ∂/∂ln p = p·∂/∂p.
         let pv = 1e3 * p * props.v;
-        let (hx, ht) = (pv * (1.0 - t * props.alpha_v), props.cp);
-        let (sx, st) = (-pv * props.alpha_v, props.cp / t);
-        let det = hx * st - ht * sx;
-        if !det.is_finite() || det == 0.0 {
-            return None;
-        }
-        let dx = ((fh * st - fs * ht) / det).clamp(-5.0, 5.0);
-        let dt = ((hx * fs - sx * fh) / det).clamp(-300.0, 300.0);
+        let (dx, dt) = newton_step(
+            (props.h - h, props.s - s),
+            (pv * (1.0 - t * props.alpha_v), props.cp),
+            (-pv * props.alpha_v, props.cp / t),
+        )?;
+        let dx = dx.clamp(-5.0, 5.0);
+        let dt = dt.clamp(-300.0, 300.0);
         lnp = (lnp - dx).min(ln(1.2 * MAX_PRESSURE));
         t = (t - dt).clamp(200.0, 2_500.0);
         if dx.abs() < 1e-12 && dt.abs() < 1e-9 * t {
@@ -396,13 +395,13 @@ fn polish_region1(mut props: Properties, h: f64, s: f64) -> Properties {
             .max(((q.s - s) / s.abs().max(1.0)).abs())
     };
     for _ in 0..2 {
-        let (fh, fs) = (props.h - h, props.s - s);
-        let pv = 1e3 * props.v;
-        let (hp, ht) = (pv * (1.0 - props.t * props.alpha_v), props.cp);
-        let (sp, st) = (-pv * props.alpha_v, props.cp / props.t);
-        let det = hp * st - ht * sp;
-        let dp = (fh * st - fs * ht) / det;
-        let dt = (hp * fs - sp * fh) / det;
+        let Some((dp, dt)) = newton_step(
+            (props.h - h, props.s - s),
+            Given::Enthalpy.pt_partials(&props),
+            Given::Entropy.pt_partials(&props),
+        ) else {
+            break;
+        };
         if !(dp.is_finite() && dt.is_finite())
             || dp.abs() <= 2.0 * f64::EPSILON * props.p && dt.abs() <= 2.0 * f64::EPSILON * props.t
         {
