@@ -194,18 +194,42 @@ const TURNING_POINT_REACH: f64 = 1e-9;
 /// (positive) and `past` (not), then stands for the phase if it misses
 /// the target by at most [`TURNING_POINT_REACH`]; the two phases are then
 /// a fraction of a kg/m³ apart, either side of ρc.
-fn turning_point_within_reach(p: f64, t: f64, mut rising: f64, mut past: f64) -> Option<f64> {
-    for _ in 0..MAX_NEWTON_STEPS {
-        let mid = 0.5 * (rising + past);
-        if mid == rising || mid == past {
-            break;
-        }
-        if pressure_and_slope(mid, t).1 > 0.0 {
-            rising = mid;
+fn turning_point_within_reach(p: f64, t: f64, rising: f64, past: f64) -> Option<f64> {
+    // The liquid's rising end lies above the turning point, the vapour's
+    // below: the bracket in order, and where the turning point lies from
+    // a density whose slope is (or is not) positive.
+    let liquid = rising > past;
+    let bracket = if liquid {
+        (past, rising)
+    } else {
+        (rising, past)
+    };
+    let start = 0.5 * (rising + past);
+    // Bisection until the midpoint is an end of the bracket.
+    let rising = if start == rising || start == past {
+        rising
+    } else {
+        let ended = bracketed_root(
+            bracket,
+            start,
+            MAX_NEWTON_STEPS,
+            |rho| {
+                let below = (pressure_and_slope(rho, t).1 > 0.0) == liquid;
+                Ok::<_, Infallible>(if below {
+                    Verdict::<()>::RootBelow(Step::BISECT)
+                } else {
+                    Verdict::RootAbove(Step::BISECT)
+                })
+            },
+            |lo, hi, mid| mid == lo || mid == hi,
+        );
+        let Ok(ended) = ended;
+        if liquid {
+            ended.hi
         } else {
-            past = mid;
+            ended.lo
         }
-    }
+    };
     let (pressure, _) = pressure_and_slope(rising, t);
     ((pressure - p).abs() <= TURNING_POINT_REACH * p).then_some(rising)
 }
