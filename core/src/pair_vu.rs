@@ -183,10 +183,17 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
             let rho = 1.0 / v;
             let bounds = Bounds {
                 x: (rho, rho),
-                t: (REGION13_TEMPERATURE - 10.0, B23_MAX_TEMPERATURE + 10.0),
+                t: REGION3_NEWTON_T,
             };
             let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
-            let props = refine(equation, targets.0, targets.1, (rho, 700.0), bounds).ok()?;
+            let props = refine(
+                equation,
+                targets.0,
+                targets.1,
+                (rho, REGION3_START_TEMPERATURE),
+                bounds,
+            )
+            .ok()?;
             just_inside_region3(props, rho, targets)
         }
         Equation::Region1 => onto_saturated_liquid(liquid(v, u)?, v, u),
@@ -251,7 +258,13 @@ fn could_hold(equation: Equation, v: f64, u: f64) -> bool {
     }
 }
 
+/// Steps of the isochore's bracketed iteration in T, and of Newton's in p
+/// on each isotherm: bisection alone closes the widest bracket (273.15 to
+/// 1073.15 K, or 1073.15 to 2273.15 K) to 4 ulps of T in under 60.
 const ISOCHORE_STEPS: u32 = 80;
+/// The liquid's start pressure, MPa: mid-range in region 1, whose
+/// isotherms move v by a few % over all of it.
+const LIQUID_START_PRESSURE: f64 = 10.0;
 
 /// Region 1: Newton in (p, T) together from a start where u fixes T
 /// (cv ≈ 4.2 kJ/(kg·K) from u = 0 at the triple point), falling back to the
@@ -262,7 +275,7 @@ fn liquid(v: f64, u: f64) -> Option<Properties> {
         Equation::Region1,
         v,
         u,
-        (10.0, t0),
+        (LIQUID_START_PRESSURE, t0),
         (MIN_TEMPERATURE, REGION13_TEMPERATURE),
     )
 }
@@ -301,7 +314,7 @@ fn newton_else_isochore(
 ) -> Option<Properties> {
     let bounds = Bounds {
         x: (P_FLOOR, P_CEILING),
-        t: (t_range.0 - 1.0, t_range.1 + 1.0),
+        t: (t_range.0 - NEWTON_T_MARGIN, t_range.1 + NEWTON_T_MARGIN),
     };
     let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
     refine(equation, targets.0, targets.1, start, bounds)
@@ -370,7 +383,7 @@ const HOT_STEAM_MIN_ENERGY: f64 = 2_375.0 + 1.61 * (800.0 - MIN_TEMPERATURE);
 fn along_isochore(equation: Equation, v: f64, u: f64, t_range: (f64, f64)) -> Option<Properties> {
     let start = 0.5 * (t_range.0 + t_range.1);
     let mut p = match equation {
-        Equation::Region1 => 10.0,
+        Equation::Region1 => LIQUID_START_PRESSURE,
         _ => (SPECIFIC_GAS_CONSTANT * start / (1e3 * v)).min(MAX_PRESSURE),
     };
     let mut best: Option<Properties> = None;
@@ -427,11 +440,32 @@ enum PressureBound {
     High,
 }
 
+/// The pressures of every iterate, MPa: the range's floor, and its
+/// 100 MPa widened by 1 %, room for a solution a hair past the range's
+/// edge, which [`accept`] then takes (within 1e-9) or refuses. A Gibbs
+/// region's solution cannot lie higher: above 100 MPa no state is in range.
 const P_FLOOR: f64 = MIN_PRESSURE;
 const P_CEILING: f64 = MAX_PRESSURE * 1.01;
 
+/// How far past a Gibbs region's temperatures (the range's limits of the
+/// region: R7-97) its Newton iterates in (p, T) may go, K: room for a
+/// solution within a seam of the region's edge (at most 1e-12 relative
+/// past the range, as [`accept`] takes it, and the neighbour's side of
+/// 623.15 K or 1073.15 K, which `accept` sends back), the isochore taking
+/// over where Newton fails.
+const NEWTON_T_MARGIN: f64 = 1.0;
+/// Region 3's temperatures for its Newton iteration in T, K: 623.15 K to
+/// 863.15 K (the highest of B23, R7-97) widened by 10 K each way, so that
+/// a solution just across either boundary is found and [`accept`] hands it
+/// on; the start is mid-region.
+const REGION3_NEWTON_T: (f64, f64) = (REGION13_TEMPERATURE - 10.0, B23_MAX_TEMPERATURE + 10.0);
+const REGION3_START_TEMPERATURE: f64 = 700.0;
+
 /// The state on `equation` at temperature `t` with specific volume `v`:
-/// Newton's method in p (∂v/∂p = −v·κT).
+/// Newton's method in p (∂v/∂p = −v·κT). Not the bracketed engine: there
+/// is no bracket, a step past [`P_FLOOR`] or [`P_CEILING`] is clamped to
+/// it, and a second at the same end names that end (bisecting instead
+/// would change the iterates).
 /// Failing, it names the bound it ran into and the expansion coefficient
 /// there.
 fn pressure_on_isotherm(
@@ -548,6 +582,9 @@ fn stable_below_critical(props: &Properties, branch: Branch) -> bool {
     }
 }
 
+/// Steps of the wet iteration: bisection alone closes its bracket (273.15 K
+/// to Tc) in about 60, and takes at least every other step where Newton
+/// crawls.
 const WET_STEPS: u32 = 150;
 
 /// Wet steam with this (v, u), if there is such a state at or below
