@@ -270,14 +270,19 @@ const LIQUID_START_PRESSURE: f64 = 10.0;
 /// (cv ≈ 4.2 kJ/(kg·K) from u = 0 at the triple point), falling back to the
 /// isochore where the density anomaly below 277 K defeats it.
 fn liquid(v: f64, u: f64) -> Option<Properties> {
-    let t0 = (TRIPLE_POINT_TEMPERATURE + u / 4.2).clamp(MIN_TEMPERATURE, REGION13_TEMPERATURE);
     newton_else_isochore(
         Equation::Region1,
         v,
         u,
-        (LIQUID_START_PRESSURE, t0),
+        liquid_start(u),
         (MIN_TEMPERATURE, REGION13_TEMPERATURE),
     )
+}
+
+/// [`liquid`]'s start, (p, T).
+fn liquid_start(u: f64) -> (f64, f64) {
+    let t0 = (TRIPLE_POINT_TEMPERATURE + u / 4.2).clamp(MIN_TEMPERATURE, REGION13_TEMPERATURE);
+    (LIQUID_START_PRESSURE, t0)
 }
 
 /// A region 1 solution a hair below psat(T) — (v, u) fix a liquid's
@@ -330,8 +335,16 @@ fn newton_else_isochore(
 /// start is too far off (dense steam).
 fn vapour(v: f64, u: f64) -> Option<Properties> {
     let t_range = (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE);
+    match vapour_start(v, u) {
+        Some(start) => newton_else_isochore(Equation::Region2, v, u, start, t_range),
+        None => along_isochore(Equation::Region2, v, u, t_range),
+    }
+}
+
+/// [`vapour`]'s start, (p, T), `None` where the isochore serves better.
+fn vapour_start(v: f64, u: f64) -> Option<(f64, f64)> {
     if v < IDEAL_START_MIN_VOLUME && u < HOT_STEAM_MIN_ENERGY {
-        return along_isochore(Equation::Region2, v, u, t_range);
+        return None;
     }
     let t_line =
         (MIN_TEMPERATURE + (u - 2_375.0) / 1.61).clamp(MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE);
@@ -345,7 +358,7 @@ fn vapour(v: f64, u: f64) -> Option<Properties> {
         ideal_gas_dew_point(v).map_or(t_line, |t_dew| t_line.max(t_dew))
     };
     let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, MAX_PRESSURE);
-    newton_else_isochore(Equation::Region2, v, u, (p0, t0), t_range)
+    Some((p0, t0))
 }
 
 /// Region 5, nearly an ideal gas: Newton in (p, T) together from T where
@@ -353,17 +366,22 @@ fn vapour(v: f64, u: f64) -> Option<Properties> {
 /// 1 kPa and 1073.15 K (3665.4 kJ/kg) and 2273.15 K (6327.9 kJ/kg), and
 /// p = RT/v; the isochore as the fallback.
 fn hot_gas(v: f64, u: f64) -> Option<Properties> {
-    let cv = (6_327.9 - 3_665.4) / (MAX_TEMPERATURE - REGION2_MAX_TEMPERATURE);
-    let t0 = (REGION2_MAX_TEMPERATURE + (u - 3_665.4) / cv)
-        .clamp(REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE);
-    let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, REGION5_MAX_PRESSURE);
     newton_else_isochore(
         Equation::Region5,
         v,
         u,
-        (p0, t0),
+        hot_gas_start(v, u),
         (REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE),
     )
+}
+
+/// [`hot_gas`]'s start, (p, T).
+fn hot_gas_start(v: f64, u: f64) -> (f64, f64) {
+    let cv = (6_327.9 - 3_665.4) / (MAX_TEMPERATURE - REGION2_MAX_TEMPERATURE);
+    let t0 = (REGION2_MAX_TEMPERATURE + (u - 3_665.4) / cv)
+        .clamp(REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE);
+    let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, REGION5_MAX_PRESSURE);
+    (p0, t0)
 }
 
 /// Below this specific volume (above 50 kg/m³) steam is too far from the
@@ -447,17 +465,19 @@ enum PressureBound {
 const P_FLOOR: f64 = MIN_PRESSURE;
 const P_CEILING: f64 = MAX_PRESSURE * 1.01;
 
-/// How far past a Gibbs region's temperatures (the range's limits of the
-/// region: R7-97) its Newton iterates in (p, T) may go, K: room for a
-/// solution within a seam of the region's edge (at most 1e-12 relative
-/// past the range, as [`accept`] takes it, and the neighbour's side of
-/// 623.15 K or 1073.15 K, which `accept` sends back), the isochore taking
-/// over where Newton fails.
+/// How far past a Gibbs region's temperatures (its limits in the range,
+/// R7-97) its Newton iterates in (p, T) may go, K. A state of the region
+/// never meets the bound (test `newton_bounds_never_bind_in_their_region`:
+/// from the pair's starts, a grid over the region refines to the same
+/// bits without it; with no margin at all it does not), nor does a
+/// solution a hair past the region's edge that [`accept`] then takes or
+/// hands on; the isochore takes over where Newton fails.
 const NEWTON_T_MARGIN: f64 = 1.0;
 /// Region 3's temperatures for its Newton iteration in T, K: 623.15 K to
 /// 863.15 K (the highest of B23, R7-97) widened by 10 K each way, so that
 /// a solution just across either boundary is found and [`accept`] hands it
-/// on; the start is mid-region.
+/// on (the same test checks a state of region 3 never meets it); the start
+/// is mid-region.
 const REGION3_NEWTON_T: (f64, f64) = (REGION13_TEMPERATURE - 10.0, B23_MAX_TEMPERATURE + 10.0);
 const REGION3_START_TEMPERATURE: f64 = 700.0;
 
@@ -757,6 +777,69 @@ fn quality_match(l: &Properties, g: &Properties, v: f64, u: f64) -> Option<(f64,
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    /// The Newton bounds in T never bind for a state of a region: from the
+    /// starts the pair uses, every state on a (p, T) grid over regions 1,
+    /// 2, 5 (edges included) and 3 refines to the same bits with them as
+    /// without.
+    #[test]
+    fn newton_bounds_never_bind_in_their_region() {
+        let unbounded_t = (1.0, 1e5);
+        let mut count = 0;
+        for kp in 0..=60 {
+            let p = 10f64.powf(-12.0 + 14.0 * f64::from(kp) / 60.0);
+            for kt in 0..=200 {
+                let t = MIN_TEMPERATURE + 2_000.0 * f64::from(kt) / 200.0;
+                let Ok(state) = State::from_pt(p, t, Units::Native) else {
+                    continue;
+                };
+                let q = *state.native();
+                let targets = ((Given::SpecificVolume, q.v), (Given::InternalEnergy, q.u));
+                let widened = |(lo, hi): (f64, f64)| (lo - NEWTON_T_MARGIN, hi + NEWTON_T_MARGIN);
+                let (equation, start, named) = match state.region() {
+                    Region::One => (
+                        Equation::Region1,
+                        liquid_start(q.u),
+                        widened((MIN_TEMPERATURE, REGION13_TEMPERATURE)),
+                    ),
+                    Region::Two => {
+                        let Some(start) = vapour_start(q.v, q.u) else {
+                            continue;
+                        };
+                        (
+                            Equation::Region2,
+                            start,
+                            widened((MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE)),
+                        )
+                    }
+                    Region::Five => (
+                        Equation::Region5,
+                        hot_gas_start(q.v, q.u),
+                        widened((REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE)),
+                    ),
+                    Region::Three => (
+                        Equation::Region3,
+                        (1.0 / q.v, REGION3_START_TEMPERATURE),
+                        REGION3_NEWTON_T,
+                    ),
+                    _ => continue,
+                };
+                let x = if equation == Equation::Region3 {
+                    (1.0 / q.v, 1.0 / q.v)
+                } else {
+                    (P_FLOOR, P_CEILING)
+                };
+                let solve = |t| {
+                    refine(equation, targets.0, targets.1, start, Bounds { x, t })
+                        .ok()
+                        .map(|r| (r.p.to_bits(), r.t.to_bits()))
+                };
+                assert_eq!(solve(named), solve(unbounded_t), "{p} MPa, {t} K");
+                count += 1;
+            }
+        }
+        assert!(count > 1000, "{count}");
+    }
 
     /// `U_VAPOUR_HIGHEST` lies above u'' of region 2 along the whole
     /// saturation line up to 623.15 K, and within 0.1 kJ/kg of its peak.
