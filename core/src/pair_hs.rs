@@ -957,7 +957,7 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
             // 3e-5 K below it, measured), settles nothing: bisection goes on.
             if x >= 0.0 && within(f, h, WET_AIMED) && slope > 0.0 && (f / slope).abs() <= 1e-13 * t
             {
-                return Ok(Verdict::Done(found(sat, x, t, h, s)));
+                return Ok(Verdict::Done(x));
             }
             crossed |= x >= 0.0 && f > 0.0;
             let crawling = f.abs() > 0.5 * residuals[1];
@@ -977,8 +977,9 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
         |lo, hi, t| hi - lo <= 4.0 * f64::EPSILON * t,
     )?;
     let (t, lo, hi) = (ended.x, ended.lo, ended.hi);
-    if let End::Done(outcome) = ended.end {
-        return outcome;
+    if let (End::Done(x), Some(sat)) = (ended.end, previous) {
+        // The root at the last point evaluated.
+        return found(sat, x, t, h, s);
     }
     // A root to rounding level only: a point off the saturation line by
     // less than the promise (compressed liquid at low pressure barely

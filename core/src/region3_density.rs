@@ -287,21 +287,23 @@ fn newton_in_bracket(p: f64, t: f64, lo: f64, hi: f64, start: f64) -> Option<Roo
             }
             let newton = rho - excess / slope;
             let step = (newton - rho).abs();
-            // Beside the critical point the isotherm is nearly flat and
-            // Newton crawls: a sizeable step that did not halve the excess
-            // is followed by a bisection, so the bracket shrinks at least
-            // every other step. (At the rounding level the excess stops
-            // halving too, but the steps are tiny.)
-            let crawling = excess.abs() > 0.5 * last_excess && step > 1e-10 * rho;
+            let next =
+                if slope > 0.0 && (step <= SETTLED * rho || excess.abs() <= SETTLED_PRESSURE * p) {
+                    Step::last(newton)
+                } else {
+                    // Beside the critical point the isotherm is nearly flat and
+                    // Newton crawls: a sizeable step that did not halve the
+                    // excess is followed by a bisection, so the bracket shrinks
+                    // at least every other step. (At the rounding level the
+                    // excess stops halving too, but the steps are tiny.)
+                    let crawling = excess.abs() > 0.5 * last_excess && step > 1e-10 * rho;
+                    if slope > 0.0 && !crawling {
+                        Step::to(newton)
+                    } else {
+                        Step::BISECT
+                    }
+                };
             last_excess = excess.abs();
-            let settled = step <= SETTLED * rho || excess.abs() <= SETTLED_PRESSURE * p;
-            let next = if slope > 0.0 && settled {
-                Step::last(newton)
-            } else if slope > 0.0 && !crawling {
-                Step::to(newton)
-            } else {
-                Step::BISECT
-            };
             Ok(if excess > 0.0 {
                 Verdict::RootBelow(next)
             } else {
