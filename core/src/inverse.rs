@@ -190,6 +190,23 @@ pub(crate) struct Bounds {
 
 const MAX_STEPS: u32 = 60;
 
+/// One Newton step (dx, dt) on two equations in two variables: their
+/// residuals `(fa, fb)` and the rows of the Jacobian, `(∂a/∂x, ∂a/∂T)` and
+/// `(∂b/∂x, ∂b/∂T)`, by Cramer's rule; `None` where the Jacobian's
+/// determinant is zero or not finite. The new point is (x − dx, T − dt).
+#[inline]
+pub(crate) fn newton_step(
+    (fa, fb): (f64, f64),
+    (ax, at): (f64, f64),
+    (bx, bt): (f64, f64),
+) -> Option<(f64, f64)> {
+    let det = ax * bt - at * bx;
+    if !det.is_finite() || det == 0.0 {
+        return None;
+    }
+    Some(((fa * bt - fb * at) / det, (ax * fb - bx * fa) / det))
+}
+
 /// Newton's method on the two equations `value(a) = a.1`, `value(b) = b.1`,
 /// from the start `(x, t)`; returns the refined state's properties.
 pub(crate) fn refine(
@@ -207,14 +224,13 @@ pub(crate) fn refine(
         }
         let (va, vb) = (value(a.0, &props), value(b.0, &props));
         let (fa, fb) = (va - a.1, vb - b.1);
-        let (ax, at) = partials(equation, a.0, &props);
-        let (bx, bt) = partials(equation, b.0, &props);
-        let det = ax * bt - at * bx;
-        if !det.is_finite() || det == 0.0 {
+        let Some((dx, dt)) = newton_step(
+            (fa, fb),
+            partials(equation, a.0, &props),
+            partials(equation, b.0, &props),
+        ) else {
             break;
-        }
-        let dx = (fa * bt - fb * at) / det;
-        let dt = (ax * fb - bx * fa) / det;
+        };
         let (next_x, next_t) = (
             (x - dx).clamp(bounds.x.0, bounds.x.1),
             (t - dt).clamp(bounds.t.0, bounds.t.1),

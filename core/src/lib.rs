@@ -23,6 +23,7 @@ mod series;
 
 pub mod backward;
 pub mod boundary_b23;
+mod bracketed_root;
 pub mod constants;
 mod derivatives;
 mod error;

@@ -39,10 +39,13 @@
 
 use crate::backward::{r7_97, sr2_01, sr3_03, sr4_04};
 use crate::boundary_b23;
+use crate::bracketed_root::{bracketed_root, End, Step, Verdict};
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
-use crate::inverse::{onto_saturated_liquid, refine, within_promise, Bounds, Equation, Given};
+use crate::inverse::{
+    newton_step, onto_saturated_liquid, refine, within_promise, Bounds, Equation, Given,
+};
 use crate::math::{exp, ln};
 use crate::pair_ph_ps::Method;
 use crate::regions::{region3_phase, single_phase, within_range};
@@ -252,6 +255,10 @@ fn is_region5(h: f64, s: f64) -> bool {
     }
 }
 
+/// Steps of [`isotherm_pressure`]: bisection alone closes its bracket in
+/// ln p (at most 1e-200 to 100 MPa, 465 wide) to 1e-15 in under 60.
+const ISOTHERM_STEPS: u32 = 200;
+
 /// The pressure at which the isotherm `t` of a Gibbs equation has entropy
 /// `s`, within `range` (MPa), where s(range.0) ≥ s ≥ s(range.1): bisection
 /// in ln p, accelerated by Newton steps where they stay in the bracket.
@@ -261,55 +268,98 @@ fn isotherm_pressure(equation: Equation, t: f64, s: f64, range: (f64, f64)) -> O
         // (s − target, ∂s/∂ln p at constant T)
         (props.s - s, -1e3 * p * props.v * props.alpha_v)
     };
-    let (mut lo, mut hi) = (ln(range.0), ln(range.1));
+    let (lo, hi) = (ln(range.0), ln(range.1));
     let (f_lo, _) = excess(range.0);
     let (f_hi, _) = excess(range.1);
     if !(f_lo >= 0.0 && f_hi <= 0.0) {
         return None;
     }
     // Ideal-gas guess from the high end: s falls by R per unit of ln p.
-    let mut x = (hi + f_hi / SPECIFIC_GAS_CONSTANT).clamp(lo, hi);
-    for _ in 0..200 {
-        let (f, slope) = excess(exp(x));
-        if !f.is_finite() {
-            return None;
-        }
-        if f.abs() <= 1e-14 * s.abs().max(1.0) {
-            break;
-        }
-        if f > 0.0 {
-            lo = x;
-        } else {
-            hi = x;
-        }
-        let newton = x - f / slope;
-        x = if slope < 0.0 && newton > lo && newton < hi {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 1e-15 * x.abs().max(1.0) {
-            break;
-        }
-    }
-    let p = exp(x);
+    let start = (hi + f_hi / SPECIFIC_GAS_CONSTANT).clamp(lo, hi);
+    let ended = bracketed_root(
+        (lo, hi),
+        start,
+        ISOTHERM_STEPS,
+        |x| {
+            let (f, slope) = excess(exp(x));
+            if !f.is_finite() {
+                return Err(());
+            }
+            if f.abs() <= 1e-14 * s.abs().max(1.0) {
+                return Ok(Verdict::Done(()));
+            }
+            let newton = x - f / slope;
+            let next = if slope < 0.0 {
+                Step::to(newton)
+            } else {
+                Step::BISECT
+            };
+            // s falls with p: above the target, the root lies at higher p.
+            Ok(if f > 0.0 {
+                Verdict::RootAbove(next)
+            } else {
+                Verdict::RootBelow(next)
+            })
+        },
+        |lo, hi, x| hi - lo <= 1e-15 * x.abs().max(1.0),
+    )
+    .ok()?;
+    let p = exp(ended.x);
     (p > 0.0 && p.is_finite()).then_some(p)
 }
+
+/// The limits of [`gas_start`]'s two iterations.
+struct GasStartLimits {
+    /// T's range in both, K.
+    t: (f64, f64),
+    /// The largest Newton step in ln p, and in T (K), of the second.
+    step: (f64, f64),
+}
+
+/// [`gas_start`]'s limits. For a state of region 2 or 5 they never bind
+/// (test `gas_start_limits_never_bind_in_regions_2_and_5`): there the T
+/// iterates stay within 273.1–1097 K and 978–2325 K, the steps within 0.45
+/// in ln p and 185 K (measured on a (p, T) grid over both regions, edges
+/// included, where the start is used). They
+/// stop the steps of a point that is no gas state (tried as region 2 or 5
+/// on its way to its own place) from leaving the equations' domain (T > 0).
+const GAS_START_LIMITS: GasStartLimits = GasStartLimits {
+    t: (200.0, 2_500.0),
+    step: (5.0, 300.0),
+};
+
+/// The pressure at which [`gas_start`] puts the ideal gas, MPa: low
+/// enough for steam to be nearly ideal there, so that h alone fixes T.
+const GAS_START_PRESSURE: f64 = 1e-3;
+
+/// The T from which [`gas_start`] looks for h at [`GAS_START_PRESSURE`],
+/// K: mid-range in region 5 and in region 2.
+const fn gas_start_temperature(equation: Equation) -> f64 {
+    if matches!(equation, Equation::Region5) {
+        1_500.0
+    } else {
+        700.0
+    }
+}
+
+/// How many times the highest pressure of the range a Newton iterate in p
+/// may reach, in [`gas_start`] and in [`refine_gibbs`]: room for a
+/// solution a seam beyond the range's 100 MPa (and 50 MPa in region 5),
+/// that [`check`] then refuses or hands to the neighbour.
+const NEWTON_PRESSURE_HEADROOM: f64 = 1.2;
 
 /// A start for a gas-like state of region 2 or 5 on the region's own
 /// equation. First as an ideal gas: T from h at a low pressure, then p from
 /// s (which falls by R per unit of ln p); then Newton's method in
-/// (ln p, T), nearly linear for a nearly ideal gas.
-fn gas_start(equation: Equation, h: f64, s: f64) -> Option<(f64, f64)> {
-    const LOW: f64 = 1e-3;
-    let mut t = if equation == Equation::Region5 {
-        1_500.0
-    } else {
-        700.0
-    };
+/// (ln p, T), nearly linear for a nearly ideal gas. Neither loop is the
+/// bracketed engine: both are Newton's steps clamped to `limits`, with no
+/// bracket (a bisection would change their iterates).
+fn gas_start(equation: Equation, h: f64, s: f64, limits: &GasStartLimits) -> Option<(f64, f64)> {
+    const LOW: f64 = GAS_START_PRESSURE;
+    let mut t = gas_start_temperature(equation);
     for _ in 0..8 {
         let props = equation.evaluate(LOW, t);
-        let next = (t - (props.h - h) / props.cp).clamp(200.0, 2_500.0);
+        let next = (t - (props.h - h) / props.cp).clamp(limits.t.0, limits.t.1);
         // Only a start for the Newton iteration below.
         let settled = (next - t).abs() <= 1e-6 * t;
         t = next;
@@ -318,25 +368,25 @@ fn gas_start(equation: Equation, h: f64, s: f64) -> Option<(f64, f64)> {
         }
     }
     let at_low = equation.evaluate(LOW, t);
-    let mut lnp = (ln(LOW) + (at_low.s - s) / SPECIFIC_GAS_CONSTANT).min(ln(1.2 * MAX_PRESSURE));
+    let max_lnp = ln(NEWTON_PRESSURE_HEADROOM * MAX_PRESSURE);
+    let mut lnp = (ln(LOW) + (at_low.s - s) / SPECIFIC_GAS_CONSTANT).min(max_lnp);
     for _ in 0..40 {
         let p = exp(lnp);
         if p.is_nan() || p <= 0.0 {
             return None;
         }
         let props = equation.evaluate(p, t);
-        let (fh, fs) = (props.h - h, props.s - s);
+        // ∂/∂ln p = p·∂/∂p.
         let pv = 1e3 * p * props.v;
-        let (hx, ht) = (pv * (1.0 - t * props.alpha_v), props.cp);
-        let (sx, st) = (-pv * props.alpha_v, props.cp / t);
-        let det = hx * st - ht * sx;
-        if !det.is_finite() || det == 0.0 {
-            return None;
-        }
-        let dx = ((fh * st - fs * ht) / det).clamp(-5.0, 5.0);
-        let dt = ((hx * fs - sx * fh) / det).clamp(-300.0, 300.0);
-        lnp = (lnp - dx).min(ln(1.2 * MAX_PRESSURE));
-        t = (t - dt).clamp(200.0, 2_500.0);
+        let (dx, dt) = newton_step(
+            (props.h - h, props.s - s),
+            (pv * (1.0 - t * props.alpha_v), props.cp),
+            (-pv * props.alpha_v, props.cp / t),
+        )?;
+        let dx = dx.clamp(-limits.step.0, limits.step.0);
+        let dt = dt.clamp(-limits.step.1, limits.step.1);
+        lnp = (lnp - dx).min(max_lnp);
+        t = (t - dt).clamp(limits.t.0, limits.t.1);
         if dx.abs() < 1e-12 && dt.abs() < 1e-9 * t {
             break;
         }
@@ -345,7 +395,8 @@ fn gas_start(equation: Equation, h: f64, s: f64) -> Option<(f64, f64)> {
     (p > 0.0 && p.is_finite() && t.is_finite()).then_some((p, t))
 }
 
-/// Newton on the basic equation of a Gibbs region from `(p0, t0)`.
+/// Newton on the basic equation of a Gibbs region from `(p0, t0)`, T kept
+/// within `t_range` and p within [`pressure_window`].
 fn refine_gibbs(
     equation: Equation,
     h: f64,
@@ -353,18 +404,10 @@ fn refine_gibbs(
     (p0, t0): (f64, f64),
     t_range: (f64, f64),
 ) -> Result<Properties, Error> {
-    let upper = match equation {
-        Equation::Region5 => 1.2 * REGION5_MAX_PRESSURE,
-        _ => 1.2 * MAX_PRESSURE,
+    let bounds = Bounds {
+        x: pressure_window(equation, p0),
+        t: t_range,
     };
-    // Liquid: p may move far from a start where the backward pressure is
-    // poor in relative terms (near psat at low pressure); gas: within a
-    // factor 4 of a start that is good to far better than that.
-    let x = match equation {
-        Equation::Region1 => (1e-9, upper),
-        _ => (0.25 * p0, (4.0 * p0).min(upper)),
-    };
-    let bounds = Bounds { x, t: t_range };
     refine(
         equation,
         (Given::Enthalpy, h),
@@ -373,6 +416,59 @@ fn refine_gibbs(
         bounds,
     )
 }
+
+/// The pressures, MPa, a Newton iterate from the start `p0` may take on a
+/// Gibbs equation. Liquid: p may move far from a start where the backward
+/// pressure is poor in relative terms (near psat at low pressure), down to
+/// [`REGION1_NEWTON_MIN_PRESSURE`]. Gas: within [`GAS_PRESSURE_WINDOW`] of
+/// its start.
+fn pressure_window(equation: Equation, p0: f64) -> (f64, f64) {
+    let upper = match equation {
+        Equation::Region5 => NEWTON_PRESSURE_HEADROOM * REGION5_MAX_PRESSURE,
+        _ => NEWTON_PRESSURE_HEADROOM * MAX_PRESSURE,
+    };
+    match equation {
+        Equation::Region1 => (REGION1_NEWTON_MIN_PRESSURE, upper),
+        _ => (
+            p0 / GAS_PRESSURE_WINDOW,
+            (GAS_PRESSURE_WINDOW * p0).min(upper),
+        ),
+    }
+}
+
+/// The lowest pressure of a region 1 Newton iterate, MPa: far below
+/// region 1's lowest, psat(273.15 K) = 6.1e-4 MPa, only keeping p > 0.
+const REGION1_NEWTON_MIN_PRESSURE: f64 = 1e-9;
+
+/// How far (a factor) a gas's Newton iterate in p may move from its start:
+/// every state of regions 2 and 5 lies within 1e-4 of the start it is
+/// refined from, SR2-01's or [`gas_start`]'s (measured 6e-5; test
+/// `every_gas_solution_lies_near_its_start`), so the window never cuts the
+/// solution off; it stops a wild first step near the dome and B23 (at
+/// 15 MPa and 643.15 K the iteration fails without it) and the iterates of
+/// a poor start, whose attempt then fails and [`gas_start`]'s is tried.
+const GAS_PRESSURE_WINDOW: f64 = 4.0;
+
+// The temperatures, K, of each place's Newton iterates on its basic
+// equation: the region's limits widened. A state of the region never meets
+// them (test `newton_bounds_never_bind_in_their_region`: its iterates stay
+// within 1e-5 K of the region's limits, measured on that test's grid,
+// edges included), nor does a solution across a seam (relative [`SEAM`]:
+// 0.06 K at 623.15 K, 0.23 K at 2273.15 K) or in the cold pockets below
+// 273.15 K (0.042 K deep at most: the isentropes from 273.15 K to
+// 100 MPa, measured; the test's grid holds them). Beyond that the widths
+// keep the iterates of a point tried in the wrong place (a wet point as
+// liquid, a region 3 point as steam) near the region; they only decide
+// how such an attempt fails.
+const REGION1_NEWTON_T: (f64, f64) = (MIN_TEMPERATURE - 25.0, REGION13_TEMPERATURE + 40.0);
+const REGION2_NEWTON_T: (f64, f64) = (MIN_TEMPERATURE - 70.0, REGION2_MAX_TEMPERATURE + 130.0);
+const REGION5_NEWTON_T: (f64, f64) = (REGION2_MAX_TEMPERATURE - 100.0, MAX_TEMPERATURE + 200.0);
+const REGION3_NEWTON_T: (f64, f64) = (REGION13_TEMPERATURE - 30.0, B23_MAX_TEMPERATURE + 40.0);
+/// The densities, kg/m³, of region 3's Newton iterates: region 3's own
+/// span, 113.6–762.4 kg/m³ (measured, see [`crate::pair_vu`]'s
+/// `could_hold`), widened as its temperatures are; the test above checks
+/// them too.
+const REGION3_NEWTON_RHO: (f64, f64) = (20.0, 1_100.0);
 
 /// Further Newton steps on a region 1 state that [`refine`] accepted.
 /// Compressed liquid barely changes h and s with p (dh = v dp), so the
@@ -386,13 +482,13 @@ fn polish_region1(mut props: Properties, h: f64, s: f64) -> Properties {
             .max(((q.s - s) / s.abs().max(1.0)).abs())
     };
     for _ in 0..2 {
-        let (fh, fs) = (props.h - h, props.s - s);
-        let pv = 1e3 * props.v;
-        let (hp, ht) = (pv * (1.0 - props.t * props.alpha_v), props.cp);
-        let (sp, st) = (-pv * props.alpha_v, props.cp / props.t);
-        let det = hp * st - ht * sp;
-        let dp = (fh * st - fs * ht) / det;
-        let dt = (hp * fs - sp * fh) / det;
+        let Some((dp, dt)) = newton_step(
+            (props.h - h, props.s - s),
+            Given::Enthalpy.pt_partials(&props),
+            Given::Entropy.pt_partials(&props),
+        ) else {
+            break;
+        };
         if !(dp.is_finite() && dt.is_finite())
             || dp.abs() <= 2.0 * f64::EPSILON * props.p && dt.abs() <= 2.0 * f64::EPSILON * props.t
         {
@@ -433,16 +529,23 @@ fn start_region2(h: f64, s: f64) -> Option<(f64, f64)> {
         return None;
     }
     let t = r7_97::temperature_region2_ph(p, h);
-    (t.is_finite() && (MIN_TEMPERATURE - 5.0..=REGION2_MAX_TEMPERATURE).contains(&t))
+    (t.is_finite() && (REGION2_START_COLDEST..=REGION2_MAX_TEMPERATURE).contains(&t))
         .then_some((p, t))
 }
+
+/// The coldest start for region 2 from the backward equations, K: the
+/// range's 273.15 K (where R7-97's T(p,h) begins) widened by 5 K, far more
+/// than the backward equations' deviation (25 mK, as for
+/// [`BACKWARD_SANITY_H`]), so that a point just past the range's cold edge
+/// is still refined from it and its exact solution says it lies beyond.
+const REGION2_START_COLDEST: f64 = MIN_TEMPERATURE - 5.0;
 
 /// The start for region 3: (ρ, T) from p(h,s) of SR4-04, T(p,h) and
 /// v(p,h) of SR3-03; also returns that p.
 fn start_region3(h: f64, s: f64) -> (f64, f64, f64) {
     let p = sr4_04::pressure_region3_hs(h, s);
     let p = if p.is_finite() {
-        p.clamp(16.0, MAX_PRESSURE)
+        p.clamp(REGION3_START_LOWEST_PRESSURE, MAX_PRESSURE)
     } else {
         50.0
     };
@@ -454,12 +557,21 @@ fn start_region3(h: f64, s: f64) -> (f64, f64, f64) {
     };
     let rho = 1.0 / sr3_03::volume_region3_ph(p, h);
     let rho = if rho.is_finite() {
-        rho.clamp(50.0, 1_000.0)
+        rho.clamp(REGION3_START_RHO.0, REGION3_START_RHO.1)
     } else {
         CRITICAL_DENSITY
     };
     (rho, t, p)
 }
+
+/// The lowest pressure of a region 3 start, MPa: region 3's lowest,
+/// psat(623.15 K) = 16.53 MPa (recalled from R7-97's region 3 bounds),
+/// rounded down.
+const REGION3_START_LOWEST_PRESSURE: f64 = 16.0;
+/// The densities of a region 3 start, kg/m³: region 3's span,
+/// 113.6–762.4 kg/m³ (see [`REGION3_NEWTON_RHO`]), widened, inside the
+/// Newton bounds.
+const REGION3_START_RHO: (f64, f64) = (50.0, 1_000.0);
 
 /// Relative excess of `a` over `limit` (positive when a > limit).
 fn over(a: f64, limit: f64) -> f64 {
@@ -580,38 +692,34 @@ fn attempt_single(place: Place, h: f64, s: f64) -> Result<Attempt, Error> {
                 h,
                 s,
                 start_region1(h, s),
-                (MIN_TEMPERATURE - 25.0, REGION13_TEMPERATURE + 40.0),
+                REGION1_NEWTON_T,
             )?,
             h,
             s,
         ),
         Place::Two => {
-            let t_range = (MIN_TEMPERATURE - 70.0, REGION2_MAX_TEMPERATURE + 130.0);
+            let t_range = REGION2_NEWTON_T;
             let by_backward = start_region2(h, s)
                 .map(|start| refine_gibbs(Equation::Region2, h, s, start, t_range));
             match by_backward {
                 Some(Ok(props)) => props,
                 _ => {
-                    let start = gas_start(Equation::Region2, h, s).ok_or(NOT_CONVERGED)?;
+                    let start = gas_start(Equation::Region2, h, s, &GAS_START_LIMITS)
+                        .ok_or(NOT_CONVERGED)?;
                     refine_gibbs(Equation::Region2, h, s, start, t_range)?
                 }
             }
         }
         Place::Five => {
-            let start = gas_start(Equation::Region5, h, s).ok_or(NOT_CONVERGED)?;
-            refine_gibbs(
-                Equation::Region5,
-                h,
-                s,
-                start,
-                (REGION2_MAX_TEMPERATURE - 100.0, MAX_TEMPERATURE + 200.0),
-            )?
+            let start =
+                gas_start(Equation::Region5, h, s, &GAS_START_LIMITS).ok_or(NOT_CONVERGED)?;
+            refine_gibbs(Equation::Region5, h, s, start, REGION5_NEWTON_T)?
         }
         Place::Three => {
             let (rho, t, _) = start_region3(h, s);
             let bounds = Bounds {
-                x: (20.0, 1_100.0),
-                t: (REGION13_TEMPERATURE - 30.0, B23_MAX_TEMPERATURE + 40.0),
+                x: REGION3_NEWTON_RHO,
+                t: REGION3_NEWTON_T,
             };
             refine(
                 Equation::Region3,
@@ -816,7 +924,7 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     } else {
         wet_temperature_start(h, s)
     };
-    let mut t = match start {
+    let start = match start {
         Some(t0) if t0 > lo && t0 < hi => t0,
         _ => 0.5 * (lo + hi),
     };
@@ -830,42 +938,50 @@ fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
     // Whether the difference was seen above zero inside the dome: the root
     // is then wet steam, bracketed from both sides.
     let mut crossed = false;
-    for _ in 0..WET_STEPS {
-        let WetPoint {
-            sat,
-            x,
-            f,
-            slope,
-            curvature,
-        } = wet_at(t, h, s, previous.as_ref())?;
-        previous = Some(sat);
-        // Near x = 0 the difference hardly depends on T (all wet isobars
-        // touch the liquid line), so T is settled only when the Newton
-        // step, not just the difference, is at rounding level.
-        // A slope of the wrong sign (f rises with T), as the line's
-        // derivatives can read near Tc (−131 for 0.83 kJ/(kg·K) at 3e-5 K
-        // below it, measured), settles nothing: bisection goes on.
-        if x >= 0.0 && within(f, h, WET_AIMED) && slope > 0.0 && (f / slope).abs() <= 1e-13 * t {
-            return found(sat, x, t, h, s);
-        }
-        crossed |= x >= 0.0 && f > 0.0;
-        if x < 0.0 || f > 0.0 {
-            hi = t;
-        } else {
-            lo = t;
-        }
-        let crawling = f.abs() > 0.5 * residuals[1];
-        residuals = [f.abs(), residuals[0]];
-        let step = halley_step(f, slope, curvature);
-        let next = t - step;
-        t = if x >= 0.0 && slope > 0.0 && !crawling && next > lo && next < hi {
-            next
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 4.0 * f64::EPSILON * t {
-            break;
-        }
+    let ended = bracketed_root(
+        (lo, hi),
+        start,
+        WET_STEPS,
+        |t| {
+            let WetPoint {
+                sat,
+                x,
+                f,
+                slope,
+                curvature,
+            } = wet_at(t, h, s, previous.as_ref())?;
+            previous = Some(sat);
+            // Near x = 0 the difference hardly depends on T (all wet
+            // isobars touch the liquid line), so T is settled only when the
+            // Newton step, not just the difference, is at rounding level.
+            // A slope of the wrong sign (f rises with T), as the line's
+            // derivatives can read near Tc (−131 for 0.83 kJ/(kg·K) at
+            // 3e-5 K below it, measured), settles nothing: bisection goes on.
+            if x >= 0.0 && within(f, h, WET_AIMED) && slope > 0.0 && (f / slope).abs() <= 1e-13 * t
+            {
+                return Ok(Verdict::Done(x));
+            }
+            crossed |= x >= 0.0 && f > 0.0;
+            let crawling = f.abs() > 0.5 * residuals[1];
+            residuals = [f.abs(), residuals[0]];
+            let next = t - halley_step(f, slope, curvature);
+            let step = if x >= 0.0 && slope > 0.0 && !crawling {
+                Step::to(next)
+            } else {
+                Step::BISECT
+            };
+            Ok(if x < 0.0 || f > 0.0 {
+                Verdict::RootBelow(step)
+            } else {
+                Verdict::RootAbove(step)
+            })
+        },
+        |lo, hi, t| hi - lo <= 4.0 * f64::EPSILON * t,
+    )?;
+    let (t, lo, hi) = (ended.x, ended.lo, ended.hi);
+    if let (End::Done(x), Some(sat)) = (ended.end, previous) {
+        // The root at the last point evaluated.
+        return found(sat, x, t, h, s);
     }
     // A root to rounding level only: a point off the saturation line by
     // less than the promise (compressed liquid at low pressure barely
@@ -1321,6 +1437,164 @@ mod tests {
             let h = Equation::Region2.evaluate(p, t).h;
             assert!(h <= previous, "h rises with p at {p} MPa: {h} > {previous}");
             previous = h;
+        }
+    }
+
+    /// States of `region` on a (p, T) grid over the range, its edges
+    /// included, with in region 1 the cold pockets (the region 1 equation
+    /// 0.04 K below 273.15 K, where isentropic compression of cold water
+    /// leads).
+    fn grid(region: Region) -> impl Iterator<Item = Properties> {
+        let pressures = (0..=70)
+            .map(|k| 10f64.powf(-12.0 + 14.0 * f64::from(k) / 70.0))
+            // Region 3's span, 16.5–100 MPa, more closely.
+            .chain((0..=36).map(|k| 10.0 + 2.5 * f64::from(k)))
+            .chain([REGION5_MAX_PRESSURE]);
+        pressures.flat_map(move |p| {
+            let temperatures = (0..=200)
+                .map(|k| MIN_TEMPERATURE + 2_000.0 * f64::from(k) / 200.0)
+                .chain([
+                    REGION13_TEMPERATURE,
+                    B23_MAX_TEMPERATURE,
+                    REGION2_MAX_TEMPERATURE,
+                    MAX_TEMPERATURE,
+                ]);
+            let pocket = (region == Region::One && p >= 1.0)
+                .then(|| Equation::Region1.evaluate(p, MIN_TEMPERATURE - 0.04));
+            temperatures
+                .filter_map(move |t| State::from_pt(p, t, Units::Native).ok())
+                .filter(move |state| state.region() == region)
+                .map(|state| *state.native())
+                .chain(pocket)
+        })
+    }
+
+    /// The bits of a refinement's outcome.
+    fn bits(refined: Result<Properties, Error>) -> Option<(u64, u64)> {
+        refined.ok().map(|q| (q.p.to_bits(), q.t.to_bits()))
+    }
+
+    /// Bounds no iterate can meet.
+    const UNBOUNDED_T: (f64, f64) = (1.0, 1e5);
+    const UNBOUNDED_X: (f64, f64) = (f64::MIN_POSITIVE, f64::MAX);
+
+    /// The start the attempt in a gas's place refines from: SR2-01's in
+    /// region 2 where it converges, else [`gas_start`]'s.
+    fn gas_start_used(equation: Equation, h: f64, s: f64) -> Option<(f64, f64)> {
+        let backward = start_region2(h, s).filter(|_| equation == Equation::Region2);
+        backward
+            .filter(|&start| refine_gibbs(equation, h, s, start, REGION2_NEWTON_T).is_ok())
+            .or_else(|| gas_start(equation, h, s, &GAS_START_LIMITS))
+    }
+
+    /// Every state of a region refines to the same bits with the place's
+    /// named bounds as with none (in regions 2 and 5 on T; their window in
+    /// p has its own test).
+    #[test]
+    fn newton_bounds_never_bind_in_their_region() {
+        let (enthalpy, entropy) = (Given::Enthalpy, Given::Entropy);
+        let mut count = [0; 4];
+        for q in grid(Region::One) {
+            let start = start_region1(q.h, q.s);
+            let named = refine_gibbs(Equation::Region1, q.h, q.s, start, REGION1_NEWTON_T);
+            let free = Bounds {
+                x: UNBOUNDED_X,
+                t: UNBOUNDED_T,
+            };
+            let unbounded = refine(
+                Equation::Region1,
+                (enthalpy, q.h),
+                (entropy, q.s),
+                start,
+                free,
+            );
+            assert_eq!(bits(named), bits(unbounded), "{} MPa, {} K", q.p, q.t);
+            count[0] += 1;
+        }
+        for (region, equation, t_range, k) in [
+            (Region::Two, Equation::Region2, REGION2_NEWTON_T, 1),
+            (Region::Five, Equation::Region5, REGION5_NEWTON_T, 2),
+        ] {
+            for q in grid(region) {
+                let Some(start) = gas_start_used(equation, q.h, q.s) else {
+                    continue;
+                };
+                let named = refine_gibbs(equation, q.h, q.s, start, t_range);
+                let free = Bounds {
+                    x: pressure_window(equation, start.0),
+                    t: UNBOUNDED_T,
+                };
+                let unbounded = refine(equation, (enthalpy, q.h), (entropy, q.s), start, free);
+                assert_eq!(bits(named), bits(unbounded), "{} MPa, {} K", q.p, q.t);
+                count[k] += 1;
+            }
+        }
+        for q in grid(Region::Three) {
+            let (rho, t, _) = start_region3(q.h, q.s);
+            let targets = ((enthalpy, q.h), (entropy, q.s));
+            let named = Bounds {
+                x: REGION3_NEWTON_RHO,
+                t: REGION3_NEWTON_T,
+            };
+            let free = Bounds {
+                x: UNBOUNDED_X,
+                t: UNBOUNDED_T,
+            };
+            let solve = |bounds| refine(Equation::Region3, targets.0, targets.1, (rho, t), bounds);
+            assert_eq!(
+                bits(solve(named)),
+                bits(solve(free)),
+                "{} MPa, {} K",
+                q.p,
+                q.t
+            );
+            count[3] += 1;
+        }
+        assert!(count.iter().all(|&n| n >= 100), "{count:?}");
+    }
+
+    /// The solution of every state of region 2 or 5 lies within 1e-4 of
+    /// the pressure its start gives, far inside [`GAS_PRESSURE_WINDOW`].
+    #[test]
+    fn every_gas_solution_lies_near_its_start() {
+        for (region, equation, t_range) in [
+            (Region::Two, Equation::Region2, REGION2_NEWTON_T),
+            (Region::Five, Equation::Region5, REGION5_NEWTON_T),
+        ] {
+            for q in grid(region) {
+                let start = gas_start_used(equation, q.h, q.s);
+                let start = start.unwrap_or_else(|| panic!("{} MPa, {} K", q.p, q.t));
+                let refined = refine_gibbs(equation, q.h, q.s, start, t_range);
+                let p = refined.map_or(f64::NAN, |props| props.p);
+                assert!((p / start.0 - 1.0).abs() <= 1e-4, "{} MPa, {} K", q.p, q.t);
+            }
+        }
+    }
+
+    /// [`GAS_START_LIMITS`] never bind for a state of region 2 or 5 where
+    /// the start is used (region 5, and region 2 where SR2-01's start does
+    /// not converge): the start comes out the same bits without them.
+    #[test]
+    fn gas_start_limits_never_bind_in_regions_2_and_5() {
+        let free = GasStartLimits {
+            t: UNBOUNDED_T,
+            step: (f64::INFINITY, f64::INFINITY),
+        };
+        for (region, equation) in [
+            (Region::Two, Equation::Region2),
+            (Region::Five, Equation::Region5),
+        ] {
+            for q in grid(region) {
+                let by_backward = start_region2(q.h, q.s).filter(|_| region == Region::Two);
+                if gas_start_used(equation, q.h, q.s) == by_backward {
+                    continue;
+                }
+                let named = gas_start(equation, q.h, q.s, &GAS_START_LIMITS);
+                let unbounded = gas_start(equation, q.h, q.s, &free);
+                let bits =
+                    |start: Option<(f64, f64)>| start.map(|(p, t)| (p.to_bits(), t.to_bits()));
+                assert_eq!(bits(named), bits(unbounded), "{} MPa, {} K", q.p, q.t);
+            }
         }
     }
 

@@ -21,6 +21,7 @@
 //! pair costs more than the others (microseconds for wet steam); see the
 //! benchmarks.
 
+use crate::bracketed_root::{bracketed_root, End, Step, Verdict};
 use crate::constants::*;
 use crate::error::{solve_given, Error};
 use crate::free_energy::Properties;
@@ -35,6 +36,7 @@ use crate::saturation_line::{saturation_pressure, saturation_pressure_slope};
 use crate::state::{Region, State};
 use crate::units::{Quantity, Units};
 use crate::variable::Variable;
+use core::convert::Infallible;
 
 impl State {
     /// The state at specific volume `v` and specific internal energy `u`,
@@ -183,10 +185,17 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
             let rho = 1.0 / v;
             let bounds = Bounds {
                 x: (rho, rho),
-                t: (REGION13_TEMPERATURE - 10.0, B23_MAX_TEMPERATURE + 10.0),
+                t: REGION3_NEWTON_T,
             };
             let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
-            let props = refine(equation, targets.0, targets.1, (rho, 700.0), bounds).ok()?;
+            let props = refine(
+                equation,
+                targets.0,
+                targets.1,
+                (rho, REGION3_START_TEMPERATURE),
+                bounds,
+            )
+            .ok()?;
             just_inside_region3(props, rho, targets)
         }
         Equation::Region1 => {
@@ -254,20 +263,31 @@ fn could_hold(equation: Equation, v: f64, u: f64) -> bool {
     }
 }
 
+/// Steps of the isochore's bracketed iteration in T, and of Newton's in p
+/// on each isotherm: bisection alone closes the widest bracket (273.15 to
+/// 1073.15 K, or 1073.15 to 2273.15 K) to 4 ulps of T in under 60.
 const ISOCHORE_STEPS: u32 = 80;
+/// The liquid's start pressure, MPa: mid-range in region 1, whose
+/// isotherms move v by a few % over all of it.
+const LIQUID_START_PRESSURE: f64 = 10.0;
 
 /// Region 1: Newton in (p, T) together from a start where u fixes T
 /// (cv ≈ 4.2 kJ/(kg·K) from u = 0 at the triple point), falling back to the
 /// isochore where the density anomaly below 277 K defeats it.
 fn liquid(v: f64, u: f64) -> Option<Properties> {
-    let t0 = (TRIPLE_POINT_TEMPERATURE + u / 4.2).clamp(MIN_TEMPERATURE, REGION13_TEMPERATURE);
     newton_else_isochore(
         Equation::Region1,
         v,
         u,
-        (10.0, t0),
+        liquid_start(u),
         (MIN_TEMPERATURE, REGION13_TEMPERATURE),
     )
+}
+
+/// [`liquid`]'s start, (p, T).
+fn liquid_start(u: f64) -> (f64, f64) {
+    let t0 = (TRIPLE_POINT_TEMPERATURE + u / 4.2).clamp(MIN_TEMPERATURE, REGION13_TEMPERATURE);
+    (LIQUID_START_PRESSURE, t0)
 }
 
 /// Newton in (p, T) together on `equation` from `start`, T kept within a
@@ -281,7 +301,7 @@ fn newton_else_isochore(
 ) -> Option<Properties> {
     let bounds = Bounds {
         x: (P_FLOOR, P_CEILING),
-        t: (t_range.0 - 1.0, t_range.1 + 1.0),
+        t: (t_range.0 - NEWTON_T_MARGIN, t_range.1 + NEWTON_T_MARGIN),
     };
     let targets = ((Given::SpecificVolume, v), (Given::InternalEnergy, u));
     refine(equation, targets.0, targets.1, start, bounds)
@@ -297,8 +317,16 @@ fn newton_else_isochore(
 /// start is too far off (dense steam).
 fn vapour(v: f64, u: f64) -> Option<Properties> {
     let t_range = (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE);
+    match vapour_start(v, u) {
+        Some(start) => newton_else_isochore(Equation::Region2, v, u, start, t_range),
+        None => along_isochore(Equation::Region2, v, u, t_range),
+    }
+}
+
+/// [`vapour`]'s start, (p, T), `None` where the isochore serves better.
+fn vapour_start(v: f64, u: f64) -> Option<(f64, f64)> {
     if v < IDEAL_START_MIN_VOLUME && u < HOT_STEAM_MIN_ENERGY {
-        return along_isochore(Equation::Region2, v, u, t_range);
+        return None;
     }
     let t_line =
         (MIN_TEMPERATURE + (u - 2_375.0) / 1.61).clamp(MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE);
@@ -312,7 +340,7 @@ fn vapour(v: f64, u: f64) -> Option<Properties> {
         ideal_gas_dew_point(v).map_or(t_line, |t_dew| t_line.max(t_dew))
     };
     let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, MAX_PRESSURE);
-    newton_else_isochore(Equation::Region2, v, u, (p0, t0), t_range)
+    Some((p0, t0))
 }
 
 /// Region 5, nearly an ideal gas: Newton in (p, T) together from T where
@@ -320,17 +348,22 @@ fn vapour(v: f64, u: f64) -> Option<Properties> {
 /// 1 kPa and 1073.15 K (3665.4 kJ/kg) and 2273.15 K (6327.9 kJ/kg), and
 /// p = RT/v; the isochore as the fallback.
 fn hot_gas(v: f64, u: f64) -> Option<Properties> {
-    let cv = (6_327.9 - 3_665.4) / (MAX_TEMPERATURE - REGION2_MAX_TEMPERATURE);
-    let t0 = (REGION2_MAX_TEMPERATURE + (u - 3_665.4) / cv)
-        .clamp(REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE);
-    let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, REGION5_MAX_PRESSURE);
     newton_else_isochore(
         Equation::Region5,
         v,
         u,
-        (p0, t0),
+        hot_gas_start(v, u),
         (REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE),
     )
+}
+
+/// [`hot_gas`]'s start, (p, T).
+fn hot_gas_start(v: f64, u: f64) -> (f64, f64) {
+    let cv = (6_327.9 - 3_665.4) / (MAX_TEMPERATURE - REGION2_MAX_TEMPERATURE);
+    let t0 = (REGION2_MAX_TEMPERATURE + (u - 3_665.4) / cv)
+        .clamp(REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE);
+    let p0 = (SPECIFIC_GAS_CONSTANT * t0 / (1e3 * v)).clamp(P_FLOOR, REGION5_MAX_PRESSURE);
+    (p0, t0)
 }
 
 /// Below this specific volume (above 50 kg/m³) steam is too far from the
@@ -348,52 +381,52 @@ const HOT_STEAM_MIN_ENERGY: f64 = 2_375.0 + 1.61 * (800.0 - MIN_TEMPERATURE);
 /// cv > 0, so u rises with T), kept inside a shrinking bracket of
 /// `t_range`, with the pressure at each T from v(p, T) = v.
 fn along_isochore(equation: Equation, v: f64, u: f64, t_range: (f64, f64)) -> Option<Properties> {
-    let (mut lo, mut hi) = t_range;
-    let mut t = 0.5 * (lo + hi);
+    let start = 0.5 * (t_range.0 + t_range.1);
     let mut p = match equation {
-        Equation::Region1 => 10.0,
-        _ => (SPECIFIC_GAS_CONSTANT * t / (1e3 * v)).min(MAX_PRESSURE),
+        Equation::Region1 => LIQUID_START_PRESSURE,
+        _ => (SPECIFIC_GAS_CONSTANT * start / (1e3 * v)).min(MAX_PRESSURE),
     };
     let mut best: Option<Properties> = None;
-    for _ in 0..ISOCHORE_STEPS {
-        let next = match pressure_on_isotherm(equation, v, t, p) {
-            Ok(props) => {
-                let excess = props.u - u;
-                if excess.abs() <= (1e-13 * u.abs()).max(1e-12) {
-                    return Some(props);
+    let ended = bracketed_root(
+        t_range,
+        start,
+        ISOCHORE_STEPS,
+        |t| {
+            Ok::<_, Infallible>(match pressure_on_isotherm(equation, v, t, p) {
+                Ok(props) => {
+                    let excess = props.u - u;
+                    if excess.abs() <= (1e-13 * u.abs()).max(1e-12) {
+                        return Ok(Verdict::Done(props));
+                    }
+                    if best.is_none_or(|b| excess.abs() < (b.u - u).abs()) {
+                        best = Some(props);
+                    }
+                    p = props.p;
+                    let newton = Step::to(t - excess / props.cv);
+                    if excess > 0.0 {
+                        Verdict::RootBelow(newton)
+                    } else {
+                        Verdict::RootAbove(newton)
+                    }
                 }
-                if best.is_none_or(|b| excess.abs() < (b.u - u).abs()) {
-                    best = Some(props);
+                // (∂p/∂T) at constant v is αv/κT: where αv > 0, needing a
+                // pressure below the range means T is too low, above it too
+                // high; in the liquid's density anomaly (αv < 0, below
+                // 277 K) the other way round.
+                Err((bound, alpha)) => {
+                    if (bound == PressureBound::Low) == (alpha > 0.0) {
+                        Verdict::RootAbove(Step::BISECT)
+                    } else {
+                        Verdict::RootBelow(Step::BISECT)
+                    }
                 }
-                p = props.p;
-                if excess > 0.0 {
-                    hi = t;
-                } else {
-                    lo = t;
-                }
-                t - excess / props.cv
-            }
-            // (∂p/∂T) at constant v is αv/κT: where αv > 0, needing a
-            // pressure below the range means T is too low, above it too
-            // high; in the liquid's density anomaly (αv < 0, below 277 K)
-            // the other way round.
-            Err((bound, alpha)) => {
-                if (bound == PressureBound::Low) == (alpha > 0.0) {
-                    lo = t;
-                } else {
-                    hi = t;
-                }
-                f64::NAN
-            }
-        };
-        t = if next > lo && next < hi {
-            next
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 4.0 * f64::EPSILON * hi {
-            break;
-        }
+            })
+        },
+        |lo, hi, _| hi - lo <= 4.0 * f64::EPSILON * hi,
+    );
+    let Ok(ended) = ended;
+    if let End::Done(props) = ended.end {
+        return Some(props);
     }
     // The bracket has closed to the last bit of T: keep the best state if
     // it meets the promised precision.
@@ -407,11 +440,34 @@ enum PressureBound {
     High,
 }
 
+/// The pressures of every iterate, MPa: the range's floor, and its
+/// 100 MPa widened by 1 %, room for a solution a hair past the range's
+/// edge, which [`accept`] then takes (within 1e-9) or refuses. A Gibbs
+/// region's solution cannot lie higher: above 100 MPa no state is in range.
 const P_FLOOR: f64 = MIN_PRESSURE;
 const P_CEILING: f64 = MAX_PRESSURE * 1.01;
 
+/// How far past a Gibbs region's temperatures (its limits in the range,
+/// R7-97) its Newton iterates in (p, T) may go, K. A state of the region
+/// never meets the bound (test `newton_bounds_never_bind_in_their_region`:
+/// from the pair's starts, a grid over the region refines to the same
+/// bits without it; with no margin at all it does not), nor does a
+/// solution a hair past the region's edge that [`accept`] then takes or
+/// hands on; the isochore takes over where Newton fails.
+const NEWTON_T_MARGIN: f64 = 1.0;
+/// Region 3's temperatures for its Newton iteration in T, K: 623.15 K to
+/// 863.15 K (the highest of B23, R7-97) widened by 10 K each way, so that
+/// a solution just across either boundary is found and [`accept`] hands it
+/// on (the same test checks a state of region 3 never meets it); the start
+/// is mid-region.
+const REGION3_NEWTON_T: (f64, f64) = (REGION13_TEMPERATURE - 10.0, B23_MAX_TEMPERATURE + 10.0);
+const REGION3_START_TEMPERATURE: f64 = 700.0;
+
 /// The state on `equation` at temperature `t` with specific volume `v`:
-/// Newton's method in p (∂v/∂p = −v·κT).
+/// Newton's method in p (∂v/∂p = −v·κT). Not the bracketed engine: there
+/// is no bracket, a step past [`P_FLOOR`] or [`P_CEILING`] is clamped to
+/// it, and a second at the same end names that end (bisecting instead
+/// would change the iterates).
 /// Failing, it names the bound it ran into and the expansion coefficient
 /// there.
 fn pressure_on_isotherm(
@@ -554,6 +610,9 @@ fn stable_below_critical(props: &Properties, branch: Branch) -> bool {
     }
 }
 
+/// Steps of the wet iteration: bisection alone closes its bracket (273.15 K
+/// to Tc) in about 60, and takes at least every other step where Newton
+/// crawls.
 const WET_STEPS: u32 = 150;
 
 /// Wet steam with this (v, u), if there is such a state at or below
@@ -570,8 +629,7 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     // by the formulation's inconsistency at that line, and a point within
     // it may have a root on each side (millikelvins apart); this way the
     // root below wins, whichever way the steps would have gone.
-    let (mut lo, mut hi) = (MIN_TEMPERATURE, t_max);
-    let mut t = if t_max > REGION13_TEMPERATURE {
+    let start = if t_max > REGION13_TEMPERATURE {
         REGION13_TEMPERATURE
     } else {
         t_max
@@ -585,67 +643,66 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     // steps (within about 2e-5 K of Tc the slopes along the line are not
     // resolved and the Newton steps crawl), bisection takes the step.
     let mut residuals = [f64::INFINITY; 2];
-    for _ in 0..WET_STEPS {
-        // The previous point starts region 3's density iterations.
-        let sat = match &previous {
-            Some(near) => Saturation::at_temperature_near(t, near)?,
-            None => Saturation::at_temperature(t, Units::Native)?,
-        };
-        previous = Some(sat);
-        let (l, g) = (sat.liquid().native(), sat.vapour().native());
-        let x = (v - l.v) / (g.v - l.v);
-        let mut newton = f64::NAN;
-        if !(0.0..=1.0).contains(&x) {
-            // Outside the dome's width at this T: too hot, except below
-            // the liquid's density maximum (about 277 K), where v' falls
-            // as T rises and a v below it means too cold.
-            let colder = x < 0.0
-                && Variable::SpecificVolume.along_saturation(l, saturation_pressure_slope(t)) < 0.0;
-            if colder {
-                lo = t;
-            } else {
-                hi = t;
+    let ended = bracketed_root(
+        (MIN_TEMPERATURE, t_max),
+        start,
+        WET_STEPS,
+        |t| {
+            // The previous point starts region 3's density iterations.
+            let sat = match &previous {
+                Some(near) => Saturation::at_temperature_near(t, near)?,
+                None => Saturation::at_temperature(t, Units::Native)?,
+            };
+            previous = Some(sat);
+            let (l, g) = (sat.liquid().native(), sat.vapour().native());
+            let x = (v - l.v) / (g.v - l.v);
+            if !(0.0..=1.0).contains(&x) {
+                // Outside the dome's width at this T: too hot, except below
+                // the liquid's density maximum (about 277 K), where v' falls
+                // as T rises and a v below it means too cold.
+                let colder = x < 0.0
+                    && Variable::SpecificVolume.along_saturation(l, saturation_pressure_slope(t))
+                        < 0.0;
+                return Ok(if colder {
+                    Verdict::RootAbove(Step::BISECT)
+                } else {
+                    Verdict::RootBelow(Step::BISECT)
+                });
             }
-        } else {
             let u_mix = (1.0 - x) * l.u + x * g.u;
             let f = u_mix - u;
             found = Some((sat, x, u_mix));
             if f.abs() <= (1e-13 * u.abs()).max(1e-12) {
-                break;
+                return Ok(Verdict::Done(()));
             }
             let crawling = f.abs() > 0.5 * residuals[1];
             residuals = [f.abs(), residuals[0]];
-            if f < 0.0 {
-                lo = t;
-            } else {
-                hi = t;
-            }
+            let mut step = Step::BISECT;
             if let Some((f, slope)) = quality_match(l, g, v, u).filter(|_| !crawling) {
                 let y = 1.0 / t;
-                let mut step = f / slope;
+                let mut dy = f / slope;
                 if let Some((y_last, slope_last)) = last_slope {
                     // Halley's correction with the curvature measured
                     // between this point and the last: good once the steps
                     // are small, bounded where they are not.
                     let curvature = (slope - slope_last) / (y - y_last);
-                    let denominator = 1.0 - 0.5 * step * curvature / slope;
+                    let denominator = 1.0 - 0.5 * dy * curvature / slope;
                     if denominator > 0.5 && denominator < 2.0 {
-                        step /= denominator;
+                        dy /= denominator;
                     }
                 }
                 last_slope = Some((y, slope));
-                newton = 1.0 / (y - step);
+                step = Step::to(1.0 / (y - dy));
             }
-        }
-        t = if newton > lo && newton < hi {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 4.0 * f64::EPSILON * hi {
-            break;
-        }
-    }
+            Ok(if f < 0.0 {
+                Verdict::RootAbove(step)
+            } else {
+                Verdict::RootBelow(step)
+            })
+        },
+        |lo, hi, _| hi - lo <= 4.0 * f64::EPSILON * hi,
+    )?;
+    let lo = ended.lo;
     let mut met = found.filter(|&(_, _, u_mix)| within_promise(Given::InternalEnergy, u_mix, u));
     if met.is_none() && lo == MIN_TEMPERATURE {
         // The bracket closed on 273.15 K without evaluating it: the
@@ -728,6 +785,69 @@ fn quality_match(l: &Properties, g: &Properties, v: f64, u: f64) -> Option<(f64,
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    /// The Newton bounds in T never bind for a state of a region: from the
+    /// starts the pair uses, every state on a (p, T) grid over regions 1,
+    /// 2, 5 (edges included) and 3 refines to the same bits with them as
+    /// without.
+    #[test]
+    fn newton_bounds_never_bind_in_their_region() {
+        let unbounded_t = (1.0, 1e5);
+        let mut count = 0;
+        for kp in 0..=60 {
+            let p = 10f64.powf(-12.0 + 14.0 * f64::from(kp) / 60.0);
+            for kt in 0..=200 {
+                let t = MIN_TEMPERATURE + 2_000.0 * f64::from(kt) / 200.0;
+                let Ok(state) = State::from_pt(p, t, Units::Native) else {
+                    continue;
+                };
+                let q = *state.native();
+                let targets = ((Given::SpecificVolume, q.v), (Given::InternalEnergy, q.u));
+                let widened = |(lo, hi): (f64, f64)| (lo - NEWTON_T_MARGIN, hi + NEWTON_T_MARGIN);
+                let (equation, start, named) = match state.region() {
+                    Region::One => (
+                        Equation::Region1,
+                        liquid_start(q.u),
+                        widened((MIN_TEMPERATURE, REGION13_TEMPERATURE)),
+                    ),
+                    Region::Two => {
+                        let Some(start) = vapour_start(q.v, q.u) else {
+                            continue;
+                        };
+                        (
+                            Equation::Region2,
+                            start,
+                            widened((MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE)),
+                        )
+                    }
+                    Region::Five => (
+                        Equation::Region5,
+                        hot_gas_start(q.v, q.u),
+                        widened((REGION2_MAX_TEMPERATURE, MAX_TEMPERATURE)),
+                    ),
+                    Region::Three => (
+                        Equation::Region3,
+                        (1.0 / q.v, REGION3_START_TEMPERATURE),
+                        REGION3_NEWTON_T,
+                    ),
+                    _ => continue,
+                };
+                let x = if equation == Equation::Region3 {
+                    (1.0 / q.v, 1.0 / q.v)
+                } else {
+                    (P_FLOOR, P_CEILING)
+                };
+                let solve = |t| {
+                    refine(equation, targets.0, targets.1, start, Bounds { x, t })
+                        .ok()
+                        .map(|r| (r.p.to_bits(), r.t.to_bits()))
+                };
+                assert_eq!(solve(named), solve(unbounded_t), "{p} MPa, {t} K");
+                count += 1;
+            }
+        }
+        assert!(count > 1000, "{count}");
+    }
 
     /// `U_VAPOUR_HIGHEST` lies above u'' of region 2 along the whole
     /// saturation line up to 623.15 K, and within 0.1 kJ/kg of its peak.

@@ -18,10 +18,12 @@
 //! saturated-density estimates.
 
 use crate::backward::sr5_05::{self, SaturationSide};
+use crate::bracketed_root::{bracketed_root, End, Step, Verdict};
 use crate::constants::{CRITICAL_DENSITY, SPECIFIC_GAS_CONSTANT};
 use crate::error::Error;
 use crate::region3::pressure_and_slope;
 use crate::saturated_density_estimate as estimate;
+use core::convert::Infallible;
 
 /// Which root of p(ρ, T) = p a caller wants.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -192,18 +194,42 @@ const TURNING_POINT_REACH: f64 = 1e-9;
 /// (positive) and `past` (not), then stands for the phase if it misses
 /// the target by at most [`TURNING_POINT_REACH`]; the two phases are then
 /// a fraction of a kg/m³ apart, either side of ρc.
-fn turning_point_within_reach(p: f64, t: f64, mut rising: f64, mut past: f64) -> Option<f64> {
-    for _ in 0..MAX_NEWTON_STEPS {
-        let mid = 0.5 * (rising + past);
-        if mid == rising || mid == past {
-            break;
-        }
-        if pressure_and_slope(mid, t).1 > 0.0 {
-            rising = mid;
+fn turning_point_within_reach(p: f64, t: f64, rising: f64, past: f64) -> Option<f64> {
+    // The liquid's rising end lies above the turning point, the vapour's
+    // below: the bracket in order, and where the turning point lies from
+    // a density whose slope is (or is not) positive.
+    let liquid = rising > past;
+    let bracket = if liquid {
+        (past, rising)
+    } else {
+        (rising, past)
+    };
+    let start = 0.5 * (rising + past);
+    // Bisection until the midpoint is an end of the bracket.
+    let rising = if start == rising || start == past {
+        rising
+    } else {
+        let ended = bracketed_root(
+            bracket,
+            start,
+            MAX_NEWTON_STEPS,
+            |rho| {
+                let below = (pressure_and_slope(rho, t).1 > 0.0) == liquid;
+                Ok::<_, Infallible>(if below {
+                    Verdict::<()>::RootBelow(Step::BISECT)
+                } else {
+                    Verdict::RootAbove(Step::BISECT)
+                })
+            },
+            |lo, hi, mid| mid == lo || mid == hi,
+        );
+        let Ok(ended) = ended;
+        if liquid {
+            ended.hi
         } else {
-            past = mid;
+            ended.lo
         }
-    }
+    };
     let (pressure, _) = pressure_and_slope(rising, t);
     ((pressure - p).abs() <= TURNING_POINT_REACH * p).then_some(rising)
 }
@@ -241,53 +267,58 @@ struct Root {
 }
 
 /// Newton's method on p(ρ) = p, falling back to bisection whenever a step
-/// would leave the bracket [lo, hi] that holds the root.
-fn newton_in_bracket(p: f64, t: f64, mut lo: f64, mut hi: f64, start: f64) -> Option<Root> {
-    let mut rho = start;
+/// would leave the bracket [lo, hi] that holds the root. Every density
+/// evaluated lies in [lo, hi] (the start is in it, each next point
+/// strictly inside or the midpoint), so the evaluated one replaces the end
+/// on the root's far side.
+fn newton_in_bracket(p: f64, t: f64, lo: f64, hi: f64, start: f64) -> Option<Root> {
+    // p − target and ∂p/∂ρ at the last density evaluated.
+    let (mut excess, mut slope) = (f64::NAN, f64::NAN);
     let mut last_excess = f64::INFINITY;
-    for _ in 0..MAX_NEWTON_STEPS {
-        let (pressure, slope) = pressure_and_slope(rho, t);
-        let excess = pressure - p;
-        if excess == 0.0 {
-            return Some(Root { rho, excess, slope });
-        }
-        if excess > 0.0 {
-            hi = hi.min(rho);
-        } else {
-            lo = lo.max(rho);
-        }
-        let newton = rho - excess / slope;
-        let newton_inside = slope > 0.0 && newton > lo && newton < hi;
-        let step = (newton - rho).abs();
-        if newton_inside && (step <= SETTLED * rho || excess.abs() <= SETTLED_PRESSURE * p) {
-            return Some(Root {
-                rho: newton,
-                excess,
-                slope,
-            });
-        }
-        // Beside the critical point the isotherm is nearly flat and Newton
-        // crawls: a sizeable step that did not halve the excess is followed
-        // by a bisection, so the bracket shrinks at least every other step.
-        // (At the rounding level the excess stops halving too, but the steps
-        // are tiny.)
-        let crawling = excess.abs() > 0.5 * last_excess && step > 1e-10 * rho;
-        last_excess = excess.abs();
-        let next = if newton_inside && !crawling {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 2.0 * f64::EPSILON * hi {
-            return Some(Root {
-                rho: next,
-                excess,
-                slope,
-            });
-        }
-        rho = next;
-    }
-    None
+    let ended = bracketed_root(
+        (lo, hi),
+        start,
+        MAX_NEWTON_STEPS,
+        |rho| {
+            let (pressure, dp) = pressure_and_slope(rho, t);
+            (excess, slope) = (pressure - p, dp);
+            if excess == 0.0 {
+                return Ok::<_, Infallible>(Verdict::Done(rho));
+            }
+            let newton = rho - excess / slope;
+            let step = (newton - rho).abs();
+            let next =
+                if slope > 0.0 && (step <= SETTLED * rho || excess.abs() <= SETTLED_PRESSURE * p) {
+                    Step::last(newton)
+                } else {
+                    // Beside the critical point the isotherm is nearly flat and
+                    // Newton crawls: a sizeable step that did not halve the
+                    // excess is followed by a bisection, so the bracket shrinks
+                    // at least every other step. (At the rounding level the
+                    // excess stops halving too, but the steps are tiny.)
+                    let crawling = excess.abs() > 0.5 * last_excess && step > 1e-10 * rho;
+                    if slope > 0.0 && !crawling {
+                        Step::to(newton)
+                    } else {
+                        Step::BISECT
+                    }
+                };
+            last_excess = excess.abs();
+            Ok(if excess > 0.0 {
+                Verdict::RootBelow(next)
+            } else {
+                Verdict::RootAbove(next)
+            })
+        },
+        |lo, hi, _| hi - lo <= 2.0 * f64::EPSILON * hi,
+    );
+    let Ok(ended) = ended;
+    let rho = match ended.end {
+        End::Done(rho) => rho,
+        End::Closed => ended.x,
+        End::Exhausted => return None,
+    };
+    Some(Root { rho, excess, slope })
 }
 
 #[cfg(test)]
