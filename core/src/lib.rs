@@ -57,6 +57,7 @@ mod transport;
 pub mod units;
 mod variable;
 pub mod viscosity;
+mod vocabulary;
 mod wet_hs_start;
 
 pub use error::Error;
@@ -68,6 +69,7 @@ pub use saturation::{min_saturation_pressure, Saturation};
 pub use state::{Phase, Region, State};
 pub use units::{Quantity, Units};
 pub use variable::Variable;
+pub use vocabulary::{Reading, Request, Status};
 
 /// The README's Rust example, compiled and run as a doctest.
 #[cfg(doctest)]
