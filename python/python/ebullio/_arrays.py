@@ -50,8 +50,8 @@ class StateArray:
     Each property (``p, t, v, rho, u, h, s, cp, cv, w, x, alpha_v,
     kappa_t, g, f``) is a float64 ndarray of the inputs' broadcast shape, in
     the units ``units``. ``region`` (1 to 5) and ``phase`` (``ebullio.Phase``
-    codes) are uint8 arrays, 0 where an element is bad. ``status`` holds an
-    ``ebullio.Status`` code per element, ``ok`` is ``status == 0``. A bad
+    codes) are uint8 arrays, 0 where an element is bad. ``status`` (uint16)
+    holds an ``ebullio.Status`` code per element, ``ok`` is ``status == 0``. A bad
     element is NaN in every property; the others are computed. A property
     that does not exist for an element (cp of wet steam, x of superheated
     vapour, or one the core finds not finite and physical, as cp at the

@@ -101,7 +101,7 @@ def _arrays_of(out: Any, shape: tuple[int, ...]) -> tuple[np.ndarray, ...]:
     if out.shape != shape:
         raise ValueError(f"out has shape {out.shape}, but the inputs broadcast to {shape}")
     arrays = (out._columns, out.region, out.phase, out.status)
-    expected = (("properties", np.float64, (_COLUMNS,) + shape), ("region", np.uint8, shape), ("phase", np.uint8, shape), ("status", np.uint8, shape))
+    expected = (("properties", np.float64, (_COLUMNS,) + shape), ("region", np.uint8, shape), ("phase", np.uint8, shape), ("status", np.uint16, shape))
     for array, (name, dtype, array_shape) in zip(arrays, expected):
         if not isinstance(array, np.ndarray) or array.dtype != dtype or array.shape != array_shape:
             raise TypeError(f"out's {name} must be a {np.dtype(dtype).name} ndarray of shape {array_shape}, as a State constructor made it")
