@@ -174,7 +174,7 @@ fn fill<const M: usize>(
 /// values, region, phase, status. Any shape, as long as they are
 /// C-contiguous with the right number of elements (`out=` passes a
 /// `StateArray`'s own arrays, shaped like its inputs).
-type Arrays<'py> = (
+pub(crate) type Arrays<'py> = (
     Bound<'py, PyArrayDyn<f64>>,
     Bound<'py, PyArrayDyn<u8>>,
     Bound<'py, PyArrayDyn<u8>>,
@@ -269,7 +269,7 @@ fn pool_error(error: rayon::ThreadPoolBuildError) -> PyErr {
 
 /// The arguments every pair kernel takes, decoded: the request, inputs
 /// of equal length and threads.
-struct PairCall<'a> {
+pub(crate) struct PairCall<'a> {
     request: Request,
     a: ArrayView1<'a, f64>,
     b: ArrayView1<'a, f64>,
@@ -277,6 +277,21 @@ struct PairCall<'a> {
 }
 
 impl<'a> PairCall<'a> {
+    /// A call over `a` and `b`, of equal length.
+    pub(crate) fn new(
+        request: Request,
+        a: ArrayView1<'a, f64>,
+        b: ArrayView1<'a, f64>,
+        threads: Threads,
+    ) -> PairCall<'a> {
+        PairCall {
+            request,
+            a,
+            b,
+            threads,
+        }
+    }
+
     fn decode(
         pair: u32,
         a: &'a PyReadonlyArray1<'_, f64>,
@@ -309,7 +324,7 @@ impl<'a> PairCall<'a> {
     }
 
     /// Every element's state read in `read`, into `out` or fresh arrays.
-    fn solve<'py>(
+    pub(crate) fn solve<'py>(
         &self,
         py: Python<'py>,
         read: Units,
@@ -349,30 +364,21 @@ pub(crate) fn solve_many<'py>(
     call.solve(py, read, out)
 }
 
-/// Saturation points (`by` 1: pressure, 2: temperature) at `values[i]`.
+/// Saturation points (`by`) at `values[i]`, in `units`.
 ///
-/// As `solve_many` with two states per element, liquid then vapour:
+/// As [`PairCall::solve`] with two states per element, liquid then vapour:
 /// `values` holds 2 × 15 columns, `region` and `phase` 2 × n.
-#[pyfunction]
-#[pyo3(signature = (by, values, units, threads=None, read=None))]
-pub(crate) fn saturation_many<'py>(
+pub(crate) fn saturation_into<'py>(
     py: Python<'py>,
-    by: u32,
-    values: PyReadonlyArray1<'py, f64>,
-    units: &Bound<'py, PyAny>,
-    threads: Option<&Bound<'py, PyAny>>,
-    read: Option<&Bound<'py, PyAny>>,
+    by: By,
+    values: ArrayView1<'_, f64>,
+    units: Units,
+    threads: Threads,
 ) -> PyResult<Arrays<'py>> {
-    let by = By::from_number(by)?;
-    let units: Units = names::unit_system(units)?;
-    let read = read_units(read, units)?;
-    let threads = self::threads(threads)?;
-    let values = values.as_array();
     let n = values.len();
     let arrays = fresh::<2>(py, n);
     write::<2>(py, &arrays, n, threads, |i| {
         by.solve(values[i], units)
-            .map(|s| s.in_units(read))
             .map(|s| [*s.liquid(), *s.vapour()])
     })?;
     Ok(arrays)
@@ -392,29 +398,13 @@ pub(crate) fn raise_element(
     method: Option<&Bound<'_, PyAny>>,
     label: &str,
 ) -> PyResult<()> {
-    let (pair, units, method) = (
-        names::pair(pair)?,
-        names::unit_system(units)?,
-        names::method(method)?,
-    );
-    State::solve(pair, a, b, units, method)
-        .map(|_| ())
-        .map_err(|error| to_py(py, &error, Some(label)))
-}
-
-/// As `raise_element`, for a saturation point (`by` 1: pressure, 2:
-/// temperature) at `value`.
-#[pyfunction]
-#[pyo3(signature = (by, value, units, label))]
-pub(crate) fn raise_saturation_element(
-    py: Python<'_>,
-    by: u32,
-    value: f64,
-    units: &Bound<'_, PyAny>,
-    label: &str,
-) -> PyResult<()> {
-    By::from_number(by)?
-        .solve(value, names::unit_system(units)?)
+    let request = Request {
+        pair: names::pair(pair)?,
+        units: names::unit_system(units)?,
+        method: names::method(method)?,
+    };
+    request
+        .solve(a, b)
         .map(|_| ())
         .map_err(|error| to_py(py, &error, Some(label)))
 }
