@@ -1,133 +1,32 @@
 //! The array path of the constructors, whole in Rust: what `State.from_*`,
 //! `Saturation.at_*` and the mixtures do with anything but plain numbers.
 //!
-//! Inputs become float64 arrays (pandas' missing values NaN, and so a
-//! NOT_FINITE status), broadcast against each other, and go to the kernel
-//! ([`crate::arrays`]) in one call, into fresh arrays or those of the
-//! `StateArray` given as `out=`; the result object is made here too. Only
-//! numpy's own functions and the result classes' constructors are called
-//! on the Python side.
+//! Inputs become float64 arrays ([`crate::inputs`]; pandas' missing values
+//! NaN, and so a NOT_FINITE status), broadcast against each other, and go
+//! to the kernel ([`crate::arrays`]) in one call, into fresh arrays or
+//! those of the `StateArray` given as `out=`; the result object is made
+//! here too. On the Python side only numpy and the result classes'
+//! constructors are called.
 //!
 //! A result keeps the inputs it was solved from (`transport()`,
 //! `derivative()`, `in_units()`, indexing and `error_at` solve them again)
-//! as private read-only copies ([`kept`]): the caller's later edits of its
-//! own arrays never change a result once returned.
+//! as private read-only copies ([`crate::inputs::kept`]): the caller's
+//! later edits of its own arrays never change a result once returned.
 
 use ebullio::{Request, Units};
-use numpy::ndarray::{Array1, CowArray, Ix1};
-use numpy::{
-    PyArrayDyn, PyArrayMethods, PyReadonlyArrayDyn, PyUntypedArray, PyUntypedArrayMethods,
-};
+use numpy::{PyArrayDyn, PyArrayMethods, PyUntypedArrayMethods};
 use pyo3::exceptions::{PyTypeError, PyValueError};
 use pyo3::prelude::*;
 use pyo3::sync::PyOnceLock;
-use pyo3::types::{PyDict, PyTuple};
+use pyo3::types::PyTuple;
 
 use crate::arrays::{self, Arrays, PairCall, Threads};
 use crate::columns::COUNT;
 use crate::errors::{to_py, StatusCode};
+use crate::inputs::{broadcast_shape, flat, floats, is_ndarray, kept, ndim, numpy, spread};
 use crate::names::{self, Errors};
 use crate::saturation::{By, PySaturation};
 use crate::state::{method_member, python_attr, units_member, Origin, PyState};
-
-/// The numpy module.
-fn numpy(py: Python<'_>) -> PyResult<&Bound<'_, PyModule>> {
-    static NUMPY: PyOnceLock<Py<PyModule>> = PyOnceLock::new();
-    NUMPY
-        .get_or_try_init(py, || py.import("numpy").map(Bound::unbind))
-        .map(|module| module.bind(py))
-}
-
-/// `{"dtype": numpy.float64}` plus `extra`.
-fn float64_keywords<'py>(
-    np: &Bound<'py, PyModule>,
-    extra: &[(&str, Bound<'py, PyAny>)],
-) -> PyResult<Bound<'py, PyDict>> {
-    let keywords = PyDict::new(np.py());
-    keywords.set_item("dtype", np.getattr("float64")?)?;
-    for (key, value) in extra {
-        keywords.set_item(key, value)?;
-    }
-    Ok(keywords)
-}
-
-fn is_ndarray(x: &Bound<'_, PyAny>) -> bool {
-    x.cast::<PyUntypedArray>().is_ok()
-}
-
-/// `x` as a float64 array; pandas' missing values become NaN.
-fn floats<'py>(x: &Bound<'py, PyAny>) -> PyResult<Bound<'py, PyAny>> {
-    let np = numpy(x.py())?;
-    if !is_ndarray(x) {
-        if let Ok(to_numpy) = x.getattr("to_numpy") {
-            if to_numpy.is_callable() {
-                let keywords = float64_keywords(np, &[("na_value", np.getattr("nan")?)])?;
-                match to_numpy.call((), Some(&keywords)) {
-                    Ok(values) => return np.call_method1("asarray", (values,)),
-                    Err(error) if error.is_instance_of::<PyTypeError>(x.py()) => {}
-                    Err(error) => return Err(error),
-                }
-            }
-        }
-    }
-    np.call_method("asarray", (x,), Some(&float64_keywords(np, &[])?))
-}
-
-/// A private, read-only, C-ordered float64 copy of input `x` for a result
-/// to keep (results solve their inputs again: the caller's later edits of
-/// its own arrays must not reach them).
-#[pyfunction]
-pub(crate) fn kept<'py>(x: &Bound<'py, PyAny>) -> PyResult<Bound<'py, PyArrayDyn<f64>>> {
-    let np = numpy(x.py())?;
-    let order = [("order", "C".into_pyobject(x.py())?.into_any())];
-    let copy = np.call_method("array", (x,), Some(&float64_keywords(np, &order)?))?;
-    let frozen = PyDict::new(x.py());
-    frozen.set_item("write", false)?;
-    copy.call_method("setflags", (), Some(&frozen))?;
-    Ok(copy.cast_into::<PyArrayDyn<f64>>()?)
-}
-
-fn ndim(x: &Bound<'_, PyAny>) -> PyResult<usize> {
-    x.getattr("ndim")?.extract()
-}
-
-/// The shape `a` and `b` broadcast to.
-fn broadcast_shape(a: &Bound<'_, PyAny>, b: &Bound<'_, PyAny>) -> PyResult<Vec<usize>> {
-    let np = numpy(a.py())?;
-    match np.call_method1(
-        "broadcast_shapes",
-        (a.getattr("shape")?, b.getattr("shape")?),
-    ) {
-        Ok(shape) => shape.extract(),
-        Err(error) if error.is_instance_of::<PyValueError>(a.py()) => {
-            Err(PyValueError::new_err(format!(
-                "the two inputs do not broadcast together: shapes {} and {}",
-                a.getattr("shape")?.str()?,
-                b.getattr("shape")?.str()?
-            )))
-        }
-        Err(error) => Err(error),
-    }
-}
-
-/// A kept input broadcast to `shape`: numpy's read-only view of it.
-fn spread<'py>(
-    input: &Bound<'py, PyArrayDyn<f64>>,
-    shape: &[usize],
-) -> PyResult<PyReadonlyArrayDyn<'py, f64>> {
-    let view = numpy(input.py())?.call_method1("broadcast_to", (input, shape.to_vec()))?;
-    Ok(view.cast_into::<PyArrayDyn<f64>>()?.try_readonly()?)
-}
-
-/// The elements of a [`spread`] input in C order: the view itself where it
-/// is 1-D (a broadcast scalar costs no copy), a copy otherwise.
-fn flat<'a>(spread: &'a PyReadonlyArrayDyn<'_, f64>) -> CowArray<'a, f64, Ix1> {
-    let view = spread.as_array();
-    match view.clone().into_dimensionality::<Ix1>() {
-        Ok(line) => CowArray::from(line),
-        Err(_) => CowArray::from(Array1::from_iter(view.iter().copied())),
-    }
-}
 
 /// How an error names element `k` (flat) of an array of `shape`.
 fn element_label(k: usize, shape: &[usize]) -> String {

@@ -70,7 +70,7 @@ fn is_bool(obj: &Bound<'_, PyAny>) -> PyResult<bool> {
     if obj.is_instance_of::<PyBool>() {
         return Ok(true);
     }
-    let numpy_bool = obj.py().import("numpy")?.getattr("bool_")?;
+    let numpy_bool = crate::inputs::numpy(obj.py())?.getattr("bool_")?;
     obj.is_instance(&numpy_bool)
 }
 

@@ -19,6 +19,7 @@ mod array_call;
 mod arrays;
 mod columns;
 mod errors;
+mod inputs;
 mod names;
 mod plant;
 mod saturation;
@@ -40,7 +41,7 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(arrays::surface_tension_many, m)?)?;
     m.add_function(wrap_pyfunction!(arrays::raise_element, m)?)?;
     m.add_function(wrap_pyfunction!(array_call::solve_states, m)?)?;
-    m.add_function(wrap_pyfunction!(array_call::kept, m)?)?;
+    m.add_function(wrap_pyfunction!(inputs::kept, m)?)?;
     m.add_function(wrap_pyfunction!(names::units_required, m)?)?;
     m.add("PROPERTIES", columns::table(m.py())?)?;
     m.add("TRANSPORT", columns::transport_table(m.py())?)?;

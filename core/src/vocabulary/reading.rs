@@ -4,9 +4,7 @@
 //! coefficients (22–26) and the near-saturation flag (27). Reading one is
 //! one call on the state, in [`State::reading`] and nowhere else.
 
-use crate::error::Error;
-use crate::property::Property;
-use crate::state::State;
+use crate::{Error, Property, State};
 
 /// One reading of a state. Its number ([`Reading::number`]) is part of the
 /// C ABI: never renumbered, never reused.

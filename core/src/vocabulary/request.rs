@@ -1,11 +1,7 @@
 //! One request to the engine: the input pair, the units of its values and
 //! of the state, and how an inverse pair is finished.
 
-use crate::error::Error;
-use crate::input_pair::InputPair;
-use crate::pair_ph_ps::Method;
-use crate::state::State;
-use crate::units::Units;
+use crate::{Error, InputPair, Method, State, Units};
 
 use super::{Reading, Status};
 

@@ -15,7 +15,7 @@
 //! The numbers are published: never renumbered, never reused. A retired
 //! code stays here as a "reserved" comment.
 
-use crate::error::Error;
+use crate::Error;
 
 /// The outcome of a call, as a number the same in every language.
 #[derive(Clone, Copy, Debug, PartialEq, Eq, Hash)]
@@ -164,7 +164,7 @@ mod tests {
 
     #[test]
     fn of_errors_lists_exactly_what_errors_map_to() {
-        use crate::units::Quantity;
+        use crate::Quantity;
         let errors = [
             Error::NotFinite {
                 quantity: Quantity::Pressure,
