@@ -58,6 +58,7 @@ mod transport;
 pub mod units;
 mod variable;
 pub mod viscosity;
+mod vocabulary;
 mod wet_hs_start;
 
 pub use error::Error;
@@ -69,6 +70,7 @@ pub use saturation::{min_saturation_pressure, Saturation};
 pub use state::{Phase, Region, State};
 pub use units::{Quantity, Units};
 pub use variable::Variable;
+pub use vocabulary::{Reading, Request, Status};
 
 /// The README's Rust example, compiled and run as a doctest.
 #[cfg(doctest)]

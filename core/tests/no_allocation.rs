@@ -8,7 +8,7 @@ use std::sync::atomic::{AtomicUsize, Ordering};
 use ebullio::backward::{r7_97, sr2_01, sr3_03, sr4_04, sr5_05};
 use ebullio::{
     boundary_b23, region1, region2, region2_metastable, region3, region5, saturation_line,
-    InputPair, Method, Property, Saturation, State, Units, Variable,
+    InputPair, Method, Property, Reading, Request, Saturation, State, Status, Units, Variable,
 };
 
 struct Counting;
@@ -126,6 +126,33 @@ fn exercise_everything() -> f64 {
             for property in Property::ALL {
                 sum += s.get(property).unwrap_or(0.0);
             }
+            // The bindings' vocabulary: every reading, by number and by request.
+            for n in 0..=Reading::ALL.len() as u32 + 1 {
+                let Some(reading) = Reading::from_number(n) else {
+                    continue;
+                };
+                sum += f64::from(reading.number());
+                if let Ok(Some(v)) = s.reading(reading) {
+                    sum += v;
+                }
+                for method in [0, 1, 2] {
+                    if let Ok(request) = Request::from_numbers(1, units as u32, method) {
+                        let value = request.read(reading, s.pressure(), s.temperature());
+                        sum += value.ok().flatten().unwrap_or(0.0);
+                    }
+                }
+            }
+            let bad = Request::from_numbers(10, 9, 9).err().unwrap_or(Status::Ok);
+            sum += f64::from(bad as u16) + f64::from(Status::from_code(201).is_some() as u8);
+            let request = Request {
+                pair: InputPair::PressureTemperature,
+                units,
+                method: Method::Exact,
+            };
+            if let Err(e) = request.solve(f64::NAN, 1.0) {
+                sum += f64::from(Status::of(&e) as u16);
+            }
+            sum += Request::units_from_number(units as u32).map_or(0.0, |u| u as u32 as f64);
             for z in Variable::ALL {
                 for x in Variable::ALL {
                     sum += s.derivative(z, x, Variable::Entropy).unwrap_or(0.0);

@@ -5,13 +5,13 @@
 //! One kernel serves every array call; what it reads off each state (k
 //! property numbers, or k derivatives) is a [`Columns`].
 
-use ebullio::State;
+use ebullio::{Request, State};
 
 use crate::args::{check_len, InArray, OutArray};
 use crate::boundary::boundary;
 use crate::codes;
-use crate::state::Choice;
-use crate::status::{finite, EbullioStatus};
+use crate::state::solved;
+use crate::status::{finite, reading, EbullioStatus};
 
 /// How an array call reports a value a solved state does not have (the
 /// absent-property rule, one for C and Python).
@@ -34,8 +34,8 @@ pub(crate) trait Columns {
     /// Every code is decoded before anything is written.
     fn check(&self) -> Result<(), EbullioStatus>;
     /// The only value of the state (`Asked::OnePerElement`), from the inputs.
-    fn single(&self, choice: Choice, a: f64, b: f64) -> Result<f64, EbullioStatus> {
-        self.read(&choice.solved(a, b)?, 0)
+    fn single(&self, request: Request, a: f64, b: f64) -> Result<f64, EbullioStatus> {
+        self.read(&solved(request, a, b)?, 0)
     }
     /// Value `k` of a solved state.
     fn read(&self, state: &State, k: usize) -> Result<f64, EbullioStatus>;
@@ -53,12 +53,12 @@ impl Columns for Properties {
         (0..self.count()).try_for_each(|k| codes::property(self.0.get(k)).map(|_| ()))
     }
 
-    fn single(&self, choice: Choice, a: f64, b: f64) -> Result<f64, EbullioStatus> {
-        choice.property(codes::property(self.0.get(0))?, a, b)
+    fn single(&self, request: Request, a: f64, b: f64) -> Result<f64, EbullioStatus> {
+        reading(request.read(codes::property(self.0.get(0))?, a, b))
     }
 
     fn read(&self, state: &State, k: usize) -> Result<f64, EbullioStatus> {
-        codes::property(self.0.get(k))?.of(state)
+        reading(state.reading(codes::property(self.0.get(k))?))
     }
 }
 
@@ -181,18 +181,18 @@ pub(crate) unsafe fn kernel(
             OutArray::optional(statuses, n)?,
         )
     };
-    let choice = Choice::decode(pair, units, method)?;
+    let request = codes::request(pair, units, method)?;
     columns.check()?;
 
     let mut all_good = true;
     for i in 0..n {
         let (x, y) = (a.get(i), b.get(i));
         let element = if asked == Asked::OnePerElement {
-            let r = finite(columns.single(choice, x, y));
+            let r = finite(columns.single(request, x, y));
             out.set(i, *r.as_ref().unwrap_or(&f64::NAN));
             r.err().unwrap_or(EbullioStatus::Ok)
         } else {
-            match choice.solved(x, y) {
+            match solved(request, x, y) {
                 Ok(state) => {
                     for c in 0..k {
                         let r = finite(columns.read(&state, c));

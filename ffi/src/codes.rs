@@ -1,15 +1,15 @@
 //! The C enums for the engine's choices: input pair, unit system, method,
 //! property, region, phase and quantity.
 //!
-//! Each mirrors a `#[repr(u32)]` enum of the core with the same numbers
-//! (tests below hold the two together), so the header can name them in C
-//! style. Calls take these as plain `uint32_t` and check the value: a C
+//! Each mirrors the core's vocabulary with the same numbers (`InputPair`,
+//! `Units`, `Method`, `Reading`, `Variable`, `Region`, `Phase`; tests below
+//! and in `tests/vocabulary.rs` hold the two together), so the header can
+//! name them in C style. Calls take these as plain `uint32_t` and check the value: a C
 //! caller can pass any number, and an out-of-range value in a Rust enum
 //! would be undefined behaviour.
 
-use ebullio::{InputPair, Method, Phase, Quantity, Region, Units, Variable};
+use ebullio::{Phase, Quantity, Reading, Region, Request, Units, Variable};
 
-use crate::reading::Reading;
 use crate::status::EbullioStatus;
 
 /// The two properties a state is solved from (values in this order).
@@ -230,27 +230,15 @@ pub enum EbullioQuantity {
     SurfaceTension = 18,
 }
 
-/// Decodes an input pair number.
-pub(crate) fn input_pair(n: u32) -> Result<InputPair, EbullioStatus> {
-    InputPair::from_number(n).ok_or(EbullioStatus::UnknownInputPair)
+/// Decodes the request of a state call: input pair, unit system and
+/// method numbers, in that order.
+pub(crate) fn request(pair: u32, units: u32, method: u32) -> Result<Request, EbullioStatus> {
+    Request::from_numbers(pair, units, method).map_err(EbullioStatus::from)
 }
 
 /// Decodes a unit system number.
 pub(crate) fn units(n: u32) -> Result<Units, EbullioStatus> {
-    Units::ALL
-        .iter()
-        .copied()
-        .find(|u| *u as u32 == n)
-        .ok_or(EbullioStatus::UnknownUnits)
-}
-
-/// Decodes a method number.
-pub(crate) fn method(n: u32) -> Result<Method, EbullioStatus> {
-    match n {
-        0 => Ok(Method::Exact),
-        1 => Ok(Method::BackwardOnly),
-        _ => Err(EbullioStatus::UnknownMethod),
-    }
+    Request::units_from_number(n).map_err(EbullioStatus::from)
 }
 
 /// Decodes a property number.
@@ -325,7 +313,12 @@ pub(crate) fn c_quantity(q: Quantity) -> EbullioQuantity {
 #[cfg(test)]
 mod tests {
     use super::*;
-    use ebullio::Property;
+    use ebullio::{InputPair, Method};
+
+    /// The pair of `request`'s decoding, with valid units and method.
+    fn input_pair(n: u32) -> Result<InputPair, EbullioStatus> {
+        request(n, 0, 0).map(|r| r.pair)
+    }
 
     #[test]
     fn input_pairs_mirror_the_core_numbers() {
@@ -352,7 +345,7 @@ mod tests {
     }
 
     #[test]
-    fn properties_mirror_the_core_numbers() {
+    fn properties_mirror_the_core_readings() {
         use EbullioProperty as C;
         let c = [
             C::Pressure,
@@ -370,49 +363,31 @@ mod tests {
             C::Compressibility,
             C::GibbsEnergy,
             C::HelmholtzEnergy,
+            C::Viscosity,
+            C::ThermalConductivity,
+            C::KinematicViscosity,
+            C::ThermalDiffusivity,
+            C::PrandtlNumber,
+            C::SurfaceTension,
+            C::IsentropicExponent,
+            C::JouleThomsonCoefficient,
+            C::IsothermalThrottlingCoefficient,
+            C::RelativePressureCoefficient,
+            C::IsothermalStressCoefficient,
+            C::NearSaturation,
         ];
-        assert_eq!(c.len(), Property::ALL.len());
-        for (c, core) in c.iter().zip(Property::ALL) {
-            assert_eq!(*c as u32, core as u32, "{c:?} vs {core:?}");
-            assert_eq!(format!("{c:?}"), format!("{core:?}"));
-            assert_eq!(property(*c as u32), Ok(Reading::Thermodynamic(core)));
+        assert_eq!(c.len(), Reading::ALL.len());
+        for (c, core) in c.iter().zip(Reading::ALL) {
+            assert_eq!(*c as u32, core.number(), "{c:?} vs {core:?}");
+            let name = match core {
+                Reading::Thermodynamic(p) => format!("{p:?}"),
+                other => format!("{other:?}"),
+            };
+            assert_eq!(format!("{c:?}"), name);
+            assert_eq!(property(*c as u32), Ok(core));
         }
         assert_eq!(property(0), Err(EbullioStatus::UnknownProperty));
         assert_eq!(property(28), Err(EbullioStatus::UnknownProperty));
-    }
-
-    #[test]
-    fn properties_past_the_core_decode_to_the_calls_of_the_same_name() {
-        use EbullioProperty as C;
-        let c = [
-            (C::Viscosity, Reading::Viscosity),
-            (C::ThermalConductivity, Reading::ThermalConductivity),
-            (C::KinematicViscosity, Reading::KinematicViscosity),
-            (C::ThermalDiffusivity, Reading::ThermalDiffusivity),
-            (C::PrandtlNumber, Reading::PrandtlNumber),
-            (C::SurfaceTension, Reading::SurfaceTension),
-            (C::IsentropicExponent, Reading::IsentropicExponent),
-            (C::JouleThomsonCoefficient, Reading::JouleThomsonCoefficient),
-            (
-                C::IsothermalThrottlingCoefficient,
-                Reading::IsothermalThrottlingCoefficient,
-            ),
-            (
-                C::RelativePressureCoefficient,
-                Reading::RelativePressureCoefficient,
-            ),
-            (
-                C::IsothermalStressCoefficient,
-                Reading::IsothermalStressCoefficient,
-            ),
-            (C::NearSaturation, Reading::NearSaturation),
-        ];
-        for (k, (c, reading)) in c.iter().enumerate() {
-            // Numbered on from the core's last property, without gaps.
-            assert_eq!(*c as usize, Property::ALL.len() + 1 + k);
-            assert_eq!(format!("{c:?}"), format!("{reading:?}"));
-            assert_eq!(property(*c as u32), Ok(*reading));
-        }
     }
 
     #[test]
@@ -448,9 +423,9 @@ mod tests {
         }
         assert_eq!(units(4), Err(EbullioStatus::UnknownUnits));
         for m in [Method::Exact, Method::BackwardOnly] {
-            assert_eq!(method(m as u32), Ok(m));
+            assert_eq!(request(1, 0, m as u32).map(|r| r.method), Ok(m));
         }
-        assert_eq!(method(2), Err(EbullioStatus::UnknownMethod));
+        assert_eq!(request(1, 0, 2), Err(EbullioStatus::UnknownMethod));
         for r in [
             Region::One,
             Region::Two,

@@ -9,7 +9,7 @@ use crate::args::InArray;
 use crate::array::{kernel, Asked, Columns};
 use crate::boundary::boundary;
 use crate::codes;
-use crate::state::Choice;
+use crate::state::solved;
 use crate::status::{finite, scalar, EbullioStatus};
 
 /// `EbullioVariable` numbers, three per derivative: z, x, y.
@@ -76,7 +76,7 @@ pub unsafe extern "C" fn ebullio_derivative(
 ) -> f64 {
     let result = boundary!(Err(EbullioStatus::Panic) => {
         let [z, x, y] = codes::derivative(z, x, y)?;
-        let state = Choice::decode(pair, units, method)?.solved(a, b)?;
+        let state = solved(codes::request(pair, units, method)?, a, b)?;
         derivative_of(&state, [z, x, y])
     });
     // SAFETY: the caller's contract for `status`, as documented.

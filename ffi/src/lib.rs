@@ -18,9 +18,9 @@
 //!
 //! The plumbing (status codes, the panic boundary, argument checks, the
 //! version) lives in its own modules; the domain calls in `state`,
-//! `array` and `derivative`, with `reading` naming what a property number
-//! reads off a state. Every number comes from the core crate's own functions, so C
-//! gets the bits Rust gets.
+//! `array` and `derivative`. What the numbers name (a request, a reading, a
+//! status) is the core's vocabulary; every number comes from the core
+//! crate's own functions, so C gets the bits Rust gets.
 #![deny(unsafe_op_in_unsafe_fn)]
 #![warn(missing_docs)]
 
@@ -34,7 +34,6 @@ mod version;
 mod array;
 mod derivative;
 mod plant;
-mod reading;
 mod state;
 
 #[cfg(test)]

@@ -3,14 +3,13 @@
 
 use core::mem::{offset_of, size_of};
 
-use ebullio::{InputPair, Method, Property, Saturation, State, Units};
+use ebullio::{Property, Request, Saturation, State, Units};
 
 use crate::args::{OutStruct, SizePrefixed};
 use crate::boundary::boundary;
 use crate::codes::{self, c_phase, c_region, c_units, EbullioPhase, EbullioRegion, EbullioUnits};
 use crate::detail::{report, EbullioErrorDetail};
-use crate::reading::Reading;
-use crate::status::{finite, scalar, EbullioStatus};
+use crate::status::{finite, reading, scalar, EbullioStatus};
 
 /// Every property of one state. Set `size = sizeof(EbullioState)` before
 /// the call; the library fills the fields it and the caller both know and
@@ -109,45 +108,9 @@ impl EbullioState {
     }
 }
 
-/// The three choices every state call makes, decoded.
-#[derive(Clone, Copy)]
-pub(crate) struct Choice {
-    pub(crate) pair: InputPair,
-    pub(crate) units: Units,
-    pub(crate) method: Method,
-}
-
-impl Choice {
-    pub(crate) fn decode(pair: u32, units: u32, method: u32) -> Result<Choice, EbullioStatus> {
-        Ok(Choice {
-            pair: codes::input_pair(pair)?,
-            units: codes::units(units)?,
-            method: codes::method(method)?,
-        })
-    }
-
-    pub(crate) fn solve(self, a: f64, b: f64) -> Result<State, ebullio::Error> {
-        State::solve(self.pair, a, b, self.units, self.method)
-    }
-
-    /// One property; exact enthalpy from (p, T) takes the core's cheap
-    /// path, which gives the same bits as the exact state. The strict
-    /// method solves the state: its region 3 density, and so its
-    /// enthalpy, is the backward equation's.
-    pub(crate) fn property(self, reading: Reading, a: f64, b: f64) -> Result<f64, EbullioStatus> {
-        if reading == Reading::Thermodynamic(Property::Enthalpy)
-            && self.pair == InputPair::PressureTemperature
-            && self.method == Method::Exact
-        {
-            return finite(ebullio::enthalpy_from_pt(a, b, self.units).map_err(|e| (&e).into()));
-        }
-        reading.of(&self.solved(a, b)?)
-    }
-
-    /// The state, or the status of the core's error.
-    pub(crate) fn solved(self, a: f64, b: f64) -> Result<State, EbullioStatus> {
-        self.solve(a, b).map_err(|e| EbullioStatus::from(&e))
-    }
+/// The state `request` gives at `a`, `b`, or the status of the core's error.
+pub(crate) fn solved(request: Request, a: f64, b: f64) -> Result<State, EbullioStatus> {
+    request.solve(a, b).map_err(|e| EbullioStatus::from(&e))
 }
 
 /// The units to report an argument error in: the call's if they decode.
@@ -192,17 +155,17 @@ pub unsafe extern "C" fn ebullio_solve(
             Ok(o) => o,
             Err(status) => return fail(status),
         };
-        let choice = match Choice::decode(pair, units, method) {
-            Ok(c) => c,
+        let request = match codes::request(pair, units, method) {
+            Ok(r) => r,
             Err(status) => return fail(status),
         };
-        match choice.solve(a, b) {
+        match request.solve(a, b) {
             Ok(state) => {
                 out.write(&EbullioState::of(&state));
                 EbullioStatus::Ok
             }
             Err(e) => {
-                report(&detail, || EbullioErrorDetail::of_error(&e, choice.units));
+                report(&detail, || EbullioErrorDetail::of_error(&e, request.units));
                 EbullioStatus::from(&e)
             }
         }
@@ -240,7 +203,7 @@ pub unsafe extern "C" fn ebullio_property(
 ) -> f64 {
     let result = boundary!(Err(EbullioStatus::Panic) => {
         let property = codes::property(property)?;
-        Choice::decode(pair, units, method)?.property(property, a, b)
+        reading(codes::request(pair, units, method)?.read(property, a, b))
     });
     // SAFETY: the caller's contract for `status`, as documented.
     unsafe { scalar(result, status) }

@@ -1,20 +1,12 @@
 //! Status codes: what every call returns, one fixed-width C enum.
 //!
-//! Zero is success. The other values are grouped in bands by who has to act:
-//!
-//! | band | meaning |
-//! |---|---|
-//! | 0 | success |
-//! | 100–199 | the caller's arguments are unusable (a null pointer, an unknown enum value, a bad length or struct size); nothing was computed or written |
-//! | 200–299 | the input values name no state, or ask for something the state does not have |
-//! | 300–399 | a numerical iteration did not converge |
-//! | 400–499 | an array call: some elements failed, see the per-element statuses |
-//! | 900–999 | a defect inside the library (a caught panic, an error this version cannot name) |
-//!
-//! The numbers are part of the ABI: never renumbered, never reused. A
-//! retired code stays in this file as a "reserved" comment.
+//! The numbers, their bands and the error → status table are the core's
+//! [`ebullio::Status`]; `EbullioStatus` declares the same codes under the
+//! same names for the header (cbindgen reads this crate only), and the
+//! tests below and in `tests/vocabulary.rs` hold the two together. The
+//! numbers are part of the ABI: never renumbered, never reused.
 
-use ebullio::Error;
+use ebullio::{Error, Status};
 
 /// The outcome of a call. `EBULLIO_STATUS_OK` (0) is success; see
 /// `ebullio_status_message` for a static description of each code.
@@ -90,38 +82,9 @@ pub enum EbullioStatus {
 }
 
 impl EbullioStatus {
-    /// Every status, in numbering order (for tests and the message table).
-    pub(crate) const ALL: [EbullioStatus; 22] = [
-        EbullioStatus::Ok,
-        EbullioStatus::NullPointer,
-        EbullioStatus::UnknownInputPair,
-        EbullioStatus::UnknownUnits,
-        EbullioStatus::UnknownMethod,
-        EbullioStatus::UnknownProperty,
-        EbullioStatus::BadLength,
-        EbullioStatus::BadStructSize,
-        EbullioStatus::UnknownVariable,
-        EbullioStatus::UnknownPlantCode,
-        EbullioStatus::NotFinite,
-        EbullioStatus::OutOfRange,
-        EbullioStatus::QualityOutOfRange,
-        EbullioStatus::NoStateInRange,
-        EbullioStatus::BackwardEquationOutOfRange,
-        EbullioStatus::PropertyUndefined,
-        EbullioStatus::InvalidPlant,
-        EbullioStatus::NotFixedByMeasurement,
-        EbullioStatus::NotConverged,
-        EbullioStatus::SomeElementsFailed,
-        EbullioStatus::Panic,
-        EbullioStatus::UnknownError,
-    ];
-
     /// The status with this number, if any.
     pub fn from_code(code: i32) -> Option<EbullioStatus> {
-        EbullioStatus::ALL
-            .iter()
-            .copied()
-            .find(|s| *s as i32 == code)
+        Status::from_code(code).map(EbullioStatus::from)
     }
 
     /// A static, NUL-terminated description of the status.
@@ -174,24 +137,51 @@ impl EbullioStatus {
 /// The message for a code that is no status at all.
 pub(crate) const UNKNOWN_CODE_MESSAGE: &str = "unknown status code\0";
 
-impl From<&Error> for EbullioStatus {
-    fn from(e: &Error) -> EbullioStatus {
-        match e {
-            Error::NotFinite { .. } => EbullioStatus::NotFinite,
-            Error::OutOfRange { .. } => EbullioStatus::OutOfRange,
-            Error::QualityOutOfRange { .. } => EbullioStatus::QualityOutOfRange,
-            Error::NoStateInRange { .. } => EbullioStatus::NoStateInRange,
-            Error::BackwardEquationOutOfRange { .. } => EbullioStatus::BackwardEquationOutOfRange,
-            Error::NotConverged { .. } => EbullioStatus::NotConverged,
-            Error::Undefined { .. } => EbullioStatus::PropertyUndefined,
-            Error::InvalidPlant { .. } => EbullioStatus::InvalidPlant,
-            Error::NotFixedByMeasurement { .. } => EbullioStatus::NotFixedByMeasurement,
-            // `ebullio::Error` is non-exhaustive: a variant added to the
-            // core before this crate names it is a defect to report, not a
-            // crash.
-            _ => EbullioStatus::UnknownError,
+impl From<Status> for EbullioStatus {
+    fn from(s: Status) -> EbullioStatus {
+        match s {
+            Status::Ok => EbullioStatus::Ok,
+            Status::NullPointer => EbullioStatus::NullPointer,
+            Status::UnknownInputPair => EbullioStatus::UnknownInputPair,
+            Status::UnknownUnits => EbullioStatus::UnknownUnits,
+            Status::UnknownMethod => EbullioStatus::UnknownMethod,
+            Status::UnknownProperty => EbullioStatus::UnknownProperty,
+            Status::BadLength => EbullioStatus::BadLength,
+            Status::BadStructSize => EbullioStatus::BadStructSize,
+            Status::UnknownVariable => EbullioStatus::UnknownVariable,
+            Status::UnknownPlantCode => EbullioStatus::UnknownPlantCode,
+            Status::NotFinite => EbullioStatus::NotFinite,
+            Status::OutOfRange => EbullioStatus::OutOfRange,
+            Status::QualityOutOfRange => EbullioStatus::QualityOutOfRange,
+            Status::NoStateInRange => EbullioStatus::NoStateInRange,
+            Status::BackwardEquationOutOfRange => EbullioStatus::BackwardEquationOutOfRange,
+            Status::PropertyUndefined => EbullioStatus::PropertyUndefined,
+            Status::InvalidPlant => EbullioStatus::InvalidPlant,
+            Status::NotFixedByMeasurement => EbullioStatus::NotFixedByMeasurement,
+            Status::NotConverged => EbullioStatus::NotConverged,
+            Status::SomeElementsFailed => EbullioStatus::SomeElementsFailed,
+            Status::Panic => EbullioStatus::Panic,
+            Status::UnknownError => EbullioStatus::UnknownError,
         }
     }
+}
+
+impl From<&Error> for EbullioStatus {
+    /// The core's one error → status table.
+    fn from(e: &Error) -> EbullioStatus {
+        Status::of(e).into()
+    }
+}
+
+/// A reading of a state as a one-value call reports it: the value, or
+/// `EBULLIO_STATUS_PROPERTY_UNDEFINED` where the state does not have it,
+/// or the core error's status; then [`finite`].
+pub(crate) fn reading(value: Result<Option<f64>, Error>) -> Result<f64, EbullioStatus> {
+    finite(match value {
+        Ok(Some(v)) => Ok(v),
+        Ok(None) => Err(EbullioStatus::PropertyUndefined),
+        Err(e) => Err(EbullioStatus::from(&e)),
+    })
 }
 
 /// The last line of defence of every call that returns a value: status
@@ -231,33 +221,25 @@ mod tests {
     use super::*;
 
     #[test]
-    fn codes_are_the_published_ones() {
-        // The ABI: these numbers are promised to C callers forever.
-        let published = [
-            0, 100, 101, 102, 103, 104, 105, 106, 107, 108, 200, 201, 202, 203, 204, 205, 206, 207,
-            300, 400, 900, 901,
-        ];
-        let codes: Vec<i32> = EbullioStatus::ALL.iter().map(|s| *s as i32).collect();
-        assert_eq!(codes, published);
+    fn every_status_is_the_core_status_of_the_same_number_and_name() {
+        for core in Status::ALL {
+            let c = EbullioStatus::from(core);
+            assert_eq!(c as i32, core as i32, "{core:?}");
+            assert_eq!(format!("{c:?}"), format!("{core:?}"));
+            assert_eq!(EbullioStatus::from_code(core as i32), Some(c));
+        }
+        assert_eq!(EbullioStatus::from_code(1), None);
+        assert_eq!(EbullioStatus::from_code(-1), None);
     }
 
     #[test]
     fn every_message_is_nul_terminated_once() {
-        for s in EbullioStatus::ALL {
+        for s in Status::ALL.map(EbullioStatus::from) {
             let m = s.message_with_nul();
             assert!(m.ends_with('\0'), "{s:?}");
             assert_eq!(m.matches('\0').count(), 1, "{s:?}");
             assert!(!s.message().is_empty());
         }
         assert!(UNKNOWN_CODE_MESSAGE.ends_with('\0'));
-    }
-
-    #[test]
-    fn from_code_inverts_the_numbering() {
-        for s in EbullioStatus::ALL {
-            assert_eq!(EbullioStatus::from_code(s as i32), Some(s));
-        }
-        assert_eq!(EbullioStatus::from_code(1), None);
-        assert_eq!(EbullioStatus::from_code(-1), None);
     }
 }

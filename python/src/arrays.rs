@@ -8,7 +8,7 @@
 //! are independent, so splitting them over threads cannot change a single
 //! bit: each element is exactly the scalar core call on its inputs.
 
-use ebullio::{Error, InputPair, Method, State, Units};
+use ebullio::{Error, Reading, Request, State, Status, Units};
 use numpy::ndarray::{Array1, ArrayView1};
 use numpy::{
     Element, PyArray1, PyArrayDyn, PyArrayMethods, PyReadonlyArray1, PyReadwriteArrayDyn,
@@ -16,10 +16,11 @@ use numpy::{
 };
 use pyo3::exceptions::PyValueError;
 use pyo3::prelude::*;
+use pyo3::types::PyBool;
 use rayon::prelude::*;
 
-use crate::columns::{COLUMNS, COUNT};
-use crate::errors::{status, to_py};
+use crate::columns::{COLUMNS, COUNT, TRANSPORT};
+use crate::errors::{code, status_of, to_py, StatusCode};
 use crate::names;
 use crate::saturation::By;
 
@@ -33,7 +34,7 @@ const PARALLEL_FROM: usize = 8192;
 
 /// How many threads an array call may use.
 #[derive(Clone, Copy)]
-enum Threads {
+pub(crate) enum Threads {
     /// rayon's global pool: one thread per core.
     All,
     /// This calling thread only.
@@ -42,15 +43,35 @@ enum Threads {
     Exactly(usize),
 }
 
-fn threads(value: Option<usize>) -> PyResult<Threads> {
-    match value {
-        None => Ok(Threads::All),
-        Some(0) => Err(PyValueError::new_err(
-            "threads must be at least 1 (or None: every core)",
-        )),
+/// The `threads=` of a public call: None (every core) or a whole number of
+/// at least 1, a Python or numpy integer but not a bool.
+pub(crate) fn threads(obj: Option<&Bound<'_, PyAny>>) -> PyResult<Threads> {
+    let Some(obj) = obj.filter(|o| !o.is_none()) else {
+        return Ok(Threads::All);
+    };
+    let count = if is_bool(obj)? {
+        None
+    } else {
+        obj.extract::<i64>().ok()
+    };
+    match count {
         Some(1) => Ok(Threads::One),
-        Some(n) => Ok(Threads::Exactly(n)),
+        Some(n) if n > 1 => Ok(Threads::Exactly(usize::try_from(n).unwrap_or(usize::MAX))),
+        _ => Err(PyValueError::new_err(format!(
+            "threads must be a whole number of at least 1, or None for every core; got {}",
+            obj.repr()?
+        ))),
     }
+}
+
+/// Whether `obj` is a Python or numpy bool (integers to Python, but no
+/// thread count).
+fn is_bool(obj: &Bound<'_, PyAny>) -> PyResult<bool> {
+    if obj.is_instance_of::<PyBool>() {
+        return Ok(true);
+    }
+    let numpy_bool = crate::inputs::numpy(obj.py())?.getattr("bool_")?;
+    obj.is_instance(&numpy_bool)
 }
 
 /// Where the results of `M` states per element go, column-major: for state
@@ -60,7 +81,7 @@ struct Outputs<'a> {
     values: &'a mut [f64],
     region: &'a mut [u8],
     phase: &'a mut [u8],
-    status: &'a mut [u8],
+    status: &'a mut [StatusCode],
 }
 
 /// One work item: the element range `start..start + len` and its slices of
@@ -70,7 +91,7 @@ struct Job<'a> {
     values: Vec<&'a mut [f64]>,
     region: Vec<&'a mut [u8]>,
     phase: Vec<&'a mut [u8]>,
-    status: &'a mut [u8],
+    status: &'a mut [StatusCode],
 }
 
 impl Job<'_> {
@@ -89,7 +110,7 @@ impl Job<'_> {
                         self.region[m][i] = state.region().number() as u8;
                         self.phase[m][i] = state.phase() as u8;
                     }
-                    self.status[i] = status::OK;
+                    self.status[i] = code(Status::Ok);
                 }
                 Err(error) => {
                     for column in self.values.iter_mut() {
@@ -99,7 +120,7 @@ impl Job<'_> {
                         self.region[m][i] = 0;
                         self.phase[m][i] = 0;
                     }
-                    self.status[i] = crate::errors::status_of(&error);
+                    self.status[i] = status_of(&error);
                 }
             }
         }
@@ -153,11 +174,11 @@ fn fill<const M: usize>(
 /// values, region, phase, status. Any shape, as long as they are
 /// C-contiguous with the right number of elements (`out=` passes a
 /// `StateArray`'s own arrays, shaped like its inputs).
-type Arrays<'py> = (
+pub(crate) type Arrays<'py> = (
     Bound<'py, PyArrayDyn<f64>>,
     Bound<'py, PyArrayDyn<u8>>,
     Bound<'py, PyArrayDyn<u8>>,
-    Bound<'py, PyArrayDyn<u8>>,
+    Bound<'py, PyArrayDyn<StatusCode>>,
 );
 
 /// Zeroed 1-D [`Arrays`] for `n` elements of `M` states, allocated with the
@@ -246,32 +267,47 @@ fn pool_error(error: rayon::ThreadPoolBuildError) -> PyErr {
     pyo3::exceptions::PyRuntimeError::new_err(format!("could not start the threads: {error}"))
 }
 
-/// The arguments every pair kernel takes, decoded: pair number, inputs of
-/// equal length, units, method and threads.
-struct PairCall<'a> {
-    pair: InputPair,
+/// The arguments every pair kernel takes, decoded: the request, inputs
+/// of equal length and threads.
+pub(crate) struct PairCall<'a> {
+    request: Request,
     a: ArrayView1<'a, f64>,
     b: ArrayView1<'a, f64>,
-    units: Units,
-    method: Method,
     threads: Threads,
 }
 
 impl<'a> PairCall<'a> {
+    /// A call over `a` and `b`, of equal length.
+    pub(crate) fn new(
+        request: Request,
+        a: ArrayView1<'a, f64>,
+        b: ArrayView1<'a, f64>,
+        threads: Threads,
+    ) -> PairCall<'a> {
+        PairCall {
+            request,
+            a,
+            b,
+            threads,
+        }
+    }
+
     fn decode(
         pair: u32,
         a: &'a PyReadonlyArray1<'_, f64>,
         b: &'a PyReadonlyArray1<'_, f64>,
         units: &Bound<'_, PyAny>,
         method: Option<&Bound<'_, PyAny>>,
-        threads: Option<usize>,
+        threads: Option<&Bound<'_, PyAny>>,
     ) -> PyResult<PairCall<'a>> {
         let call = PairCall {
-            pair: names::pair(pair)?,
+            request: Request {
+                pair: names::pair(pair)?,
+                units: names::unit_system(units)?,
+                method: names::method(method)?,
+            },
             a: a.as_array(),
             b: b.as_array(),
-            units: names::unit_system(units)?,
-            method: names::method(method)?,
             threads: self::threads(threads)?,
         };
         same_length(call.a.len(), call.b.len())?;
@@ -284,7 +320,22 @@ impl<'a> PairCall<'a> {
 
     /// Element `i`'s state, in the input units.
     fn state(&self, i: usize) -> Result<State, Error> {
-        State::solve(self.pair, self.a[i], self.b[i], self.units, self.method)
+        self.request.solve(self.a[i], self.b[i])
+    }
+
+    /// Every element's state read in `read`, into `out` or fresh arrays.
+    pub(crate) fn solve<'py>(
+        &self,
+        py: Python<'py>,
+        read: Units,
+        out: Option<Arrays<'py>>,
+    ) -> PyResult<Arrays<'py>> {
+        let n = self.len();
+        let arrays = out.unwrap_or_else(|| fresh::<1>(py, n));
+        write::<1>(py, &arrays, n, self.threads, |i| {
+            self.state(i).map(|s| [s.in_units(read)])
+        })?;
+        Ok(arrays)
     }
 }
 
@@ -304,44 +355,30 @@ pub(crate) fn solve_many<'py>(
     b: PyReadonlyArray1<'py, f64>,
     units: &Bound<'py, PyAny>,
     method: Option<&Bound<'py, PyAny>>,
-    threads: Option<usize>,
+    threads: Option<&Bound<'py, PyAny>>,
     read: Option<&Bound<'py, PyAny>>,
     out: Option<Arrays<'py>>,
 ) -> PyResult<Arrays<'py>> {
     let call = PairCall::decode(pair, &a, &b, units, method, threads)?;
-    let read = read_units(read, call.units)?;
-    let n = call.len();
-    let arrays = out.unwrap_or_else(|| fresh::<1>(py, n));
-    write::<1>(py, &arrays, n, call.threads, |i| {
-        call.state(i).map(|s| [s.in_units(read)])
-    })?;
-    Ok(arrays)
+    let read = read_units(read, call.request.units)?;
+    call.solve(py, read, out)
 }
 
-/// Saturation points (`by` 1: pressure, 2: temperature) at `values[i]`.
+/// Saturation points (`by`) at `values[i]`, in `units`.
 ///
-/// As `solve_many` with two states per element, liquid then vapour:
+/// As [`PairCall::solve`] with two states per element, liquid then vapour:
 /// `values` holds 2 × 15 columns, `region` and `phase` 2 × n.
-#[pyfunction]
-#[pyo3(signature = (by, values, units, threads=None, read=None))]
-pub(crate) fn saturation_many<'py>(
+pub(crate) fn saturation_into<'py>(
     py: Python<'py>,
-    by: u32,
-    values: PyReadonlyArray1<'py, f64>,
-    units: &Bound<'py, PyAny>,
-    threads: Option<usize>,
-    read: Option<&Bound<'py, PyAny>>,
+    by: By,
+    values: ArrayView1<'_, f64>,
+    units: Units,
+    threads: Threads,
 ) -> PyResult<Arrays<'py>> {
-    let by = By::from_number(by)?;
-    let units: Units = names::unit_system(units)?;
-    let read = read_units(read, units)?;
-    let threads = self::threads(threads)?;
-    let values = values.as_array();
     let n = values.len();
     let arrays = fresh::<2>(py, n);
     write::<2>(py, &arrays, n, threads, |i| {
         by.solve(values[i], units)
-            .map(|s| s.in_units(read))
             .map(|s| [*s.liquid(), *s.vapour()])
     })?;
     Ok(arrays)
@@ -361,29 +398,13 @@ pub(crate) fn raise_element(
     method: Option<&Bound<'_, PyAny>>,
     label: &str,
 ) -> PyResult<()> {
-    let (pair, units, method) = (
-        names::pair(pair)?,
-        names::unit_system(units)?,
-        names::method(method)?,
-    );
-    State::solve(pair, a, b, units, method)
-        .map(|_| ())
-        .map_err(|error| to_py(py, &error, Some(label)))
-}
-
-/// As `raise_element`, for a saturation point (`by` 1: pressure, 2:
-/// temperature) at `value`.
-#[pyfunction]
-#[pyo3(signature = (by, value, units, label))]
-pub(crate) fn raise_saturation_element(
-    py: Python<'_>,
-    by: u32,
-    value: f64,
-    units: &Bound<'_, PyAny>,
-    label: &str,
-) -> PyResult<()> {
-    By::from_number(by)?
-        .solve(value, names::unit_system(units)?)
+    let request = Request {
+        pair: names::pair(pair)?,
+        units: names::unit_system(units)?,
+        method: names::method(method)?,
+    };
+    request
+        .solve(a, b)
         .map(|_| ())
         .map_err(|error| to_py(py, &error, Some(label)))
 }
@@ -395,14 +416,14 @@ fn fill_values<const K: usize>(
     n: usize,
     threads: Threads,
     element: impl Fn(usize) -> Result<[f64; K], Error> + Sync,
-) -> Result<(Vec<f64>, Vec<u8>), rayon::ThreadPoolBuildError> {
+) -> Result<(Vec<f64>, Vec<StatusCode>), rayon::ThreadPoolBuildError> {
     let mut rows = vec![[f64::NAN; K]; n];
-    let mut status = vec![status::OK; n];
-    let run = |k: usize, rows: &mut [[f64; K]], status: &mut [u8]| {
+    let mut status = vec![code(Status::Ok); n];
+    let run = |k: usize, rows: &mut [[f64; K]], status: &mut [StatusCode]| {
         for (j, (row, st)) in rows.iter_mut().zip(status.iter_mut()).enumerate() {
             match element(k * CHUNK + j) {
                 Ok(values) => *row = values,
-                Err(error) => *st = crate::errors::status_of(&error),
+                Err(error) => *st = status_of(&error),
             }
         }
     };
@@ -434,7 +455,7 @@ fn fill_values<const K: usize>(
     Ok((values, status))
 }
 
-type Values<'py> = (Bound<'py, PyArray1<f64>>, Bound<'py, PyArray1<u8>>);
+type Values<'py> = (Bound<'py, PyArray1<f64>>, Bound<'py, PyArray1<StatusCode>>);
 
 /// [`fill_values`] with the GIL released, handed to numpy.
 fn values_many<const K: usize>(
@@ -461,15 +482,12 @@ fn same_length(a: usize, b: usize) -> PyResult<()> {
     Ok(())
 }
 
-/// One of several properties asked of an element: absent (the core's
-/// `Error::Undefined`, as transport of wet steam) is NaN, the element
-/// still OK; any other error is the element's status. The rule the
-/// `StateArray` columns follow, and C's `ebullio_properties_array`.
-fn absent_as_nan(value: Result<f64, Error>) -> Result<f64, Error> {
-    match value {
-        Err(Error::Undefined { .. }) => Ok(f64::NAN),
-        other => other,
-    }
+/// One of several readings asked of an element: absent (as transport of
+/// wet steam) is NaN, the element still OK; any other error is the
+/// element's status. The rule the `StateArray` columns follow, and C's
+/// `ebullio_properties_array`.
+fn absent_as_nan(value: Result<Option<f64>, Error>) -> Result<f64, Error> {
+    value.map(|v| v.unwrap_or(f64::NAN))
 }
 
 /// The transport properties of the states from pair number `pair` at
@@ -487,20 +505,18 @@ pub(crate) fn transport_many<'py>(
     b: PyReadonlyArray1<'py, f64>,
     units: &Bound<'py, PyAny>,
     method: Option<&Bound<'py, PyAny>>,
-    threads: Option<usize>,
+    threads: Option<&Bound<'py, PyAny>>,
     read: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Values<'py>> {
     let call = PairCall::decode(pair, &a, &b, units, method, threads)?;
-    let read = read_units(read, call.units)?;
-    values_many::<5>(py, call.len(), call.threads, |i| {
+    let read = read_units(read, call.request.units)?;
+    values_many::<{ TRANSPORT.len() }>(py, call.len(), call.threads, |i| {
         let s = call.state(i)?.in_units(read);
-        Ok([
-            absent_as_nan(s.viscosity())?,
-            absent_as_nan(s.thermal_conductivity())?,
-            absent_as_nan(s.kinematic_viscosity())?,
-            absent_as_nan(s.thermal_diffusivity())?,
-            absent_as_nan(s.prandtl_number())?,
-        ])
+        let mut row = [f64::NAN; TRANSPORT.len()];
+        for (value, column) in row.iter_mut().zip(&TRANSPORT) {
+            *value = absent_as_nan(s.reading(column.reading))?;
+        }
+        Ok(row)
     })
 }
 
@@ -519,7 +535,7 @@ pub(crate) fn derivative_many<'py>(
     y: &str,
     units: &Bound<'py, PyAny>,
     method: Option<&Bound<'py, PyAny>>,
-    threads: Option<usize>,
+    threads: Option<&Bound<'py, PyAny>>,
     read: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Values<'py>> {
     let (z, x, y) = (
@@ -528,7 +544,7 @@ pub(crate) fn derivative_many<'py>(
         names::variable(y)?,
     );
     let call = PairCall::decode(pair, &a, &b, units, method, threads)?;
-    let read = read_units(read, call.units)?;
+    let read = read_units(read, call.request.units)?;
     values_many::<1>(py, call.len(), call.threads, |i| {
         Ok([call.state(i)?.in_units(read).derivative(z, x, y)?])
     })
@@ -546,11 +562,13 @@ pub(crate) fn near_saturation_many<'py>(
     b: PyReadonlyArray1<'py, f64>,
     units: &Bound<'py, PyAny>,
     method: Option<&Bound<'py, PyAny>>,
-    threads: Option<usize>,
+    threads: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Values<'py>> {
     let call = PairCall::decode(pair, &a, &b, units, method, threads)?;
     values_many::<1>(py, call.len(), call.threads, |i| {
-        Ok([f64::from(u8::from(call.state(i)?.is_near_saturation()))])
+        Ok([absent_as_nan(
+            call.state(i)?.reading(Reading::NearSaturation),
+        )?])
     })
 }
 
@@ -563,7 +581,7 @@ pub(crate) fn surface_tension_many<'py>(
     by: u32,
     values: PyReadonlyArray1<'py, f64>,
     units: &Bound<'py, PyAny>,
-    threads: Option<usize>,
+    threads: Option<&Bound<'py, PyAny>>,
     read: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Values<'py>> {
     let by = By::from_number(by)?;

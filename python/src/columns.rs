@@ -2,10 +2,10 @@
 //! array column) each, in this order.
 //!
 //! Adding a property the core gains (a transport property, a derivative)
-//! is one row here, one getter in `state.rs` and one line in the stub: the
-//! array result classes build their attributes from this table.
+//! is one row here, one getter row in `state.rs` and one line in the stub:
+//! the array result classes build their attributes from this table.
 
-use ebullio::{Property, Quantity, Units};
+use ebullio::{Property, Quantity, Reading, Units};
 use pyo3::prelude::*;
 use pyo3::types::PyTuple;
 
@@ -123,31 +123,49 @@ fn capitalise(text: &str) -> String {
     }
 }
 
+/// One column of a transport array result: the attribute name (the
+/// `State` getter's), the core reading, what it is and its quantity
+/// (`None`: dimensionless).
+pub(crate) struct TransportColumn {
+    pub name: &'static str,
+    pub reading: Reading,
+    pub what: &'static str,
+    pub quantity: Option<Quantity>,
+}
+
 /// The columns of a transport array result (`arrays::transport_many`), in
-/// order: the attribute name, what it is, and its quantity (`None`:
-/// dimensionless). The names are the `State` attributes'.
-pub(crate) const TRANSPORT: [(&str, &str, Option<Quantity>); 5] = [
-    (
-        "viscosity",
-        "dynamic viscosity (IAPWS R12-08)",
-        Some(Quantity::DynamicViscosity),
-    ),
-    (
-        "thermal_conductivity",
-        "thermal conductivity (IAPWS R15-11)",
-        Some(Quantity::ThermalConductivity),
-    ),
-    (
-        "kinematic_viscosity",
-        "kinematic viscosity",
-        Some(Quantity::Diffusivity),
-    ),
-    (
-        "thermal_diffusivity",
-        "thermal diffusivity",
-        Some(Quantity::Diffusivity),
-    ),
-    ("prandtl_number", "Prandtl number", None),
+/// order.
+pub(crate) const TRANSPORT: [TransportColumn; 5] = [
+    TransportColumn {
+        name: "viscosity",
+        reading: Reading::Viscosity,
+        what: "dynamic viscosity (IAPWS R12-08)",
+        quantity: Some(Quantity::DynamicViscosity),
+    },
+    TransportColumn {
+        name: "thermal_conductivity",
+        reading: Reading::ThermalConductivity,
+        what: "thermal conductivity (IAPWS R15-11)",
+        quantity: Some(Quantity::ThermalConductivity),
+    },
+    TransportColumn {
+        name: "kinematic_viscosity",
+        reading: Reading::KinematicViscosity,
+        what: "kinematic viscosity",
+        quantity: Some(Quantity::Diffusivity),
+    },
+    TransportColumn {
+        name: "thermal_diffusivity",
+        reading: Reading::ThermalDiffusivity,
+        what: "thermal diffusivity",
+        quantity: Some(Quantity::Diffusivity),
+    },
+    TransportColumn {
+        name: "prandtl_number",
+        reading: Reading::PrandtlNumber,
+        what: "Prandtl number",
+        quantity: None,
+    },
 ];
 
 /// `((name, description with units, (symbol per unit system)), ...)` of
@@ -155,15 +173,15 @@ pub(crate) const TRANSPORT: [(&str, &str, Option<Quantity>); 5] = [
 pub(crate) fn transport_table(py: Python<'_>) -> PyResult<Bound<'_, PyTuple>> {
     let rows: Vec<(&str, String, [&str; 4])> = TRANSPORT
         .iter()
-        .map(|&(name, what, quantity)| match quantity {
+        .map(|c| match c.quantity {
             Some(q) => (
-                name,
-                format!("{}; {}.", capitalise(what), units_text(q)),
+                c.name,
+                format!("{}; {}.", capitalise(c.what), units_text(q)),
                 Units::ALL.map(|u| u.symbol(q)),
             ),
             None => (
-                name,
-                format!("{}; dimensionless.", capitalise(what)),
+                c.name,
+                format!("{}; dimensionless.", capitalise(c.what)),
                 [""; 4],
             ),
         })

@@ -1,12 +1,13 @@
 //! The exceptions of the Python API and the per-element status codes of
-//! array results: one conversion from the core's `Error` to each.
+//! array results: the exception per core `Error` here, the status the
+//! core's own table (`ebullio::Status`, the C ABI's numbers).
 //!
 //! `SteamError` derives from `ValueError` (bad input is a value error);
 //! each exception carries `status` (the code an array would show) and,
 //! where the core gives them, `quantity`, `value`, `min`, `max` and `unit`
 //! in the caller's units. The message is the core's own text.
 
-use ebullio::Error;
+use ebullio::{Error, Status};
 use pyo3::create_exception;
 use pyo3::exceptions::PyValueError;
 use pyo3::prelude::*;
@@ -62,61 +63,55 @@ create_exception!(
      below saturation (wet steam); `needs` says what would fix it."
 );
 
-/// Per-element status codes of array results. Never renumbered; the
-/// `ebullio.Status` enum mirrors them (a test checks).
-pub(crate) mod status {
-    pub const OK: u8 = 0;
-    pub const NOT_FINITE: u8 = 1;
-    pub const OUT_OF_RANGE: u8 = 2;
-    pub const QUALITY_OUT_OF_RANGE: u8 = 3;
-    pub const NO_STATE_IN_RANGE: u8 = 4;
-    pub const BACKWARD_EQUATION_OUT_OF_RANGE: u8 = 5;
-    pub const NOT_CONVERGED: u8 = 6;
-    pub const UNDEFINED: u8 = 7;
-    pub const INVALID_PLANT: u8 = 8;
-    pub const NOT_FIXED_BY_MEASUREMENT: u8 = 9;
-    /// A kind of error this build of the binding does not know yet.
-    pub const OTHER: u8 = 255;
+/// The per-element status of an array result: the core's code, which the
+/// C ABI publishes too.
+pub(crate) type StatusCode = u16;
+
+/// The code of `status` in a result's `status` array.
+pub(crate) const fn code(status: Status) -> StatusCode {
+    status as StatusCode
 }
 
-/// The status code of `error`.
-pub(crate) fn status_of(error: &Error) -> u8 {
-    match error {
-        Error::NotFinite { .. } => status::NOT_FINITE,
-        Error::OutOfRange { .. } => status::OUT_OF_RANGE,
-        Error::QualityOutOfRange { .. } => status::QUALITY_OUT_OF_RANGE,
-        Error::NoStateInRange { .. } => status::NO_STATE_IN_RANGE,
-        Error::BackwardEquationOutOfRange { .. } => status::BACKWARD_EQUATION_OUT_OF_RANGE,
-        Error::NotConverged { .. } => status::NOT_CONVERGED,
-        Error::Undefined { .. } => status::UNDEFINED,
-        Error::InvalidPlant { .. } => status::INVALID_PLANT,
-        Error::NotFixedByMeasurement { .. } => status::NOT_FIXED_BY_MEASUREMENT,
-        _ => status::OTHER,
+/// The code of `error`: the core's one error → status table.
+pub(crate) const fn status_of(error: &Error) -> StatusCode {
+    code(Status::of(error))
+}
+
+/// The statuses an element can have, as `ebullio.Status` names them: OK,
+/// every status of an error, and the code of an error this build cannot
+/// name. The names are the core's, in capitals, but for two the package
+/// spelled its own way before it took the core's numbers.
+fn python_statuses() -> impl Iterator<Item = (String, StatusCode)> {
+    let listed = [Status::Ok]
+        .into_iter()
+        .chain(Status::OF_ERRORS)
+        .chain([Status::UnknownError]);
+    listed.map(|status| {
+        let name = match status {
+            Status::PropertyUndefined => "UNDEFINED".to_string(),
+            Status::UnknownError => "OTHER".to_string(),
+            other => capitals(&format!("{other:?}")),
+        };
+        (name, code(status))
+    })
+}
+
+/// `NotFinite` → `NOT_FINITE`.
+fn capitals(name: &str) -> String {
+    let mut out = String::new();
+    for (k, c) in name.chars().enumerate() {
+        if c.is_ascii_uppercase() && k > 0 {
+            out.push('_');
+        }
+        out.push(c.to_ascii_uppercase());
     }
+    out
 }
 
-/// `((name, code), ...)` for the Python side.
+/// `((name, code), ...)` for the Python side (`ebullio.Status` is tested
+/// against it).
 pub(crate) fn status_table(py: Python<'_>) -> PyResult<Bound<'_, PyTuple>> {
-    use status::*;
-    PyTuple::new(
-        py,
-        [
-            ("OK", OK),
-            ("NOT_FINITE", NOT_FINITE),
-            ("OUT_OF_RANGE", OUT_OF_RANGE),
-            ("QUALITY_OUT_OF_RANGE", QUALITY_OUT_OF_RANGE),
-            ("NO_STATE_IN_RANGE", NO_STATE_IN_RANGE),
-            (
-                "BACKWARD_EQUATION_OUT_OF_RANGE",
-                BACKWARD_EQUATION_OUT_OF_RANGE,
-            ),
-            ("NOT_CONVERGED", NOT_CONVERGED),
-            ("UNDEFINED", UNDEFINED),
-            ("INVALID_PLANT", INVALID_PLANT),
-            ("NOT_FIXED_BY_MEASUREMENT", NOT_FIXED_BY_MEASUREMENT),
-            ("OTHER", OTHER),
-        ],
-    )
+    PyTuple::new(py, python_statuses().collect::<Vec<_>>())
 }
 
 /// The Python exception for `error`; `context` (e.g. "element 17")

@@ -1,5 +1,5 @@
 //! The spellings the Python API accepts for unit systems, methods and the
-//! error mode, and the numbering of input pairs shared with `_dispatch.py`.
+//! error mode, and the short names of the input pairs.
 //!
 //! Unit systems are spelled "native", "si", "metric" and "us"; the
 //! `ebullio.Units` members are `str` enums with exactly those values, so
@@ -9,7 +9,7 @@
 use ebullio::{InputPair, Method, Units};
 use pyo3::exceptions::{PyTypeError, PyValueError};
 use pyo3::prelude::*;
-use pyo3::types::{PyString, PyTuple};
+use pyo3::types::PyString;
 
 /// The unit systems a call accepts, for its error messages.
 const SYSTEMS: &str = "'native' (MPa, K, kJ/kg), 'si' (Pa, K, J/kg), 'metric' (bar, °C, \
@@ -85,6 +85,20 @@ pub(crate) fn method(obj: Option<&Bound<'_, PyAny>>) -> PyResult<Method> {
     )))
 }
 
+/// [`method`] as the array path has always refused an unknown one, in
+/// fewer words.
+pub(crate) fn array_method(obj: Option<&Bound<'_, PyAny>>) -> PyResult<Method> {
+    method(obj).map_err(|_| {
+        let given = obj.map_or(Ok(String::new()), |o| o.repr().map(|r| r.to_string()));
+        match given {
+            Ok(given) => PyValueError::new_err(format!(
+                "unknown method {given}: use 'exact' or 'backward', or an ebullio.Method member"
+            )),
+            Err(error) => error,
+        }
+    })
+}
+
 /// The spelling of `method`, the value of its `ebullio.Method` member.
 pub(crate) const fn method_name(method: Method) -> &'static str {
     match method {
@@ -140,14 +154,6 @@ pub(crate) const fn pair_name(pair: InputPair) -> &'static str {
         InputPair::PressureQuality => "px",
         InputPair::TemperatureQuality => "tx",
     }
-}
-
-/// `((name, number), ...)` for the Python side's constants.
-pub(crate) fn pair_table(py: Python<'_>) -> PyResult<Bound<'_, PyTuple>> {
-    PyTuple::new(
-        py,
-        InputPair::ALL.map(|pair| (pair_name(pair), pair as u32)),
-    )
 }
 
 /// A thermodynamic variable by the attribute name it has on a state.

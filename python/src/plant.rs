@@ -11,7 +11,7 @@ use ebullio::plant::{
     self, Casing, Component, CycleResult, CycleSpec, Drains, Heater, HeaterApproach, HeaterKind,
     Reheat, StatePoint, Stream, Supply,
 };
-use ebullio::{Error, InputPair, Method, Property, Region, State, Units};
+use ebullio::{Error, InputPair, Method, Property, Region, Request, State, Units};
 use pyo3::exceptions::PyValueError;
 use pyo3::prelude::*;
 use pyo3::types::{PyDict, PyList};
@@ -276,11 +276,13 @@ fn py_state(state: &State) -> PyState {
         ],
     };
     let origin = |&(pair, a, b): &(InputPair, f64, f64)| Origin {
-        pair,
+        request: Request {
+            pair,
+            units: Units::Native,
+            method: Method::Exact,
+        },
         a,
         b,
-        units: Units::Native,
-        method: Method::Exact,
     };
     let exact = candidates.iter().find(|&&(pair, a, b)| {
         State::solve(pair, a, b, Units::Native, Method::Exact)

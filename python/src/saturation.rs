@@ -1,10 +1,13 @@
 //! `ebullio.Saturation`: saturated liquid and vapour at one pressure or
 //! temperature, and wet steam between them.
 
-use ebullio::{InputPair, Method, Property, Saturation, Units};
+use ebullio::{InputPair, Method, Property, Request, Saturation, Units};
 use pyo3::prelude::*;
 use pyo3::sync::PyOnceLock;
+use pyo3::types::PyFloat;
 
+use crate::array_call::{self, ArrayCall};
+use crate::arrays;
 use crate::errors::to_py;
 use crate::names::{self, Errors};
 use crate::state::{labelled, python_attr, scalar, units_member, Origin, PyState, Reduce};
@@ -68,7 +71,13 @@ pub(crate) struct PySaturation {
 }
 
 impl PySaturation {
-    fn solve(py: Python<'_>, by: By, value: f64, units: Units, read: Units) -> PyResult<Self> {
+    pub(crate) fn solve(
+        py: Python<'_>,
+        by: By,
+        value: f64,
+        units: Units,
+        read: Units,
+    ) -> PyResult<Self> {
         match by.solve(value, units) {
             Ok(sat) => Ok(PySaturation {
                 inner: sat.in_units(read),
@@ -80,15 +89,22 @@ impl PySaturation {
         }
     }
 
+    /// What gives this point's phases and mixtures: the (·, x) pair.
+    fn quality_request(&self) -> Request {
+        Request {
+            pair: self.by.quality_pair(),
+            units: self.units,
+            method: Method::Exact,
+        }
+    }
+
     fn phase_state(&self, x: f64, state: ebullio::State) -> PyState {
         PyState {
             inner: state,
             origin: Origin {
-                pair: self.by.quality_pair(),
+                request: self.quality_request(),
                 a: self.value,
                 b: x,
-                units: self.units,
-                method: Method::Exact,
             },
         }
     }
@@ -103,19 +119,13 @@ fn construct<'py>(
     threads: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Bound<'py, PyAny>> {
     let units = names::units(units, by.call())?;
-    if names::errors(errors)? != Errors::Flag {
+    let errors = names::errors(errors)?;
+    if errors != Errors::Flag {
         if let Some(v) = scalar(value) {
             return Ok(Bound::new(py, PySaturation::solve(py, by, v, units, units)?)?.into_any());
         }
     }
-    static SATURATION: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
-    python_attr(py, &SATURATION, "ebullio._dispatch", "saturation")?.call1((
-        by as u32,
-        value,
-        names::units_name(units),
-        errors,
-        threads,
-    ))
+    array_call::saturations(py, by, value, units, errors, arrays::threads(threads)?)
 }
 
 #[pymethods]
@@ -219,7 +229,8 @@ impl PySaturation {
         errors: Option<&Bound<'py, PyAny>>,
         threads: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
-        if names::errors(errors)? != Errors::Flag {
+        let errors = names::errors(errors)?;
+        if errors != Errors::Flag {
             if let Some(q) = scalar(x) {
                 return match self.inner.mixture(q) {
                     Ok(state) => Ok(Bound::new(py, self.phase_state(q, state))?.into_any()),
@@ -227,18 +238,13 @@ impl PySaturation {
                 };
             }
         }
-        static SOLVE: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
-        let read = names::units_name(self.inner.liquid().units());
-        python_attr(py, &SOLVE, "ebullio._dispatch", "solve")?.call1((
-            self.by.quality_pair() as u32,
-            self.value,
-            x,
-            names::units_name(self.units),
-            None::<&str>,
+        let call = ArrayCall {
+            request: self.quality_request(),
             errors,
-            threads,
-            read,
-        ))
+            threads: arrays::threads(threads)?,
+            read: self.inner.liquid().units(),
+        };
+        array_call::states(py, call, &PyFloat::new(py, self.value), x, None)
     }
 
     /// The same point, read in other units.
@@ -278,7 +284,7 @@ impl PySaturation {
         py: Python<'py>,
     ) -> PyResult<Reduce<'py, (u32, f64, &'static str, &'static str)>> {
         static RESTORE: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
-        let restore = python_attr(py, &RESTORE, "ebullio._dispatch", "restore_saturation")?.clone();
+        let restore = python_attr(py, &RESTORE, "ebullio._native", "saturation_scalar")?.clone();
         Ok((
             restore,
             (
@@ -291,8 +297,8 @@ impl PySaturation {
     }
 }
 
-/// One saturation point (`by` 1: pressure, 2: temperature): the scalar path
-/// of `ebullio._dispatch` and the unpickler. `read` defaults to `units`.
+/// One saturation point (`by` 1: pressure, 2: temperature): the unpickler
+/// of a `Saturation`. `read` defaults to `units`.
 #[pyfunction]
 #[pyo3(signature = (by, value, units, read=None))]
 pub(crate) fn saturation_scalar(

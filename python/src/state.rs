@@ -2,14 +2,16 @@
 //! the core offers), its properties as float attributes, repr and pickling.
 //!
 //! A constructor given two Python numbers solves here, in one core call.
-//! Anything else (arrays, lists, pandas Series, `errors="flag"`, `out=`) goes to
-//! `ebullio._dispatch.solve`, which broadcasts and calls
-//! [`crate::arrays::solve_many`].
+//! Anything else (arrays, lists, pandas Series, `errors="flag"`, `out=`)
+//! takes the array path, [`crate::array_call::states`].
 
-use ebullio::{InputPair, Method, Property, State, Units};
+use ebullio::{InputPair, Method, Property, Reading, Request, State, Units};
 use pyo3::prelude::*;
 use pyo3::sync::PyOnceLock;
 use pyo3::types::{PyDict, PyFloat, PyInt};
+
+use crate::array_call::{self, ArrayCall};
+use crate::arrays;
 
 use crate::columns::COLUMNS;
 use crate::errors::to_py;
@@ -18,11 +20,9 @@ use crate::names::{self, Errors};
 /// How a state was made: enough to make it again, bit for bit (pickling).
 #[derive(Clone, Copy, Debug)]
 pub(crate) struct Origin {
-    pub pair: InputPair,
+    pub request: Request,
     pub a: f64,
     pub b: f64,
-    pub units: Units,
-    pub method: Method,
 }
 
 /// A state of water or steam, solved from one input pair.
@@ -61,20 +61,22 @@ pub(crate) struct PyState {
 impl PyState {
     /// Solves `pair` at (`a`, `b`) in `units`, read in `read`.
     pub(crate) fn solve(py: Python<'_>, origin: Origin, read: Units) -> PyResult<PyState> {
-        let Origin {
-            pair,
-            a,
-            b,
-            units,
-            method,
-        } = origin;
-        match State::solve(pair, a, b, units, method) {
+        match origin.request.solve(origin.a, origin.b) {
             Ok(state) => Ok(PyState {
                 inner: state.in_units(read),
                 origin,
             }),
             Err(error) => Err(to_py(py, &error, None)),
         }
+    }
+
+    /// A getter's value: ``None`` where the state does not have it (as cp
+    /// of wet steam), the exception where the core refuses it otherwise
+    /// (transport above 1173.15 K).
+    fn read(&self, py: Python<'_>, reading: Reading) -> PyResult<Option<f64>> {
+        self.inner
+            .reading(reading)
+            .map_err(|error| to_py(py, &error, None))
     }
 }
 
@@ -104,40 +106,36 @@ fn construct<'py>(
     out: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Bound<'py, PyAny>> {
     let units = names::units(units, &format!("State.from_{}", names::pair_name(pair)))?;
+    let errors = names::errors(errors)?;
     // With `out` the call belongs to the array path, which refuses numbers.
-    if names::errors(errors)? != Errors::Flag && out.is_none() {
+    if errors != Errors::Flag && out.is_none() {
         if let (Some(a), Some(b)) = (scalar(a), scalar(b)) {
-            let origin = Origin {
+            let request = Request {
                 pair,
-                a,
-                b,
                 units,
                 method: names::method(method)?,
             };
+            let origin = Origin { request, a, b };
             return Ok(Bound::new(py, PyState::solve(py, origin, units)?)?.into_any());
         }
     }
-    static SOLVE: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
-    let keywords = PyDict::new(py);
-    keywords.set_item("out", out)?;
-    SOLVE.import(py, "ebullio._dispatch", "solve")?.call(
-        (
-            pair as u32,
-            a,
-            b,
-            names::units_name(units),
-            method,
-            errors,
-            threads,
-        ),
-        Some(&keywords),
-    )
+    let call = ArrayCall {
+        request: Request {
+            pair,
+            units,
+            method: names::array_method(method)?,
+        },
+        errors,
+        threads: arrays::threads(threads)?,
+        read: units,
+    };
+    array_call::states(py, call, a, b, out)
 }
 
 /// What `__reduce__` returns: the unpickler and its arguments.
 pub(crate) type Reduce<'py, A> = (Bound<'py, PyAny>, A);
 
-/// `restore_state`'s arguments: pair, a, b, input units, method, read units.
+/// `solve_scalar`'s arguments: pair, a, b, input units, method, read units.
 type RestoreArgs = (u32, f64, f64, &'static str, &'static str, &'static str);
 
 /// Imports a Python-side enum or helper once.
@@ -148,6 +146,12 @@ pub(crate) fn python_attr<'py>(
     name: &str,
 ) -> PyResult<&'py Bound<'py, PyAny>> {
     cell.import(py, module, name)
+}
+
+/// The `ebullio.Method` member for `method`.
+pub(crate) fn method_member<'py>(py: Python<'py>, method: Method) -> PyResult<Bound<'py, PyAny>> {
+    static METHOD: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
+    python_attr(py, &METHOD, "ebullio._enums", "Method")?.call1((names::method_name(method),))
 }
 
 /// The `ebullio.Units` member for `units`.
@@ -188,474 +192,205 @@ pub(crate) fn labelled(state: &State, name: &str, property: Property) -> Option<
     })
 }
 
-#[pymethods]
-impl PyState {
-    /// The state at pressure ``p`` and temperature ``t``.
-    ///
-    /// Units by ``units``: "native" MPa, K; "si" Pa, K; "metric" bar, °C;
-    /// "us" psia, °F. A (p, t) on the saturation line gives the liquid;
-    /// use ``from_px`` or ``Saturation`` for the line itself.
-    /// ``method="backward"`` takes region 3's density from the SR5-05
-    /// backward equation v(p,T), unrefined (an error in the subregions it
-    /// does not ship); the other regions are the same either way.
-    ///
-    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
-    /// the results into and return (see ``State``).
-    #[staticmethod]
-    #[pyo3(signature = (p, t, *, units=None, method=None, errors=None, threads=None, out=None),
-           text_signature = "(p, t, *, units, method='exact', errors=None, threads=None, out=None)")]
-    #[allow(clippy::too_many_arguments)]
-    fn from_pt<'py>(
-        py: Python<'py>,
-        p: &Bound<'py, PyAny>,
-        t: &Bound<'py, PyAny>,
-        units: Option<&Bound<'py, PyAny>>,
-        method: Option<&Bound<'py, PyAny>>,
-        errors: Option<&Bound<'py, PyAny>>,
-        threads: Option<&Bound<'py, PyAny>>,
-        out: Option<&Bound<'py, PyAny>>,
-    ) -> PyResult<Bound<'py, PyAny>> {
-        construct(
-            py,
-            InputPair::PressureTemperature,
-            p,
-            t,
-            units,
-            method,
-            errors,
-            threads,
-            out,
-        )
-    }
+/// The `#[pymethods]` of `State`: a constructor per row of
+/// `constructors` (the pair's two arguments, its `InputPair`, `[method]`
+/// where the pair takes one, the text signature), a getter per row of
+/// `getters` (the attribute, its core `Reading`), then the methods written
+/// out. One block, because PyO3 takes one `#[pymethods]` per class.
+macro_rules! state_methods {
+    (
+        constructors: [$(
+            $(#[doc = $cdoc:literal])*
+            fn $ctor:ident($a:ident, $b:ident) $pair:ident $([$method:ident])?, $text:literal;
+        )*]
+        getters: [$(
+            $(#[doc = $gdoc:literal])*
+            $getter:ident => $reading:expr;
+        )*]
+        $($rest:tt)*
+    ) => {
+        #[pymethods]
+        impl PyState {
+            $(
+                $(#[doc = $cdoc])*
+                #[staticmethod]
+                #[pyo3(signature = ($a, $b, *, units=None, $($method=None,)? errors=None, threads=None, out=None),
+                       text_signature = $text)]
+                #[allow(clippy::too_many_arguments)]
+                fn $ctor<'py>(
+                    py: Python<'py>,
+                    $a: &Bound<'py, PyAny>,
+                    $b: &Bound<'py, PyAny>,
+                    units: Option<&Bound<'py, PyAny>>,
+                    $($method: Option<&Bound<'py, PyAny>>,)?
+                    errors: Option<&Bound<'py, PyAny>>,
+                    threads: Option<&Bound<'py, PyAny>>,
+                    out: Option<&Bound<'py, PyAny>>,
+                ) -> PyResult<Bound<'py, PyAny>> {
+                    let method: Option<&Bound<'py, PyAny>> = None $(.or($method))?;
+                    construct(py, InputPair::$pair, $a, $b, units, method, errors, threads, out)
+                }
+            )*
+            $(
+                $(#[doc = $gdoc])*
+                #[getter]
+                fn $getter(&self, py: Python<'_>) -> PyResult<Option<f64>> {
+                    self.read(py, $reading)
+                }
+            )*
+            $($rest)*
+        }
+    };
+}
 
-    /// The state at pressure ``p`` and specific enthalpy ``h``.
-    ///
-    /// Units: "native" MPa, kJ/kg; "si" Pa, J/kg; "metric" bar, kJ/kg;
-    /// "us" psia, Btu/lbm. ``method="exact"`` (default) refines on the basic
-    /// equations; ``"backward"`` gives the IAPWS backward equations' values.
-    ///
-    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
-    /// the results into and return (see ``State``).
-    #[staticmethod]
-    #[pyo3(signature = (p, h, *, units=None, method=None, errors=None, threads=None, out=None),
-           text_signature = "(p, h, *, units, method='exact', errors=None, threads=None, out=None)")]
-    #[allow(clippy::too_many_arguments)]
-    fn from_ph<'py>(
-        py: Python<'py>,
-        p: &Bound<'py, PyAny>,
-        h: &Bound<'py, PyAny>,
-        units: Option<&Bound<'py, PyAny>>,
-        method: Option<&Bound<'py, PyAny>>,
-        errors: Option<&Bound<'py, PyAny>>,
-        threads: Option<&Bound<'py, PyAny>>,
-        out: Option<&Bound<'py, PyAny>>,
-    ) -> PyResult<Bound<'py, PyAny>> {
-        construct(
-            py,
-            InputPair::PressureEnthalpy,
-            p,
-            h,
-            units,
-            method,
-            errors,
-            threads,
-            out,
-        )
-    }
-
-    /// The state at pressure ``p`` and specific entropy ``s``.
-    ///
-    /// Units: "native" MPa, kJ/(kg·K); "si" Pa, J/(kg·K); "metric" bar,
-    /// kJ/(kg·K); "us" psia, Btu/(lbm·°R). ``method`` as for ``from_ph``.
-    ///
-    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
-    /// the results into and return (see ``State``).
-    #[staticmethod]
-    #[pyo3(signature = (p, s, *, units=None, method=None, errors=None, threads=None, out=None),
-           text_signature = "(p, s, *, units, method='exact', errors=None, threads=None, out=None)")]
-    #[allow(clippy::too_many_arguments)]
-    fn from_ps<'py>(
-        py: Python<'py>,
-        p: &Bound<'py, PyAny>,
-        s: &Bound<'py, PyAny>,
-        units: Option<&Bound<'py, PyAny>>,
-        method: Option<&Bound<'py, PyAny>>,
-        errors: Option<&Bound<'py, PyAny>>,
-        threads: Option<&Bound<'py, PyAny>>,
-        out: Option<&Bound<'py, PyAny>>,
-    ) -> PyResult<Bound<'py, PyAny>> {
-        construct(
-            py,
-            InputPair::PressureEntropy,
-            p,
-            s,
-            units,
-            method,
-            errors,
-            threads,
-            out,
-        )
-    }
-
-    /// The state at specific enthalpy ``h`` and specific entropy ``s``.
-    ///
-    /// Units: "native" kJ/kg, kJ/(kg·K); "si" J/kg, J/(kg·K); "metric"
-    /// kJ/kg, kJ/(kg·K); "us" Btu/lbm, Btu/(lbm·°R). ``method`` as for
-    /// ``from_ph``.
-    ///
-    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
-    /// the results into and return (see ``State``).
-    #[staticmethod]
-    #[pyo3(signature = (h, s, *, units=None, method=None, errors=None, threads=None, out=None),
-           text_signature = "(h, s, *, units, method='exact', errors=None, threads=None, out=None)")]
-    #[allow(clippy::too_many_arguments)]
-    fn from_hs<'py>(
-        py: Python<'py>,
-        h: &Bound<'py, PyAny>,
-        s: &Bound<'py, PyAny>,
-        units: Option<&Bound<'py, PyAny>>,
-        method: Option<&Bound<'py, PyAny>>,
-        errors: Option<&Bound<'py, PyAny>>,
-        threads: Option<&Bound<'py, PyAny>>,
-        out: Option<&Bound<'py, PyAny>>,
-    ) -> PyResult<Bound<'py, PyAny>> {
-        construct(
-            py,
-            InputPair::EnthalpyEntropy,
-            h,
-            s,
-            units,
-            method,
-            errors,
-            threads,
-            out,
-        )
-    }
-
-    /// The state at density ``rho`` and temperature ``t``.
-    ///
-    /// Units: "native" and "si" kg/m³, K; "metric" kg/m³, °C; "us" lbm/ft³, °F.
-    ///
-    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
-    /// the results into and return (see ``State``).
-    #[staticmethod]
-    #[pyo3(signature = (rho, t, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(rho, t, *, units, errors=None, threads=None, out=None)")]
-    fn from_rho_t<'py>(
-        py: Python<'py>,
-        rho: &Bound<'py, PyAny>,
-        t: &Bound<'py, PyAny>,
-        units: Option<&Bound<'py, PyAny>>,
-        errors: Option<&Bound<'py, PyAny>>,
-        threads: Option<&Bound<'py, PyAny>>,
-        out: Option<&Bound<'py, PyAny>>,
-    ) -> PyResult<Bound<'py, PyAny>> {
-        construct(
-            py,
-            InputPair::DensityTemperature,
-            rho,
-            t,
-            units,
-            None,
-            errors,
-            threads,
-            out,
-        )
-    }
-
-    /// The state at specific volume ``v`` and temperature ``t``.
-    ///
-    /// Units: "native" and "si" m³/kg, K; "metric" m³/kg, °C; "us" ft³/lbm, °F.
-    ///
-    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
-    /// the results into and return (see ``State``).
-    #[staticmethod]
-    #[pyo3(signature = (v, t, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(v, t, *, units, errors=None, threads=None, out=None)")]
-    fn from_vt<'py>(
-        py: Python<'py>,
-        v: &Bound<'py, PyAny>,
-        t: &Bound<'py, PyAny>,
-        units: Option<&Bound<'py, PyAny>>,
-        errors: Option<&Bound<'py, PyAny>>,
-        threads: Option<&Bound<'py, PyAny>>,
-        out: Option<&Bound<'py, PyAny>>,
-    ) -> PyResult<Bound<'py, PyAny>> {
-        construct(
-            py,
-            InputPair::VolumeTemperature,
-            v,
-            t,
-            units,
-            None,
-            errors,
-            threads,
-            out,
-        )
-    }
-
-    /// The state at specific volume ``v`` and specific internal energy ``u``.
-    ///
-    /// Units: "native" m³/kg, kJ/kg; "si" m³/kg, J/kg; "metric" m³/kg,
-    /// kJ/kg; "us" ft³/lbm, Btu/lbm.
-    ///
-    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
-    /// the results into and return (see ``State``).
-    #[staticmethod]
-    #[pyo3(signature = (v, u, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(v, u, *, units, errors=None, threads=None, out=None)")]
-    fn from_vu<'py>(
-        py: Python<'py>,
-        v: &Bound<'py, PyAny>,
-        u: &Bound<'py, PyAny>,
-        units: Option<&Bound<'py, PyAny>>,
-        errors: Option<&Bound<'py, PyAny>>,
-        threads: Option<&Bound<'py, PyAny>>,
-        out: Option<&Bound<'py, PyAny>>,
-    ) -> PyResult<Bound<'py, PyAny>> {
-        construct(
-            py,
-            InputPair::VolumeInternalEnergy,
-            v,
-            u,
-            units,
-            None,
-            errors,
-            threads,
-            out,
-        )
-    }
-
-    /// Wet steam (or a saturated phase) at pressure ``p`` and vapour quality
-    /// ``x`` (0 ≤ x ≤ 1).
-    ///
-    /// Units of ``p``: "native" MPa; "si" Pa; "metric" bar; "us" psia.
-    ///
-    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
-    /// the results into and return (see ``State``).
-    #[staticmethod]
-    #[pyo3(signature = (p, x, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(p, x, *, units, errors=None, threads=None, out=None)")]
-    fn from_px<'py>(
-        py: Python<'py>,
-        p: &Bound<'py, PyAny>,
-        x: &Bound<'py, PyAny>,
-        units: Option<&Bound<'py, PyAny>>,
-        errors: Option<&Bound<'py, PyAny>>,
-        threads: Option<&Bound<'py, PyAny>>,
-        out: Option<&Bound<'py, PyAny>>,
-    ) -> PyResult<Bound<'py, PyAny>> {
-        construct(
-            py,
-            InputPair::PressureQuality,
-            p,
-            x,
-            units,
-            None,
-            errors,
-            threads,
-            out,
-        )
-    }
-
-    /// Wet steam (or a saturated phase) at temperature ``t`` and vapour
-    /// quality ``x`` (0 ≤ x ≤ 1).
-    ///
-    /// Units of ``t``: "native" and "si" K; "metric" °C; "us" °F.
-    ///
-    /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
-    /// the results into and return (see ``State``).
-    #[staticmethod]
-    #[pyo3(signature = (t, x, *, units=None, errors=None, threads=None, out=None),
-           text_signature = "(t, x, *, units, errors=None, threads=None, out=None)")]
-    fn from_tx<'py>(
-        py: Python<'py>,
-        t: &Bound<'py, PyAny>,
-        x: &Bound<'py, PyAny>,
-        units: Option<&Bound<'py, PyAny>>,
-        errors: Option<&Bound<'py, PyAny>>,
-        threads: Option<&Bound<'py, PyAny>>,
-        out: Option<&Bound<'py, PyAny>>,
-    ) -> PyResult<Bound<'py, PyAny>> {
-        construct(
-            py,
-            InputPair::TemperatureQuality,
-            t,
-            x,
-            units,
-            None,
-            errors,
-            threads,
-            out,
-        )
-    }
-
-    /// Pressure: MPa (native), Pa (si), bar (metric), psia (us).
-    #[getter]
-    fn p(&self) -> f64 {
-        self.inner.pressure()
-    }
-
-    /// Temperature: K (native, si), °C (metric), °F (us).
-    #[getter]
-    fn t(&self) -> f64 {
-        self.inner.temperature()
-    }
-
-    /// Specific volume: m³/kg (native, si, metric), ft³/lbm (us).
-    #[getter]
-    fn v(&self) -> f64 {
-        self.inner.specific_volume()
-    }
-
-    /// Density: kg/m³ (native, si, metric), lbm/ft³ (us).
-    #[getter]
-    fn rho(&self) -> f64 {
-        self.inner.density()
-    }
-
-    /// Specific internal energy: kJ/kg (native, metric), J/kg (si), Btu/lbm (us).
-    #[getter]
-    fn u(&self) -> f64 {
-        self.inner.internal_energy()
-    }
-
-    /// Specific enthalpy: kJ/kg (native, metric), J/kg (si), Btu/lbm (us).
-    #[getter]
-    fn h(&self) -> f64 {
-        self.inner.enthalpy()
-    }
-
-    /// Specific entropy: kJ/(kg·K) (native, metric), J/(kg·K) (si),
-    /// Btu/(lbm·°R) (us).
-    #[getter]
-    fn s(&self) -> f64 {
-        self.inner.entropy()
-    }
-
-    /// Specific isobaric heat capacity, units as ``s``; ``None`` for wet steam.
-    #[getter]
-    fn cp(&self) -> Option<f64> {
-        self.inner.isobaric_heat_capacity()
-    }
-
-    /// Specific isochoric heat capacity, units as ``s``; ``None`` for wet steam.
-    #[getter]
-    fn cv(&self) -> Option<f64> {
-        self.inner.isochoric_heat_capacity()
-    }
-
-    /// Speed of sound: m/s (native, si, metric), ft/s (us); ``None`` for wet steam.
-    #[getter]
-    fn w(&self) -> Option<f64> {
-        self.inner.speed_of_sound()
-    }
-
-    /// Vapour quality (mass fraction): 0 < x < 1 for wet steam, 0 and 1 on
-    /// the saturation lines, ``None`` off them.
-    #[getter]
-    fn x(&self) -> Option<f64> {
-        self.inner.quality()
-    }
-
-    /// Isobaric cubic expansion coefficient: 1/K (native, si, metric), 1/°R
-    /// (us); ``None`` for wet steam.
-    #[getter]
-    fn alpha_v(&self) -> Option<f64> {
-        self.inner.expansion_coefficient()
-    }
-
-    /// Isothermal compressibility: 1/MPa (native), 1/Pa (si), 1/bar
-    /// (metric), 1/psi (us); ``None`` for wet steam.
-    #[getter]
-    fn kappa_t(&self) -> Option<f64> {
-        self.inner.compressibility()
-    }
-
-    /// Specific Gibbs free energy h − Ts, units as ``h``.
-    #[getter]
-    fn g(&self) -> f64 {
-        self.inner.gibbs_energy()
-    }
-
-    /// Specific Helmholtz free energy u − Ts, units as ``h``.
-    #[getter]
-    fn f(&self) -> f64 {
-        self.inner.helmholtz_energy()
-    }
-
-    /// Dynamic viscosity (IAPWS R12-08): Pa·s (native, si, metric),
-    /// lbm/(ft·s) (us); ``None`` for wet steam (each saturated phase has
-    /// its own); raises ``OutOfRangeError`` above 1173.15 K.
-    #[getter]
-    fn viscosity(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.viscosity())
-    }
-
-    /// Thermal conductivity (IAPWS R15-11): W/(m·K) (native, si, metric),
-    /// Btu/(h·ft·°F) (us); ``None`` for wet steam; raises
-    /// ``OutOfRangeError`` above 1173.15 K.
-    #[getter]
-    fn thermal_conductivity(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.thermal_conductivity())
-    }
-
-    /// Kinematic viscosity μ/ρ: m²/s (native, si, metric), ft²/s (us); as
-    /// ``viscosity`` for wet steam and above 1173.15 K.
-    #[getter]
-    fn kinematic_viscosity(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.kinematic_viscosity())
-    }
-
-    /// Thermal diffusivity λ/(ρ cp): m²/s (native, si, metric), ft²/s (us);
-    /// as ``viscosity`` for wet steam and above 1173.15 K.
-    #[getter]
-    fn thermal_diffusivity(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.thermal_diffusivity())
-    }
-
-    /// Prandtl number μ cp/λ, dimensionless; as ``viscosity`` for wet steam
-    /// and above 1173.15 K.
-    #[getter]
-    fn prandtl_number(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.prandtl_number())
-    }
-
-    /// Isentropic exponent −(v/p)(∂p/∂v)_s, dimensionless (wet steam: the
-    /// homogeneous mixture's).
-    #[getter]
-    fn isentropic_exponent(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.isentropic_exponent())
-    }
-
-    /// Joule–Thomson coefficient (∂T/∂p)_h: K/MPa (native), K/Pa (si),
-    /// °C/bar (metric, a difference), °F/psi (us).
-    #[getter]
-    fn joule_thomson_coefficient(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.joule_thomson_coefficient())
-    }
-
-    /// Isothermal throttling coefficient (∂h/∂p)_T, units of ``h`` per
-    /// units of ``p``; ``None`` for wet steam (T is fixed by p there).
-    #[getter]
-    fn isothermal_throttling_coefficient(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.isothermal_throttling_coefficient())
-    }
-
-    /// Relative pressure coefficient (1/p)(∂p/∂T)_v, per temperature
-    /// difference: 1/K (native, si), 1/°C (metric), 1/°F (us).
-    #[getter]
-    fn relative_pressure_coefficient(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.relative_pressure_coefficient())
-    }
-
-    /// Isothermal stress coefficient −(1/p)(∂p/∂v)_T, in density units:
-    /// kg/m³ (native, si, metric), lbm/ft³ (us); zero for wet steam (p is
-    /// fixed by T there).
-    #[getter]
-    fn isothermal_stress_coefficient(&self, py: Python<'_>) -> PyResult<Option<f64>> {
-        optional(py, self.inner.isothermal_stress_coefficient())
-    }
+state_methods! {
+    constructors: [
+        /// The state at pressure ``p`` and temperature ``t``.
+        ///
+        /// Units by ``units``: "native" MPa, K; "si" Pa, K; "metric" bar, °C;
+        /// "us" psia, °F. A (p, t) on the saturation line gives the liquid;
+        /// use ``from_px`` or ``Saturation`` for the line itself.
+        /// ``method="backward"`` takes region 3's density from the SR5-05
+        /// backward equation v(p,T), unrefined (an error in the subregions it
+        /// does not ship); the other regions are the same either way.
+        ///
+        /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+        /// the results into and return (see ``State``).
+        fn from_pt(p, t) PressureTemperature [method], "(p, t, *, units, method='exact', errors=None, threads=None, out=None)";
+        /// The state at pressure ``p`` and specific enthalpy ``h``.
+        ///
+        /// Units: "native" MPa, kJ/kg; "si" Pa, J/kg; "metric" bar, kJ/kg;
+        /// "us" psia, Btu/lbm. ``method="exact"`` (default) refines on the basic
+        /// equations; ``"backward"`` gives the IAPWS backward equations' values.
+        ///
+        /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+        /// the results into and return (see ``State``).
+        fn from_ph(p, h) PressureEnthalpy [method], "(p, h, *, units, method='exact', errors=None, threads=None, out=None)";
+        /// The state at pressure ``p`` and specific entropy ``s``.
+        ///
+        /// Units: "native" MPa, kJ/(kg·K); "si" Pa, J/(kg·K); "metric" bar,
+        /// kJ/(kg·K); "us" psia, Btu/(lbm·°R). ``method`` as for ``from_ph``.
+        ///
+        /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+        /// the results into and return (see ``State``).
+        fn from_ps(p, s) PressureEntropy [method], "(p, s, *, units, method='exact', errors=None, threads=None, out=None)";
+        /// The state at specific enthalpy ``h`` and specific entropy ``s``.
+        ///
+        /// Units: "native" kJ/kg, kJ/(kg·K); "si" J/kg, J/(kg·K); "metric"
+        /// kJ/kg, kJ/(kg·K); "us" Btu/lbm, Btu/(lbm·°R). ``method`` as for
+        /// ``from_ph``.
+        ///
+        /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+        /// the results into and return (see ``State``).
+        fn from_hs(h, s) EnthalpyEntropy [method], "(h, s, *, units, method='exact', errors=None, threads=None, out=None)";
+        /// The state at density ``rho`` and temperature ``t``.
+        ///
+        /// Units: "native" and "si" kg/m³, K; "metric" kg/m³, °C; "us" lbm/ft³, °F.
+        ///
+        /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+        /// the results into and return (see ``State``).
+        fn from_rho_t(rho, t) DensityTemperature, "(rho, t, *, units, errors=None, threads=None, out=None)";
+        /// The state at specific volume ``v`` and temperature ``t``.
+        ///
+        /// Units: "native" and "si" m³/kg, K; "metric" m³/kg, °C; "us" ft³/lbm, °F.
+        ///
+        /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+        /// the results into and return (see ``State``).
+        fn from_vt(v, t) VolumeTemperature, "(v, t, *, units, errors=None, threads=None, out=None)";
+        /// The state at specific volume ``v`` and specific internal energy ``u``.
+        ///
+        /// Units: "native" m³/kg, kJ/kg; "si" m³/kg, J/kg; "metric" m³/kg,
+        /// kJ/kg; "us" ft³/lbm, Btu/lbm.
+        ///
+        /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+        /// the results into and return (see ``State``).
+        fn from_vu(v, u) VolumeInternalEnergy, "(v, u, *, units, errors=None, threads=None, out=None)";
+        /// Wet steam (or a saturated phase) at pressure ``p`` and vapour quality
+        /// ``x`` (0 ≤ x ≤ 1).
+        ///
+        /// Units of ``p``: "native" MPa; "si" Pa; "metric" bar; "us" psia.
+        ///
+        /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+        /// the results into and return (see ``State``).
+        fn from_px(p, x) PressureQuality, "(p, x, *, units, errors=None, threads=None, out=None)";
+        /// Wet steam (or a saturated phase) at temperature ``t`` and vapour
+        /// quality ``x`` (0 ≤ x ≤ 1).
+        ///
+        /// Units of ``t``: "native" and "si" K; "metric" °C; "us" °F.
+        ///
+        /// ``out=``: a ``StateArray`` of the inputs' broadcast shape to write
+        /// the results into and return (see ``State``).
+        fn from_tx(t, x) TemperatureQuality, "(t, x, *, units, errors=None, threads=None, out=None)";
+    ]
+    getters: [
+        /// Pressure: MPa (native), Pa (si), bar (metric), psia (us).
+        p => Reading::Thermodynamic(Property::Pressure);
+        /// Temperature: K (native, si), °C (metric), °F (us).
+        t => Reading::Thermodynamic(Property::Temperature);
+        /// Specific volume: m³/kg (native, si, metric), ft³/lbm (us).
+        v => Reading::Thermodynamic(Property::SpecificVolume);
+        /// Density: kg/m³ (native, si, metric), lbm/ft³ (us).
+        rho => Reading::Thermodynamic(Property::Density);
+        /// Specific internal energy: kJ/kg (native, metric), J/kg (si), Btu/lbm (us).
+        u => Reading::Thermodynamic(Property::InternalEnergy);
+        /// Specific enthalpy: kJ/kg (native, metric), J/kg (si), Btu/lbm (us).
+        h => Reading::Thermodynamic(Property::Enthalpy);
+        /// Specific entropy: kJ/(kg·K) (native, metric), J/(kg·K) (si),
+        /// Btu/(lbm·°R) (us).
+        s => Reading::Thermodynamic(Property::Entropy);
+        /// Specific isobaric heat capacity, units as ``s``; ``None`` for wet steam.
+        cp => Reading::Thermodynamic(Property::IsobaricHeatCapacity);
+        /// Specific isochoric heat capacity, units as ``s``; ``None`` for wet steam.
+        cv => Reading::Thermodynamic(Property::IsochoricHeatCapacity);
+        /// Speed of sound: m/s (native, si, metric), ft/s (us); ``None`` for wet steam.
+        w => Reading::Thermodynamic(Property::SpeedOfSound);
+        /// Vapour quality (mass fraction): 0 < x < 1 for wet steam, 0 and 1 on
+        /// the saturation lines, ``None`` off them.
+        x => Reading::Thermodynamic(Property::Quality);
+        /// Isobaric cubic expansion coefficient: 1/K (native, si, metric), 1/°R
+        /// (us); ``None`` for wet steam.
+        alpha_v => Reading::Thermodynamic(Property::ExpansionCoefficient);
+        /// Isothermal compressibility: 1/MPa (native), 1/Pa (si), 1/bar
+        /// (metric), 1/psi (us); ``None`` for wet steam.
+        kappa_t => Reading::Thermodynamic(Property::Compressibility);
+        /// Specific Gibbs free energy h − Ts, units as ``h``.
+        g => Reading::Thermodynamic(Property::GibbsEnergy);
+        /// Specific Helmholtz free energy u − Ts, units as ``h``.
+        f => Reading::Thermodynamic(Property::HelmholtzEnergy);
+        /// Dynamic viscosity (IAPWS R12-08): Pa·s (native, si, metric),
+        /// lbm/(ft·s) (us); ``None`` for wet steam (each saturated phase has
+        /// its own); raises ``OutOfRangeError`` above 1173.15 K.
+        viscosity => Reading::Viscosity;
+        /// Thermal conductivity (IAPWS R15-11): W/(m·K) (native, si, metric),
+        /// Btu/(h·ft·°F) (us); ``None`` for wet steam; raises
+        /// ``OutOfRangeError`` above 1173.15 K.
+        thermal_conductivity => Reading::ThermalConductivity;
+        /// Kinematic viscosity μ/ρ: m²/s (native, si, metric), ft²/s (us); as
+        /// ``viscosity`` for wet steam and above 1173.15 K.
+        kinematic_viscosity => Reading::KinematicViscosity;
+        /// Thermal diffusivity λ/(ρ cp): m²/s (native, si, metric), ft²/s (us);
+        /// as ``viscosity`` for wet steam and above 1173.15 K.
+        thermal_diffusivity => Reading::ThermalDiffusivity;
+        /// Prandtl number μ cp/λ, dimensionless; as ``viscosity`` for wet steam
+        /// and above 1173.15 K.
+        prandtl_number => Reading::PrandtlNumber;
+        /// Isentropic exponent −(v/p)(∂p/∂v)_s, dimensionless (wet steam: the
+        /// homogeneous mixture's).
+        isentropic_exponent => Reading::IsentropicExponent;
+        /// Joule–Thomson coefficient (∂T/∂p)_h: K/MPa (native), K/Pa (si),
+        /// °C/bar (metric, a difference), °F/psi (us).
+        joule_thomson_coefficient => Reading::JouleThomsonCoefficient;
+        /// Isothermal throttling coefficient (∂h/∂p)_T, units of ``h`` per
+        /// units of ``p``; ``None`` for wet steam (T is fixed by p there).
+        isothermal_throttling_coefficient => Reading::IsothermalThrottlingCoefficient;
+        /// Relative pressure coefficient (1/p)(∂p/∂T)_v, per temperature
+        /// difference: 1/K (native, si), 1/°C (metric), 1/°F (us).
+        relative_pressure_coefficient => Reading::RelativePressureCoefficient;
+        /// Isothermal stress coefficient −(1/p)(∂p/∂v)_T, in density units:
+        /// kg/m³ (native, si, metric), lbm/ft³ (us); zero for wet steam (p is
+        /// fixed by T there).
+        isothermal_stress_coefficient => Reading::IsothermalStressCoefficient;
+    ]
 
     /// The IF97 region of the equation that produced the state, 1 to 5
     /// (4: wet steam).
@@ -746,24 +481,24 @@ impl PyState {
     /// Pickles as the call that made it, which gives the same bits again.
     fn __reduce__<'py>(&self, py: Python<'py>) -> PyResult<Reduce<'py, RestoreArgs>> {
         static RESTORE: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
-        let restore = python_attr(py, &RESTORE, "ebullio._dispatch", "restore_state")?.clone();
-        let o = &self.origin;
+        let restore = python_attr(py, &RESTORE, "ebullio._native", "solve_scalar")?.clone();
+        let Origin { request, a, b } = self.origin;
         Ok((
             restore,
             (
-                o.pair as u32,
-                o.a,
-                o.b,
-                names::units_name(o.units),
-                names::method_name(o.method),
+                request.pair as u32,
+                a,
+                b,
+                names::units_name(request.units),
+                names::method_name(request.method),
                 names::units_name(self.inner.units()),
             ),
         ))
     }
 }
 
-/// One state from pair number `pair` at (`a`, `b`): the scalar path of
-/// `ebullio._dispatch` and the unpickler. `read` defaults to `units`.
+/// One state from pair number `pair` at (`a`, `b`): the unpickler of a
+/// `State`. `read` defaults to `units`.
 #[pyfunction]
 #[pyo3(signature = (pair, a, b, units, method=None, read=None))]
 pub(crate) fn solve_scalar(
@@ -780,25 +515,10 @@ pub(crate) fn solve_scalar(
         Some(read) if !read.is_none() => names::unit_system(read)?,
         _ => units,
     };
-    let origin = Origin {
+    let request = Request {
         pair: names::pair(pair)?,
-        a,
-        b,
         units,
         method: names::method(method)?,
     };
-    PyState::solve(py, origin, read)
-}
-
-/// A value the core may not have for a state: ``None`` where it does not
-/// exist (`Error::Undefined`, as cp of wet steam), the exception otherwise.
-pub(crate) fn optional(
-    py: Python<'_>,
-    value: Result<f64, ebullio::Error>,
-) -> PyResult<Option<f64>> {
-    match value {
-        Ok(v) => Ok(Some(v)),
-        Err(ebullio::Error::Undefined { .. }) => Ok(None),
-        Err(error) => Err(to_py(py, &error, None)),
-    }
+    PyState::solve(py, Origin { request, a, b }, read)
 }

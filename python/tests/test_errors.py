@@ -1,6 +1,9 @@
 """Exceptions: one base deriving from ValueError, a few subclasses, messages
 naming the quantity, the value in the caller's units and the valid range."""
 
+import re
+from pathlib import Path
+
 import numpy as np
 import pytest
 
@@ -47,6 +50,22 @@ def test_no_state_for_the_pair():
 
 def test_status_enum_matches_the_native_table():
     assert dict(ebullio._native.STATUS_CODES) == {s.name: int(s) for s in Status}
+
+
+def test_statuses_are_the_c_abi_numbers():
+    # A status is one integer in every language: the C header's.
+    header = (Path(__file__).resolve().parents[2] / "ffi" / "include" / "ebullio.h").read_text()
+    published = {name: int(n) for name, n in re.findall(r"^  EBULLIO_STATUS_(\w+) = (\d+),$", header, re.M)}
+    spelt = {"UNDEFINED": "PROPERTY_UNDEFINED", "OTHER": "UNKNOWN_ERROR"}
+    for status in Status:
+        assert published[spelt.get(status.name, status.name)] == status, status
+    # R7-97(2012), section 4: the range of validity ends at 100 MPa.
+    states = ebullio.State.from_pt([np.nan, 200.0, 3.0], 300.0, units="native")
+    assert states.status.dtype == np.uint16
+    assert list(states.status) == [published["NOT_FINITE"], published["OUT_OF_RANGE"], 0]
+    with pytest.raises(ebullio.OutOfRangeError) as caught:
+        ebullio.State.from_pt(200.0, 300.0, units="native")
+    assert caught.value.status == published["OUT_OF_RANGE"] == 201
 
 
 def test_phase_names_are_the_trades():

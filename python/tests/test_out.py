@@ -198,14 +198,14 @@ def test_the_kernel_checks_the_arrays_again():
             np.zeros(15 * n) if values is None else values,
             np.zeros(n, np.uint8),
             np.zeros(n, np.uint8),
-            np.zeros(n, np.uint8) if status is None else status,
+            np.zeros(n, np.uint16) if status is None else status,
         )
 
     with pytest.raises(ValueError, match=r"the values array to write into has 45 elements, 60 expected"):
-        ebullio._native.solve_many(1, a, b, "native", out=arrays(n=3, status=np.zeros(4, np.uint8)))
+        ebullio._native.solve_many(1, a, b, "native", out=arrays(n=3, status=np.zeros(4, np.uint16)))
     with pytest.raises(ValueError, match=r"the values array to write into is not C-contiguous"):
         ebullio._native.solve_many(1, a, b, "native", out=arrays(values=np.zeros((4, 15)).T))
-    frozen = np.zeros(4, np.uint8)
+    frozen = np.zeros(4, np.uint16)
     frozen.flags.writeable = False
     with pytest.raises(ValueError, match=r"cannot write into the status array"):
         ebullio._native.solve_many(1, a, b, "native", out=arrays(status=frozen))

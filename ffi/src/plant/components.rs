@@ -14,7 +14,7 @@ use crate::args::OutStruct;
 use crate::boundary::boundary;
 use crate::codes::{self, c_units, EbullioUnits};
 use crate::detail::{report, EbullioErrorDetail};
-use crate::state::{Choice, EbullioState};
+use crate::state::EbullioState;
 use crate::status::EbullioStatus;
 
 /// The figures of one expansion through a turbine section, per unit mass,
@@ -257,7 +257,7 @@ pub unsafe extern "C" fn ebullio_turbine_expansion(
             isentropic_exhaust,
             detail,
             |_| {
-                let inlet = Choice::decode(inlet_pair, units, 0)?;
+                let inlet = codes::request(inlet_pair, units, 0)?;
                 Ok(inlet
                     .solve(a, b)
                     .and_then(|inlet| expand(&inlet, exhaust_pressure, isentropic_efficiency)))
@@ -352,7 +352,7 @@ pub unsafe extern "C" fn ebullio_pump_compression(
             isentropic_outlet,
             detail,
             |_| {
-                let inlet = Choice::decode(inlet_pair, units, 0)?;
+                let inlet = codes::request(inlet_pair, units, 0)?;
                 Ok(inlet
                     .solve(a, b)
                     .and_then(|inlet| compress(&inlet, outlet_pressure, isentropic_efficiency)))

@@ -31,16 +31,16 @@ class Phase(enum.IntEnum):
 
 class Status(enum.IntEnum):
     OK = 0
-    NOT_FINITE = 1
-    OUT_OF_RANGE = 2
-    QUALITY_OUT_OF_RANGE = 3
-    NO_STATE_IN_RANGE = 4
-    BACKWARD_EQUATION_OUT_OF_RANGE = 5
-    NOT_CONVERGED = 6
-    UNDEFINED = 7
-    INVALID_PLANT = 8
-    NOT_FIXED_BY_MEASUREMENT = 9
-    OTHER = 255
+    NOT_FINITE = 200
+    OUT_OF_RANGE = 201
+    QUALITY_OUT_OF_RANGE = 202
+    NO_STATE_IN_RANGE = 203
+    BACKWARD_EQUATION_OUT_OF_RANGE = 204
+    UNDEFINED = 205
+    INVALID_PLANT = 206
+    NOT_FIXED_BY_MEASUREMENT = 207
+    NOT_CONVERGED = 300
+    OTHER = 901
 
 class SteamError(ValueError):
     status: int
@@ -204,7 +204,7 @@ class StateArray:
     f: NDArray[np.float64]
     region: NDArray[np.uint8]
     phase: NDArray[np.uint8]
-    status: NDArray[np.uint8]
+    status: NDArray[np.uint16]
     units: Units
     @property
     def ok(self) -> NDArray[np.bool_]: ...
@@ -234,7 +234,7 @@ class TransportArray:
     kinematic_viscosity: NDArray[np.float64]
     thermal_diffusivity: NDArray[np.float64]
     prandtl_number: NDArray[np.float64]
-    status: NDArray[np.uint8]
+    status: NDArray[np.uint16]
     units: Units
     @property
     def ok(self) -> NDArray[np.bool_]: ...
@@ -251,7 +251,7 @@ class DerivativeArray:
     """One partial derivative per element; NaN and a status where an element is flagged."""
 
     value: NDArray[np.float64]
-    status: NDArray[np.uint8]
+    status: NDArray[np.uint16]
     units: Units
     @property
     def ok(self) -> NDArray[np.bool_]: ...
@@ -309,7 +309,7 @@ class SaturationArray:
     @property
     def t(self) -> NDArray[np.float64]: ...
     @property
-    def status(self) -> NDArray[np.uint8]: ...
+    def status(self) -> NDArray[np.uint16]: ...
     @property
     def ok(self) -> NDArray[np.bool_]: ...
     @property

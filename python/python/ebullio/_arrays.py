@@ -1,8 +1,10 @@
 """Array results: every property as an ndarray, a status per element.
 
 ``StateArray`` and ``SaturationArray`` are what the constructors return for
-array-like inputs. Their property attributes are made from the native
-module's table, so a property the core gains appears here with no change.
+array-like inputs; the native module makes them (the whole array call is in
+Rust) and they call back only into it. Their property attributes are made
+from the native module's table, so a property the core gains appears here
+with no change.
 """
 
 from __future__ import annotations
@@ -19,22 +21,9 @@ _SYMBOLS = {row[0]: dict(zip(("native", "si", "metric", "us"), row[2])) for row 
 _INDEX = {name: k for k, name in enumerate(_NAMES)}
 
 
-def element_label(k: int, shape: tuple[int, ...]) -> str:
-    """How an error names element ``k`` (flat) of an array of ``shape``."""
-    if len(shape) == 0:
-        return "the element"
-    if len(shape) == 1:
-        return f"element {k}"
-    return f"element {tuple(int(i) for i in np.unravel_index(k, shape))}"
-
-
-def kept(x: Any) -> np.ndarray:
-    """A private, read-only float64 copy of input ``x`` for a result to keep
-    (results solve their inputs again: the caller's later edits of its own
-    arrays must not reach them)."""
-    copy = np.array(x, dtype=np.float64, order="C")
-    copy.setflags(write=False)
-    return copy
+#: A private, read-only float64 copy of an input for a result to keep (the
+#: array path's own, used again when a result is unpickled).
+kept = _native.kept
 
 
 def _column(k: int, doc: str) -> property:
@@ -50,8 +39,8 @@ class StateArray:
     Each property (``p, t, v, rho, u, h, s, cp, cv, w, x, alpha_v,
     kappa_t, g, f``) is a float64 ndarray of the inputs' broadcast shape, in
     the units ``units``. ``region`` (1 to 5) and ``phase`` (``ebullio.Phase``
-    codes) are uint8 arrays, 0 where an element is bad. ``status`` holds an
-    ``ebullio.Status`` code per element, ``ok`` is ``status == 0``. A bad
+    codes) are uint8 arrays, 0 where an element is bad. ``status`` (uint16)
+    holds an ``ebullio.Status`` code per element, ``ok`` is ``status == 0``. A bad
     element is NaN in every property; the others are computed. A property
     that does not exist for an element (cp of wet steam, x of superheated
     vapour, or one the core finds not finite and physical, as cp at the
@@ -142,10 +131,8 @@ class StateArray:
     def in_units(self, units: Any) -> StateArray:
         """The same states read in other units (solved again from the inputs,
         which gives the same states bit for bit)."""
-        from ._dispatch import solve
-
         pair, a, b, in_units, method = self._origin
-        return solve(pair, a, b, in_units, method, "flag", None, units)
+        return _native.solve_states(pair, a, b, in_units, method, "flag", None, units)  # type: ignore[no-any-return]
 
     def error_at(self, index: Any) -> Exception | None:
         """The exception the element at ``index`` raises as a scalar (its
@@ -176,10 +163,8 @@ class StateArray:
         (the end of IAPWS R12-08 and R15-11) is NaN with its ``Status``; a
         property the state does not have (wet steam's: each saturated phase
         has its own) is NaN with status OK, as in the ``StateArray``."""
-        from ._dispatch import _threads_of
-
         pair, a, b, units, method = self._inputs()
-        values, status = _native.transport_many(pair, a, b, units, method, _threads_of(threads), self.units)
+        values, status = _native.transport_many(pair, a, b, units, method, threads, self.units)
         return TransportArray._make(values.reshape((len(_TRANSPORT),) + self.shape), status.reshape(self.shape), self.units)
 
     def derivative(self, z: str, x: str, y: str, *, threads: Any = None) -> DerivativeArray:
@@ -187,10 +172,8 @@ class StateArray:
         gives it (z, x, y among ``"p" "t" "v" "rho" "u" "h" "s" "g" "f"``),
         a ``DerivativeArray``: NaN with a ``Status`` where the state failed
         or the derivative does not exist (``Status.UNDEFINED``)."""
-        from ._dispatch import _threads_of
-
         pair, a, b, units, method = self._inputs()
-        values, status = _native.derivative_many(pair, a, b, z, x, y, units, method, _threads_of(threads), self.units)
+        values, status = _native.derivative_many(pair, a, b, z, x, y, units, method, threads, self.units)
         return DerivativeArray._make(values.reshape(self.shape), status.reshape(self.shape), self.units)
 
     @property
@@ -201,10 +184,8 @@ class StateArray:
         too), so p and T did not fix its phase; False elsewhere and where the
         element is bad. Solved again from the inputs (the same bits), as
         ``transport()``."""
-        from ._dispatch import _threads_of
-
         pair, a, b, units, method = self._inputs()
-        values, _ = _native.near_saturation_many(pair, a, b, units, method, _threads_of(None))
+        values, _ = _native.near_saturation_many(pair, a, b, units, method, None)
         return (values == 1.0).reshape(self.shape)
 
     def as_dict(self) -> dict[str, np.ndarray]:
@@ -441,9 +422,8 @@ class SaturationArray:
     def mixture(self, x: Any, *, errors: Any = None, threads: Any = None) -> StateArray:
         """Wet steam of vapour quality ``x`` (0 ≤ x ≤ 1), broadcast against
         the saturation points."""
-        from ._dispatch import _QUALITY_PAIR, solve
-
-        return solve(_QUALITY_PAIR[self._by], self._value, x, self._units, None, "flag" if errors is None else errors, threads, self.units)  # type: ignore[no-any-return]
+        pair = self.liquid._origin[0]  # the (·, x) pair of this saturation line
+        return _native.solve_states(pair, self._value, x, self._units, None, "flag" if errors is None else errors, threads, self.units)  # type: ignore[no-any-return]
 
     def __repr__(self) -> str:
         flagged = self.liquid.size - int(np.count_nonzero(self.ok))

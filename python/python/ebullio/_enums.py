@@ -75,26 +75,28 @@ class Status(enum.IntEnum):
     """Why an element of an array result is NaN; ``OK`` (0) when computed.
     ``str()`` gives its name in words ("out of range"), as DataFrames show it.
 
-    The codes match the exception raised for the same input as a scalar:
-    NOT_FINITE -> NotFiniteError; OUT_OF_RANGE, NO_STATE_IN_RANGE and
-    BACKWARD_EQUATION_OUT_OF_RANGE -> OutOfRangeError; QUALITY_OUT_OF_RANGE
-    -> QualityOutOfRangeError; NOT_CONVERGED -> NotConvergedError;
+    The codes are the engine's one numbering, the same integers the C ABI
+    returns (``EBULLIO_STATUS_OUT_OF_RANGE`` is 201 there and here); a
+    result's ``status`` array is uint16. They match the exception raised
+    for the same input as a scalar: NOT_FINITE -> NotFiniteError;
+    OUT_OF_RANGE, NO_STATE_IN_RANGE and BACKWARD_EQUATION_OUT_OF_RANGE ->
+    OutOfRangeError; QUALITY_OUT_OF_RANGE -> QualityOutOfRangeError;
     UNDEFINED (a quantity the state does not have) -> SteamError;
     INVALID_PLANT -> InvalidPlantError; NOT_FIXED_BY_MEASUREMENT ->
-    NotFixedByMeasurementError.
+    NotFixedByMeasurementError; NOT_CONVERGED -> NotConvergedError.
     """
 
     OK = 0
-    NOT_FINITE = 1
-    OUT_OF_RANGE = 2
-    QUALITY_OUT_OF_RANGE = 3
-    NO_STATE_IN_RANGE = 4
-    BACKWARD_EQUATION_OUT_OF_RANGE = 5
-    NOT_CONVERGED = 6
-    UNDEFINED = 7
-    INVALID_PLANT = 8
-    NOT_FIXED_BY_MEASUREMENT = 9
-    OTHER = 255
+    NOT_FINITE = 200
+    OUT_OF_RANGE = 201
+    QUALITY_OUT_OF_RANGE = 202
+    NO_STATE_IN_RANGE = 203
+    BACKWARD_EQUATION_OUT_OF_RANGE = 204
+    UNDEFINED = 205
+    INVALID_PLANT = 206
+    NOT_FIXED_BY_MEASUREMENT = 207
+    NOT_CONVERGED = 300
+    OTHER = 901
 
     def __str__(self) -> str:
         return self.name.lower().replace("_", " ")

@@ -29,10 +29,11 @@ def named(codes: Any, kind: type[enum.IntEnum]) -> Any:
     """The codes of ``kind`` (``Phase``, ``Status``) as a Categorical of
     their names; a code ``kind`` has no member for is missing."""
     members = list(kind)
-    position = np.full(256, -1, dtype=np.int16)
+    top = max(member.value for member in members)
+    position = np.full(top + 2, -1, dtype=np.int16)  # the last slot: any code past top
     for k, member in enumerate(members):
         position[member.value] = k
-    flat = np.asarray(codes, dtype=np.uint8).reshape(-1)
+    flat = np.minimum(np.asarray(codes).reshape(-1), top + 1)
     return pandas().Categorical.from_codes(position[flat], categories=[str(m) for m in members])
 
 
