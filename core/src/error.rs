@@ -3,7 +3,7 @@
 
 use core::fmt::{self, Write};
 
-use crate::math::{floor, log10};
+use crate::numerics::math::{floor, log10};
 use crate::plant::fault::FigureText;
 use crate::plant::{PlantFigure, PlantPart};
 use crate::units::{Quantity, Units};

@@ -5,8 +5,8 @@ use super::closed_heater::finite_flow;
 use super::fault::{finite_figures, in_caller_units, refuse, second_law};
 use super::native;
 use super::PlantPart;
-use crate::constants::CRITICAL_PRESSURE;
-use crate::saturation_line::saturation_temperature;
+use crate::equations::saturation_line::saturation_temperature;
+use crate::numerics::constants::CRITICAL_PRESSURE;
 use crate::{Error, Phase, Quantity, State, Units};
 
 const ATTEMPERATOR: PlantPart = PlantPart::single("attemperator");

@@ -22,8 +22,8 @@ use super::mixing::{mix, throttle as throttle_to};
 use super::pump::compress;
 use super::turbine::expand;
 use super::{check_efficiency, native, PlantFigure, PlantPart};
-use crate::constants::CRITICAL_PRESSURE;
-use crate::saturation_line::saturation_temperature;
+use crate::equations::saturation_line::saturation_temperature;
+use crate::numerics::constants::CRITICAL_PRESSURE;
 use crate::units::{BTU_KJ, POUND_MASS_KG};
 use crate::{Error, Phase, Quantity, Saturation, State, Units};
 

@@ -1,0 +1,13 @@
+//! Input pairs: one file per pair of given properties, each taking the
+//! caller's numbers into native units, then locating, starting and refining
+//! the state; [`InputPair`](crate::InputPair) and `State::solve` choose the
+//! pair at run time.
+
+pub(crate) mod hs;
+pub(crate) mod input_pair;
+pub(crate) mod metastable_vapour;
+pub(crate) mod ph_ps;
+pub(crate) mod pt;
+pub(crate) mod rho_t;
+pub(crate) mod saturation;
+pub(crate) mod vu;
