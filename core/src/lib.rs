@@ -43,7 +43,7 @@ pub use read::transport::{surface_tension, thermal_conductivity, viscosity};
 
 pub use error::Error;
 pub use pairs::input_pair::InputPair;
-pub use pairs::ph_ps::Method;
+pub use pairs::method::Method;
 pub use pairs::pt::enthalpy_from_pt;
 pub use pairs::saturation::{min_saturation_pressure, Saturation};
 pub use read::property::Property;

@@ -1,14 +1,16 @@
 //! Which IF97 region holds a (p, T) state: the boundaries of R7-97(2012),
-//! section 4 and Figure 1, and the checks against the range of validity.
+//! section 4 and Figure 1, once (p, T) has passed the range check of
+//! [`range`], and the phase a single-phase state is named by.
 
 use crate::equations::boundary_b23;
 use crate::equations::free_energy::Properties;
 use crate::equations::saturation_line::saturation_pressure;
 use crate::error::Error;
+use crate::locate::range;
 use crate::numerics::constants::*;
 use crate::read::state::Phase;
 use crate::refine::region3_density::Branch;
-use crate::units::{Quantity, Units};
+use crate::units::Units;
 
 /// Where a (p, T) state lies.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -36,29 +38,7 @@ fn liquid_side(p: f64, t: f64) -> bool {
 /// in `units`. A state on the saturation line (within
 /// [`SATURATION_TOLERANCE`]) is taken as liquid, at 623.15 K too.
 pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
-    if !(MIN_TEMPERATURE..=MAX_TEMPERATURE).contains(&t) {
-        return Err(Error::out_of_range(
-            Quantity::Temperature,
-            t,
-            MIN_TEMPERATURE,
-            MAX_TEMPERATURE,
-            units,
-        ));
-    }
-    let max_pressure = if t <= REGION2_MAX_TEMPERATURE {
-        MAX_PRESSURE
-    } else {
-        REGION5_MAX_PRESSURE
-    };
-    if !(MIN_PRESSURE..=max_pressure).contains(&p) {
-        return Err(Error::out_of_range(
-            Quantity::Pressure,
-            p,
-            MIN_PRESSURE,
-            max_pressure,
-            units,
-        ));
-    }
+    range::check(p, t, units)?;
     Ok(if t <= REGION13_TEMPERATURE {
         if liquid_side(p, t) {
             Located::Region1
@@ -115,16 +95,4 @@ pub(crate) fn single_phase(p: f64, t: f64, liquid: bool) -> Phase {
 pub(crate) fn region3_phase(props: &Properties) -> Phase {
     let liquid = props.t < CRITICAL_TEMPERATURE && props.v < 1.0 / CRITICAL_DENSITY;
     single_phase(props.p, props.t, liquid)
-}
-
-/// Whether native `p` (MPa) and `t` (K) lie inside the range of validity,
-/// R7-97(2012) section 1: 273.15 K ≤ T ≤ 1073.15 K at p ≤ 100 MPa, to
-/// 2273.15 K at p ≤ 50 MPa. The check every backward-only result passes.
-pub(crate) fn within_range(p: f64, t: f64) -> bool {
-    let max_pressure = if t <= REGION2_MAX_TEMPERATURE {
-        MAX_PRESSURE
-    } else {
-        REGION5_MAX_PRESSURE
-    };
-    (MIN_TEMPERATURE..=MAX_TEMPERATURE).contains(&t) && (MIN_PRESSURE..=max_pressure).contains(&p)
 }

@@ -37,33 +37,35 @@
 //! it from the backward equations' wet isotherm through the point
 //! ([`crate::start::wet_hs_start`]).
 
+use crate::backward::sr4_04::{S_LIQUID_273, S_LIQUID_623};
 use crate::backward::{r7_97, sr2_01, sr3_03, sr4_04};
 use crate::equations::boundary_b23;
 use crate::equations::free_energy::Properties;
 use crate::equations::saturation_line::{
     saturation_pressure, saturation_pressure_slope_and_curvature,
 };
-use crate::error::{solve_given, Error};
-use crate::locate::regions::{region3_phase, single_phase, within_range};
+use crate::error::Error;
+use crate::locate::range::within_range;
+use crate::locate::regions::{region3_phase, single_phase};
 use crate::numerics::constants::*;
 use crate::numerics::math::{exp, ln};
-use crate::pairs::ph_ps::Method;
+use crate::pairs::method::Method;
+use crate::pairs::ph_ps::{self, Caloric};
 use crate::pairs::saturation::{min_saturation_pressure, Saturation, UNRESOLVED_BELOW_CRITICAL};
 use crate::read::state::{Region, State};
 use crate::read::variable::Variable;
 use crate::refine::inverse::{refine, within_promise, Bounds, Equation, Given};
 use crate::start::wet_hs_start::wet_temperature_start;
+use crate::units::input::solve_given;
 use crate::units::{Quantity, Units};
 
 // Entropies and enthalpies that bound the ranges of the SR4-04 boundary
 // equations, all computed by the release from the basic equations of
-// R7-97 (recalled from IAPWS SR4-04(2014), the ranges of Eqs. 3 to 8).
-/// s'(273.15 K), kJ/(kg·K).
-pub(crate) const S_LIQUID_273: f64 = -1.545_495_919e-4;
+// R7-97 (recalled from IAPWS SR4-04(2014), the ranges of Eqs. 3 to 8); the
+// saturated liquid's, which the wet start shares, live with those lines in
+// `backward::sr4_04`.
 /// s(100 MPa, 623.15 K), kJ/(kg·K): the 1/3 boundary's low end.
 const S_13_100MPA: f64 = 3.397_782_955;
-/// s'(623.15 K), kJ/(kg·K).
-pub(crate) const S_LIQUID_623: f64 = 3.778_281_340;
 /// s''(623.15 K), kJ/(kg·K): the low end of Tsat(h,s).
 const S_VAPOUR_623: f64 = 5.210_887_825;
 /// The entropy range of T_B23(h,s), kJ/(kg·K).
@@ -537,6 +539,10 @@ fn check(place: Place, props: Properties) -> Attempt {
         Place::Five => note(Place::Two, -over(t, REGION2_MAX_TEMPERATURE)),
         Place::Wet => {}
     }
+    // Not `range::within_range`, on purpose: an attempt may stand a
+    // rounding outside the range (the edges above), and a region 2 twin a
+    // hair past 1073.15 K keeps region 2's 100 MPa, so the limit follows
+    // the region solved on rather than T.
     let max_p = if place == Place::Five {
         REGION5_MAX_PRESSURE
     } else {
@@ -1038,7 +1044,7 @@ fn enthalpy_range(s: f64) -> Option<(f64, f64)> {
     let (l, g) = (*triple.liquid().native(), *triple.vapour().native());
     let p_min = min_saturation_pressure();
     let on_isobar = |p: f64| {
-        State::from_ps(p, s, Units::Native)
+        ph_ps::solve(p, s, Caloric::Entropy, Method::Exact, Units::Native)
             .ok()
             .map(|st| st.native().h)
     };

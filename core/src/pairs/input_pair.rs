@@ -2,7 +2,7 @@
 //! dispatch) and for callers who choose the pair at run time.
 
 use crate::error::Error;
-use crate::pairs::ph_ps::Method;
+use crate::pairs::method::Method;
 use crate::read::state::State;
 use crate::units::Units;
 

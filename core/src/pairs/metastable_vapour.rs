@@ -3,10 +3,11 @@
 
 use crate::equations::region2_metastable::{gibbs, MAX_PRESSURE};
 use crate::equations::saturation_line::saturation_temperature;
-use crate::error::{native_input, Error};
+use crate::error::Error;
 use crate::numerics::constants::{MIN_TEMPERATURE, TRIPLE_POINT_PRESSURE};
 use crate::pairs::saturation::Saturation;
 use crate::read::state::{Phase, Region, State};
+use crate::units::input::native_input;
 use crate::units::{Quantity, Units};
 
 /// Equilibrium moisture at the cold limit of the equation, R7-97(2012),

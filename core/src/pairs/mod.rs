@@ -6,6 +6,7 @@
 pub(crate) mod hs;
 pub(crate) mod input_pair;
 pub(crate) mod metastable_vapour;
+pub(crate) mod method;
 pub(crate) mod ph_ps;
 pub(crate) mod pt;
 pub(crate) mod rho_t;

@@ -24,33 +24,19 @@ use crate::equations::free_energy::Properties;
 use crate::equations::free_energy::{IsobarGibbs, ReducedGibbs};
 use crate::equations::saturation_line::{saturation_pressure, saturation_temperature};
 use crate::equations::{region1, region2, region5};
-use crate::error::{solve_given, Error};
-use crate::locate::regions::{region3_phase, single_phase, within_range};
+use crate::error::Error;
+use crate::locate::range::within_range;
+use crate::locate::regions::{region3_phase, single_phase};
 use crate::numerics::constants::*;
 use crate::numerics::math::exp;
+use crate::pairs::method::Method;
 use crate::pairs::saturation::Saturation;
 use crate::read::state::{Region, State};
 use crate::refine::inverse::{
     reaches_aim, refine, reproduces_as_promised, value, Bounds, Equation, Given,
 };
+use crate::units::input::solve_given;
 use crate::units::{Quantity, Units};
-
-/// How an inverse pair is finished.
-#[derive(Clone, Copy, Debug, PartialEq, Eq, Hash, Default)]
-#[repr(u32)]
-pub enum Method {
-    /// Refined on the basic equations until the state reproduces the given
-    /// pair to relative 1e-10 or better (the default).
-    #[default]
-    Exact = 0,
-    /// The IAPWS backward equations' own values, unrefined, for matching
-    /// another IF97 implementation's backward results digit for digit.
-    /// Where IF97 has no backward equation (region 5) the state is exact;
-    /// where the backward state falls outside the range of validity (its
-    /// T below 273.15 K, its p above 100 MPa) the call is
-    /// [`Error::BackwardEquationOutOfRange`].
-    BackwardOnly = 1,
-}
 
 /// The second property of a (p, h) or (p, s) pair.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]

@@ -3,11 +3,13 @@
 
 use crate::backward::sr5_05::{self, SaturationSide};
 use crate::equations::{region1, region2, region3, region5};
-use crate::error::{native_input, Error};
-use crate::locate::regions::{locate, region3_phase, single_phase, within_range, Located};
-use crate::pairs::ph_ps::Method;
+use crate::error::Error;
+use crate::locate::range::within_range;
+use crate::locate::regions::{locate, region3_phase, single_phase, Located};
+use crate::pairs::method::Method;
 use crate::read::state::{Region, State};
 use crate::refine::region3_density;
+use crate::units::input::native_input;
 use crate::units::{Quantity, Units};
 
 impl State {
@@ -38,55 +40,74 @@ impl State {
     /// extrapolation at the edge of a subregion's range) is
     /// [`Error::BackwardEquationOutOfRange`].
     pub fn from_pt_with(p: f64, t: f64, units: Units, method: Method) -> Result<State, Error> {
-        let (p_given, t_given) = (p, t);
-        let p = native_input(units, Quantity::Pressure, p)?;
-        let t = native_input(units, Quantity::Temperature, t)?;
-        let (props, region) = match located(p, t, units, (p_given, t_given))? {
-            Located::Region1 => (region1::gibbs(p, t).properties(p, t), Region::One),
-            Located::Region2 => (region2::gibbs(p, t).properties(p, t), Region::Two),
-            Located::Region5 => (region5::gibbs(p, t).properties(p, t), Region::Five),
-            Located::Region3(branch) if method == Method::BackwardOnly => {
-                // The side `locate` took, not T against Tsat(p) again: on
-                // the line (within the tolerance) the liquid's subregion.
-                let side = if branch == region3_density::Branch::Liquid {
-                    SaturationSide::Liquid
-                } else {
-                    SaturationSide::Vapour
-                };
-                let sub = sr5_05::locate_on_side(p, t, side);
-                let rho = 1.0 / sr5_05::specific_volume_in(sub, p, t);
-                if !(rho.is_finite() && rho > 0.0) {
-                    return Err(Error::BackwardEquationOutOfRange {
-                        equation: "v(p,T) region 3",
-                    });
-                }
-                let props = region3::helmholtz(rho, t).properties(rho, t);
-                // The backward density's pressure may leave the range (near 100 MPa).
-                if !within_range(props.p, t) {
-                    return Err(Error::BackwardEquationOutOfRange {
-                        equation: "v(p,T) region 3",
-                    });
-                }
-                (props, Region::Three)
-            }
-            Located::Region3(branch) => {
-                let rho = region3_density::density(p, t, branch)?;
-                let mut props = region3::helmholtz(rho, t).properties(rho, t);
-                // Report the caller's pressure, which the density reproduces
-                // to its last bit or two, rather than the recomputed one.
-                props.p = p;
-                (props, Region::Three)
-            }
-        };
-        // Named from the state returned: a strict region 3 state's own
-        // pressure may lie across pc from the caller's.
-        let phase = match region {
-            Region::One => single_phase(p, t, true),
-            Region::Three => region3_phase(&props),
-            _ => single_phase(p, t, false),
-        };
-        Ok(State::single_phase(props, region, phase, units))
+        let p_native = native_input(units, Quantity::Pressure, p)?;
+        let t_native = native_input(units, Quantity::Temperature, t)?;
+        let located = located(p_native, t_native, units, (p, t))?;
+        solve_located(p_native, t_native, located, method, units)
     }
+}
+
+/// Solves native (p, T) by `method`; errors reported in `units`. How an
+/// inner solver reaches a (p, T) state: no conversion from the caller's
+/// units, no caller's numbers put back into errors.
+pub(crate) fn solve(p: f64, t: f64, method: Method, units: Units) -> Result<State, Error> {
+    solve_located(p, t, locate(p, t, units)?, method, units)
+}
+
+/// The state at native (p, T), which [`locate`] placed at `located`.
+#[inline]
+fn solve_located(
+    p: f64,
+    t: f64,
+    located: Located,
+    method: Method,
+    units: Units,
+) -> Result<State, Error> {
+    let (props, region) = match located {
+        Located::Region1 => (region1::gibbs(p, t).properties(p, t), Region::One),
+        Located::Region2 => (region2::gibbs(p, t).properties(p, t), Region::Two),
+        Located::Region5 => (region5::gibbs(p, t).properties(p, t), Region::Five),
+        Located::Region3(branch) if method == Method::BackwardOnly => {
+            // The side `locate` took, not T against Tsat(p) again: on
+            // the line (within the tolerance) the liquid's subregion.
+            let side = if branch == region3_density::Branch::Liquid {
+                SaturationSide::Liquid
+            } else {
+                SaturationSide::Vapour
+            };
+            let sub = sr5_05::locate_on_side(p, t, side);
+            let rho = 1.0 / sr5_05::specific_volume_in(sub, p, t);
+            if !(rho.is_finite() && rho > 0.0) {
+                return Err(Error::BackwardEquationOutOfRange {
+                    equation: "v(p,T) region 3",
+                });
+            }
+            let props = region3::helmholtz(rho, t).properties(rho, t);
+            // The backward density's pressure may leave the range (near 100 MPa).
+            if !within_range(props.p, t) {
+                return Err(Error::BackwardEquationOutOfRange {
+                    equation: "v(p,T) region 3",
+                });
+            }
+            (props, Region::Three)
+        }
+        Located::Region3(branch) => {
+            let rho = region3_density::density(p, t, branch)?;
+            let mut props = region3::helmholtz(rho, t).properties(rho, t);
+            // Report the caller's pressure, which the density reproduces
+            // to its last bit or two, rather than the recomputed one.
+            props.p = p;
+            (props, Region::Three)
+        }
+    };
+    // Named from the state returned: a strict region 3 state's own
+    // pressure may lie across pc from the caller's.
+    let phase = match region {
+        Region::One => single_phase(p, t, true),
+        Region::Three => region3_phase(&props),
+        _ => single_phase(p, t, false),
+    };
+    Ok(State::single_phase(props, region, phase, units))
 }
 
 /// Specific enthalpy alone at pressure `p` and temperature `t`, in `units`:

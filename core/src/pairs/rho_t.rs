@@ -12,12 +12,16 @@
 //! valid density range at that temperature.
 
 use crate::equations::boundary_b23;
-use crate::error::{solve_given, Error};
+use crate::error::Error;
+use crate::locate::range;
 use crate::locate::regions::{region3_phase, single_phase};
 use crate::numerics::constants::*;
+use crate::pairs::method::Method;
+use crate::pairs::pt;
 use crate::pairs::saturation::Saturation;
 use crate::read::state::{Region, State};
 use crate::refine::inverse::{refine, Bounds, Equation, Given};
+use crate::units::input::solve_given;
 use crate::units::{Quantity, Units};
 
 impl State {
@@ -59,23 +63,12 @@ fn as_volume_range(error: Error) -> Error {
 
 /// Solves native (ρ, T); errors reported in `units`.
 pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
-    if !(MIN_TEMPERATURE..=MAX_TEMPERATURE).contains(&t) {
-        return Err(Error::out_of_range(
-            Quantity::Temperature,
-            t,
-            MIN_TEMPERATURE,
-            MAX_TEMPERATURE,
-            units,
-        ));
-    }
-    let p_max = if t <= REGION2_MAX_TEMPERATURE {
-        MAX_PRESSURE
-    } else {
-        REGION5_MAX_PRESSURE
-    };
+    range::check_temperature(t, units)?;
+    let p_max = range::max_pressure(t);
     // The densest state at this temperature, for range checks and messages.
     let rho_max = || {
-        crate::State::from_pt(p_max, t, Units::Native).map_or(f64::INFINITY, |s| 1.0 / s.native().v)
+        pt::solve(p_max, t, Method::Exact, Units::Native)
+            .map_or(f64::INFINITY, |s| 1.0 / s.native().v)
     };
     let rho_min = 1e3 * MIN_PRESSURE / (SPECIFIC_GAS_CONSTANT * t);
     let out_of_range = || Error::out_of_range(Quantity::Density, rho, rho_min, rho_max(), units);

@@ -13,11 +13,12 @@ use crate::equations::saturation_line::{
     saturation_pressure, saturation_pressure_slope, saturation_temperature,
 };
 use crate::equations::{region1, region2, region3};
-use crate::error::{native_input, Error};
+use crate::error::Error;
 use crate::numerics::constants::*;
 use crate::read::state::{Phase, Region, State};
 use crate::read::variable::Variable;
 use crate::refine::region3_density::{density, density_near, Branch};
+use crate::units::input::native_input;
 use crate::units::{Quantity, Units};
 
 /// Lowest saturation pressure of the range of validity, psat(273.15 K),

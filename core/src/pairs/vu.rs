@@ -23,7 +23,8 @@
 
 use crate::equations::free_energy::Properties;
 use crate::equations::saturation_line::{saturation_pressure, saturation_pressure_slope};
-use crate::error::{solve_given, Error};
+use crate::error::Error;
+use crate::locate::range;
 use crate::locate::regions::{locate, region3_phase, single_phase, Located};
 use crate::numerics::constants::*;
 use crate::numerics::math::ln;
@@ -34,6 +35,7 @@ use crate::refine::inverse::{
     refine, reproduces_as_promised, within_promise, Bounds, Equation, Given,
 };
 use crate::refine::region3_density::Branch;
+use crate::units::input::solve_given;
 use crate::units::{Quantity, Units};
 
 impl State {
@@ -473,12 +475,7 @@ fn accept(equation: Equation, props: &Properties, units: Units) -> Option<State>
     // fixes p only to its conditioning); that is not extrapolation. T it
     // fixes to the iteration's precision: beyond 1e-12 it is.
     let t = props.t.clamp(MIN_TEMPERATURE, MAX_TEMPERATURE);
-    let p_max = if t <= REGION2_MAX_TEMPERATURE {
-        MAX_PRESSURE
-    } else {
-        REGION5_MAX_PRESSURE
-    };
-    let p = props.p.min(p_max);
+    let p = props.p.min(range::max_pressure(t));
     if (t - props.t).abs() > 1e-12 * t || (p - props.p).abs() > 1e-9 * p {
         return None;
     }

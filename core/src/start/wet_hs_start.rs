@@ -20,14 +20,10 @@
 //! backward equations' inconsistencies (hundredths of a kelvin): it is a
 //! start, which the caller refines on the basic equations, never a result.
 
+use crate::backward::sr4_04::{S_CRITICAL, S_LIQUID_273, S_LIQUID_623};
 use crate::backward::{r7_97, sr2_01, sr3_03, sr4_04};
 use crate::equations::saturation_line::saturation_temperature;
 use crate::numerics::constants::{CRITICAL_PRESSURE, CRITICAL_TEMPERATURE};
-use crate::pairs::hs::{S_LIQUID_273, S_LIQUID_623};
-
-/// s_c, kJ/(kg·K): the upper end of h'_3(s) (IAPWS SR4-04(2014), the range
-/// of Eq. (4), recalled), where the line meets the critical point.
-const S_CRITICAL: f64 = 4.412_021_482_234_76;
 
 /// Far looser than what the exact iteration needs from a start: the
 /// backward equations are good to about 1e-5 here anyway.

@@ -6,6 +6,8 @@
 //! definitions of the pound, the foot and standard gravity (SP 811, B.8
 //! footnotes), the exact value is computed from those definitions here.
 
+pub(crate) mod input;
+
 use core::fmt;
 
 /// The unit system of the numbers a caller passes in and reads out.
