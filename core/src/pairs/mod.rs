@@ -3,12 +3,12 @@
 //! the state; [`InputPair`](crate::InputPair) and `State::solve` choose the
 //! pair at run time.
 
-pub(crate) mod hs;
+mod hs;
 pub(crate) mod input_pair;
-pub(crate) mod metastable_vapour;
+mod metastable_vapour;
 pub(crate) mod method;
 pub(crate) mod ph_ps;
 pub(crate) mod pt;
-pub(crate) mod rho_t;
+mod rho_t;
 pub(crate) mod saturation;
-pub(crate) mod vu;
+mod vu;

@@ -2,10 +2,10 @@
 //! (properties by name, partial derivatives, transport properties, the
 //! distance from the saturation line, the printed form).
 
-pub(crate) mod derivatives;
+mod derivatives;
 pub(crate) mod property;
-pub(crate) mod saturation_margin;
+mod saturation_margin;
 pub(crate) mod state;
-pub(crate) mod state_display;
+mod state_display;
 pub(crate) mod transport;
 pub(crate) mod variable;
