@@ -18,58 +18,39 @@
 #[cfg(feature = "std")]
 extern crate std;
 
-mod math;
-mod series;
-
+// One folder per stage of the pipeline (DEVELOPERS.md, "Layout of
+// core/src"): the caller's pair and units, into native units, located,
+// started, refined, then read in the caller's units.
 pub mod backward;
-pub mod boundary_b23;
-mod bracketed_root;
-pub mod constants;
-mod derivatives;
+mod equations;
 mod error;
-pub mod free_energy;
-mod gibbs_parts;
-mod input_pair;
-mod inverse;
-mod metastable_vapour;
-mod pair_hs;
-mod pair_ph_ps;
-mod pair_pt;
-mod pair_rho_t;
-mod pair_vu;
+mod locate;
+mod numerics;
+mod pairs;
 pub mod plant;
-mod property;
-pub mod region1;
-pub mod region2;
-pub mod region2_metastable;
-pub mod region3;
-mod region3_density;
-pub mod region5;
-mod regions;
-mod saturated_density_estimate;
-mod saturation;
-pub mod saturation_line;
-mod saturation_margin;
-mod state;
-mod state_display;
-pub mod surface_tension;
-pub mod thermal_conductivity;
-mod transport;
+mod read;
+mod refine;
+mod start;
 pub mod units;
-mod variable;
-pub mod viscosity;
 mod vocabulary;
-mod wet_hs_start;
+
+// The public modules keep the paths they had before the stages were folders.
+pub use equations::{
+    boundary_b23, free_energy, region1, region2, region2_metastable, region3, region5,
+    saturation_line,
+};
+pub use numerics::constants;
+pub use read::transport::{surface_tension, thermal_conductivity, viscosity};
 
 pub use error::Error;
-pub use input_pair::InputPair;
-pub use pair_ph_ps::Method;
-pub use pair_pt::enthalpy_from_pt;
-pub use property::Property;
-pub use saturation::{min_saturation_pressure, Saturation};
-pub use state::{Phase, Region, State};
+pub use pairs::input_pair::InputPair;
+pub use pairs::method::Method;
+pub use pairs::pt::enthalpy_from_pt;
+pub use pairs::saturation::{min_saturation_pressure, Saturation};
+pub use read::property::Property;
+pub use read::state::{Phase, Region, State};
+pub use read::variable::Variable;
 pub use units::{Quantity, Units};
-pub use variable::Variable;
 pub use vocabulary::{Reading, Request, Status};
 
 /// The README's Rust example, compiled and run as a doctest.

@@ -1,7 +1,7 @@
 //! The extremes of v, ρ and u over regions 1, 3 and 5 (and of u over
 //! region 2's densest steam), which the (v, u)
 //! solver uses to skip regions that cannot hold a state
-//! (`core/src/pair_vu.rs`, `could_hold`). They follow from the basic
+//! (`core/src/pairs/vu.rs`, `could_hold`). They follow from the basic
 //! equations of IAPWS R7-97(2012); here they are measured along each
 //! region's boundary lines, where the extremes lie (v, ρ and u are monotonic
 //! along isobars and isotherms inside a single-phase region).
@@ -103,7 +103,7 @@ fn region5_is_above_v_0_009_and_u_3450() {
 
 #[test]
 fn the_dome_divides_used_by_the_pressure_pairs_hold() {
-    // core/src/pair_ph_ps.rs decides the side of the dome from one
+    // core/src/pairs/ph_ps.rs decides the side of the dome from one
     // saturated phase, relying on h' < 2000 < h'' and s' < 4.5 < s'' along
     // the whole line up to 623.15 K.
     for k in 0..=N {
@@ -117,7 +117,7 @@ fn the_dome_divides_used_by_the_pressure_pairs_hold() {
 
 #[test]
 fn isobaric_heat_capacity_of_regions_1_and_2_stays_above_1_8() {
-    // core/src/pair_ph_ps.rs keeps a state refined in its expected region
+    // core/src/pairs/ph_ps.rs keeps a state refined in its expected region
     // when its temperature lies 1e-7·T inside the region's span, which
     // holds z inside the boundary's z because h and s grow with T at the
     // rate cp and cp/T, with cp ≥ 1.8 kJ/(kg·K). cp is smallest in cold,

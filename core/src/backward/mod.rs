@@ -20,12 +20,13 @@ pub(crate) type Term = (i32, i32, f64);
 
 /// `Σ nᵢ · x^Iᵢ · y^Jᵢ` over a constant table, the shape shared by most
 /// backward equations once their reduced, shifted variables `x` and `y` are
-/// formed. The table is arranged at compile time (see [`crate::series`]):
+/// formed. The table is arranged at compile time (see [`crate::numerics::series`]):
 /// only the powers it uses are computed, each once, and the sum is
 /// straight-line code.
 macro_rules! sum_terms {
     ($table:expr, $x:expr, $y:expr) => {{
-        const SERIES: $crate::series::Series = $crate::series::Series::for_table(&$table);
+        const SERIES: $crate::numerics::series::Series =
+            $crate::numerics::series::Series::for_table(&$table);
         SERIES.value($x, $y)
     }};
 }

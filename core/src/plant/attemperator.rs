@@ -4,8 +4,8 @@
 use super::fault::{finite_figures, in_caller_units, refuse, second_law};
 use super::PlantPart;
 use super::{finite_flow, native};
-use crate::constants::CRITICAL_PRESSURE;
-use crate::saturation_line::saturation_temperature;
+use crate::equations::saturation_line::saturation_temperature;
+use crate::numerics::constants::CRITICAL_PRESSURE;
 use crate::{Error, Phase, Quantity, State, Units};
 
 const ATTEMPERATOR: PlantPart = PlantPart::single("attemperator");

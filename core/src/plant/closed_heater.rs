@@ -9,8 +9,8 @@
 use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
 use super::{finite_flow, native};
 use super::{PlantFigure, PlantPart};
-use crate::constants::CRITICAL_PRESSURE;
-use crate::saturation_line::saturation_temperature;
+use crate::equations::saturation_line::saturation_temperature;
+use crate::numerics::constants::CRITICAL_PRESSURE;
 use crate::{Error, Phase, Quantity, Saturation, State, Units};
 
 /// Relative rounding between a saturation temperature and the same

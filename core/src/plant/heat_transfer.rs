@@ -5,8 +5,8 @@
 use super::fault::{finite_figures, refuse_with};
 use super::{finite_flow, native};
 use super::{PlantFigure, PlantPart};
-use crate::constants::MIN_TEMPERATURE;
-use crate::saturation_line::saturation_temperature;
+use crate::equations::saturation_line::saturation_temperature;
+use crate::numerics::constants::MIN_TEMPERATURE;
 use crate::{Error, Quantity, Saturation, State, Units};
 
 const CONDENSER: PlantPart = PlantPart::single("condenser");

@@ -5,8 +5,8 @@
 use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, TOO_SMALL_A_STEP};
 use super::{check_efficiency, native};
 use super::{PlantFigure, PlantPart};
-use crate::constants::CRITICAL_PRESSURE;
-use crate::saturation_line::saturation_temperature;
+use crate::equations::saturation_line::saturation_temperature;
+use crate::numerics::constants::CRITICAL_PRESSURE;
 use crate::{Error, Quantity, State, Units};
 
 /// How a stand-alone section names itself in a refusal.

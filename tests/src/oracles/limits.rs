@@ -37,8 +37,9 @@ pub fn round_trip_tolerance(quantity: Quantity, units: Units, given: f64) -> f64
 
 /// The range of validity (R7-97(2012), section 4): 273.15 K ≤ T ≤
 /// 1073.15 K at p ≤ 100 MPa, 1073.15 K < T ≤ 2273.15 K at p ≤ 50 MPa, and
-/// ebullio's floor of 1e-12 MPa (constants.rs). A solved state may stand
-/// outside it only by what the promised round trip leaves open: inputs
+/// ebullio's floor of 1e-12 MPa (core/src/numerics/constants.rs). A solved
+/// state may stand outside it only by what the promised round trip leaves
+/// open: inputs
 /// reproduced to relative 1e-10 fix T to about that (cp/T and cp are
 /// bounded away from 0 at the range's edges), but p only to ~1e-9 where it
 /// is an output of (h, s) or (v, u) (a liquid's h barely moves with p; an

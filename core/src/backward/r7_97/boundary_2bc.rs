@@ -14,7 +14,7 @@
 //! property equation and carries no uncertainty of its own. It only decides
 //! which of Eqs. (23) and (24) applies.
 
-use crate::math::sqrt;
+use crate::numerics::math::sqrt;
 
 /// Reducing pressure p*, MPa.
 const P_STAR: f64 = 1.0;

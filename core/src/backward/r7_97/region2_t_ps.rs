@@ -17,7 +17,7 @@
 //! the three equations keep within it.
 
 use crate::backward::{sum_terms, Term};
-use crate::math::sqrt;
+use crate::numerics::math::sqrt;
 
 /// Reducing pressure p*, MPa.
 const P_STAR: f64 = 1.0;

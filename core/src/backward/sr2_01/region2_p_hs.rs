@@ -23,7 +23,7 @@
 
 use super::boundary_2ab_hs::enthalpy_boundary_2ab;
 use crate::backward::{sum_terms, Term};
-use crate::math::powi;
+use crate::numerics::math::powi;
 
 /// Reducing pressure p* of subregion 2a, MPa.
 const P_STAR_2A: f64 = 4.0;

@@ -13,7 +13,7 @@
 //! equations by the solver.
 
 use crate::backward::{sum_terms, Term};
-use crate::math::exp;
+use crate::numerics::math::exp;
 
 /// Reducing enthalpy h*, kJ/kg.
 const H_STAR: f64 = 2800.0;

@@ -19,8 +19,8 @@
 //! Validity and accuracy are those of the subregion the parameters belong
 //! to; see [`super::specific_volume`].
 
-use crate::math::{exp, sqrt};
-use crate::series::Series;
+use crate::numerics::math::{exp, sqrt};
+use crate::numerics::series::Series;
 
 /// The inner exponent c or d applied to a shifted reduced variable.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]

@@ -17,7 +17,7 @@
 use super::subregion_boundaries::{
     t_3ab, t_3cd, t_3ef, t_3gh, t_3ij, t_3jk, t_3mn, t_3op, t_3qu, t_3rx, t_3uv, t_3wx,
 };
-use crate::saturation_line::saturation_temperature;
+use crate::equations::saturation_line::saturation_temperature;
 
 /// A subregion of region 3 with its own v(p,T) backward equation.
 ///

@@ -19,7 +19,7 @@
 //! stated for them; the release's check values (Table 3) are reproduced by
 //! the conformance tests.
 
-use crate::math::ln;
+use crate::numerics::math::ln;
 
 /// Σ nᵢ (ln p)^Iᵢ with the exponents I = 0, 1, 2, −1, −2 of Eq. (1).
 #[inline]

@@ -16,7 +16,7 @@
 
 use super::equation::{Equation, Outer, Root};
 use crate::backward::Term;
-use crate::series::Series;
+use crate::numerics::series::Series;
 
 /// Subregion 3a: v* = 0.0024 m³/kg, p* = 100 MPa, T* = 760 K, N = 30,
 /// a = 0.085, b = 0.817, c = 1, d = 1, e = 1.

@@ -16,7 +16,7 @@
 
 use super::equation::{Equation, Outer, Root};
 use crate::backward::Term;
-use crate::series::Series;
+use crate::numerics::series::Series;
 
 /// Subregion 3l: v* = 0.0026 m³/kg, p* = 24 MPa, T* = 650 K, N = 43,
 /// a = 0.908, b = 0.989, c = 1, d = 1, e = 4.

@@ -17,7 +17,7 @@
 
 use super::equation::{Equation, Outer, Root};
 use crate::backward::Term;
-use crate::series::Series;
+use crate::numerics::series::Series;
 
 /// Subregion 3u: v* = 0.0026 m³/kg, p* = 23 MPa, T* = 650 K, N = 38,
 /// a = 0.902, b = 0.988, c = 1, d = 1, e = 1.

@@ -1,0 +1,80 @@
+//! The two-part Gibbs equations of regions 2 and 5 (and the metastable
+//! vapour): γ = γ° + γʳ, an ideal-gas part and a residual part.
+//!
+//! γ° = ln π + Σ n°ᵢ τ^J°ᵢ and γʳ = Σ nᵢ π^Iᵢ (τ − τ₀)^Jᵢ, R7-97(2012)
+//! Eqs. 16, 17, 33 and 34. Each region supplies its tables and τ₀.
+
+use crate::equations::free_energy::{IsobarGibbs, ReducedGibbs};
+use crate::numerics::math::ln;
+use crate::numerics::series::{Series, Term};
+
+/// A region's two series, arranged at compile time.
+pub(crate) struct GibbsParts {
+    ideal: Series,
+    residual: Series,
+    /// τ₀ of the residual's temperature variable τ − τ₀.
+    tau_shift: f64,
+}
+
+impl GibbsParts {
+    /// From the tables: `ideal` holds (0, J°ᵢ, n°ᵢ), lifted by `ideal_shift`
+    /// so no exponent is negative, and `residual` holds (Iᵢ, Jᵢ, nᵢ).
+    pub(crate) const fn new(
+        ideal: &[Term],
+        ideal_shift: i32,
+        residual: &[Term],
+        tau_shift: f64,
+    ) -> GibbsParts {
+        GibbsParts {
+            ideal: Series::new(ideal, ideal_shift),
+            residual: Series::new(residual, 0),
+            tau_shift,
+        }
+    }
+
+    /// γ = γ° + γʳ with reduced derivatives at π, τ.
+    #[inline(always)]
+    pub(crate) fn gibbs(&self, pi: f64, tau: f64) -> ReducedGibbs {
+        let (o, tp) = self.ideal.sums(1.0, tau);
+        let scale = 1.0 / tp;
+        let y = tau - self.tau_shift;
+        let (r, _) = self.residual.sums(pi, y);
+        let ty = tau / y;
+        ReducedGibbs {
+            g: ln(pi) + o.value * scale + r.value,
+            // π·γ°_π = 1 and π²·γ°_ππ = −1; the ideal part has no mixed term.
+            g_p: 1.0 + r.x,
+            g_pp: -1.0 + r.xx,
+            g_t: o.y * scale + ty * r.y,
+            g_tt: o.yy * scale + ty * ty * r.yy,
+            g_pt: ty * r.xy,
+        }
+    }
+
+    /// γ and its τ derivatives up to the third at π, τ.
+    #[inline(always)]
+    pub(crate) fn isobar(&self, pi: f64, tau: f64) -> IsobarGibbs {
+        let (o, tp) = self.ideal.isobar_sums(1.0, tau);
+        let scale = 1.0 / tp;
+        let y = tau - self.tau_shift;
+        let (r, _) = self.residual.isobar_sums(pi, y);
+        let ty = tau / y;
+        IsobarGibbs {
+            g: ln(pi) + o.value * scale + r.value,
+            g_t: o.y * scale + ty * r.y,
+            g_tt: o.yy * scale + ty * ty * r.yy,
+            g_ttt: o.yyy * scale + ty * ty * ty * r.yyy,
+        }
+    }
+
+    /// τ·γ_τ alone, for the enthalpy-only path; the same operations as
+    /// [`GibbsParts::gibbs`] so both paths agree to the bit.
+    #[inline(always)]
+    pub(crate) fn tau_derivative(&self, pi: f64, tau: f64) -> f64 {
+        let (o_y, tp) = self.ideal.y_weighted_sum(1.0, tau);
+        let scale = 1.0 / tp;
+        let y = tau - self.tau_shift;
+        let (r_y, _) = self.residual.y_weighted_sum(pi, y);
+        o_y * scale + tau / y * r_y
+    }
+}
