@@ -363,3 +363,52 @@ fn the_side_of_a_boundary_is_the_side_of_the_given_value() {
         }
     }
 }
+
+/// Found by fuzzing `State::solve` (PressureEnthalpy, PressureEntropy,
+/// exact): at p = psat(623.15 K) itself, an h or s between region 1's and
+/// region 3's saturated liquid there came back as region 3's saturated
+/// liquid (h off by 1.3e-2 kJ/kg) because Tsat(p) rounds a few ulps above
+/// 623.15 K. It is wet steam of 623.15 K (regions 1 and 2, R7-97(2012)
+/// section 6), reproducing the given value. Also across z' to z'' at that
+/// pressure, in every unit system the fuzzer used.
+#[test]
+fn the_623_15_k_isobar_keeps_its_wet_states() {
+    let cases = [
+        (
+            InputPair::PressureEnthalpy,
+            2397.3525897687987,
+            718.3399276490369,
+            Units::UsCustomary,
+        ),
+        (
+            InputPair::PressureEntropy,
+            16.529164252604392,
+            3.7782813395442965,
+            Units::Native,
+        ),
+    ];
+    for (pair, a, b, units) in cases {
+        let state = State::solve(pair, a, b, units, Method::Exact).unwrap();
+        let back = match pair {
+            InputPair::PressureEnthalpy => state.enthalpy(),
+            _ => state.entropy(),
+        };
+        assert!(
+            (back - b).abs() <= 1e-10 * b.abs(),
+            "{pair:?} {b} → {state:?}"
+        );
+        assert!(state.quality().is_some(), "{state:?}");
+    }
+    let sat = ebullio::Saturation::at_temperature(623.15, Units::Native).unwrap();
+    let p = sat.pressure();
+    for k in 0..=20 {
+        let x = f64::from(k) / 20.0;
+        let wet = sat.mixture(x).unwrap();
+        let h = wet.enthalpy();
+        let b = State::from_ph(p, h, Units::Native).unwrap();
+        assert!((b.enthalpy() - h).abs() <= 1e-10 * h, "x = {x}: {b:?}");
+        let s = wet.entropy();
+        let b = State::from_ps(p, s, Units::Native).unwrap();
+        assert!((b.entropy() - s).abs() <= 1e-10 * s, "x = {x}: {b:?}");
+    }
+}

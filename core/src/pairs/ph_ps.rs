@@ -190,18 +190,30 @@ pub(crate) fn solve(
         Location::Single(Equation::Region2)
     } else if p <= saturation_pressure(REGION13_TEMPERATURE) {
         let t_sat = saturation_temperature(p);
+        // At psat(623.15 K) itself Tsat(p) may round a few ulps above
+        // 623.15 K, where the saturated phases are region 3's: this branch
+        // decides on regions 1 and 2, so the wet state is 623.15 K's
+        // (found by fuzzing `State::solve`: a z between region 1's and
+        // region 3's z' came back as region 3's saturated liquid).
+        let saturation = || {
+            if t_sat > REGION13_TEMPERATURE {
+                Saturation::at_temperature(REGION13_TEMPERATURE, Units::Native)
+            } else {
+                Saturation::at_pressure(p, Units::Native)
+            }
+        };
         // One saturated phase decides: below the divide z cannot exceed
         // the vapour's value, above it cannot fall short of the liquid's.
         if z <= caloric.dome_divide() {
             if z < z_at(Equation::Region1, t_sat) {
                 Location::Single(Equation::Region1)
             } else {
-                Location::Wet(Saturation::at_pressure(p, Units::Native)?, z)
+                Location::Wet(saturation()?, z)
             }
         } else if z > z_at(Equation::Region2, t_sat) {
             Location::Single(Equation::Region2)
         } else {
-            Location::Wet(Saturation::at_pressure(p, Units::Native)?, z)
+            Location::Wet(saturation()?, z)
         }
     } else if z <= z_at(Equation::Region1, REGION13_TEMPERATURE) {
         Location::Single(Equation::Region1)
