@@ -235,8 +235,17 @@ fn region2_states_at_the_top_corner_come_back_inside_the_range() {
         1410.8504635480635,
         Units::UsCustomary,
     );
-    let mut edge_states = vec![fuzzed];
-    for p in [100.0, 100.0 - 1e-9, 99.99, 99.0, 90.0] {
+    // The same at region 2's edge at 1073.15 K and 50 MPa: (0.14535366757658874
+    // ft³/lbm, 1492.8004119070433 Btu/lbm) converts a rounding above the
+    // 1073.15 K isotherm's u, which had ruled region 2 out.
+    let fuzzed_at_50 = comes_back_from(
+        "the fuzz finding at 50 MPa",
+        0.14535366757658874,
+        1492.8004119070433,
+        Units::UsCustomary,
+    );
+    let mut edge_states = vec![fuzzed, fuzzed_at_50];
+    for p in [100.0, 100.0 - 1e-9, 99.99, 99.0, 90.0, 50.0, 50.0 - 1e-9] {
         for t in [1073.15, 1073.15 - 1e-9, 1073.0, 1050.0] {
             let a = State::from_pt(p, t, NATIVE).unwrap();
             edge_states.push(comes_back(&format!("({p} MPa, {t} K)"), &a));

@@ -212,7 +212,9 @@ fn single_phase_state(equation: Equation, v: f64, u: f64, units: Units) -> Optio
                 let p =
                     (SPECIFIC_GAS_CONSTANT * REGION2_MAX_TEMPERATURE / (1e3 * v)).min(MAX_PRESSURE);
                 if let Ok(hot) = pressure_on_isotherm(equation, v, REGION2_MAX_TEMPERATURE, p) {
-                    if hot.u < u {
+                    // Within the promise of it, u is the isotherm's own
+                    // (a rounding of units): region 2's edge state.
+                    if hot.u < u && !within_promise(Given::InternalEnergy, hot.u, u) {
                         return None;
                     }
                 }
