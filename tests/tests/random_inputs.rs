@@ -333,3 +333,75 @@ fn cycle_solver_within_physical_limits() {
     eprintln!("cycles: {solved} solved");
     finish(findings, "cycle solver");
 }
+
+/// The bindings' vocabulary in the core (`Request`, `Reading`, `Status`)
+/// over adversarial inputs: a request solves the same state, to the bit,
+/// as `State::solve`; every reading is a finite number, absent, or a
+/// refusal; `Request::read` agrees with reading the solved state; every
+/// refusal maps to a published, non-OK status that its code gives back.
+#[test]
+fn the_binding_vocabulary_agrees_with_the_core() {
+    use ebullio::{Reading, Request, State, Status};
+    let (mut draw, mut findings) = start("vocabulary");
+    for pair in InputPair::ALL {
+        for units in Units::ALL {
+            for method in METHODS {
+                let request = Request::from_numbers(pair as u32, units as u32, method as u32)
+                    .expect("every published pair, units and method decodes");
+                for _ in 0..RAW_PER_COMBINATION / 10 {
+                    let case = raw_case(&mut draw, pair, units, method);
+                    findings.case();
+                    let (a, b) = (case.a, case.b);
+                    let by_request = request.solve(a, b);
+                    let direct = State::solve(pair, a, b, units, method);
+                    let what = || format!("{request:?} at ({a:e}, {b:e})");
+                    if format!("{by_request:?}") != format!("{direct:?}") {
+                        findings.record("request solves another state", what);
+                    }
+                    match &direct {
+                        Ok(state) => {
+                            for reading in Reading::ALL {
+                                let read = state.reading(reading);
+                                if matches!(read, Ok(Some(x)) if !x.is_finite()) {
+                                    findings.record("a reading is not finite", || {
+                                        format!("{reading:?} of {}", what())
+                                    });
+                                }
+                                let by_request = request.read(reading, a, b);
+                                let same = match (&read, &by_request) {
+                                    (Ok(Some(x)), Ok(Some(y))) => x.to_bits() == y.to_bits(),
+                                    _ => format!("{read:?}") == format!("{by_request:?}"),
+                                };
+                                if !same {
+                                    findings.record("request reads another value", || {
+                                        format!("{reading:?} of {}", what())
+                                    });
+                                }
+                            }
+                        }
+                        Err(e) => {
+                            let status = Status::of(e);
+                            let published = Status::OF_ERRORS.contains(&status)
+                                && Status::from_code(status as i32) == Some(status);
+                            if status == Status::Ok || !published {
+                                findings.record("a refusal has no published status", what);
+                            }
+                        }
+                    }
+                }
+            }
+        }
+    }
+    for n in [0, 1, 9, 10, 99, u32::MAX] {
+        for (p, u, m) in [(n, 0, 0), (1, n, 0), (1, 0, n)] {
+            if let Err(status) = Request::from_numbers(p, u, m) {
+                if status == Status::Ok || Status::from_code(status as i32) != Some(status) {
+                    findings.record("an unknown number has no published status", || {
+                        format!("({p}, {u}, {m})")
+                    });
+                }
+            }
+        }
+    }
+    finish(findings, "vocabulary");
+}
