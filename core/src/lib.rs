@@ -25,6 +25,7 @@ pub mod backward;
 mod equations;
 mod error;
 mod locate;
+pub mod measured;
 mod numerics;
 mod pairs;
 pub mod plant;

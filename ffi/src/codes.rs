@@ -228,6 +228,16 @@ pub enum EbullioQuantity {
     Diffusivity = 17,
     /// Surface tension.
     SurfaceTension = 18,
+    /// Mass flow (kg/s; lbm/h in US customary units).
+    MassFlow = 19,
+    /// Length (m; mm in metric engineering, in in US customary units).
+    Length = 20,
+    /// Heat flow (kW; W in SI base, Btu/h in US customary units).
+    HeatFlow = 21,
+    /// Electrical power (kW; W in SI base units).
+    Power = 22,
+    /// Heat rate (kJ/kWh; Btu/kWh in US customary units).
+    HeatRate = 23,
 }
 
 /// Decodes the request of a state call: input pair, unit system and
@@ -307,6 +317,11 @@ pub(crate) fn c_quantity(q: Quantity) -> EbullioQuantity {
         Quantity::ThermalConductivity => EbullioQuantity::ThermalConductivity,
         Quantity::Diffusivity => EbullioQuantity::Diffusivity,
         Quantity::SurfaceTension => EbullioQuantity::SurfaceTension,
+        Quantity::MassFlow => EbullioQuantity::MassFlow,
+        Quantity::Length => EbullioQuantity::Length,
+        Quantity::HeatFlow => EbullioQuantity::HeatFlow,
+        Quantity::Power => EbullioQuantity::Power,
+        Quantity::HeatRate => EbullioQuantity::HeatRate,
     }
 }
 

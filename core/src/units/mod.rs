@@ -64,6 +64,21 @@ pub enum Quantity {
     SurfaceTension,
     /// Vapour mass fraction of wet steam; the same in every system.
     Quality,
+    /// Mass flow: kg/s, and lbm/h in US customary units (common practice
+    /// for plant tests).
+    MassFlow,
+    /// A length (a pipe or meter bore): m natively and in SI base units, mm
+    /// in metric engineering units, inches in US customary units.
+    Length,
+    /// A heat flow (a duty, mass flow times specific enthalpy): kW, W in
+    /// SI base units, Btu/h in US customary units.
+    HeatFlow,
+    /// Electrical power (a generator's output): kW, W in SI base units.
+    Power,
+    /// Heat rate, heat supplied per electrical energy delivered: kJ/kWh,
+    /// Btu/kWh in US customary units (the trade's units; no coherent SI
+    /// unit is in use).
+    HeatRate,
 }
 
 impl Quantity {
@@ -88,6 +103,11 @@ impl Quantity {
             Quantity::Diffusivity => "diffusivity",
             Quantity::SurfaceTension => "surface tension",
             Quantity::Quality => "quality",
+            Quantity::MassFlow => "mass flow",
+            Quantity::Length => "length",
+            Quantity::HeatFlow => "heat flow",
+            Quantity::Power => "power",
+            Quantity::HeatRate => "heat rate",
         }
     }
 }
@@ -110,6 +130,11 @@ enum UnitKind {
     ThermalConductivity,
     Diffusivity,
     SurfaceTension,
+    MassFlow,
+    Length,
+    HeatFlow,
+    Power,
+    HeatRate,
     Dimensionless,
 }
 
@@ -133,6 +158,11 @@ impl Quantity {
             Quantity::Diffusivity => UnitKind::Diffusivity,
             Quantity::SurfaceTension => UnitKind::SurfaceTension,
             Quantity::Quality => UnitKind::Dimensionless,
+            Quantity::MassFlow => UnitKind::MassFlow,
+            Quantity::Length => UnitKind::Length,
+            Quantity::HeatFlow => UnitKind::HeatFlow,
+            Quantity::Power => UnitKind::Power,
+            Quantity::HeatRate => UnitKind::HeatRate,
         }
     }
 }
@@ -189,6 +219,8 @@ fn units_per_native(units: Units, quantity: Quantity) -> f64 {
         (Units::SiBase, Q::Pressure) => 1e6,
         (Units::SiBase, Q::SpecificEnergy | Q::SpecificEntropy) => 1e3,
         (Units::SiBase, Q::Compressibility) => 1e-6,
+        (Units::SiBase, Q::HeatFlow | Q::Power) => 1e3,
+        (Units::MetricEngineering, Q::Length) => 1e3,
         (Units::MetricEngineering, Q::Pressure) => 10.0,
         (Units::MetricEngineering, Q::Compressibility) => 0.1,
         (Units::SiBase | Units::MetricEngineering, _) => 1.0,
@@ -205,6 +237,11 @@ fn units_per_native(units: Units, quantity: Quantity) -> f64 {
         (Units::UsCustomary, Q::ThermalConductivity) => 1.0 / BTU_PER_H_FT_F_W_PER_M_K,
         (Units::UsCustomary, Q::Diffusivity) => 1.0 / FT2_PER_S_M2_PER_S,
         (Units::UsCustomary, Q::SurfaceTension) => 1.0 / LBF_PER_FT_N_PER_M,
+        (Units::UsCustomary, Q::MassFlow) => 3600.0 / POUND_MASS_KG,
+        (Units::UsCustomary, Q::Length) => 12.0 / FOOT_M,
+        (Units::UsCustomary, Q::HeatFlow) => 3600.0 / BTU_KJ,
+        (Units::UsCustomary, Q::Power) => 1.0,
+        (Units::UsCustomary, Q::HeatRate) => 1.0 / BTU_KJ,
     }
 }
 
@@ -231,6 +268,13 @@ impl Units {
             }
             _ => value * units_per_native(self, quantity),
         }
+    }
+
+    /// How many of these units make one native unit of `quantity` in a
+    /// difference or a derivative (a temperature's without its offset).
+    #[inline]
+    pub(crate) fn per_native(self, quantity: Quantity) -> f64 {
+        units_per_native(self, quantity)
     }
 
     /// The unit symbol of `quantity` in these units, as printed in messages.
@@ -271,6 +315,18 @@ impl Units {
             (_, Q::Diffusivity) => "m²/s",
             (Units::UsCustomary, Q::SurfaceTension) => "lbf/ft",
             (_, Q::SurfaceTension) => "N/m",
+            (Units::UsCustomary, Q::MassFlow) => "lbm/h",
+            (_, Q::MassFlow) => "kg/s",
+            (Units::MetricEngineering, Q::Length) => "mm",
+            (Units::UsCustomary, Q::Length) => "in",
+            (_, Q::Length) => "m",
+            (Units::SiBase, Q::HeatFlow) => "W",
+            (Units::UsCustomary, Q::HeatFlow) => "Btu/h",
+            (_, Q::HeatFlow) => "kW",
+            (Units::SiBase, Q::Power) => "W",
+            (_, Q::Power) => "kW",
+            (Units::UsCustomary, Q::HeatRate) => "Btu/kWh",
+            (_, Q::HeatRate) => "kJ/kWh",
         }
     }
 
