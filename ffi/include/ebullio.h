@@ -192,6 +192,16 @@ enum EbullioQuantity
   EBULLIO_QUANTITY_DIFFUSIVITY = 17,
   // Surface tension.
   EBULLIO_QUANTITY_SURFACE_TENSION = 18,
+  // Mass flow (kg/s; lbm/h in US customary units).
+  EBULLIO_QUANTITY_MASS_FLOW = 19,
+  // Length (m; mm in metric engineering, in in US customary units).
+  EBULLIO_QUANTITY_LENGTH = 20,
+  // Heat flow (kW; W in SI base, Btu/h in US customary units).
+  EBULLIO_QUANTITY_HEAT_FLOW = 21,
+  // Electrical power (kW; W in SI base units).
+  EBULLIO_QUANTITY_POWER = 22,
+  // Heat rate (kJ/kWh; Btu/kWh in US customary units).
+  EBULLIO_QUANTITY_HEAT_RATE = 23,
 };
 #ifndef __cplusplus
 #if __STDC_VERSION__ >= 202311L
