@@ -256,3 +256,37 @@ fn region2_states_at_the_top_corner_come_back_inside_the_range() {
         assert!(state.pressure() <= 100.0, "{state:?}");
     }
 }
+
+/// Found by the solve fuzz target: the range's densest state, region 1 at
+/// 100 MPa and 273.15 K (R7-97(2012) region 1 from (p, T)), read in US
+/// customary units as (0.01532465469510163 ft³/lbm, −0.12154998070351314
+/// Btu/lbm), converts to a v two ulps below the range's smallest and was
+/// refused as "no state". A v within the promise of that corner's is the
+/// corner's rounding; it comes back inside the range.
+#[test]
+fn the_densest_corner_comes_back_from_us_units() {
+    let fuzzed = comes_back_from(
+        "the fuzz finding",
+        0.01532465469510163,
+        -0.12154998070351314,
+        Units::UsCustomary,
+    );
+    let corner = State::from_pt(100.0, 273.15, NATIVE).unwrap();
+    let mut states = vec![fuzzed.in_units(NATIVE), comes_back("the corner", &corner)];
+    for units in Units::ALL {
+        let a = corner.in_units(units);
+        states.push(comes_back_from(
+            &format!("the corner in {units:?}"),
+            a.specific_volume(),
+            a.internal_energy(),
+            units,
+        ));
+    }
+    for state in states.iter().map(|s| s.in_units(NATIVE)) {
+        assert!(state.temperature() >= 273.15, "{state:?}");
+        assert!(state.pressure() <= 100.0, "{state:?}");
+    }
+    // Well below the corner's v there is still no state.
+    let denser = corner.specific_volume() * (1.0 - 1e-9);
+    assert!(State::from_vu(denser, corner.internal_energy(), NATIVE).is_err());
+}
