@@ -205,3 +205,37 @@ fn wet_exhaust_from_its_enthalpy() {
     let ratio = e.efficiency.standard_uncertainty / spread[0];
     assert!((0.95..=1.05).contains(&ratio), "{ratio}");
 }
+
+/// The printed budget names every input with its unit and its share, and
+/// the shares printed add up to 100 %.
+#[test]
+fn the_budget_prints_as_a_person_reads_it() {
+    use ebullio::measured::BudgetTable;
+    let test = hp_section();
+    let units = Units::MetricEngineering;
+    let r = test.evaluate_with_uncertainty(units, 2.0).unwrap();
+    let measured = test.measured();
+    let text = BudgetTable::new(
+        SectionTest::FIGURES[1],
+        &r.figures.used_drop,
+        &SectionTest::INPUTS,
+        &measured,
+        units,
+    )
+    .to_string();
+    assert!(text.starts_with("used drop = "), "{text}");
+    assert!(text.contains("kJ/kg ± "), "{text}");
+    let mut total = 0.0;
+    for (name, _) in SectionTest::INPUTS {
+        let line = text.lines().find(|l| l.contains(name)).expect(name);
+        let share: f64 = line
+            .trim_end_matches(" %")
+            .rsplit(' ')
+            .next()
+            .unwrap()
+            .parse()
+            .unwrap();
+        total += share;
+    }
+    assert!((total - 100.0).abs() < 0.3, "{text}");
+}

@@ -9,6 +9,7 @@
 //! [`Calculation::evaluate_with_uncertainty`] the same values, bit for
 //! bit, each as an [`Estimate`] with its budget.
 
+mod budget_table;
 mod calculation;
 mod estimate;
 mod flags;
@@ -18,6 +19,7 @@ mod point;
 mod section;
 mod tracked;
 
+pub use budget_table::BudgetTable;
 pub use calculation::{evaluate, evaluate_with_uncertainty, Calculation, Tested};
 pub use estimate::Estimate;
 pub use flags::Flags;
