@@ -30,14 +30,14 @@ fn measured(c: &mut Criterion) {
         b.iter(|| {
             black_box(&section)
                 .evaluate(units)
-                .map(|r| r.figures.efficiency)
+                .map(|r| r.figures.isentropic_efficiency)
         })
     });
     group.bench_function("section_efficiency_with_uncertainty", |b| {
         b.iter(|| {
             black_box(&section)
                 .evaluate_with_uncertainty(units, 2.0)
-                .map(|r| r.figures.efficiency.standard_uncertainty)
+                .map(|r| r.figures.isentropic_efficiency.standard_uncertainty)
         })
     });
     group.finish();

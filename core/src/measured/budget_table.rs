@@ -15,7 +15,7 @@ pub struct BudgetTable<'a, const N: usize> {
     figure: (&'a str, Option<Quantity>),
     estimate: &'a Estimate<N>,
     inputs: &'a [(&'static str, Quantity); N],
-    measured: &'a [Measured; N],
+    measured: [Measured; N],
     units: Units,
 }
 
@@ -27,7 +27,7 @@ impl<'a, const N: usize> BudgetTable<'a, N> {
         figure: (&'a str, Option<Quantity>),
         estimate: &'a Estimate<N>,
         inputs: &'a [(&'static str, Quantity); N],
-        measured: &'a [Measured; N],
+        measured: [Measured; N],
         units: Units,
     ) -> Self {
         BudgetTable {
@@ -87,7 +87,7 @@ impl<const N: usize> fmt::Display for BudgetTable<'_, N> {
             };
             writeln!(
                 f,
-                "  {:<24} {:>14.6} {:>10} {:>10.4} {:>6} {:>14.6e}  {:>6.1} %",
+                "  {:<24} {:>14.4} {:>10} {:>10.4} {:>6} {:>14.6e}  {:>6.1} %",
                 input,
                 m.value,
                 self.units.symbol(q),

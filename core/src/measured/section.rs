@@ -42,7 +42,7 @@ pub struct WetSectionTest {
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct SectionFigures<F> {
     /// Isentropic efficiency, used drop / isentropic drop.
-    pub efficiency: F,
+    pub isentropic_efficiency: F,
     /// Enthalpy drop used, h_in − h_out.
     pub used_drop: F,
     /// Isentropic enthalpy drop to the exhaust pressure, h_in − h_out,s.
@@ -50,14 +50,16 @@ pub struct SectionFigures<F> {
 }
 
 const FIGURES: [(&str, Option<Quantity>); 3] = [
-    ("efficiency", None),
+    ("isentropic efficiency", None),
     ("used drop", Some(Quantity::Enthalpy)),
     ("isentropic drop", Some(Quantity::Enthalpy)),
 ];
 
-fn named<F: Copy>([efficiency, used_drop, isentropic_drop]: [F; 3]) -> SectionFigures<F> {
+fn named<F: Copy>(
+    [isentropic_efficiency, used_drop, isentropic_drop]: [F; 3],
+) -> SectionFigures<F> {
     SectionFigures {
-        efficiency,
+        isentropic_efficiency,
         used_drop,
         isentropic_drop,
     }
