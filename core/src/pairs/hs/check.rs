@@ -46,6 +46,23 @@ pub(super) fn single_state(place: Place, props: Properties) -> State {
 /// (relative), or the limit of the range it exceeds.
 pub(super) fn check(place: Place, props: Properties) -> Attempt {
     let (p, t) = (props.p, props.t);
+    let worst = worst_excess(place, &props);
+    match (beyond_range(place, p, t), worst) {
+        (false, None) => Attempt::Inside(single_state(place, props)),
+        (false, Some((next, excess))) => Attempt::Outside {
+            next,
+            excess,
+            candidate: Some(single_state(place, props)),
+        },
+        (true, worst) => Attempt::Beyond(worst.map(|(next, _)| next).or(seam_neighbour(place, t))),
+    }
+}
+
+/// The neighbour across the boundary of `place` that the solution exceeds
+/// most, and by how much (relative), if it exceeds one by more than
+/// [`INSIDE`].
+fn worst_excess(place: Place, props: &Properties) -> Option<(Place, f64)> {
+    let (p, t) = (props.p, props.t);
     let mut worst: Option<(Place, f64)> = None;
     let mut note = |next: Place, excess: f64| {
         let larger = match worst {
@@ -98,42 +115,39 @@ pub(super) fn check(place: Place, props: Properties) -> Attempt {
         Place::Five => note(Place::Two, -over(t, REGION2_MAX_TEMPERATURE)),
         Place::Wet => {}
     }
-    // Not `range::within_range`, on purpose: an attempt may stand a
-    // rounding outside the range (the edges above), and a region 2 twin a
-    // hair past 1073.15 K keeps region 2's 100 MPa, so the limit follows
-    // the region solved on rather than T.
+    worst
+}
+
+/// Whether (p, T) solved in `place` lies beyond the range of validity.
+/// Not `range::within_range`, on purpose: an attempt may stand a rounding
+/// outside the range (the edges above), and a region 2 twin a hair past
+/// 1073.15 K keeps region 2's 100 MPa, so the limit follows the region
+/// solved on rather than T.
+fn beyond_range(place: Place, p: f64, t: f64) -> bool {
     let max_p = if place == Place::Five {
         REGION5_MAX_PRESSURE
     } else {
         MAX_PRESSURE
     };
-    let beyond_range = -over(t, MIN_TEMPERATURE) > TEMPERATURE_EDGE
+    -over(t, MIN_TEMPERATURE) > TEMPERATURE_EDGE
         || over(t, MAX_TEMPERATURE) > TEMPERATURE_EDGE
         || over(p, max_p) > INSIDE
-        || -over(p, MIN_PRESSURE) > INSIDE;
-    match (beyond_range, worst) {
-        (false, None) => Attempt::Inside(single_state(place, props)),
-        (false, Some((next, excess))) => Attempt::Outside {
-            next,
-            excess,
-            candidate: Some(single_state(place, props)),
-        },
-        (true, worst) => {
-            // Beyond the range here, but at a region boundary the
-            // neighbour's equation (which disagrees by the formulation's
-            // consistency) may still place the state inside the range:
-            // 100 MPa at 623.15 K or 863.15 K, 50 MPa at 1073.15 K.
-            let near = |boundary: f64| over(t, boundary).abs() <= SEAM;
-            let seam = match place {
-                Place::One if near(REGION13_TEMPERATURE) => Some(Place::Three),
-                Place::Two if near(REGION2_MAX_TEMPERATURE) => Some(Place::Five),
-                Place::Two if near(B23_MAX_TEMPERATURE) => Some(Place::Three),
-                Place::Three if near(REGION13_TEMPERATURE) => Some(Place::One),
-                Place::Three if near(B23_MAX_TEMPERATURE) => Some(Place::Two),
-                Place::Five if near(REGION2_MAX_TEMPERATURE) => Some(Place::Two),
-                _ => None,
-            };
-            Attempt::Beyond(worst.map(|(next, _)| next).or(seam))
-        }
+        || -over(p, MIN_PRESSURE) > INSIDE
+}
+
+/// The neighbour that may still hold a state beyond the range in `place`:
+/// at a region boundary the neighbour's equation (which disagrees by the
+/// formulation's consistency) may place it inside the range (100 MPa at
+/// 623.15 K or 863.15 K, 50 MPa at 1073.15 K).
+fn seam_neighbour(place: Place, t: f64) -> Option<Place> {
+    let near = |boundary: f64| over(t, boundary).abs() <= SEAM;
+    match place {
+        Place::One if near(REGION13_TEMPERATURE) => Some(Place::Three),
+        Place::Two if near(REGION2_MAX_TEMPERATURE) => Some(Place::Five),
+        Place::Two if near(B23_MAX_TEMPERATURE) => Some(Place::Three),
+        Place::Three if near(REGION13_TEMPERATURE) => Some(Place::One),
+        Place::Three if near(B23_MAX_TEMPERATURE) => Some(Place::Two),
+        Place::Five if near(REGION2_MAX_TEMPERATURE) => Some(Place::Two),
+        _ => None,
     }
 }

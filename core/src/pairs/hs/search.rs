@@ -28,9 +28,8 @@ fn solve_exact_anywhere(h: f64, s: f64, indicated: Place, units: Units) -> Resul
     ];
     let mut place = Some(indicated);
     let mut tried = 0u8;
-    // Solutions outside their place: (place, the neighbour it points to,
-    // excess, state), at most one per place.
-    let mut outside: [Option<(Place, Place, f64, State)>; 5] = [None; 5];
+    // Solutions outside their place, at most one per place.
+    let mut outside: [Option<Outside>; 5] = [None; 5];
     let mut beyond = false;
     for slot in outside.iter_mut() {
         let Some(current) = place else { break };
@@ -56,8 +55,22 @@ fn solve_exact_anywhere(h: f64, s: f64, indicated: Place, units: Units) -> Resul
             .filter(untried)
             .or_else(|| ORDER.into_iter().find(untried));
     }
-    // A gap of a seam: two neighbours whose solutions each lie just across
-    // the boundary into the other; the one nearer to its own region.
+    if let Some(state) = nearer_seam_twin(&outside) {
+        return Ok(state.in_units(units));
+    }
+    if let Some(state) = saturated_liquid_below_line(&outside, h, s) {
+        return Ok(state.in_units(units));
+    }
+    Err(refusal(h, s, beyond, units))
+}
+
+/// A solution outside its place: (place, the neighbour it points to,
+/// excess, state).
+type Outside = (Place, Place, f64, State);
+
+/// A gap of a seam: two neighbours whose solutions each lie just across
+/// the boundary into the other; the one nearer to its own region.
+fn nearer_seam_twin(outside: &[Option<Outside>]) -> Option<State> {
     let mut nearest: Option<(f64, State)> = None;
     for (place, next, excess, state) in outside.iter().flatten() {
         let mutual = outside
@@ -72,27 +85,23 @@ fn solve_exact_anywhere(h: f64, s: f64, indicated: Place, units: Units) -> Resul
             nearest = Some((*excess, *state));
         }
     }
-    if let Some((_, state)) = nearest {
-        return Ok(state.in_units(units));
-    }
-    // A liquid root a hair below psat(T) that pointed to wet steam, where
-    // the wet iteration closed on the liquid side without a root: the
-    // saturated liquid at its T, when that reproduces (h, s). Only as a
-    // last resort: near x = 0, (h, s) barely tell a saturated liquid from
-    // wet steam a few microkelvin away, and the wet root, where found, is
-    // the state the point came from.
-    let liquid_below_line = outside
+    nearest.map(|(_, state)| state)
+}
+
+/// A liquid root a hair below psat(T) that pointed to wet steam, where
+/// the wet iteration closed on the liquid side without a root: the
+/// saturated liquid at its T, when that reproduces (h, s). Only as a
+/// last resort: near x = 0, (h, s) barely tell a saturated liquid from
+/// wet steam a few microkelvin away, and the wet root, where found, is
+/// the state the point came from.
+fn saturated_liquid_below_line(outside: &[Option<Outside>], h: f64, s: f64) -> Option<State> {
+    let (_, _, _, state) = outside
         .iter()
         .flatten()
-        .find(|(place, next, _, _)| *place == Place::One && *next == Place::Wet);
-    if let Some((_, _, _, state)) = liquid_below_line {
-        let given = ((Given::Enthalpy, h), (Given::Entropy, s));
-        let saturated = onto_saturated_liquid(*state.native(), given.0, given.1);
-        if saturated.p != state.native().p {
-            return Ok(single_state(Place::One, saturated).in_units(units));
-        }
-    }
-    Err(refusal(h, s, beyond, units))
+        .find(|(place, next, _, _)| *place == Place::One && *next == Place::Wet)?;
+    let given = ((Given::Enthalpy, h), (Given::Entropy, s));
+    let saturated = onto_saturated_liquid(*state.native(), given.0, given.1);
+    (saturated.p != state.native().p).then(|| single_state(Place::One, saturated))
 }
 
 /// The exact solution, refused where it lies past the corner of the range

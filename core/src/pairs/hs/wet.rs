@@ -122,6 +122,38 @@ fn wet_edge_at_273(h: f64, s: f64) -> Result<Option<Attempt>, Error> {
 
 /// Wet steam of (h, s), or the side of the saturation line it lies on.
 pub(super) fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
+    let (lo, hi) = match wet_bracket(h, s)? {
+        Ok(bracket) => bracket,
+        Err(edge) => return Ok(edge),
+    };
+    // On [273.15 K, T_sat(s)] the difference rises with T; above T_sat(s)
+    // (quality below 0, liquid side) it counts as "too hot".
+    let mut walk = WetWalk {
+        h,
+        s,
+        previous: None,
+        residuals: [f64::INFINITY; 2],
+        crossed: false,
+    };
+    let ended = bracketed_root(
+        (lo, hi),
+        wet_start(h, s, (lo, hi)),
+        WET_STEPS,
+        |t| walk.verdict(t),
+        |lo, hi, t| hi - lo <= 4.0 * f64::EPSILON * t,
+    )?;
+    let (t, lo, hi) = (ended.x, ended.lo, ended.hi);
+    if let (End::Done(x), Some(sat)) = (ended.end, walk.previous) {
+        // The root at the last point evaluated.
+        return found(sat, x, t, h, s);
+    }
+    closed_without_root(&walk, t, (lo, hi))
+}
+
+/// The bracket in T of the wet iteration, [273.15 K, just below Tc]
+/// narrowed by the 623.15 K wet isotherm; or the outcome where the
+/// 273.15 K end already decides it.
+fn wet_bracket(h: f64, s: f64) -> Result<Result<(f64, f64), Attempt>, Error> {
     let (mut lo, mut hi) = (MIN_TEMPERATURE, WET_MAX_TEMPERATURE);
     // Clearly inside the 273.15 K end (0 < x < 1 there, h above its line),
     // that end brackets the root from below and need not be evaluated.
@@ -135,7 +167,7 @@ pub(super) fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
         ) > LINE_MARGIN;
     if !clear_of_273 {
         if let Some(edge) = wet_edge_at_273(h, s)? {
-            return Ok(edge);
+            return Ok(Err(edge));
         }
     }
     // Below s'(623.15 K) the state is colder than 623.15 K; between s' and
@@ -151,83 +183,94 @@ pub(super) fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
             hi = REGION13_TEMPERATURE;
         }
     }
-    // The start: SR4-04's Tsat(h,s) where it is valid, below that entropy
-    // the backward equations' wet isotherm through (h, s).
+    Ok(Ok((lo, hi)))
+}
+
+/// The wet iteration's start: SR4-04's Tsat(h,s) where it is valid, below
+/// that entropy the backward equations' wet isotherm through (h, s); the
+/// bracket's midpoint where either falls outside it.
+fn wet_start(h: f64, s: f64, (lo, hi): (f64, f64)) -> f64 {
     let start = if (S_VAPOUR_623..=S_VAPOUR_273).contains(&s) {
         Some(sr4_04::saturation_temperature_hs(h, s))
     } else {
         wet_temperature_start(h, s)
     };
-    let start = match start {
+    match start {
         Some(t0) if t0 > lo && t0 < hi => t0,
         _ => 0.5 * (lo + hi),
-    };
-    // On [273.15 K, T_sat(s)] the difference rises with T; above T_sat(s)
-    // (quality below 0, liquid side) it counts as "too hot".
-    let mut previous = None;
-    // |f| one and two steps back: where it does not halve over two steps
-    // (near Tc, where the slopes along the line are not resolved and the
-    // steps crawl), bisection takes the step.
-    let mut residuals = [f64::INFINITY; 2];
-    // Whether the difference was seen above zero inside the dome: the root
-    // is then wet steam, bracketed from both sides.
-    let mut crossed = false;
-    let ended = bracketed_root(
-        (lo, hi),
-        start,
-        WET_STEPS,
-        |t| {
-            let WetPoint {
-                sat,
-                x,
-                f,
-                slope,
-                curvature,
-            } = wet_at(t, h, s, previous.as_ref())?;
-            previous = Some(sat);
-            // Near x = 0 the difference hardly depends on T (all wet
-            // isobars touch the liquid line), so T is settled only when the
-            // Newton step, not just the difference, is at rounding level.
-            // A slope of the wrong sign (f rises with T), as the line's
-            // derivatives can read near Tc (−131 for 0.83 kJ/(kg·K) at
-            // 3e-5 K below it, measured), settles nothing: bisection goes on.
-            if x >= 0.0 && within(f, h, WET_AIMED) && slope > 0.0 && (f / slope).abs() <= 1e-13 * t
-            {
-                return Ok(Verdict::Done(x));
-            }
-            crossed |= x >= 0.0 && f > 0.0;
-            let crawling = f.abs() > 0.5 * residuals[1];
-            residuals = [f.abs(), residuals[0]];
-            let next = t - halley_step(f, slope, curvature);
-            let step = if x >= 0.0 && slope > 0.0 && !crawling {
-                Step::to(next)
-            } else {
-                Step::BISECT
-            };
-            Ok(if x < 0.0 || f > 0.0 {
-                Verdict::RootBelow(step)
-            } else {
-                Verdict::RootAbove(step)
-            })
-        },
-        |lo, hi, t| hi - lo <= 4.0 * f64::EPSILON * t,
-    )?;
-    let (t, lo, hi) = (ended.x, ended.lo, ended.hi);
-    if let (End::Done(x), Some(sat)) = (ended.end, previous) {
-        // The root at the last point evaluated.
-        return found(sat, x, t, h, s);
     }
-    // A root to rounding level only: a point off the saturation line by
-    // less than the promise (compressed liquid at low pressure barely
-    // differs from the saturated liquid in h and s) belongs to the
-    // single-phase neighbour, which reproduces its p and T. A root
-    // bracketed inside the dome is wet steam, though, met to the promise:
-    // near x = 0 and 273.15 K f hardly changes with T (6.3e-5 kJ/(kg·K) at
-    // x = 1.3e-6, measured) and its rounding (1e-12 kJ/kg) may never let
-    // it reach the aim.
-    let WetPoint { sat, x, f, .. } = wet_at(t, h, s, previous.as_ref())?;
+}
+
+/// The wet iteration for (h, s) and what it keeps from one point to the
+/// next.
+struct WetWalk {
+    h: f64,
+    s: f64,
+    /// The last saturation point, which starts region 3's density
+    /// iterations at the next.
+    previous: Option<Saturation>,
+    /// |f| one and two steps back: where it does not halve over two steps
+    /// (near Tc, where the slopes along the line are not resolved and the
+    /// steps crawl), bisection takes the step.
+    residuals: [f64; 2],
+    /// Whether the difference was seen above zero inside the dome: the
+    /// root is then wet steam, bracketed from both sides.
+    crossed: bool,
+}
+
+impl WetWalk {
+    /// Where the root lies from T (the quality, once T is settled), and the
+    /// step proposed.
+    fn verdict(&mut self, t: f64) -> Result<Verdict<f64>, Error> {
+        let WetPoint {
+            sat,
+            x,
+            f,
+            slope,
+            curvature,
+        } = wet_at(t, self.h, self.s, self.previous.as_ref())?;
+        self.previous = Some(sat);
+        // Near x = 0 the difference hardly depends on T (all wet
+        // isobars touch the liquid line), so T is settled only when the
+        // Newton step, not just the difference, is at rounding level.
+        // A slope of the wrong sign (f rises with T), as the line's
+        // derivatives can read near Tc (−131 for 0.83 kJ/(kg·K) at
+        // 3e-5 K below it, measured), settles nothing: bisection goes on.
+        if x >= 0.0 && within(f, self.h, WET_AIMED) && slope > 0.0 && (f / slope).abs() <= 1e-13 * t
+        {
+            return Ok(Verdict::Done(x));
+        }
+        self.crossed |= x >= 0.0 && f > 0.0;
+        let crawling = f.abs() > 0.5 * self.residuals[1];
+        self.residuals = [f.abs(), self.residuals[0]];
+        let next = t - halley_step(f, slope, curvature);
+        let step = if x >= 0.0 && slope > 0.0 && !crawling {
+            Step::to(next)
+        } else {
+            Step::BISECT
+        };
+        Ok(if x < 0.0 || f > 0.0 {
+            Verdict::RootBelow(step)
+        } else {
+            Verdict::RootAbove(step)
+        })
+    }
+}
+
+/// The outcome where the bracket closed at T on [lo, hi] without the
+/// iteration settling: a root to rounding level only.
+fn closed_without_root(walk: &WetWalk, t: f64, (lo, hi): (f64, f64)) -> Result<Attempt, Error> {
+    let (h, s) = (walk.h, walk.s);
+    // A point off the saturation line by less than the promise (compressed
+    // liquid at low pressure barely differs from the saturated liquid in h
+    // and s) belongs to the single-phase neighbour, which reproduces its p
+    // and T. A root bracketed inside the dome is wet steam, though, met to
+    // the promise: near x = 0 and 273.15 K f hardly changes with T
+    // (6.3e-5 kJ/(kg·K) at x = 1.3e-6, measured) and its rounding
+    // (1e-12 kJ/kg) may never let it reach the aim.
+    let WetPoint { sat, x, f, .. } = wet_at(t, h, s, walk.previous.as_ref())?;
     let unresolved = t > CRITICAL_TEMPERATURE - UNRESOLVED_BELOW_CRITICAL;
-    let met = if unresolved || crossed {
+    let met = if unresolved || walk.crossed {
         within_promise(Given::Enthalpy, h + f, h)
     } else {
         within(f, h, WET_AIMED)
