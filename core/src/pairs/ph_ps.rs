@@ -29,6 +29,7 @@ use crate::locate::range::within_range;
 use crate::locate::regions::{region3_phase, single_phase};
 use crate::numerics::constants::*;
 use crate::numerics::math::exp;
+use crate::pairs::gibbs_region_state;
 use crate::pairs::method::Method;
 use crate::pairs::saturation::Saturation;
 use crate::read::state::{Region, State};
@@ -249,9 +250,9 @@ fn locate(isobar: &Isobar, z: f64, below_triple_line: bool) -> Result<Location, 
         // region 3's z' came back as region 3's saturated liquid).
         let saturation = || {
             if t_sat > REGION13_TEMPERATURE {
-                Saturation::at_temperature(REGION13_TEMPERATURE, Units::Native)
+                Saturation::at_native_temperature(REGION13_TEMPERATURE)
             } else {
-                Saturation::at_pressure(p, Units::Native)
+                Saturation::at_native_pressure(p)
             }
         };
         // One saturated phase decides: below the divide z cannot exceed
@@ -272,7 +273,7 @@ fn locate(isobar: &Isobar, z: f64, below_triple_line: bool) -> Result<Location, 
     } else if z >= z_at(Equation::Region2, boundary_b23::temperature(p)) {
         Location::Single(Equation::Region2)
     } else if p < CRITICAL_PRESSURE {
-        let sat = Saturation::at_pressure(p, Units::Native)?;
+        let sat = Saturation::at_native_pressure(p)?;
         let (zl, zv) = (
             value(caloric.given(), sat.liquid().native()),
             value(caloric.given(), sat.vapour().native()),
@@ -372,17 +373,9 @@ fn solve_single(
         Equation::Region5 => refine_region5(isobar, z, highest)?,
         Equation::Region3 => return solve_region3(p, z, isobar.caloric, method, units),
     };
-    let (region, liquid) = match equation {
-        Equation::Region1 => (Region::One, true),
-        Equation::Region2 => (Region::Two, false),
-        _ => (Region::Five, false),
-    };
-    Ok(State::single_phase(
-        props,
-        region,
-        single_phase(p, props.t, liquid),
-        units,
-    ))
+    // A Gibbs state's p is the given one: the isobar's, or the backward
+    // T's state evaluated at it.
+    Ok(gibbs_region_state(equation, props, units))
 }
 
 /// (p, z) on region 1's or region 2's equation, from the backward

@@ -14,8 +14,9 @@
 use crate::equations::boundary_b23;
 use crate::error::Error;
 use crate::locate::range;
-use crate::locate::regions::{region3_phase, single_phase};
+use crate::locate::regions::region3_phase;
 use crate::numerics::constants::*;
+use crate::pairs::gibbs_region_state;
 use crate::pairs::method::Method;
 use crate::pairs::pt;
 use crate::pairs::saturation::Saturation;
@@ -76,7 +77,7 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
     }
     // Inside the saturation dome: wet steam.
     if t <= CRITICAL_TEMPERATURE {
-        let sat = Saturation::at_temperature(t, Units::Native)?;
+        let sat = Saturation::at_native_temperature(t)?;
         let (vl, vv) = (sat.liquid().native().v, sat.vapour().native().v);
         let v = 1.0 / rho;
         if v >= vl && v <= vv {
@@ -223,15 +224,5 @@ fn gibbs_state(
         (p0, t),
         bounds,
     )?;
-    let (region, liquid) = match equation {
-        Equation::Region1 => (Region::One, true),
-        Equation::Region2 => (Region::Two, false),
-        _ => (Region::Five, false),
-    };
-    Ok(State::single_phase(
-        props,
-        region,
-        single_phase(props.p, t, liquid),
-        units,
-    ))
+    Ok(gibbs_region_state(equation, props, units))
 }

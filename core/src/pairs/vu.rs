@@ -599,7 +599,7 @@ fn stable_below_critical(props: &Properties, branch: Branch) -> bool {
     if !(props.kappa_t > 0.0 && (branch == Branch::Liquid) == liquid_like) {
         return false;
     }
-    let Ok(sat) = Saturation::at_temperature(props.t, Units::Native) else {
+    let Ok(sat) = Saturation::at_native_temperature(props.t) else {
         return false;
     };
     if liquid_like {
@@ -676,7 +676,7 @@ impl IsochoreWalk {
         let (v, u) = (self.v, self.u);
         let sat = match &self.previous {
             Some(near) => Saturation::at_temperature_near(t, near)?,
-            None => Saturation::at_temperature(t, Units::Native)?,
+            None => Saturation::at_native_temperature(t)?,
         };
         self.previous = Some(sat);
         let (l, g) = (sat.liquid().native(), sat.vapour().native());
@@ -774,7 +774,7 @@ fn wet_outcome(
 /// quality from v, held to [0, 1] where v is the saturated phase's within
 /// the promise.
 fn at_the_floor(v: f64, u: f64) -> Result<Option<(Saturation, f64, f64)>, Error> {
-    let sat = Saturation::at_temperature(MIN_TEMPERATURE, Units::Native)?;
+    let sat = Saturation::at_native_temperature(MIN_TEMPERATURE)?;
     let (l, g) = (sat.liquid().native(), sat.vapour().native());
     let x = (v - l.v) / (g.v - l.v);
     let x = if x > 1.0 && within_promise(Given::SpecificVolume, g.v, v) {

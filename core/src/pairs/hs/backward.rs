@@ -48,7 +48,7 @@ fn solve_backward(h: f64, s: f64, indicated: Place) -> Option<State> {
             if !(MIN_TEMPERATURE..=REGION13_TEMPERATURE).contains(&t) {
                 return None;
             }
-            let sat = Saturation::at_temperature(t, Units::Native).ok()?;
+            let sat = Saturation::at_native_temperature(t).ok()?;
             let (l, g) = (sat.liquid().native(), sat.vapour().native());
             let x = (s - l.s) / (g.s - l.s);
             if !(-0.01..=1.01).contains(&x) {

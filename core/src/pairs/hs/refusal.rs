@@ -51,7 +51,7 @@ fn enthalpy_range(s: f64) -> Option<(f64, f64)> {
     if s.is_nan() || s < cold_top.s {
         return None;
     }
-    let triple = Saturation::at_temperature(MIN_TEMPERATURE, Units::Native).ok()?;
+    let triple = Saturation::at_native_temperature(MIN_TEMPERATURE).ok()?;
     let (l, g) = (*triple.liquid().native(), *triple.vapour().native());
     let p_min = min_saturation_pressure();
     let on_isobar = |p: f64| {

@@ -322,7 +322,6 @@ fn vapour_side(t: f64) -> Attempt {
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::units::Units;
 
     /// The saturated phases at 273.15 K and 623.15 K that the wet
     /// iteration's brackets take from constants, against the basic
@@ -341,7 +340,7 @@ mod tests {
                 (S_VAPOUR_623, H_B23.0),
             ),
         ] {
-            let sat = Saturation::at_temperature(t, Units::Native).unwrap();
+            let sat = Saturation::at_native_temperature(t).unwrap();
             let (l, g) = (sat.liquid().native(), sat.vapour().native());
             for (constant, computed) in [(s_l, l.s), (h_l, l.h), (s_g, g.s), (h_g, g.h)] {
                 assert!(
@@ -359,7 +358,7 @@ mod tests {
     #[test]
     fn points_near_the_bracketing_lines_solve_as_wet_steam_or_not() {
         for t in [MIN_TEMPERATURE, REGION13_TEMPERATURE] {
-            let sat = Saturation::at_temperature(t, Units::Native).unwrap();
+            let sat = Saturation::at_native_temperature(t).unwrap();
             let (l, g) = (*sat.liquid().native(), *sat.vapour().native());
             for x in [0.0, 1e-9, 0.3, 0.999_999, 1.0] {
                 let (h, s) = (l.h + x * (g.h - l.h), l.s + x * (g.s - l.s));

@@ -7,7 +7,6 @@ use crate::equations::saturation_line::saturation_pressure_slope_and_curvature;
 use crate::error::Error;
 use crate::pairs::saturation::Saturation;
 use crate::read::variable::Variable;
-use crate::units::Units;
 
 /// The wet iteration at one temperature.
 pub(super) struct WetPoint {
@@ -40,7 +39,7 @@ pub(super) struct WetPoint {
 pub(super) fn wet_at(t: f64, h: f64, s: f64, near: Option<&Saturation>) -> Result<WetPoint, Error> {
     let sat = match near {
         Some(near) => Saturation::at_temperature_near(t, near)?,
-        None => Saturation::at_temperature(t, Units::Native)?,
+        None => Saturation::at_native_temperature(t)?,
     };
     let (l, g) = (sat.liquid().native(), sat.vapour().native());
     let x = (s - l.s) / (g.s - l.s);
