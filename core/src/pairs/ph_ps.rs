@@ -54,6 +54,7 @@ impl Caloric {
         }
     }
 
+    #[inline]
     fn quantity(self) -> Quantity {
         match self {
             Caloric::Enthalpy => Quantity::Enthalpy,
@@ -654,10 +655,7 @@ impl State {
     /// [`State::from_ph`] with the choice of [`Method`].
     #[inline]
     pub fn from_ph_with(p: f64, h: f64, units: Units, method: Method) -> Result<State, Error> {
-        let (p, h) = ((Quantity::Pressure, p), (Quantity::Enthalpy, h));
-        solve_given(units, p, h, |p, h| {
-            solve(p, h, Caloric::Enthalpy, method, units)
-        })
+        solve_callers(p, h, Caloric::Enthalpy, method, units)
     }
 
     /// The state at pressure `p` and specific entropy `s`, in `units`,
@@ -670,11 +668,22 @@ impl State {
     /// [`State::from_ps`] with the choice of [`Method`].
     #[inline]
     pub fn from_ps_with(p: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
-        let (p, s) = ((Quantity::Pressure, p), (Quantity::Entropy, s));
-        solve_given(units, p, s, |p, s| {
-            solve(p, s, Caloric::Entropy, method, units)
-        })
+        solve_callers(p, s, Caloric::Entropy, method, units)
     }
+}
+
+/// Solves the caller's (p, z) in `units`: both into native units, any
+/// range error with the caller's own numbers.
+#[inline]
+fn solve_callers(
+    p: f64,
+    z: f64,
+    caloric: Caloric,
+    method: Method,
+    units: Units,
+) -> Result<State, Error> {
+    let (p, z) = ((Quantity::Pressure, p), (caloric.quantity(), z));
+    solve_given(units, p, z, |p, z| solve(p, z, caloric, method, units))
 }
 
 #[cfg(test)]
