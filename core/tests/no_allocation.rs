@@ -286,6 +286,11 @@ fn exercise_plant() -> f64 {
     for cycle in [spec, spec.ideal()] {
         if let Ok(r) = solve_cycle(&cycle) {
             sum += r.thermal_efficiency + r.points().len() as f64 + r.components().len() as f64;
+            sum += r
+                .figures()
+                .iter()
+                .map(|(name, value)| value + name.len() as f64)
+                .sum::<f64>();
         }
     }
     let mut bad = spec;

@@ -70,22 +70,7 @@ fn main() {
     }
     let r = solve_cycle(&spec).expect("the demo plant solves");
     let mut out = Vec::new();
-    out.extend([
-        r.turbine_work,
-        r.pump_work,
-        r.net_work,
-        r.boiler_heat,
-        r.reheat_heat,
-        r.heat_input,
-        r.condenser_duty,
-        r.thermal_efficiency,
-        r.heat_rate_kj_per_kwh,
-        r.heat_rate_btu_per_kwh,
-        r.steam_rate_kg_per_kwh,
-        r.steam_rate_lbm_per_kwh,
-        r.back_work_ratio,
-        r.carnot_efficiency,
-    ]);
+    out.extend(r.figures().map(|(_, value)| value));
     out.push(r.points().len() as f64);
     out.push(r.components().len() as f64);
     out.extend(r.extraction_fractions());

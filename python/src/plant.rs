@@ -217,22 +217,7 @@ fn component<'py>(py: Python<'py>, c: &Component) -> PyResult<Bound<'py, PyDict>
 fn result<'py>(py: Python<'py>, r: &CycleResult) -> PyResult<Bound<'py, PyDict>> {
     let d = PyDict::new(py);
     d.set_item("units", names::units_name(r.units))?;
-    for (name, value) in [
-        ("turbine_work", r.turbine_work),
-        ("pump_work", r.pump_work),
-        ("net_work", r.net_work),
-        ("boiler_heat", r.boiler_heat),
-        ("reheat_heat", r.reheat_heat),
-        ("heat_input", r.heat_input),
-        ("condenser_duty", r.condenser_duty),
-        ("thermal_efficiency", r.thermal_efficiency),
-        ("heat_rate_kj_per_kwh", r.heat_rate_kj_per_kwh),
-        ("heat_rate_btu_per_kwh", r.heat_rate_btu_per_kwh),
-        ("steam_rate_kg_per_kwh", r.steam_rate_kg_per_kwh),
-        ("steam_rate_lbm_per_kwh", r.steam_rate_lbm_per_kwh),
-        ("back_work_ratio", r.back_work_ratio),
-        ("carnot_efficiency", r.carnot_efficiency),
-    ] {
+    for (name, value) in r.figures() {
         d.set_item(name, value)?;
     }
     d.set_item("extraction_fractions", r.extraction_fractions().to_vec())?;
@@ -546,6 +531,8 @@ pub(crate) fn condensate(
 /// (`ebullio.plant` wraps them).
 pub(crate) fn register(m: &Bound<'_, PyModule>) -> PyResult<()> {
     let p = PyModule::new(m.py(), "_plant")?;
+    // The cycle's figures' names in the core's order: `plant.TOTALS`.
+    p.add("FIGURES", CycleResult::FIGURE_NAMES.to_vec())?;
     p.add_function(wrap_pyfunction!(solve_cycle, &p)?)?;
     p.add_function(wrap_pyfunction!(ideal_cycle, &p)?)?;
     p.add_function(wrap_pyfunction!(expand, &p)?)?;

@@ -78,3 +78,32 @@ impl GibbsParts {
         o_y * scale + tau / y * r_y
     }
 }
+
+/// A two-part Gibbs region's public calls at (p, T) in MPa and K, written
+/// once for regions 2 and 5: `gibbs`, `isobar` and `enthalpy` on the
+/// invoking module's `PARTS`, reduced by its `REDUCING_PRESSURE` and
+/// `REDUCING_TEMPERATURE`.
+macro_rules! gibbs_region_calls {
+    () => {
+        /// γ and its reduced derivatives at `p` (MPa) and `t` (K).
+        #[inline]
+        pub fn gibbs(p: f64, t: f64) -> $crate::equations::free_energy::ReducedGibbs {
+            PARTS.gibbs(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
+        }
+
+        /// γ and its τ derivatives up to the third at `p` (MPa) and `t` (K).
+        #[inline]
+        pub(crate) fn isobar(p: f64, t: f64) -> $crate::equations::free_energy::IsobarGibbs {
+            PARTS.isobar(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
+        }
+
+        /// Specific enthalpy alone, kJ/kg, at `p` (MPa) and `t` (K).
+        #[inline]
+        pub fn enthalpy(p: f64, t: f64) -> f64 {
+            $crate::numerics::constants::SPECIFIC_GAS_CONSTANT
+                * t
+                * PARTS.tau_derivative(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
+        }
+    };
+}
+pub(crate) use gibbs_region_calls;

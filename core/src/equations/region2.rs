@@ -6,9 +6,7 @@
 //! 863.15 K at 0 < p ≤ p_B23(T), and 863.15 K < T ≤ 1073.15 K at
 //! 0 < p ≤ 100 MPa. Verification values: R7-97 Table 15.
 
-use crate::equations::free_energy::{IsobarGibbs, ReducedGibbs};
-use crate::equations::gibbs_parts::GibbsParts;
-use crate::numerics::constants::SPECIFIC_GAS_CONSTANT as R;
+use crate::equations::gibbs_parts::{gibbs_region_calls, GibbsParts};
 use crate::numerics::series::Term;
 
 /// Reducing pressure p*, MPa.
@@ -84,21 +82,4 @@ const TAU_SHIFT: f64 = 0.5;
 const PARTS: GibbsParts =
     GibbsParts::new(&IDEAL_COEFFICIENTS, 5, &RESIDUAL_COEFFICIENTS, TAU_SHIFT);
 
-/// γ and its reduced derivatives at `p` (MPa) and `t` (K).
-#[inline]
-pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
-    PARTS.gibbs(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
-}
-
-/// γ and its τ derivatives up to the third at `p` (MPa) and `t` (K).
-#[inline]
-pub(crate) fn isobar(p: f64, t: f64) -> IsobarGibbs {
-    PARTS.isobar(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
-}
-
-/// Specific enthalpy alone, kJ/kg, at `p` (MPa) and `t` (K).
-#[inline]
-pub fn enthalpy(p: f64, t: f64) -> f64 {
-    let tau = REDUCING_TEMPERATURE / t;
-    R * t * PARTS.tau_derivative(p / REDUCING_PRESSURE, tau)
-}
+gibbs_region_calls!();

@@ -5,9 +5,7 @@
 //! Valid for 1073.15 K ≤ T ≤ 2273.15 K and 0 < p ≤ 50 MPa. Verification
 //! values: R7-97 Table 42.
 
-use crate::equations::free_energy::{IsobarGibbs, ReducedGibbs};
-use crate::equations::gibbs_parts::GibbsParts;
-use crate::numerics::constants::SPECIFIC_GAS_CONSTANT as R;
+use crate::equations::gibbs_parts::{gibbs_region_calls, GibbsParts};
 use crate::numerics::series::Term;
 
 /// Reducing pressure p*, MPa.
@@ -39,20 +37,4 @@ pub const RESIDUAL_COEFFICIENTS: [Term; 6] = [
 
 const PARTS: GibbsParts = GibbsParts::new(&IDEAL_COEFFICIENTS, 3, &RESIDUAL_COEFFICIENTS, 0.0);
 
-/// γ and its reduced derivatives at `p` (MPa) and `t` (K).
-#[inline]
-pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
-    PARTS.gibbs(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
-}
-
-/// γ and its τ derivatives up to the third at `p` (MPa) and `t` (K).
-#[inline]
-pub(crate) fn isobar(p: f64, t: f64) -> IsobarGibbs {
-    PARTS.isobar(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
-}
-
-/// Specific enthalpy alone, kJ/kg, at `p` (MPa) and `t` (K).
-#[inline]
-pub fn enthalpy(p: f64, t: f64) -> f64 {
-    R * t * PARTS.tau_derivative(p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / t)
-}
+gibbs_region_calls!();

@@ -34,7 +34,7 @@ impl State {
             ));
         }
         let t_sat = saturation_temperature(p);
-        let h_limit = Saturation::at_pressure(p, Units::Native)?
+        let h_limit = Saturation::at_native_pressure(p)?
             .mixture(1.0 - LIMIT_MOISTURE)?
             .enthalpy();
         let props = gibbs(p, t).properties(p, t);

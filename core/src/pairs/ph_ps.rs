@@ -29,6 +29,7 @@ use crate::locate::range::within_range;
 use crate::locate::regions::{region3_phase, single_phase};
 use crate::numerics::constants::*;
 use crate::numerics::math::exp;
+use crate::pairs::gibbs_region_state;
 use crate::pairs::method::Method;
 use crate::pairs::saturation::Saturation;
 use crate::read::state::{Region, State};
@@ -53,6 +54,7 @@ impl Caloric {
         }
     }
 
+    #[inline]
     fn quantity(self) -> Quantity {
         match self {
             Caloric::Enthalpy => Quantity::Enthalpy,
@@ -150,6 +152,38 @@ enum Location {
     Wet(Saturation, f64),
 }
 
+/// The isobar a (p, z) solve runs along: its pressure, which property z
+/// is and its given value, and the backward start the attempt in the
+/// expected region already computed (reused rather than evaluated again).
+struct Isobar {
+    p: f64,
+    caloric: Caloric,
+    /// z as given, before the range check holds it to the range's edge:
+    /// the backward starts are taken at it.
+    given_z: f64,
+    known_start: Option<(Equation, f64)>,
+}
+
+impl Isobar {
+    /// z at T on this isobar, on a Gibbs region's equation.
+    #[inline]
+    fn z_at(&self, equation: Equation, t: f64) -> f64 {
+        self.caloric.at(equation, self.p, t)
+    }
+
+    /// The backward equation's T at (p, given z) for a region, the known
+    /// one if it was computed.
+    #[inline]
+    fn backward_temperature(&self, equation: Equation) -> f64 {
+        match self.known_start {
+            Some((known, t0)) if known == equation => t0,
+            _ => self
+                .caloric
+                .backward_temperature(equation, self.p, self.given_z),
+        }
+    }
+}
+
 /// Solves (p, z) for z = h or s, all native; errors in `units`.
 pub(crate) fn solve(
     p: f64,
@@ -177,15 +211,35 @@ pub(crate) fn solve(
             Err(start) => known_start = start,
         }
     }
-    let backward_temperature = |equation| match known_start {
-        Some((known, t0)) if known == equation => t0,
-        _ => caloric.backward_temperature(equation, p, z),
+    let isobar = Isobar {
+        p,
+        caloric,
+        given_z: z,
+        known_start,
     };
-    let out_of_range =
-        |min: f64, max: f64| Error::out_of_range(caloric.quantity(), z, min, max, units);
-    let z_at = |equation, t| caloric.at(equation, p, t);
     let below_triple_line = p < crate::pairs::saturation::min_saturation_pressure();
-    let location = if below_triple_line {
+    let equation = match locate(&isobar, z, below_triple_line)? {
+        Location::Wet(sat, z) => {
+            let (zl, zv) = (
+                value(caloric.given(), sat.liquid().native()),
+                value(caloric.given(), sat.vapour().native()),
+            );
+            let x = ((z - zl) / (zv - zl)).clamp(0.0, 1.0);
+            return Ok(sat.mixture(x)?.in_units(units));
+        }
+        Location::Single(equation) => equation,
+    };
+    let (z, highest) = within_isobar_range(&isobar, z, equation, below_triple_line, units)?;
+    solve_single(&isobar, z, highest, equation, method, units)
+}
+
+/// Where (p, z) lies: the given pressure and the saturation line at it
+/// decide, a single-phase region by z at its boundaries, wet steam by z
+/// between the saturated phases'.
+fn locate(isobar: &Isobar, z: f64, below_triple_line: bool) -> Result<Location, Error> {
+    let (p, caloric) = (isobar.p, isobar.caloric);
+    let z_at = |equation, t| isobar.z_at(equation, t);
+    Ok(if below_triple_line {
         // Below psat(273.15 K) only vapour lies within the range.
         Location::Single(Equation::Region2)
     } else if p <= saturation_pressure(REGION13_TEMPERATURE) {
@@ -197,9 +251,9 @@ pub(crate) fn solve(
         // region 3's z' came back as region 3's saturated liquid).
         let saturation = || {
             if t_sat > REGION13_TEMPERATURE {
-                Saturation::at_temperature(REGION13_TEMPERATURE, Units::Native)
+                Saturation::at_native_temperature(REGION13_TEMPERATURE)
             } else {
-                Saturation::at_pressure(p, Units::Native)
+                Saturation::at_native_pressure(p)
             }
         };
         // One saturated phase decides: below the divide z cannot exceed
@@ -220,7 +274,7 @@ pub(crate) fn solve(
     } else if z >= z_at(Equation::Region2, boundary_b23::temperature(p)) {
         Location::Single(Equation::Region2)
     } else if p < CRITICAL_PRESSURE {
-        let sat = Saturation::at_pressure(p, Units::Native)?;
+        let sat = Saturation::at_native_pressure(p)?;
         let (zl, zv) = (
             value(caloric.given(), sat.liquid().native()),
             value(caloric.given(), sat.vapour().native()),
@@ -232,35 +286,35 @@ pub(crate) fn solve(
         }
     } else {
         Location::Single(Equation::Region3)
-    };
+    })
+}
 
-    let equation = match location {
-        Location::Wet(sat, z) => {
-            let (zl, zv) = (
-                value(caloric.given(), sat.liquid().native()),
-                value(caloric.given(), sat.vapour().native()),
-            );
-            let x = ((z - zl) / (zv - zl)).clamp(0.0, 1.0);
-            return Ok(sat.mixture(x)?.in_units(units));
-        }
-        Location::Single(equation) => equation,
-    };
-    // The range at p: z grows with T along the isobar (cp > 0), from the
-    // 273.15 K state (liquid at or above psat(273.15 K), vapour below) to
-    // the hottest. Outside it no state lies in the range (a wet z, between
-    // z' and z'', lies inside).
+/// z held to the range at p, and the hottest state's z there. z grows
+/// with T along the isobar (cp > 0), from the 273.15 K state (liquid at or
+/// above psat(273.15 K), vapour below) to the hottest. Outside it no state
+/// lies in the range (a wet z, between z' and z'', lies inside): the error
+/// names that range.
+fn within_isobar_range(
+    isobar: &Isobar,
+    z: f64,
+    equation: Equation,
+    below_triple_line: bool,
+    units: Units,
+) -> Result<(f64, f64), Error> {
+    let out_of_range =
+        |min: f64, max: f64| Error::out_of_range(isobar.caloric.quantity(), z, min, max, units);
     let lowest = || {
         let cold_equation = if below_triple_line {
             Equation::Region2
         } else {
             Equation::Region1
         };
-        z_at(cold_equation, MIN_TEMPERATURE)
+        isobar.z_at(cold_equation, MIN_TEMPERATURE)
     };
-    let highest = if p <= REGION5_MAX_PRESSURE {
-        z_at(Equation::Region5, MAX_TEMPERATURE)
+    let highest = if isobar.p <= REGION5_MAX_PRESSURE {
+        isobar.z_at(Equation::Region5, MAX_TEMPERATURE)
     } else {
-        z_at(Equation::Region2, REGION2_MAX_TEMPERATURE)
+        isobar.z_at(Equation::Region2, REGION2_MAX_TEMPERATURE)
     };
     // Only a region 1 z and one below the triple line can lie below the
     // cold end: every other location has z above a value at a higher T
@@ -272,26 +326,39 @@ pub(crate) fn solve(
     if z > highest + edge_rounding {
         return Err(out_of_range(lowest(), highest));
     }
-    let mut z = z.min(highest);
+    let mut held = z.min(highest);
     if below_triple_line || equation == Equation::Region1 {
         let lowest = lowest();
-        if z < lowest - edge_rounding {
+        if held < lowest - edge_rounding {
             return Err(out_of_range(lowest, highest));
         }
-        z = z.max(lowest);
+        held = held.max(lowest);
     }
+    Ok((held, highest))
+}
 
+/// The single-phase state of (p, z) located on `equation`, z within the
+/// range at p, whose hottest z is `highest`.
+fn solve_single(
+    isobar: &Isobar,
+    z: f64,
+    highest: f64,
+    equation: Equation,
+    method: Method,
+    units: Units,
+) -> Result<State, Error> {
+    let p = isobar.p;
     // Past region 2's hot end lies region 5 (the range check has refused
     // such z above 50 MPa).
-    let beyond_region2 = || z > z_at(Equation::Region2, REGION2_MAX_TEMPERATURE);
+    let beyond_region2 = || z > isobar.z_at(Equation::Region2, REGION2_MAX_TEMPERATURE);
     let equation = match (equation, method) {
         // The backward equation of region 2 says nothing past 1073.15 K.
         (Equation::Region2, Method::BackwardOnly) if beyond_region2() => Equation::Region5,
         (Equation::Region2, Method::Exact) => {
             // The iteration stops at 1073.15 K if the state lies beyond.
-            let t0 = backward_temperature(Equation::Region2);
+            let t0 = isobar.backward_temperature(Equation::Region2);
             let t_range = (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE);
-            match refine_pt(Equation::Region2, p, z, caloric, t0, t_range) {
+            match refine_pt(Equation::Region2, p, z, isobar.caloric, t0, t_range) {
                 Ok(props) => {
                     let phase = single_phase(p, props.t, false);
                     return Ok(State::single_phase(props, Region::Two, phase, units));
@@ -302,94 +369,121 @@ pub(crate) fn solve(
         }
         (equation, _) => equation,
     };
-
     let props = match equation {
-        Equation::Region1 | Equation::Region2 => {
-            let t0 = backward_temperature(equation);
-            if method == Method::BackwardOnly {
-                let (t_lo, t_hi) = match equation {
-                    Equation::Region1 => (MIN_TEMPERATURE, REGION13_TEMPERATURE),
-                    _ => (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE),
-                };
-                backward_valid(t0, p, (t_lo, t_hi), caloric.backward_name(equation))?;
-                equation.evaluate(p, t0)
-            } else {
-                let t_range = (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE + 10.0);
-                refine_pt(equation, p, z, caloric, t0, t_range)?
-            }
-        }
-        Equation::Region5 => {
-            let (z_lo, z_hi) = (z_at(Equation::Region5, REGION2_MAX_TEMPERATURE), highest);
-            let span = MAX_TEMPERATURE - REGION2_MAX_TEMPERATURE;
-            let t0 = REGION2_MAX_TEMPERATURE + span * (z - z_lo) / (z_hi - z_lo);
-            refine_pt(
-                equation,
-                p,
-                z,
-                caloric,
-                t0,
-                (REGION2_MAX_TEMPERATURE - 10.0, MAX_TEMPERATURE),
-            )?
-        }
-        Equation::Region3 => {
-            let t0 = caloric.backward_temperature(equation, p, z);
-            let rho0 = 1.0 / caloric.backward_region3_volume(p, z);
-            let mut props = if method == Method::BackwardOnly {
-                backward_valid(
-                    t0,
-                    p,
-                    (REGION13_TEMPERATURE, B23_MAX_TEMPERATURE),
-                    caloric.backward_name(equation),
-                )?;
-                if !(rho0 > 0.0 && rho0.is_finite()) {
-                    return Err(Error::BackwardEquationOutOfRange {
-                        equation: caloric.backward_name(equation),
-                    });
-                }
-                let props = equation.evaluate(rho0, t0);
-                // Its pressure is the equations' own, and may leave the range.
-                if !within_range(props.p, props.t) {
-                    return Err(Error::BackwardEquationOutOfRange {
-                        equation: caloric.backward_name(equation),
-                    });
-                }
-                props
-            } else {
-                let bounds = Bounds {
-                    x: (20.0, 1100.0),
-                    t: (REGION13_TEMPERATURE - 20.0, B23_MAX_TEMPERATURE + 20.0),
-                };
-                refine(
-                    equation,
-                    (Given::Pressure, p),
-                    (caloric.given(), z),
-                    (rho0, t0),
-                    bounds,
-                )?
-            };
-            if method == Method::Exact {
-                // Report the given pressure, which the state reproduces.
-                props.p = p;
-            }
-            return Ok(State::single_phase(
-                props,
-                Region::Three,
-                region3_phase(&props),
-                units,
-            ));
-        }
+        Equation::Region1 | Equation::Region2 => solve_region1_or_2(isobar, z, equation, method)?,
+        Equation::Region5 => refine_region5(isobar, z, highest)?,
+        Equation::Region3 => return solve_region3(p, z, isobar.caloric, method, units),
     };
-    let (region, liquid) = match equation {
-        Equation::Region1 => (Region::One, true),
-        Equation::Region2 => (Region::Two, false),
-        _ => (Region::Five, false),
+    // A Gibbs state's p is the given one: the isobar's, or the backward
+    // T's state evaluated at it.
+    Ok(gibbs_region_state(equation, props, units))
+}
+
+/// (p, z) on region 1's or region 2's equation, from the backward
+/// equation's T: that T's own state with [`Method::BackwardOnly`], refined
+/// along the isobar otherwise.
+fn solve_region1_or_2(
+    isobar: &Isobar,
+    z: f64,
+    equation: Equation,
+    method: Method,
+) -> Result<Properties, Error> {
+    let (p, caloric) = (isobar.p, isobar.caloric);
+    let t0 = isobar.backward_temperature(equation);
+    if method == Method::BackwardOnly {
+        let (t_lo, t_hi) = match equation {
+            Equation::Region1 => (MIN_TEMPERATURE, REGION13_TEMPERATURE),
+            _ => (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE),
+        };
+        backward_valid(t0, p, (t_lo, t_hi), caloric.backward_name(equation))?;
+        Ok(equation.evaluate(p, t0))
+    } else {
+        let t_range = (MIN_TEMPERATURE, REGION2_MAX_TEMPERATURE + 10.0);
+        refine_pt(equation, p, z, caloric, t0, t_range)
+    }
+}
+
+/// (p, z) on region 5's equation, which has no backward equation: refined
+/// from the T that interpolates z linearly between the region's
+/// temperature limits (`highest` being z at 2273.15 K).
+fn refine_region5(isobar: &Isobar, z: f64, highest: f64) -> Result<Properties, Error> {
+    let equation = Equation::Region5;
+    let (z_lo, z_hi) = (isobar.z_at(equation, REGION2_MAX_TEMPERATURE), highest);
+    let span = MAX_TEMPERATURE - REGION2_MAX_TEMPERATURE;
+    let t0 = REGION2_MAX_TEMPERATURE + span * (z - z_lo) / (z_hi - z_lo);
+    refine_pt(
+        equation,
+        isobar.p,
+        z,
+        isobar.caloric,
+        t0,
+        (REGION2_MAX_TEMPERATURE - 10.0, MAX_TEMPERATURE),
+    )
+}
+
+/// (p, z) in region 3: SR3-03's T and v at (p, z), their own state with
+/// [`Method::BackwardOnly`], refined in (ρ, T) otherwise (the state then
+/// reports the given pressure, which it reproduces).
+fn solve_region3(
+    p: f64,
+    z: f64,
+    caloric: Caloric,
+    method: Method,
+    units: Units,
+) -> Result<State, Error> {
+    let equation = Equation::Region3;
+    let t0 = caloric.backward_temperature(equation, p, z);
+    let rho0 = 1.0 / caloric.backward_region3_volume(p, z);
+    let mut props = if method == Method::BackwardOnly {
+        backward_region3(p, caloric, rho0, t0)?
+    } else {
+        let bounds = Bounds {
+            x: (20.0, 1100.0),
+            t: (REGION13_TEMPERATURE - 20.0, B23_MAX_TEMPERATURE + 20.0),
+        };
+        refine(
+            equation,
+            (Given::Pressure, p),
+            (caloric.given(), z),
+            (rho0, t0),
+            bounds,
+        )?
     };
+    if method == Method::Exact {
+        // Report the given pressure, which the state reproduces.
+        props.p = p;
+    }
     Ok(State::single_phase(
         props,
-        region,
-        single_phase(p, props.t, liquid),
+        Region::Three,
+        region3_phase(&props),
         units,
     ))
+}
+
+/// The backward equations' own region 3 state at (ρ0, T0), refused where
+/// it is no state of the region or of the range.
+fn backward_region3(p: f64, caloric: Caloric, rho0: f64, t0: f64) -> Result<Properties, Error> {
+    let equation = Equation::Region3;
+    backward_valid(
+        t0,
+        p,
+        (REGION13_TEMPERATURE, B23_MAX_TEMPERATURE),
+        caloric.backward_name(equation),
+    )?;
+    if !(rho0 > 0.0 && rho0.is_finite()) {
+        return Err(Error::BackwardEquationOutOfRange {
+            equation: caloric.backward_name(equation),
+        });
+    }
+    let props = equation.evaluate(rho0, t0);
+    // Its pressure is the equations' own, and may leave the range.
+    if !within_range(props.p, props.t) {
+        return Err(Error::BackwardEquationOutOfRange {
+            equation: caloric.backward_name(equation),
+        });
+    }
+    Ok(props)
 }
 
 /// How far (K) a backward temperature may stray past its region's limits:
@@ -561,10 +655,7 @@ impl State {
     /// [`State::from_ph`] with the choice of [`Method`].
     #[inline]
     pub fn from_ph_with(p: f64, h: f64, units: Units, method: Method) -> Result<State, Error> {
-        let (p, h) = ((Quantity::Pressure, p), (Quantity::Enthalpy, h));
-        solve_given(units, p, h, |p, h| {
-            solve(p, h, Caloric::Enthalpy, method, units)
-        })
+        solve_callers(p, h, Caloric::Enthalpy, method, units)
     }
 
     /// The state at pressure `p` and specific entropy `s`, in `units`,
@@ -577,11 +668,22 @@ impl State {
     /// [`State::from_ps`] with the choice of [`Method`].
     #[inline]
     pub fn from_ps_with(p: f64, s: f64, units: Units, method: Method) -> Result<State, Error> {
-        let (p, s) = ((Quantity::Pressure, p), (Quantity::Entropy, s));
-        solve_given(units, p, s, |p, s| {
-            solve(p, s, Caloric::Entropy, method, units)
-        })
+        solve_callers(p, s, Caloric::Entropy, method, units)
     }
+}
+
+/// Solves the caller's (p, z) in `units`: both into native units, any
+/// range error with the caller's own numbers.
+#[inline]
+fn solve_callers(
+    p: f64,
+    z: f64,
+    caloric: Caloric,
+    method: Method,
+    units: Units,
+) -> Result<State, Error> {
+    let (p, z) = ((Quantity::Pressure, p), (caloric.quantity(), z));
+    solve_given(units, p, z, |p, z| solve(p, z, caloric, method, units))
 }
 
 #[cfg(test)]

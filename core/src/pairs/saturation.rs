@@ -48,12 +48,28 @@ impl Saturation {
     pub fn at_pressure(p: f64, units: Units) -> Result<Saturation, Error> {
         let given = (Quantity::Pressure, p);
         let p = native_input(units, Quantity::Pressure, p)?;
+        Saturation::on_line_at_pressure(p, units).map_err(|e| e.with_given(given))
+    }
+
+    /// [`Saturation::at_pressure`] for an inner solver: `p` native, the
+    /// states and errors native.
+    pub(crate) fn at_native_pressure(p: f64) -> Result<Saturation, Error> {
+        let p = native_input(Units::Native, Quantity::Pressure, p)?;
+        Saturation::on_line_at_pressure(p, Units::Native)
+    }
+
+    /// Saturation at native `p`, checked against the line's range, in
+    /// `units`.
+    fn on_line_at_pressure(p: f64, units: Units) -> Result<Saturation, Error> {
         let min = min_saturation_pressure();
         if !(min..=CRITICAL_PRESSURE).contains(&p) {
-            return Err(
-                Error::out_of_range(Quantity::Pressure, p, min, CRITICAL_PRESSURE, units)
-                    .with_given(given),
-            );
+            return Err(Error::out_of_range(
+                Quantity::Pressure,
+                p,
+                min,
+                CRITICAL_PRESSURE,
+                units,
+            ));
         }
         let t = if p == CRITICAL_PRESSURE {
             CRITICAL_TEMPERATURE
@@ -68,6 +84,19 @@ impl Saturation {
     pub fn at_temperature(t: f64, units: Units) -> Result<Saturation, Error> {
         let given = (Quantity::Temperature, t);
         let t = native_input(units, Quantity::Temperature, t)?;
+        Saturation::on_line_at_temperature(t, units).map_err(|e| e.with_given(given))
+    }
+
+    /// [`Saturation::at_temperature`] for an inner solver: `t` native, the
+    /// states and errors native.
+    pub(crate) fn at_native_temperature(t: f64) -> Result<Saturation, Error> {
+        let t = native_input(Units::Native, Quantity::Temperature, t)?;
+        Saturation::on_line_at_temperature(t, Units::Native)
+    }
+
+    /// Saturation at native `t`, checked against the line's range, in
+    /// `units`.
+    fn on_line_at_temperature(t: f64, units: Units) -> Result<Saturation, Error> {
         if !(MIN_TEMPERATURE..=CRITICAL_TEMPERATURE).contains(&t) {
             return Err(Error::out_of_range(
                 Quantity::Temperature,
@@ -75,8 +104,7 @@ impl Saturation {
                 MIN_TEMPERATURE,
                 CRITICAL_TEMPERATURE,
                 units,
-            )
-            .with_given(given));
+            ));
         }
         Saturation::at(line_pressure(t), t, units)
     }
@@ -94,7 +122,7 @@ impl Saturation {
             && t_near > REGION13_TEMPERATURE
             && (t - t_near).abs() <= NEAR_SPAN;
         if !close {
-            return Saturation::at_temperature(t, Units::Native);
+            return Saturation::at_native_temperature(t);
         }
         let p = line_pressure(t);
         let dp = saturation_pressure_slope(t_near);

@@ -604,7 +604,7 @@ fn stable_below_critical(props: &Properties, branch: Branch) -> bool {
     if !(props.kappa_t > 0.0 && (branch == Branch::Liquid) == liquid_like) {
         return false;
     }
-    let Ok(sat) = Saturation::at_temperature(props.t, Units::Native) else {
+    let Ok(sat) = Saturation::at_native_temperature(props.t) else {
         return false;
     };
     if liquid_like {
@@ -638,75 +638,118 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     } else {
         t_max
     };
-    let mut found = None;
-    let mut previous: Option<Saturation> = None;
-    // 1/T and dF/d(1/T) of the last point with a Newton step, for the
-    // curvature of Halley's correction.
-    let mut last_slope: Option<(f64, f64)> = None;
-    // |u_mix − u| one and two steps back: where it does not halve over two
-    // steps (within about 2e-5 K of Tc the slopes along the line are not
-    // resolved and the Newton steps crawl), bisection takes the step.
-    let mut residuals = [f64::INFINITY; 2];
+    let mut walk = IsochoreWalk {
+        v,
+        u,
+        previous: None,
+        found: None,
+        last_slope: None,
+        residuals: [f64::INFINITY; 2],
+    };
     let ended = bracketed_root(
         (MIN_TEMPERATURE, t_max),
         start,
         WET_STEPS,
-        |t| {
-            // The previous point starts region 3's density iterations.
-            let sat = match &previous {
-                Some(near) => Saturation::at_temperature_near(t, near)?,
-                None => Saturation::at_temperature(t, Units::Native)?,
-            };
-            previous = Some(sat);
-            let (l, g) = (sat.liquid().native(), sat.vapour().native());
-            let x = (v - l.v) / (g.v - l.v);
-            if !(0.0..=1.0).contains(&x) {
-                // Outside the dome's width at this T: too hot, except below
-                // the liquid's density maximum (about 277 K), where v' falls
-                // as T rises and a v below it means too cold.
-                let colder = x < 0.0
-                    && Variable::SpecificVolume.along_saturation(l, saturation_pressure_slope(t))
-                        < 0.0;
-                return Ok(if colder {
-                    Verdict::RootAbove(Step::BISECT)
-                } else {
-                    Verdict::RootBelow(Step::BISECT)
-                });
-            }
-            let u_mix = (1.0 - x) * l.u + x * g.u;
-            let f = u_mix - u;
-            found = Some((sat, x, u_mix));
-            if f.abs() <= (1e-13 * u.abs()).max(1e-12) {
-                return Ok(Verdict::Done(()));
-            }
-            let crawling = f.abs() > 0.5 * residuals[1];
-            residuals = [f.abs(), residuals[0]];
-            let mut step = Step::BISECT;
-            if let Some((f, slope)) = quality_match(l, g, v, u).filter(|_| !crawling) {
-                let y = 1.0 / t;
-                let mut dy = f / slope;
-                if let Some((y_last, slope_last)) = last_slope {
-                    // Halley's correction with the curvature measured
-                    // between this point and the last: good once the steps
-                    // are small, bounded where they are not.
-                    let curvature = (slope - slope_last) / (y - y_last);
-                    let denominator = 1.0 - 0.5 * dy * curvature / slope;
-                    if denominator > 0.5 && denominator < 2.0 {
-                        dy /= denominator;
-                    }
-                }
-                last_slope = Some((y, slope));
-                step = Step::to(1.0 / (y - dy));
-            }
-            Ok(if f < 0.0 {
-                Verdict::RootAbove(step)
-            } else {
-                Verdict::RootBelow(step)
-            })
-        },
+        |t| walk.verdict(t),
         |lo, hi, _| hi - lo <= 4.0 * f64::EPSILON * hi,
     )?;
-    let lo = ended.lo;
+    wet_outcome(walk.found, ended.lo, v, u)
+}
+
+/// The wet iteration along the isochore v, aiming at u, and what it keeps
+/// from one point to the next.
+struct IsochoreWalk {
+    v: f64,
+    u: f64,
+    /// The last saturation point, which starts region 3's density
+    /// iterations at the next.
+    previous: Option<Saturation>,
+    /// The last point inside the dome: its saturation, quality and u_mix.
+    found: Option<(Saturation, f64, f64)>,
+    /// 1/T and dF/d(1/T) of the last point with a Newton step, for the
+    /// curvature of Halley's correction.
+    last_slope: Option<(f64, f64)>,
+    /// |u_mix − u| one and two steps back: where it does not halve over two
+    /// steps (within about 2e-5 K of Tc the slopes along the line are not
+    /// resolved and the Newton steps crawl), bisection takes the step.
+    residuals: [f64; 2],
+}
+
+impl IsochoreWalk {
+    /// Where the root lies from T, and the step proposed.
+    fn verdict(&mut self, t: f64) -> Result<Verdict<()>, Error> {
+        let (v, u) = (self.v, self.u);
+        let sat = match &self.previous {
+            Some(near) => Saturation::at_temperature_near(t, near)?,
+            None => Saturation::at_native_temperature(t)?,
+        };
+        self.previous = Some(sat);
+        let (l, g) = (sat.liquid().native(), sat.vapour().native());
+        let x = (v - l.v) / (g.v - l.v);
+        if !(0.0..=1.0).contains(&x) {
+            return Ok(outside_the_dome(l, x, t));
+        }
+        let u_mix = (1.0 - x) * l.u + x * g.u;
+        let f = u_mix - u;
+        self.found = Some((sat, x, u_mix));
+        if f.abs() <= (1e-13 * u.abs()).max(1e-12) {
+            return Ok(Verdict::Done(()));
+        }
+        let crawling = f.abs() > 0.5 * self.residuals[1];
+        self.residuals = [f.abs(), self.residuals[0]];
+        let step = match quality_match(l, g, v, u).filter(|_| !crawling) {
+            Some((f, slope)) => self.halley_step(t, f, slope),
+            None => Step::BISECT,
+        };
+        Ok(if f < 0.0 {
+            Verdict::RootAbove(step)
+        } else {
+            Verdict::RootBelow(step)
+        })
+    }
+
+    /// Newton's step in 1/T on the quality match (`f`, its `slope`), with
+    /// Halley's correction from the curvature measured between this point
+    /// and the last: good once the steps are small, bounded where they are
+    /// not.
+    fn halley_step(&mut self, t: f64, f: f64, slope: f64) -> Step {
+        let y = 1.0 / t;
+        let mut dy = f / slope;
+        if let Some((y_last, slope_last)) = self.last_slope {
+            let curvature = (slope - slope_last) / (y - y_last);
+            let denominator = 1.0 - 0.5 * dy * curvature / slope;
+            if denominator > 0.5 && denominator < 2.0 {
+                dy /= denominator;
+            }
+        }
+        self.last_slope = Some((y, slope));
+        Step::to(1.0 / (y - dy))
+    }
+}
+
+/// The verdict at a T where v lies outside the dome's width (quality `x`
+/// outside [0, 1], `l` the saturated liquid): too hot, except below the
+/// liquid's density maximum (about 277 K), where v' falls as T rises and a
+/// v below it means too cold.
+fn outside_the_dome(l: &Properties, x: f64, t: f64) -> Verdict<()> {
+    let colder =
+        x < 0.0 && Variable::SpecificVolume.along_saturation(l, saturation_pressure_slope(t)) < 0.0;
+    if colder {
+        Verdict::RootAbove(Step::BISECT)
+    } else {
+        Verdict::RootBelow(Step::BISECT)
+    }
+}
+
+/// The wet state the iteration found (`found`, the last point inside the
+/// dome; `lo`, its bracket's lower end), if it keeps the promise; else no
+/// wet state, or non-convergence where the line is not resolved.
+fn wet_outcome(
+    found: Option<(Saturation, f64, f64)>,
+    lo: f64,
+    v: f64,
+    u: f64,
+) -> Result<Option<State>, Error> {
     let mut met = found.filter(|&(_, _, u_mix)| within_promise(Given::InternalEnergy, u_mix, u));
     if met.is_none() && lo == MIN_TEMPERATURE {
         // The bracket closed on 273.15 K without evaluating it: the
@@ -736,7 +779,7 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
 /// quality from v, held to [0, 1] where v is the saturated phase's within
 /// the promise.
 fn at_the_floor(v: f64, u: f64) -> Result<Option<(Saturation, f64, f64)>, Error> {
-    let sat = Saturation::at_temperature(MIN_TEMPERATURE, Units::Native)?;
+    let sat = Saturation::at_native_temperature(MIN_TEMPERATURE)?;
     let (l, g) = (sat.liquid().native(), sat.vapour().native());
     let x = (v - l.v) / (g.v - l.v);
     let x = if x > 1.0 && within_promise(Given::SpecificVolume, g.v, v) {

@@ -25,7 +25,7 @@ mod turbine;
 pub use attemperator::{spray_for_temperature, Spray};
 pub use closed_heater::{closed_heater, ClosedHeater, HeaterApproach};
 pub use cycle::result::{
-    Component, ComponentKind, CycleResult, PointLabel, PointRole, StatePoint, Stream,
+    Component, ComponentKind, CycleResult, PointLabel, PointRole, StatePoint, Stream, FIGURE_COUNT,
     MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
 };
 pub use cycle::solve_cycle;

@@ -109,17 +109,26 @@ impl Status {
 
     /// The statuses an [`Error`] can have ([`Status::of`]), in numbering
     /// order: what a per-element status of a result can say besides `Ok`.
-    pub const OF_ERRORS: [Status; 9] = [
-        Status::NotFinite,
-        Status::OutOfRange,
-        Status::QualityOutOfRange,
-        Status::NoStateInRange,
-        Status::BackwardEquationOutOfRange,
-        Status::PropertyUndefined,
-        Status::InvalidPlant,
-        Status::NotFixedByMeasurement,
-        Status::NotConverged,
-    ];
+    /// They are the bands 200–399 of [`Status::ALL`] (input values,
+    /// numerics), taken from it rather than listed again.
+    pub const OF_ERRORS: [Status; 9] = Status::in_bands(200, 399);
+
+    /// The statuses of [`Status::ALL`] numbered from `first` to `last`, in
+    /// numbering order; `N` must be their count (checked when compiled).
+    const fn in_bands<const N: usize>(first: u16, last: u16) -> [Status; N] {
+        let mut out = [Status::Ok; N];
+        let (mut k, mut n) = (0, 0);
+        while k < Status::ALL.len() {
+            let code = Status::ALL[k] as u16;
+            if code >= first && code <= last {
+                out[n] = Status::ALL[k];
+                n += 1;
+            }
+            k += 1;
+        }
+        assert!(n == N, "the count of statuses in the bands");
+        out
+    }
 
     /// The status with this number, if any.
     pub fn from_code(code: i32) -> Option<Status> {

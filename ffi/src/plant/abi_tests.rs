@@ -120,6 +120,40 @@ fn same(what: &str, a: f64, b: f64) {
     assert_eq!(a.to_bits(), b.to_bits(), "{what}: {a} vs {b}");
 }
 
+/// The C result's block of figures is the core's list: `figures()` reads
+/// the fields in their order in the struct, and the header names those
+/// fields as the core names its figures, in the same order.
+#[test]
+fn the_block_of_figures_is_the_cores_list() {
+    let mut r = marked_result();
+    let first = core::mem::offset_of!(EbullioCycleResult, turbine_work);
+    for k in 0..ebullio::plant::FIGURE_COUNT {
+        // SAFETY: the const asserts beside the struct put FIGURE_COUNT
+        // doubles, without padding, from `turbine_work` on.
+        unsafe {
+            let field = (&mut *r as *mut EbullioCycleResult as *mut u8).add(first + 8 * k);
+            field.cast::<f64>().write_unaligned(k as f64);
+        }
+    }
+    let in_order: Vec<f64> = (0..ebullio::plant::FIGURE_COUNT)
+        .map(|k| k as f64)
+        .collect();
+    assert_eq!(r.figures().to_vec(), in_order);
+    let header = std::fs::read_to_string(concat!(env!("CARGO_MANIFEST_DIR"), "/include/ebullio.h"))
+        .expect("the committed header");
+    let block = header
+        .split("uint32_t component_count;")
+        .nth(1)
+        .and_then(|rest| rest.split("extraction_fractions[").next())
+        .expect("EbullioCycleResult in the header");
+    let names: Vec<&str> = block
+        .lines()
+        .filter_map(|line| line.trim().strip_prefix("double "))
+        .map(|rest| rest.trim_end_matches(';'))
+        .collect();
+    assert_eq!(names, ebullio::plant::CycleResult::FIGURE_NAMES);
+}
+
 #[test]
 fn the_cycle_block_holds_the_cores_bits() {
     let (c, core) = tallowmere();
@@ -127,43 +161,8 @@ fn the_cycle_block_holds_the_cores_bits() {
     let (status, r) = solve(&c);
     assert_eq!(status, EbullioStatus::Ok);
     assert_eq!(r.units, EbullioUnits::MetricEngineering);
-    for (what, a, b) in [
-        ("turbine work", r.turbine_work, expected.turbine_work),
-        ("pump work", r.pump_work, expected.pump_work),
-        ("net work", r.net_work, expected.net_work),
-        ("boiler heat", r.boiler_heat, expected.boiler_heat),
-        ("reheat heat", r.reheat_heat, expected.reheat_heat),
-        ("heat input", r.heat_input, expected.heat_input),
-        ("condenser duty", r.condenser_duty, expected.condenser_duty),
-        (
-            "efficiency",
-            r.thermal_efficiency,
-            expected.thermal_efficiency,
-        ),
-        (
-            "heat rate kJ",
-            r.heat_rate_kj_per_kwh,
-            expected.heat_rate_kj_per_kwh,
-        ),
-        (
-            "heat rate Btu",
-            r.heat_rate_btu_per_kwh,
-            expected.heat_rate_btu_per_kwh,
-        ),
-        (
-            "steam rate kg",
-            r.steam_rate_kg_per_kwh,
-            expected.steam_rate_kg_per_kwh,
-        ),
-        (
-            "steam rate lbm",
-            r.steam_rate_lbm_per_kwh,
-            expected.steam_rate_lbm_per_kwh,
-        ),
-        ("back work", r.back_work_ratio, expected.back_work_ratio),
-        ("carnot", r.carnot_efficiency, expected.carnot_efficiency),
-    ] {
-        same(what, a, b);
+    for ((name, b), a) in expected.figures().into_iter().zip(r.figures()) {
+        same(name, a, b);
     }
     assert_eq!(expected.extraction_fractions().len(), 7);
     for (i, f) in expected.extraction_fractions().iter().enumerate() {

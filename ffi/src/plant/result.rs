@@ -3,7 +3,9 @@
 
 use core::mem::{offset_of, size_of};
 
-use ebullio::plant::{Component, ComponentKind, CycleResult, PointRole, StatePoint, Stream};
+use ebullio::plant::{
+    Component, ComponentKind, CycleResult, PointRole, StatePoint, Stream, FIGURE_COUNT,
+};
 use ebullio::Property;
 
 use crate::args::SizePrefixed;
@@ -304,11 +306,12 @@ impl EbullioCycleResult {
 }
 
 impl EbullioCycleResult {
-    /// Whether every figure is a finite number (a point's quality aside,
-    /// NaN for a single-phase state): the call writes the block with
-    /// status 0 only then.
-    pub(crate) fn all_finite(&self) -> bool {
-        let totals = [
+    /// The block of figures, `turbine_work` to `carnot_efficiency`, in the
+    /// order of their fields: the order of the core's
+    /// [`CycleResult::FIGURE_NAMES`] (`abi_tests.rs` ties the fields, their
+    /// names in the header and their values to the core's).
+    pub(crate) fn figures(&self) -> [f64; FIGURE_COUNT] {
+        [
             self.turbine_work,
             self.pump_work,
             self.net_work,
@@ -323,7 +326,14 @@ impl EbullioCycleResult {
             self.steam_rate_lbm_per_kwh,
             self.back_work_ratio,
             self.carnot_efficiency,
-        ];
+        ]
+    }
+
+    /// Whether every figure is a finite number (a point's quality aside,
+    /// NaN for a single-phase state): the call writes the block with
+    /// status 0 only then.
+    pub(crate) fn all_finite(&self) -> bool {
+        let totals = self.figures();
         let points = self
             .points
             .iter()

@@ -229,23 +229,9 @@ def solve(cycle: Cycle) -> "CycleResult":
 
 # -- the result --------------------------------------------------------------
 
-#: The cycle totals, in the order tables show them.
-TOTALS = (
-    "turbine_work",
-    "pump_work",
-    "net_work",
-    "boiler_heat",
-    "reheat_heat",
-    "heat_input",
-    "condenser_duty",
-    "thermal_efficiency",
-    "heat_rate_kj_per_kwh",
-    "heat_rate_btu_per_kwh",
-    "steam_rate_kg_per_kwh",
-    "steam_rate_lbm_per_kwh",
-    "back_work_ratio",
-    "carnot_efficiency",
-)
+#: The cycle totals, in the order tables show them: the core's figures
+#: (``CycleResult::FIGURE_NAMES``), their names and order taken from it.
+TOTALS = tuple(_core.FIGURES)
 
 
 class CycleResult:

@@ -171,8 +171,21 @@ pub fn locate_on_side(p: f64, t: f64, side: SaturationSide) -> Subregion {
 }
 
 /// The subregion tree of the release, with `liquid_side` answering
-/// T ≤ T_s(p) where the tree asks it.
+/// T ≤ T_s(p) where the tree asks it: one function per band of pressure
+/// the tree first branches on.
 fn locate_beside_saturation(p: f64, t: f64, liquid_side: impl Fn() -> bool) -> Subregion {
+    if p > 25.0 {
+        above_25_mpa(p, t)
+    } else if p > 22.5 {
+        from_22_5_to_25_mpa(p, t)
+    } else {
+        up_to_22_5_mpa(p, t, liquid_side)
+    }
+}
+
+/// The tree above 25 MPa: subregions 3a–3f, far from the critical point.
+#[inline]
+fn above_25_mpa(p: f64, t: f64) -> Subregion {
     use Subregion as S;
     if p > 40.0 {
         if t <= t_3ab(p) {
@@ -180,17 +193,23 @@ fn locate_beside_saturation(p: f64, t: f64, liquid_side: impl Fn() -> bool) -> S
         } else {
             S::B
         }
-    } else if p > 25.0 {
-        if t <= t_3cd(p) {
-            S::C
-        } else if t <= t_3ab(p) {
-            S::D
-        } else if t <= t_3ef(p) {
-            S::E
-        } else {
-            S::F
-        }
-    } else if p > 23.0 {
+    } else if t <= t_3cd(p) {
+        S::C
+    } else if t <= t_3ab(p) {
+        S::D
+    } else if t <= t_3ef(p) {
+        S::E
+    } else {
+        S::F
+    }
+}
+
+/// The tree for 22.5 MPa < p ≤ 25 MPa: subregions 3g–3p above the critical
+/// pressure, where no side of the saturation line is asked.
+#[inline]
+fn from_22_5_to_25_mpa(p: f64, t: f64) -> Subregion {
+    use Subregion as S;
+    if p > 23.0 {
         if t <= t_3cd(p) {
             S::C
         } else if t <= t_3gh(p) {
@@ -208,25 +227,31 @@ fn locate_beside_saturation(p: f64, t: f64, liquid_side: impl Fn() -> bool) -> S
         } else {
             S::K
         }
-    } else if p > 22.5 {
-        if t <= t_3cd(p) {
-            S::C
-        } else if t <= t_3gh(p) {
-            S::L
-        } else if t <= t_3mn(p) {
-            S::M
-        } else if t <= t_3ef(p) {
-            S::N
-        } else if t <= t_3op(p) {
-            S::O
-        } else if t <= t_3ij(p) {
-            S::P
-        } else if t <= t_3jk(p) {
-            S::J
-        } else {
-            S::K
-        }
-    } else if p > P_SAT_643 {
+    } else if t <= t_3cd(p) {
+        S::C
+    } else if t <= t_3gh(p) {
+        S::L
+    } else if t <= t_3mn(p) {
+        S::M
+    } else if t <= t_3ef(p) {
+        S::N
+    } else if t <= t_3op(p) {
+        S::O
+    } else if t <= t_3ij(p) {
+        S::P
+    } else if t <= t_3jk(p) {
+        S::J
+    } else {
+        S::K
+    }
+}
+
+/// The tree at 22.5 MPa and below: subregions 3q–3t and the near-critical
+/// ones, where the side of the saturation line decides.
+#[inline]
+fn up_to_22_5_mpa(p: f64, t: f64, liquid_side: impl Fn() -> bool) -> Subregion {
+    use Subregion as S;
+    if p > P_SAT_643 {
         if t <= t_3cd(p) {
             S::C
         } else if t <= t_3qu(p) {

@@ -19,6 +19,9 @@ pub const MAX_COMPONENTS: usize = 4 + MAX_CASINGS + 6 * MAX_HEATERS;
 /// heater's steam, cascaded drains and feedwater.
 pub const MAX_STREAMS: usize = 3;
 
+/// How many figures [`CycleResult::figures`] gives.
+pub const FIGURE_COUNT: usize = 14;
+
 /// What a state point is.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
 #[repr(u32)]
@@ -191,6 +194,27 @@ impl Component {
     }
 }
 
+/// [`CycleResult::FIGURE_NAMES`] and [`CycleResult::figures`] from the one
+/// list of the figures' fields, so that a name is its field's by
+/// construction.
+macro_rules! figures {
+    ($($field:ident),* $(,)?) => {
+        /// The names of the cycle's figures, from turbine work to the
+        /// Carnot efficiency, in the order tables show them: their fields'
+        /// names. The one list of them: the bindings take their names and
+        /// order from it (Python's result and `ebullio.plant.TOTALS`) or
+        /// are tested against it (the C result's block of figures, whose
+        /// fields stand in this order).
+        pub const FIGURE_NAMES: [&'static str; FIGURE_COUNT] = [$(stringify!($field)),*];
+
+        /// The cycle's figures by name, in the order of
+        /// [`CycleResult::FIGURE_NAMES`].
+        pub fn figures(&self) -> [(&'static str, f64); FIGURE_COUNT] {
+            [$((stringify!($field), self.$field)),*]
+        }
+    };
+}
+
 /// A solved cycle. Specific values are per unit mass of throttle steam,
 /// in the cycle's units (kJ/kg or Btu/lbm).
 #[derive(Clone, Copy, Debug, PartialEq)]
@@ -249,6 +273,23 @@ impl CycleResult {
     /// description's order.
     pub fn extraction_fractions(&self) -> &[f64] {
         &self.extraction_fractions[..self.heater_count]
+    }
+
+    figures! {
+        turbine_work,
+        pump_work,
+        net_work,
+        boiler_heat,
+        reheat_heat,
+        heat_input,
+        condenser_duty,
+        thermal_efficiency,
+        heat_rate_kj_per_kwh,
+        heat_rate_btu_per_kwh,
+        steam_rate_kg_per_kwh,
+        steam_rate_lbm_per_kwh,
+        back_work_ratio,
+        carnot_efficiency,
     }
 
     /// The first point with this role and number.
