@@ -12,6 +12,7 @@
 mod calculation;
 mod estimate;
 mod flags;
+mod flow_meter;
 mod measurement;
 mod phase_checks;
 mod point;
@@ -21,6 +22,7 @@ mod tracked;
 pub use calculation::{evaluate, evaluate_with_uncertainty, Calculation, Tested};
 pub use estimate::Estimate;
 pub use flags::Flags;
+pub use flow_meter::{FlowMeter, FlowMeterFigures, MeteredFluid, PrimaryElement};
 pub use measurement::Measured;
 pub use section::{SectionFigures, SectionTest, WetSectionTest};
 pub use tracked::{Sensitive, Tracked};
