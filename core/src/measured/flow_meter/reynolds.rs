@@ -7,6 +7,13 @@
 //! orifice plate's stays below 0.01), so each step gains 1.5 digits or more.
 //! Run on tracked numbers the slopes follow the same contraction and
 //! converge with the value to the implicit function's derivative.
+//!
+//! Far below the standards' Reynolds numbers the equations turn steep: an
+//! orifice plate's C(Re_D) falls with Re_D, so C − C(r·K·C) rises through
+//! a single root, found here down to Re_D of a few hundred; a nozzle's
+//! rises with Re_D and the root vanishes (about Re_D 3000 for the ISA 1932
+//! nozzle, a few hundred for the long radius one): no C exists, and the
+//! iteration ends `NotConverged`.
 
 use super::super::tracked::Tracked;
 use crate::Error;
