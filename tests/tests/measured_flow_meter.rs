@@ -221,8 +221,8 @@ fn the_reynolds_iteration_reaches_its_fixed_point() {
 /// ε of a nozzle from the standard's perfect-gas equation against an
 /// isentropic expansion of real steam computed with the engine (the
 /// energy and continuity equations from p1 to the throat at p2, s1): the
-/// two agree within the uncertainty ISO 5167-3:2003 states for ε,
-/// (4 + 100β⁸)·Δp/p1 per cent at about 95 % (recalled, fairly sure).
+/// two agree within a tenth of the uncertainty ISO 5167-3:2003 states for
+/// ε, (4 + 100β⁸)·Δp/p1 per cent at about 95 % (recalled, fairly sure).
 #[test]
 fn nozzle_expansibility_matches_an_isentropic_expansion_of_steam() {
     let units = Units::Native;
@@ -258,7 +258,7 @@ fn nozzle_expansibility_matches_an_isentropic_expansion_of_steam() {
         let epsilon = rho2 * u2 * (1.0 - beta4).sqrt() / (2.0 * x * p1 * 1e6 * rho1).sqrt();
         let stated = (4.0 + 100.0 * beta4 * beta4) * x / 100.0;
         assert!(
-            (f.expansibility - epsilon).abs() <= stated,
+            (f.expansibility - epsilon).abs() <= 0.1 * stated,
             "p1 {p1} T1 {t1} x {x}: ε {} vs isentropic {epsilon}",
             f.expansibility
         );

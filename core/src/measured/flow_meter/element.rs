@@ -4,7 +4,7 @@
 use super::super::tracked::Tracked;
 use super::expansibility;
 use super::nozzle;
-use super::orifice::{self, Tappings};
+use super::orifice::{Orifice, Tappings};
 use crate::{Quantity, Units};
 
 /// A differential-pressure meter's primary element (for an orifice plate,
@@ -72,33 +72,24 @@ impl PrimaryElement {
 
     /// C(β, Re_D, D), D in metres.
     pub(super) fn coefficient<T: Tracked>(self, beta: T, reynolds: T, pipe: T) -> T {
-        match self {
-            PrimaryElement::OrificeCornerTappings => {
-                orifice::discharge_coefficient(Tappings::Corner, beta, reynolds, pipe)
-            }
-            PrimaryElement::OrificeDAndHalfDTappings => {
-                orifice::discharge_coefficient(Tappings::DAndHalfD, beta, reynolds, pipe)
-            }
-            PrimaryElement::OrificeFlangeTappings => {
-                orifice::discharge_coefficient(Tappings::Flange, beta, reynolds, pipe)
-            }
-            PrimaryElement::Isa1932Nozzle => nozzle::isa_1932(beta, reynolds),
-            PrimaryElement::LongRadiusNozzle => nozzle::long_radius(beta, reynolds),
-            // ISO 5167-4:2003, 5.5.2: fixed values within each tube's limits.
-            PrimaryElement::VenturiAsCast => T::constant(0.984),
-            PrimaryElement::VenturiMachined => T::constant(0.995),
-            PrimaryElement::VenturiRoughWelded => T::constant(0.985),
-        }
+        self.at(beta, pipe).at(reynolds)
     }
 
-    /// Whether C depends on the Reynolds number (the venturi tubes' does not).
-    pub(super) fn depends_on_reynolds(self) -> bool {
-        !matches!(
-            self,
-            PrimaryElement::VenturiAsCast
-                | PrimaryElement::VenturiMachined
-                | PrimaryElement::VenturiRoughWelded
-        )
+    /// The element's C at diameter ratio β in a pipe of diameter D
+    /// (metres), as a function of Re_D alone.
+    pub(super) fn at<T: Tracked>(self, beta: T, pipe: T) -> Coefficient<T> {
+        let orifice = |tappings| Coefficient::Orifice(Orifice::new(tappings, beta, pipe));
+        match self {
+            PrimaryElement::OrificeCornerTappings => orifice(Tappings::Corner),
+            PrimaryElement::OrificeDAndHalfDTappings => orifice(Tappings::DAndHalfD),
+            PrimaryElement::OrificeFlangeTappings => orifice(Tappings::Flange),
+            PrimaryElement::Isa1932Nozzle => Coefficient::Isa1932(beta),
+            PrimaryElement::LongRadiusNozzle => Coefficient::LongRadius(beta),
+            // ISO 5167-4:2003, 5.5.2: fixed values within each tube's limits.
+            PrimaryElement::VenturiAsCast => Coefficient::Fixed(T::constant(0.984)),
+            PrimaryElement::VenturiMachined => Coefficient::Fixed(T::constant(0.995)),
+            PrimaryElement::VenturiRoughWelded => Coefficient::Fixed(T::constant(0.985)),
+        }
     }
 
     /// ε at diameter ratio β, drop ratio x = Δp/p1 and isentropic
@@ -108,6 +99,31 @@ impl PrimaryElement {
             expansibility::orifice(beta, x, kappa)
         } else {
             expansibility::isentropic(beta, x, kappa)
+        }
+    }
+}
+
+/// An element's C as a function of Re_D alone, for one β and D.
+#[derive(Clone, Copy)]
+pub(super) enum Coefficient<T> {
+    /// An orifice plate's Reader-Harris/Gallagher equation.
+    Orifice(Orifice<T>),
+    /// The ISA 1932 nozzle's, at this β.
+    Isa1932(T),
+    /// The long radius nozzle's, at this β.
+    LongRadius(T),
+    /// A venturi tube's fixed C.
+    Fixed(T),
+}
+
+impl<T: Tracked> Coefficient<T> {
+    /// C at Re_D = `reynolds`.
+    pub(super) fn at(&self, reynolds: T) -> T {
+        match self {
+            Coefficient::Orifice(orifice) => orifice.at(reynolds),
+            Coefficient::Isa1932(beta) => nozzle::isa_1932(*beta, reynolds),
+            Coefficient::LongRadius(beta) => nozzle::long_radius(*beta, reynolds),
+            Coefficient::Fixed(c) => *c,
         }
     }
 }

@@ -22,39 +22,66 @@ pub(super) const INCH: f64 = 0.0254;
 /// small-pipe term.
 pub(super) const SMALL_PIPE: f64 = 2.8 * INCH;
 
-/// C(β, Re_D, D), D in metres at the flowing temperature.
-pub(super) fn discharge_coefficient<T: Tracked>(
-    tappings: Tappings,
+/// The equation for one plate: the terms that do not depend on Re_D
+/// evaluated once, so that each step of the Reynolds iteration pays only
+/// for the three that do.
+#[derive(Clone, Copy)]
+pub(super) struct Orifice<T> {
     beta: T,
-    reynolds: T,
-    pipe: T,
-) -> T {
-    let k = T::constant;
-    let one = k(1.0);
-    // L1 = upstream spacing / D, L'2 = downstream spacing / D.
-    let (l1, l2) = match tappings {
-        Tappings::Corner => (k(0.0), k(0.0)),
-        Tappings::DAndHalfD => (k(1.0), k(0.47)),
-        Tappings::Flange => {
-            let l = k(INCH) / pipe;
-            (l, l)
+    /// β^3.5.
+    beta_3_5: T,
+    /// The upstream tapping term (0.043 + 0.080e^(−10L1) − 0.123e^(−7L1))·β⁴/(1 − β⁴),
+    /// before its factor (1 − 0.11A).
+    upstream: T,
+    /// Every term free of Re_D.
+    fixed: T,
+}
+
+impl<T: Tracked> Orifice<T> {
+    /// The plate at diameter ratio `beta` in a pipe of diameter `pipe`,
+    /// metres at the flowing temperature.
+    pub(super) fn new(tappings: Tappings, beta: T, pipe: T) -> Self {
+        let k = T::constant;
+        let one = k(1.0);
+        // L1 = upstream spacing / D, L'2 = downstream spacing / D.
+        let (l1, l2) = match tappings {
+            Tappings::Corner => (k(0.0), k(0.0)),
+            Tappings::DAndHalfD => (k(1.0), k(0.47)),
+            Tappings::Flange => {
+                let l = k(INCH) / pipe;
+                (l, l)
+            }
+        };
+        let b2 = beta * beta;
+        let b4 = b2 * b2;
+        let b8 = b4 * b4;
+        let m2 = k(2.0) * l2 / (one - beta);
+        let upstream = (k(0.043) + k(0.080) * (-(k(10.0) * l1)).exp()
+            - k(0.123) * (-(k(7.0) * l1)).exp())
+            * b4
+            / (one - b4);
+        let fixed = k(0.5961) + k(0.0261) * b2 - k(0.216) * b8 + upstream
+            - k(0.031) * (m2 - k(0.8) * m2.powf(1.1)) * beta.powf(1.3);
+        let fixed = if pipe.value() < SMALL_PIPE {
+            fixed + k(0.011) * (k(0.75) - beta) * (k(2.8) - pipe / k(INCH))
+        } else {
+            fixed
+        };
+        Orifice {
+            beta,
+            beta_3_5: beta.powf(3.5),
+            upstream,
+            fixed,
         }
-    };
-    let b2 = beta * beta;
-    let b4 = b2 * b2;
-    let b8 = b4 * b4;
-    let a = (k(19_000.0) * beta / reynolds).powf(0.8);
-    let m2 = k(2.0) * l2 / (one - beta);
-    let upstream =
-        k(0.043) + k(0.080) * (-(k(10.0) * l1)).exp() - k(0.123) * (-(k(7.0) * l1)).exp();
-    let c = k(0.5961) + k(0.0261) * b2 - k(0.216) * b8
-        + k(0.000521) * (k(1e6) * beta / reynolds).powf(0.7)
-        + (k(0.0188) + k(0.0063) * a) * beta.powf(3.5) * (k(1e6) / reynolds).powf(0.3)
-        + upstream * (one - k(0.11) * a) * b4 / (one - b4)
-        - k(0.031) * (m2 - k(0.8) * m2.powf(1.1)) * beta.powf(1.3);
-    if pipe.value() < SMALL_PIPE {
-        c + k(0.011) * (k(0.75) - beta) * (k(2.8) - pipe / k(INCH))
-    } else {
-        c
+    }
+
+    /// C at Re_D = `reynolds`.
+    pub(super) fn at(&self, reynolds: T) -> T {
+        let k = T::constant;
+        let a = (k(19_000.0) * self.beta / reynolds).powf(0.8);
+        self.fixed
+            + k(0.000521) * (k(1e6) * self.beta / reynolds).powf(0.7)
+            + (k(0.0188) + k(0.0063) * a) * self.beta_3_5 * (k(1e6) / reynolds).powf(0.3)
+            - k(0.11) * a * self.upstream
     }
 }
