@@ -777,7 +777,16 @@ fn impossible_meters_are_refused() {
             ..good
         },
     ];
-    for meter in bad {
+    // An orifice plate's empirical ε at β = 0.98 and p2/p1 = 0.02 is
+    // negative: 1 − (0.351 + 0.256β⁴ + 0.93β⁸)(1 − 0.02^(1/κ)) ≈ −0.3.
+    let steam = auxiliary_steam();
+    let no_expansibility = FlowMeter {
+        element: PrimaryElement::OrificeCornerTappings,
+        bore: Measured::exact(0.98 * steam.pipe_diameter.value),
+        differential_pressure: Measured::exact(0.98 * steam.upstream_pressure.value),
+        ..steam
+    };
+    for meter in bad.into_iter().chain([no_expansibility]) {
         assert!(
             matches!(meter.evaluate(units), Err(Error::InvalidPlant { .. })),
             "{meter:?}"

@@ -3,7 +3,7 @@
 
 use super::super::tracked::Tracked;
 use super::expansibility;
-use super::nozzle;
+use super::nozzle::Nozzle;
 use super::orifice::{Orifice, Tappings};
 use crate::{Quantity, Units};
 
@@ -83,8 +83,8 @@ impl PrimaryElement {
             PrimaryElement::OrificeCornerTappings => orifice(Tappings::Corner),
             PrimaryElement::OrificeDAndHalfDTappings => orifice(Tappings::DAndHalfD),
             PrimaryElement::OrificeFlangeTappings => orifice(Tappings::Flange),
-            PrimaryElement::Isa1932Nozzle => Coefficient::Isa1932(beta),
-            PrimaryElement::LongRadiusNozzle => Coefficient::LongRadius(beta),
+            PrimaryElement::Isa1932Nozzle => Coefficient::Nozzle(Nozzle::isa_1932(beta)),
+            PrimaryElement::LongRadiusNozzle => Coefficient::Nozzle(Nozzle::long_radius(beta)),
             // ISO 5167-4:2003, 5.5.2: fixed values within each tube's limits.
             PrimaryElement::VenturiAsCast => Coefficient::Fixed(T::constant(0.984)),
             PrimaryElement::VenturiMachined => Coefficient::Fixed(T::constant(0.995)),
@@ -108,10 +108,8 @@ impl PrimaryElement {
 pub(super) enum Coefficient<T> {
     /// An orifice plate's Reader-Harris/Gallagher equation.
     Orifice(Orifice<T>),
-    /// The ISA 1932 nozzle's, at this β.
-    Isa1932(T),
-    /// The long radius nozzle's, at this β.
-    LongRadius(T),
+    /// A nozzle's.
+    Nozzle(Nozzle<T>),
     /// A venturi tube's fixed C.
     Fixed(T),
 }
@@ -121,8 +119,7 @@ impl<T: Tracked> Coefficient<T> {
     pub(super) fn at(&self, reynolds: T) -> T {
         match self {
             Coefficient::Orifice(orifice) => orifice.at(reynolds),
-            Coefficient::Isa1932(beta) => nozzle::isa_1932(*beta, reynolds),
-            Coefficient::LongRadius(beta) => nozzle::long_radius(*beta, reynolds),
+            Coefficient::Nozzle(nozzle) => nozzle.at(reynolds),
             Coefficient::Fixed(c) => *c,
         }
     }

@@ -254,6 +254,13 @@ impl Calculation<6, 5> for FlowMeter {
                 self.element.expansibility(beta, x, kappa)
             }
         };
+        if expansibility.value() <= 0.0 {
+            // Only an orifice plate of β above about 0.9 at p2/p1 of a few
+            // per cent, far outside its empirical equation's p2/p1 ≥ 0.75.
+            return Err(refuse(
+                "its pressure ratio lies so far below 0.75 that its expansibility equation gives no flow",
+            ));
+        }
         let b2 = beta * beta;
         // Pressures are native MPa; √(2Δp ρ) wants Pa.
         let per_coefficient = expansibility * k(PI / 4.0) * d * d * (k(2e6) * dp * rho).sqrt()

@@ -23,11 +23,16 @@ pub(super) const INCH: f64 = 0.0254;
 pub(super) const SMALL_PIPE: f64 = 2.8 * INCH;
 
 /// The equation for one plate: the terms that do not depend on Re_D
-/// evaluated once, so that each step of the Reynolds iteration pays only
-/// for the three that do.
+/// evaluated once, so that each step of the Reynolds iteration pays for
+/// one power: its three powers of Re_D are those of u = (10⁶/Re_D)^0.1,
+/// (10⁶/Re_D)^0.3 = u³, (10⁶β/Re_D)^0.7 = β^0.7·u⁷ and
+/// A = (19 000β/Re_D)^0.8 = (0.019β)^0.8·u⁸.
 #[derive(Clone, Copy)]
 pub(super) struct Orifice<T> {
-    beta: T,
+    /// 0.000521·β^0.7, the coefficient of u⁷.
+    low_reynolds: T,
+    /// (0.019β)^0.8, A per u⁸.
+    a_per_u8: T,
     /// β^3.5.
     beta_3_5: T,
     /// The upstream tapping term (0.043 + 0.080e^(−10L1) − 0.123e^(−7L1))·β⁴/(1 − β⁴),
@@ -68,7 +73,8 @@ impl<T: Tracked> Orifice<T> {
             fixed
         };
         Orifice {
-            beta,
+            low_reynolds: k(0.000521) * beta.powf(0.7),
+            a_per_u8: (k(0.019) * beta).powf(0.8),
             beta_3_5: beta.powf(3.5),
             upstream,
             fixed,
@@ -78,10 +84,11 @@ impl<T: Tracked> Orifice<T> {
     /// C at Re_D = `reynolds`.
     pub(super) fn at(&self, reynolds: T) -> T {
         let k = T::constant;
-        let a = (k(19_000.0) * self.beta / reynolds).powf(0.8);
-        self.fixed
-            + k(0.000521) * (k(1e6) * self.beta / reynolds).powf(0.7)
-            + (k(0.0188) + k(0.0063) * a) * self.beta_3_5 * (k(1e6) / reynolds).powf(0.3)
+        let u = (k(1e6) / reynolds).powf(0.1);
+        let u3 = u * u * u;
+        let u7 = u3 * u3 * u;
+        let a = self.a_per_u8 * u7 * u;
+        self.fixed + self.low_reynolds * u7 + (k(0.0188) + k(0.0063) * a) * self.beta_3_5 * u3
             - k(0.11) * a * self.upstream
     }
 }
