@@ -738,7 +738,7 @@ fn phase_flags_on_both_sides_of_saturation() {
 /// Impossible descriptions are refused, never computed (the framework's
 /// rule): no bore, no pipe, a bore not inside its pipe, no differential
 /// pressure or one as large as the upstream pressure, an expansion that
-/// closes the bore, a non-finite setting.
+/// closes the bore, no discharge coefficient, a non-finite setting.
 #[test]
 fn impossible_meters_are_refused() {
     let units = Units::MetricEngineering;
@@ -774,6 +774,10 @@ fn impossible_meters_are_refused() {
         },
         FlowMeter {
             element_expansion: -0.5,
+            ..good
+        },
+        FlowMeter {
+            discharge_coefficient_factor: Measured::exact(0.0),
             ..good
         },
     ];

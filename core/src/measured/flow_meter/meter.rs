@@ -214,6 +214,9 @@ impl Calculation<6, 5> for FlowMeter {
         if d20.value() >= pipe20.value() {
             return Err(refuse("its bore is not smaller than its pipe"));
         }
+        if factor.value() <= 0.0 {
+            return Err(refuse("its discharge coefficient factor is not positive"));
+        }
         if dp.value() <= 0.0 {
             return Err(refuse("its differential pressure is not positive"));
         }
@@ -275,6 +278,11 @@ impl Calculation<6, 5> for FlowMeter {
         };
         let mass_flow = c * per_coefficient;
         let reynolds_number = mass_flow * reynolds_per_flow;
+        if !(mass_flow.value().is_finite() && reynolds_number.value().is_finite()) {
+            return Err(Error::NotConverged {
+                what: "flow meter Reynolds number",
+            });
+        }
         let operating = Operating {
             beta: beta.value(),
             bore: d.value(),

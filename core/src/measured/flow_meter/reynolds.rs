@@ -36,7 +36,9 @@ pub(super) fn solve<T: Tracked>(k: T, r: T, coefficient: impl Fn(T) -> T) -> Res
         let next = coefficient(per_coefficient * c);
         let settled = (next.value() - c.value()).abs() <= TOLERANCE * next.value().abs();
         c = next;
-        if settled {
+        // Settled on a finite, positive C only: a factor far from 1 can
+        // drive C(Re_D) to overflow, where relative steps look settled.
+        if settled && c.value().is_finite() && c.value() > 0.0 {
             return Ok(c);
         }
     }
