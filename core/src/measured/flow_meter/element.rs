@@ -57,7 +57,7 @@ impl PrimaryElement {
         units: Units,
     ) -> f64 {
         let pipe = units.to_native(Quantity::Length, pipe_diameter);
-        self.coefficient(diameter_ratio, reynolds_number, pipe)
+        self.at(diameter_ratio, pipe).at(reynolds_number)
     }
 
     /// The orifice plate's tappings; `None` for the other elements.
@@ -68,11 +68,6 @@ impl PrimaryElement {
             PrimaryElement::OrificeFlangeTappings => Some(Tappings::Flange),
             _ => None,
         }
-    }
-
-    /// C(β, Re_D, D), D in metres.
-    pub(super) fn coefficient<T: Tracked>(self, beta: T, reynolds: T, pipe: T) -> T {
-        self.at(beta, pipe).at(reynolds)
     }
 
     /// The element's C at diameter ratio β in a pipe of diameter D

@@ -35,6 +35,11 @@ pub enum MeteredFluid {
     Steam = 2,
 }
 
+impl MeteredFluid {
+    /// Both fluids, in numbering order.
+    pub const ALL: [MeteredFluid; 2] = [MeteredFluid::Water, MeteredFluid::Steam];
+}
+
 /// A differential-pressure flow measurement: the element and its
 /// materials (settings) and the measured inputs, all in the caller's
 /// units. Bore and pipe diameter are given at 20 °C, as measured on the
