@@ -809,55 +809,80 @@ fn impossible_meters_are_refused() {
     assert!(matches!(nan.evaluate(units), Err(Error::NotFinite { .. })));
 }
 
-/// The same feedwater meter in all four unit systems (SP 811 factors):
-/// the same flow, each in its system's units, and the same dimensionless
-/// figures.
+/// The same meters in all four unit systems (SP 811 factors): the same
+/// flow and the same uncertainty, each in its system's units, and the
+/// same dimensionless figures. Tallowmere's feedwater, a supercritical
+/// unit's feedwater (280 bar, 290 °C: above the critical pressure) and
+/// the auxiliary steam line.
 #[test]
 fn the_same_flow_in_every_unit_system() {
-    let reference = feedwater();
+    let supercritical = FlowMeter {
+        upstream_pressure: Measured::new(280.0, 0.4),
+        upstream_temperature: Measured::new(290.0, 0.5),
+        ..feedwater()
+    };
     let base = Units::MetricEngineering;
-    let expected = figures(&reference, base);
-    let expected_native = base.to_native(Quantity::MassFlow, expected.mass_flow);
-    for units in Units::ALL {
-        let convert = |m: Measured, q: Quantity| {
-            let native = base.to_native(q, m.value);
-            Measured::exact(units.from_native(q, native))
-        };
-        let expansion = |x: f64| {
-            let native = base.to_native(Quantity::ExpansionCoefficient, x);
-            units.from_native(Quantity::ExpansionCoefficient, native)
-        };
-        let meter = FlowMeter {
-            element_expansion: expansion(reference.element_expansion),
-            pipe_expansion: expansion(reference.pipe_expansion),
-            upstream_pressure: convert(reference.upstream_pressure, Quantity::Pressure),
-            upstream_temperature: convert(reference.upstream_temperature, Quantity::Temperature),
-            differential_pressure: convert(reference.differential_pressure, Quantity::Pressure),
-            bore: convert(reference.bore, Quantity::Length),
-            pipe_diameter: convert(reference.pipe_diameter, Quantity::Length),
-            ..reference
-        };
-        let f = figures(&meter, units);
-        let flow = units.to_native(Quantity::MassFlow, f.mass_flow);
-        assert_relative(&format!("{units:?} flow"), flow, expected_native, 1e-12);
-        assert_relative(
-            &format!("{units:?} C"),
-            f.discharge_coefficient,
-            expected.discharge_coefficient,
-            1e-12,
-        );
-        assert_relative(
-            &format!("{units:?} Re"),
-            f.reynolds_number,
-            expected.reynolds_number,
-            1e-12,
-        );
+    for reference in [feedwater(), supercritical, auxiliary_steam()] {
+        let reference = with_stated_uncertainty(reference, base);
+        let expected = reference.evaluate_with_uncertainty(base, 2.0).unwrap();
+        assert_eq!(expected.flags, Flags::NONE);
+        let expected = expected.figures;
+        let to_native = |x: f64| base.to_native(Quantity::MassFlow, x);
+        for units in Units::ALL {
+            // A value converts with its scale's offset, an uncertainty as
+            // a difference.
+            let convert = |m: Measured, q: Quantity, difference: Quantity| {
+                let value = units.from_native(q, base.to_native(q, m.value));
+                let u = units.from_native(difference, base.to_native(difference, m.systematic));
+                Measured::new(value, u)
+            };
+            let expansion = |x: f64| {
+                let native = base.to_native(Quantity::ExpansionCoefficient, x);
+                units.from_native(Quantity::ExpansionCoefficient, native)
+            };
+            let pressure = |m| convert(m, Quantity::Pressure, Quantity::Pressure);
+            let length = |m| convert(m, Quantity::Length, Quantity::Length);
+            let meter = FlowMeter {
+                element_expansion: expansion(reference.element_expansion),
+                pipe_expansion: expansion(reference.pipe_expansion),
+                upstream_pressure: pressure(reference.upstream_pressure),
+                upstream_temperature: convert(
+                    reference.upstream_temperature,
+                    Quantity::Temperature,
+                    Quantity::TemperatureDifference,
+                ),
+                differential_pressure: pressure(reference.differential_pressure),
+                bore: length(reference.bore),
+                pipe_diameter: length(reference.pipe_diameter),
+                ..reference
+            };
+            let f = meter.evaluate_with_uncertainty(units, 2.0).unwrap().figures;
+            let native = |x: f64| units.to_native(Quantity::MassFlow, x);
+            let what = |figure: &str| format!("{units:?} {:?} {figure}", reference.fluid);
+            assert_relative(
+                &what("flow"),
+                native(f.mass_flow.value),
+                to_native(expected.mass_flow.value),
+                1e-12,
+            );
+            assert_relative(
+                &what("u(flow)"),
+                native(f.mass_flow.standard_uncertainty),
+                to_native(expected.mass_flow.standard_uncertainty),
+                1e-9,
+            );
+            for (figure, a, b) in [
+                ("C", f.discharge_coefficient, expected.discharge_coefficient),
+                ("ε", f.expansibility, expected.expansibility),
+                ("Re", f.reynolds_number, expected.reynolds_number),
+            ] {
+                assert_relative(&what(figure), a.value, b.value, 1e-12);
+            }
+        }
     }
     // Tallowmere-sized: about 500 kg/s of feedwater (≈ 4e6 lbm/h).
-    assert!(
-        (450.0..550.0).contains(&expected_native),
-        "{expected_native}"
-    );
+    let tallowmere = figures(&feedwater(), base).mass_flow;
+    assert!((450.0..550.0).contains(&tallowmere), "{tallowmere}");
 }
 
 /// Below a standard's Reynolds number limit the meter still gives a
