@@ -228,7 +228,7 @@ fn exercise_everything() -> f64 {
     sum +=
         sr4_04::pressure_region3_hs(1800.0, 4.0) + sr4_04::saturation_temperature_hs(2400.0, 6.0);
     sum += sr5_05::specific_volume(25.0, 650.0);
-    sum + exercise_plant()
+    sum + exercise_plant() + exercise_flow_meters()
 }
 
 /// The plant layer: a cycle with every kind of heater, its ideal twin, a
@@ -316,6 +316,44 @@ fn exercise_plant() -> f64 {
     sum += throttle(&shell, 0.3).map_or(0.0, |s| s.enthalpy());
     sum += mix(&[(1.0, &fw), (0.5, &liquid)], 1.0, n).map_or(0.0, |(m, _)| m);
     sum + heat_duty(1.0, &fw, &shell).unwrap_or(0.0)
+}
+
+/// The flow meter calculation: every element, water and steam, with and
+/// without its uncertainty, a refused one, and the standards' equations.
+fn exercise_flow_meters() -> f64 {
+    use ebullio::measured::{Calculation, FlowMeter, Measured, MeteredFluid, PrimaryElement};
+    let units = Units::MetricEngineering;
+    let mut sum = 0.0;
+    for element in PrimaryElement::ALL {
+        for (fluid, p, t, dp) in [
+            (MeteredFluid::Water, 195.0, 252.0, 1.78),
+            (MeteredFluid::Steam, 12.0, 250.0, 0.36),
+        ] {
+            let mut meter = FlowMeter {
+                element,
+                fluid,
+                element_expansion: 16.5e-6,
+                pipe_expansion: 12.0e-6,
+                upstream_pressure: Measured::new(p, 0.03),
+                upstream_temperature: Measured::new(t, 0.5),
+                differential_pressure: Measured::new(dp, 0.004),
+                bore: Measured::new(120.0, 0.02),
+                pipe_diameter: Measured::new(200.0, 0.2),
+                discharge_coefficient_factor: Measured::exact(1.0),
+            };
+            meter.discharge_coefficient_factor =
+                Measured::new(1.0, meter.stated_discharge_uncertainty(units));
+            sum += meter.evaluate(units).map_or(0.0, |r| r.figures.mass_flow);
+            sum += meter
+                .evaluate_with_uncertainty(units, 2.0)
+                .map_or(0.0, |r| r.figures.mass_flow.standard_uncertainty);
+            meter.bore = Measured::exact(250.0);
+            sum += meter.evaluate(units).map_or(1.0, |r| r.figures.mass_flow);
+        }
+        sum += element.discharge_coefficient(0.5, 1e6, 200.0, units);
+        sum += element.stated_discharge_uncertainty(0.5, 200.0, units);
+    }
+    sum
 }
 
 /// Counts the bytes written, so Display runs without storing text.

@@ -65,3 +65,15 @@ pub(crate) fn powi(x: f64, n: i32) -> f64 {
 pub(crate) fn atan(x: f64) -> f64 {
     libm::atan(x)
 }
+
+/// eˣ − 1, exact near x = 0 where `exp(x) - 1.0` loses its digits.
+#[inline]
+pub(crate) fn exp_m1(x: f64) -> f64 {
+    libm::expm1(x)
+}
+
+/// ln(1 + x), exact near x = 0 where `ln(1.0 + x)` loses its digits.
+#[inline]
+pub(crate) fn ln_1p(x: f64) -> f64 {
+    libm::log1p(x)
+}
