@@ -202,6 +202,8 @@ enum EbullioQuantity
   EBULLIO_QUANTITY_POWER = 22,
   // Heat rate (kJ/kWh; Btu/kWh in US customary units).
   EBULLIO_QUANTITY_HEAT_RATE = 23,
+  // A dimensionless ratio (a correction factor).
+  EBULLIO_QUANTITY_RATIO = 24,
 };
 #ifndef __cplusplus
 #if __STDC_VERSION__ >= 202311L

@@ -238,6 +238,8 @@ pub enum EbullioQuantity {
     Power = 22,
     /// Heat rate (kJ/kWh; Btu/kWh in US customary units).
     HeatRate = 23,
+    /// A dimensionless ratio (a correction factor).
+    Ratio = 24,
 }
 
 /// Decodes the request of a state call: input pair, unit system and
@@ -322,6 +324,7 @@ pub(crate) fn c_quantity(q: Quantity) -> EbullioQuantity {
         Quantity::HeatFlow => EbullioQuantity::HeatFlow,
         Quantity::Power => EbullioQuantity::Power,
         Quantity::HeatRate => EbullioQuantity::HeatRate,
+        Quantity::Ratio => EbullioQuantity::Ratio,
     }
 }
 

@@ -243,3 +243,27 @@ fn the_budget_prints_as_a_person_reads_it() {
     }
     assert!((total - 100.0).abs() < 0.3, "{text}");
 }
+
+/// An uncertainty too large to square is refused, not returned as an
+/// infinite budget; a negative or non-finite one is refused too.
+#[test]
+fn unusable_uncertainties_are_refused() {
+    let units = Units::MetricEngineering;
+    for u in [f64::MAX, -1.0, f64::NAN, f64::INFINITY] {
+        let mut test = hp_section();
+        test.inlet_pressure.systematic = u;
+        assert!(
+            matches!(
+                test.evaluate_with_uncertainty(units, 2.0),
+                Err(Error::InvalidPlant { .. })
+            ),
+            "{u}"
+        );
+    }
+    for k in [0.0, -2.0, f64::NAN, f64::INFINITY] {
+        assert!(
+            hp_section().evaluate_with_uncertainty(units, k).is_err(),
+            "{k}"
+        );
+    }
+}

@@ -85,6 +85,15 @@ pub(crate) fn propagate<const N: usize>(
         *part = r * r + s;
     }
     let variance = random_variance + systematic_variance;
+    if !variance.is_finite() {
+        // Finite uncertainties so large that their squares overflow.
+        return Err(Error::InvalidPlant {
+            part: crate::plant::PlantPart::single("uncertainty"),
+            what:
+                "the combined uncertainty overflows: an input's standard uncertainty is too large",
+            figure: None,
+        });
+    }
     let mut shares = [0.0; N];
     if variance > 0.0 {
         for (share, part) in shares.iter_mut().zip(parts) {

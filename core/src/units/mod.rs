@@ -75,6 +75,9 @@ pub enum Quantity {
     HeatFlow,
     /// Electrical power (a generator's output): kW, W in SI base units.
     Power,
+    /// A dimensionless ratio (a correction factor): the same in every
+    /// system.
+    Ratio,
     /// Heat rate, heat supplied per electrical energy delivered: kJ/kWh,
     /// Btu/kWh in US customary units (the trade's units; no coherent SI
     /// unit is in use).
@@ -107,6 +110,7 @@ impl Quantity {
             Quantity::Length => "length",
             Quantity::HeatFlow => "heat flow",
             Quantity::Power => "power",
+            Quantity::Ratio => "ratio",
             Quantity::HeatRate => "heat rate",
         }
     }
@@ -157,7 +161,7 @@ impl Quantity {
             Quantity::ThermalConductivity => UnitKind::ThermalConductivity,
             Quantity::Diffusivity => UnitKind::Diffusivity,
             Quantity::SurfaceTension => UnitKind::SurfaceTension,
-            Quantity::Quality => UnitKind::Dimensionless,
+            Quantity::Quality | Quantity::Ratio => UnitKind::Dimensionless,
             Quantity::MassFlow => UnitKind::MassFlow,
             Quantity::Length => UnitKind::Length,
             Quantity::HeatFlow => UnitKind::HeatFlow,

@@ -158,7 +158,7 @@ impl Calculation<6, 5> for FlowMeter {
         ("bore", Quantity::Length),
         ("pipe diameter", Quantity::Length),
         // Dimensionless: the quantity only picks the unit (none).
-        ("discharge coefficient factor", Quantity::Quality),
+        ("discharge coefficient factor", Quantity::Ratio),
     ];
     const FIGURES: [(&'static str, Option<Quantity>); 5] = [
         ("mass flow", Some(Quantity::MassFlow)),
