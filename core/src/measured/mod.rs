@@ -10,17 +10,22 @@
 //! bit, each as an [`Estimate`] with its budget.
 
 mod calculation;
+mod closed_heater;
 mod estimate;
 mod flags;
+mod inflow;
 mod measurement;
 mod phase_checks;
 mod point;
 mod section;
+mod stream_state;
 mod tracked;
 
 pub use calculation::{evaluate, evaluate_with_uncertainty, Calculation, Tested};
+pub use closed_heater::{ClosedHeaterFigures, ClosedHeaterTest};
 pub use estimate::Estimate;
 pub use flags::Flags;
+pub use inflow::Inflow;
 pub use measurement::Measured;
 pub use section::{SectionFigures, SectionTest, WetSectionTest};
 pub use tracked::{Sensitive, Tracked};
