@@ -9,6 +9,7 @@
 //! [`Calculation::evaluate_with_uncertainty`] the same values, bit for
 //! bit, each as an [`Estimate`] with its budget.
 
+mod attemperator;
 mod calculation;
 mod closed_heater;
 mod estimate;
@@ -23,6 +24,7 @@ mod section;
 mod stream_state;
 mod tracked;
 
+pub use attemperator::{AttemperatorFigures, AttemperatorTest};
 pub use calculation::{evaluate, evaluate_with_uncertainty, Calculation, Tested};
 pub use closed_heater::{ClosedHeaterFigures, ClosedHeaterTest};
 pub use estimate::Estimate;
