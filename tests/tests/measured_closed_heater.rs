@@ -439,3 +439,25 @@ fn impossible_descriptions_are_refused() {
     };
     assert!(matches!(nan.evaluate(units), Err(Error::NotFinite { .. })));
 }
+
+/// A cold liquid far below saturation at a high pressure is not near
+/// saturation whatever its pressure transmitter's uncertainty within
+/// reason: the pressure's share of the margin is dTsat/dp at Tsat(p), the
+/// slope of the line where the margin is measured (Clausius–Clapeyron),
+/// not at the liquid's own temperature, where psat(T) is a hundred times
+/// flatter. The lowest heater of the invented Tallowmere Station Unit 3:
+/// condensate at 30 °C and 30 bar ± 0.3 bar, 204 K subcooled.
+#[test]
+fn cold_feedwater_at_high_pressure_is_not_near_saturation() {
+    let lp_heater = ClosedHeaterTest {
+        shell_pressure: Measured::new(0.3, 0.003),
+        extraction_temperature: Measured::new(90.0, 1.0),
+        feedwater_inlet_temperature: Measured::new(30.0, 0.3),
+        feedwater_outlet_temperature: Measured::new(66.0, 0.3),
+        feedwater_pressure: Measured::new(30.0, 0.3),
+        drain_temperature: Measured::new(35.6, 0.3),
+        feedwater_flow: Measured::new(400.0, 2.0),
+        cascade: Inflow::NONE,
+    };
+    assert_eq!(flags_of(lp_heater), Flags::NONE);
+}
