@@ -12,9 +12,8 @@ use super::calculation::Calculation;
 use super::flags::Flags;
 use super::inflow::Inflow;
 use super::measurement::Measured;
-use super::stream_state::{Expected, StreamState};
+use super::stream_state::{tracked_saturation_temperature, Expected, StreamState};
 use super::tracked::Tracked;
-use crate::equations::saturation_line::{saturation_pressure_slope, saturation_temperature};
 use crate::numerics::constants::CRITICAL_PRESSURE;
 use crate::pairs::saturation::min_saturation_pressure;
 use crate::plant::PlantPart;
@@ -58,12 +57,6 @@ pub struct ClosedHeaterFigures<F> {
 }
 
 const CLOSED_HEATER: PlantPart = PlantPart::single("closed heater");
-
-/// Tsat(p), tracked: its slope is the inverse of the line's dpsat/dT.
-fn tracked_saturation_temperature<T: Tracked>(p: T) -> T {
-    let t = saturation_temperature(p.value());
-    p.map(t, || 1.0 / saturation_pressure_slope(t))
-}
 
 impl Calculation<10, 5> for ClosedHeaterTest {
     const INPUTS: [(&'static str, Quantity); 10] = [

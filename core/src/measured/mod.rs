@@ -12,6 +12,7 @@
 mod attemperator;
 mod calculation;
 mod closed_heater;
+mod condenser;
 mod estimate;
 mod flags;
 mod inflow;
@@ -27,6 +28,9 @@ mod tracked;
 pub use attemperator::{AttemperatorFigures, AttemperatorTest};
 pub use calculation::{evaluate, evaluate_with_uncertainty, Calculation, Tested};
 pub use closed_heater::{ClosedHeaterFigures, ClosedHeaterTest};
+pub use condenser::{
+    CondenserSteamFigures, CondenserSteamTest, CoolingWaterFigures, CoolingWaterTest,
+};
 pub use estimate::Estimate;
 pub use flags::Flags;
 pub use inflow::Inflow;

@@ -11,6 +11,7 @@ use super::measurement::Measured;
 use super::phase_checks::MeasuredPoint;
 use super::point::Point;
 use super::tracked::Tracked;
+use crate::equations::saturation_line::{saturation_pressure_slope, saturation_temperature};
 use crate::{Error, Saturation, Units, Variable};
 
 /// Which phase a stream should be in.
@@ -100,4 +101,11 @@ impl<T: Tracked> StreamState<T> {
             }
         }
     }
+}
+
+/// Tsat(p) (native, below the critical pressure), tracked: its slope is
+/// the inverse of the line's dpsat/dT.
+pub(crate) fn tracked_saturation_temperature<T: Tracked>(p: T) -> T {
+    let t = saturation_temperature(p.value());
+    p.map(t, || 1.0 / saturation_pressure_slope(t))
 }
