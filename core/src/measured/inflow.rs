@@ -1,6 +1,6 @@
-//! A water stream entering a heater beside its main flows (condensate, a
-//! drain cascaded from the heater above): its measured flow, pressure and
-//! temperature, or none. A calculation's inputs are a fixed array, so
+//! A water stream joining beside the main flows (condensate or a drain
+//! cascaded into a heater, a spray into steam): its measured flow,
+//! pressure and temperature, or none. A calculation's inputs are a fixed array, so
 //! "none" is a value: a flow of exactly 0 with no uncertainty.
 
 use super::flags::Flags;
@@ -9,8 +9,8 @@ use super::stream_state::{Expected, StreamState};
 use super::tracked::Tracked;
 use crate::{Error, Units, Variable};
 
-/// A water stream into a heater, measured upstream of its valve, where it
-/// is still liquid (at the receiving shell's pressure a hotter drain would
+/// A water stream joining others, measured upstream of its valve, where it
+/// is still liquid (at a receiving shell's pressure a hotter drain would
 /// be flashing: its own pressure fixes its enthalpy).
 #[derive(Clone, Copy, Debug, PartialEq, Default)]
 pub struct Inflow {
@@ -36,7 +36,7 @@ impl Inflow {
     /// pressure and temperature are read: a flow near zero still moves
     /// the balance by its uncertainty times its enthalpy).
     pub fn is_absent(&self) -> bool {
-        self.flow.value == 0.0 && self.flow.standard_uncertainty() == 0.0
+        absent(&self.flow)
     }
 
     /// The inputs in the order the calculations list them.
@@ -73,4 +73,10 @@ impl Inflow {
         )?;
         Ok(Some((state.get(Variable::Enthalpy), flags)))
     }
+}
+
+/// Whether a measured flow says "no stream": exactly 0 with no
+/// uncertainty.
+pub(crate) fn absent(flow: &Measured) -> bool {
+    flow.value == 0.0 && flow.standard_uncertainty() == 0.0
 }

@@ -15,6 +15,7 @@ mod closed_heater;
 mod condenser;
 mod estimate;
 mod flags;
+mod heat_rate;
 mod inflow;
 mod measurement;
 mod open_heater;
@@ -33,6 +34,7 @@ pub use condenser::{
 };
 pub use estimate::Estimate;
 pub use flags::Flags;
+pub use heat_rate::{HeatRateFigures, HeatRateTest};
 pub use inflow::Inflow;
 pub use measurement::Measured;
 pub use open_heater::{OpenHeaterFigures, OpenHeaterOutlet, OpenHeaterTest, OPEN_HEATER_DRAINS};
