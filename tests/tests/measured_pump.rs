@@ -212,3 +212,37 @@ fn a_pump_that_does_not_raise_the_pressure_is_refused() {
         Err(Error::InvalidPlant { .. })
     ));
 }
+
+/// A matched pair: the two thermometers calibrated together against one
+/// reference share its error, which the rise of a few kelvin then loses
+/// (GUM 5.2, full correlation). The temperature rise's uncertainty is
+/// √2 × the random part alone (the shared systematic parts cancel in
+/// T2 − T1: a closed form), u(η) falls accordingly, and Monte Carlo with
+/// the shared draw agrees within 5 %.
+#[test]
+fn a_matched_thermometer_pair_loses_its_shared_error() {
+    let apart = PumpTest {
+        suction_temperature: Measured::split(180.0, 0.1, 0.02),
+        discharge_temperature: Measured::split(discharge_at(0.83), 0.1, 0.02),
+        ..feed_pump(0.0)
+    };
+    let matched = PumpTest {
+        suction_temperature: apart.suction_temperature.sharing(1),
+        discharge_temperature: apart.discharge_temperature.sharing(1),
+        ..apart
+    };
+    let a = apart.evaluate_with_uncertainty(UNITS, 2.0).unwrap().figures;
+    let m = matched
+        .evaluate_with_uncertainty(UNITS, 2.0)
+        .unwrap()
+        .figures;
+    let rise = m.temperature_rise;
+    assert!((rise.standard_uncertainty - 2f64.sqrt() * 0.02).abs() < 1e-12);
+    assert!(rise.systematic_uncertainty < 1e-12);
+    let gain = a.efficiency.standard_uncertainty / m.efficiency.standard_uncertainty;
+    assert!(gain > 2.0, "{gain}");
+    let (spread, refused) = figure_spread(&matched, UNITS, 20_000, 37);
+    assert_eq!(refused, 0);
+    let ratio = m.efficiency.standard_uncertainty / spread[0];
+    assert!((0.95..=1.05).contains(&ratio), "{ratio}");
+}
