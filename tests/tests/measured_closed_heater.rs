@@ -461,3 +461,58 @@ fn cold_feedwater_at_high_pressure_is_not_near_saturation() {
     };
     assert_eq!(flags_of(lp_heater), Flags::NONE);
 }
+
+/// Where the extraction reads below saturation its enthalpy is h''(p) of
+/// the shell pressure alone (a drain above it, h'(p)): the extraction flow
+/// no longer depends on that temperature, and its slope in the shell pressure (through
+/// dh''/dp = (dh''/dT)/(dpsat/dT) and the drain's h(p, T)) matches a
+/// central difference of the figures themselves (the test's oracle, step
+/// 1e-3 bar; second-order error far below the 1e-6 allowed).
+#[test]
+fn saturated_extraction_slopes_follow_the_line() {
+    let units = Units::MetricEngineering;
+    let test = ClosedHeaterTest {
+        extraction_temperature: Measured::new(tsat(40.0) - 5.0, 1.0),
+        ..top_heater()
+    };
+    let tested = test.evaluate_with_uncertainty(units, 2.0).unwrap();
+    assert!(tested.flags.contains(Flags::NOT_VAPOUR));
+    let e = tested.figures.extraction_flow;
+    assert_eq!(e.sensitivities[1], 0.0);
+    let at = |p: f64| {
+        ClosedHeaterTest {
+            shell_pressure: Measured::exact(p),
+            ..test
+        }
+        .evaluate(units)
+        .unwrap()
+        .figures
+        .extraction_flow
+    };
+    let step = 1e-3;
+    let central = (at(40.0 + step) - at(40.0 - step)) / (2.0 * step);
+    let rel = (e.sensitivities[0] - central).abs() / central.abs();
+    assert!(rel < 1e-6, "{} vs {central}", e.sensitivities[0]);
+    // The same for a drain read above saturation: h'(p) of the shell.
+    let hot_drain = ClosedHeaterTest {
+        drain_temperature: Measured::new(tsat(40.0) + 5.0, 0.3),
+        ..top_heater()
+    };
+    let tested = hot_drain.evaluate_with_uncertainty(units, 2.0).unwrap();
+    assert!(tested.flags.contains(Flags::NOT_LIQUID));
+    let e = tested.figures.extraction_flow;
+    assert_eq!(e.sensitivities[5], 0.0);
+    let at = |p: f64| {
+        ClosedHeaterTest {
+            shell_pressure: Measured::exact(p),
+            ..hot_drain
+        }
+        .evaluate(units)
+        .unwrap()
+        .figures
+        .extraction_flow
+    };
+    let central = (at(40.0 + step) - at(40.0 - step)) / (2.0 * step);
+    let rel = (e.sensitivities[0] - central).abs() / central.abs();
+    assert!(rel < 1e-6, "{} vs {central}", e.sensitivities[0]);
+}
