@@ -516,3 +516,79 @@ fn saturated_extraction_slopes_follow_the_line() {
     let rel = (e.sensitivities[0] - central).abs() / central.abs();
     assert!(rel < 1e-6, "{} vs {central}", e.sensitivities[0]);
 }
+
+/// The energy balance closes on every result of a grid of readings, the
+/// flagged ones included, with each enthalpy by the documented rule: the
+/// state at (p,T), or the saturated phase the stream should be when the
+/// reading lies on the wrong side of the line (issue 14's identity, to
+/// 1e-9 relative of the duty).
+#[test]
+fn energy_balance_closes_on_a_grid_flagged_or_not() {
+    let units = Units::MetricEngineering;
+    let enthalpy = |vapour: bool, p: f64, t: f64| {
+        let sat = Saturation::at_pressure(p, units).unwrap();
+        let ts = sat.liquid().temperature();
+        match (vapour, t <= ts, t >= ts) {
+            (true, true, _) => sat.vapour().enthalpy(),
+            (false, _, true) => sat.liquid().enthalpy(),
+            _ => h(p, t, units),
+        }
+    };
+    let mut checked = 0;
+    let mut flagged = 0;
+    for shell in [0.3, 2.0, 10.0, 40.0, 150.0] {
+        let ts = tsat(shell);
+        for superheat in [-3.0, 2.0, 100.0] {
+            for drain_below in [-2.0, 5.0, 20.0] {
+                for cascade in [0.0, 25.0] {
+                    let test = ClosedHeaterTest {
+                        shell_pressure: Measured::new(shell, 0.002 * shell),
+                        extraction_temperature: Measured::new(ts + superheat, 1.0),
+                        feedwater_inlet_temperature: Measured::new(ts - 30.0, 0.3),
+                        feedwater_outlet_temperature: Measured::new(ts - 2.5, 0.3),
+                        feedwater_pressure: Measured::new(shell + 40.0, 0.2),
+                        drain_temperature: Measured::new(ts - drain_below, 0.3),
+                        feedwater_flow: Measured::new(300.0, 1.5),
+                        cascade: if cascade == 0.0 {
+                            Inflow::NONE
+                        } else {
+                            Inflow {
+                                flow: Measured::new(cascade, 0.5),
+                                pressure: Measured::new(shell + 20.0, 0.05),
+                                temperature: Measured::new(ts + 8.0, 0.3),
+                            }
+                        },
+                    };
+                    let r = test.evaluate(units).unwrap();
+                    let with = test.evaluate_with_uncertainty(units, 2.0).unwrap();
+                    assert_eq!(
+                        r.figures.extraction_flow.to_bits(),
+                        with.figures.extraction_flow.value.to_bits()
+                    );
+                    let v = |m: Measured| m.value;
+                    let h_ext = enthalpy(true, shell, v(test.extraction_temperature));
+                    let h_drain = enthalpy(false, shell, v(test.drain_temperature));
+                    let pf = v(test.feedwater_pressure);
+                    let h_in = enthalpy(false, pf, v(test.feedwater_inlet_temperature));
+                    let h_out = enthalpy(false, pf, v(test.feedwater_outlet_temperature));
+                    let c = test.cascade;
+                    let cascade_heat = if c.is_absent() {
+                        0.0
+                    } else {
+                        v(c.flow) * (enthalpy(false, v(c.pressure), v(c.temperature)) - h_drain)
+                    };
+                    let taken = v(test.feedwater_flow) * (h_out - h_in);
+                    let given = r.figures.extraction_flow * (h_ext - h_drain) + cascade_heat;
+                    assert!(
+                        (given - taken).abs() <= 1e-9 * taken.abs(),
+                        "{shell} bar, superheat {superheat}, drain {drain_below}: {given} vs {taken}"
+                    );
+                    checked += 1;
+                    flagged += usize::from(!r.flags.is_empty());
+                }
+            }
+        }
+    }
+    assert_eq!(checked, 90);
+    assert!(flagged > 30, "{flagged}");
+}
