@@ -228,7 +228,7 @@ fn exercise_everything() -> f64 {
     sum +=
         sr4_04::pressure_region3_hs(1800.0, 4.0) + sr4_04::saturation_temperature_hs(2400.0, 6.0);
     sum += sr5_05::specific_volume(25.0, 650.0);
-    sum + exercise_plant() + exercise_flow_meters()
+    sum + exercise_plant() + exercise_flow_meters() + exercise_measured_components()
 }
 
 /// The plant layer: a cycle with every kind of heater, its ideal twin, a
@@ -354,6 +354,121 @@ fn exercise_flow_meters() -> f64 {
         sum += element.stated_discharge_uncertainty(0.5, 200.0, units);
     }
     sum
+}
+
+/// The measured-data calculations of the components and the heat rate:
+/// each with and without its uncertainty, on plausible readings, flagged
+/// ones and refused ones.
+fn exercise_measured_components() -> f64 {
+    use ebullio::measured::*;
+    fn both<C: Calculation<N, M>, const N: usize, const M: usize>(c: &C) -> f64 {
+        let n = Units::Native;
+        let plain = evaluate(c, n).map_or(0.0, |(f, flags)| f[0] + f64::from(flags.0));
+        let with =
+            evaluate_with_uncertainty(c, n, 2.0).map_or(0.0, |(f, _)| f[0].expanded_uncertainty);
+        let named = c.evaluate(n).is_ok() as u8 + c.evaluate_with_uncertainty(n, 2.0).is_ok() as u8;
+        plain + with + f64::from(named)
+    }
+    let m = |v: f64| Measured::new(v, 0.01 * v.abs());
+    let drain = Inflow {
+        flow: m(40.0),
+        pressure: m(4.0),
+        temperature: m(493.75),
+    };
+    let closed = ClosedHeaterTest {
+        shell_pressure: m(2.0),
+        extraction_temperature: m(703.15),
+        feedwater_inlet_temperature: m(453.15),
+        feedwater_outlet_temperature: m(482.75),
+        feedwater_pressure: m(20.5),
+        drain_temperature: m(458.75),
+        feedwater_flow: m(500.0),
+        cascade: drain,
+    };
+    let mut sum = both(&closed) + f64::from(u8::from(Inflow::NONE.is_absent()));
+    // Extraction below saturation (flagged) and a supercritical shell (refused).
+    sum += both(&ClosedHeaterTest {
+        extraction_temperature: m(480.0),
+        ..closed
+    });
+    sum += both(&ClosedHeaterTest {
+        shell_pressure: m(25.0),
+        ..closed
+    });
+    let open = OpenHeaterTest {
+        heater_pressure: m(1.0),
+        extraction_temperature: m(603.15),
+        outlet_temperature: m(443.15),
+        condensate: Inflow {
+            flow: m(420.0),
+            pressure: m(1.5),
+            temperature: m(423.15),
+        },
+        drains: [drain, Inflow::NONE],
+        outlet: OpenHeaterOutlet::AtMeasuredTemperature,
+    };
+    sum += both(&open)
+        + both(&OpenHeaterTest {
+            outlet: OpenHeaterOutlet::Saturated,
+            ..open
+        });
+    let pump = PumpTest {
+        suction_pressure: m(1.2),
+        suction_temperature: m(453.15),
+        discharge_pressure: m(20.0),
+        discharge_temperature: m(456.7),
+    };
+    sum += both(&pump)
+        + both(&PumpTest {
+            discharge_pressure: m(1.0),
+            ..pump
+        });
+    let spray = AttemperatorTest {
+        steam_flow: m(480.0),
+        steam_pressure: m(17.0),
+        steam_temperature: m(753.15),
+        spray_pressure: m(20.0),
+        spray_temperature: m(456.65),
+        outlet_temperature: m(723.15),
+    };
+    sum += both(&spray);
+    let water = CoolingWaterTest {
+        flow: m(15_700.0),
+        pressure: m(0.2),
+        inlet_temperature: m(293.15),
+        outlet_temperature: m(303.15),
+    };
+    let steam = CondenserSteamTest {
+        exhaust_flow: m(300.0),
+        exhaust_enthalpy: m(2350.0),
+        pressure: m(0.0068),
+        condensate_temperature: m(310.65),
+    };
+    sum += both(&water) + both(&steam);
+    let heat_rate = HeatRateTest {
+        feedwater_flow: m(480.0),
+        feedwater_pressure: m(19.0),
+        feedwater_temperature: m(548.15),
+        main_steam_pressure: m(16.7),
+        main_steam_temperature: m(811.15),
+        superheater_spray: Inflow {
+            flow: m(10.0),
+            pressure: m(20.0),
+            temperature: m(456.65),
+        },
+        cold_reheat_flow: m(430.0),
+        cold_reheat_pressure: m(4.0),
+        cold_reheat_temperature: m(608.15),
+        hot_reheat_pressure: m(3.7),
+        hot_reheat_temperature: m(811.15),
+        reheater_spray: Inflow::NONE,
+        generator_output: m(600_000.0),
+    };
+    sum += both(&heat_rate);
+    sum + both(&HeatRateTest {
+        generator_output: Measured::exact(0.0),
+        ..heat_rate
+    })
 }
 
 /// Counts the bytes written, so Display runs without storing text.

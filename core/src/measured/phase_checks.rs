@@ -6,7 +6,7 @@ use super::flags::Flags;
 use super::measurement::Measured;
 use super::point::Point;
 use super::tracked::Tracked;
-use crate::equations::saturation_line::saturation_pressure_slope;
+use crate::equations::saturation_line::{saturation_pressure_slope, saturation_temperature};
 use crate::numerics::math;
 use crate::{Quantity, Units};
 
@@ -29,7 +29,9 @@ impl<T: Tracked> MeasuredPoint<'_, T> {
         let n = self.point.state.native();
         let u_t = native_uncertainty(self.temperature, Quantity::Temperature, units);
         let u_p = native_uncertainty(self.pressure, Quantity::Pressure, units);
-        let dtsat_dp = 1.0 / saturation_pressure_slope(n.t);
+        // The line's slope where the margin is measured, at Tsat(p): at a
+        // cold liquid's own T it is up to a hundred times flatter.
+        let dtsat_dp = 1.0 / saturation_pressure_slope(saturation_temperature(n.p));
         FLAG_COVERAGE * math::sqrt(u_t * u_t + dtsat_dp * dtsat_dp * u_p * u_p)
     }
 
