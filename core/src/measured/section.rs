@@ -114,37 +114,51 @@ fn efficiency_flags<T: Tracked>(figures: &[T; 3]) -> Flags {
     )
 }
 
-impl Calculation<4, 3> for SectionTest {
-    const INPUTS: [(&'static str, Quantity); 4] = [
-        ("inlet pressure", Quantity::Pressure),
-        ("inlet temperature", Quantity::Temperature),
-        ("exhaust pressure", Quantity::Pressure),
-        ("exhaust temperature", Quantity::Temperature),
-    ];
-    const FIGURES: [(&'static str, Option<Quantity>); 3] = FIGURES;
-    type Figures<F: Copy> = SectionFigures<F>;
+/// What the two section tests share: three inputs, the figures, and the
+/// plumbing between the named fields and the input array; `$last` is the
+/// exhaust reading that tells them apart.
+macro_rules! section_plumbing {
+    ($test:ident, $last:ident, $last_name:literal, $last_quantity:expr) => {
+        const INPUTS: [(&'static str, Quantity); 4] = [
+            ("inlet pressure", Quantity::Pressure),
+            ("inlet temperature", Quantity::Temperature),
+            ("exhaust pressure", Quantity::Pressure),
+            ($last_name, $last_quantity),
+        ];
+        const FIGURES: [(&'static str, Option<Quantity>); 3] = FIGURES;
+        type Figures<F: Copy> = SectionFigures<F>;
 
-    fn named<F: Copy>(figures: [F; 3]) -> SectionFigures<F> {
-        named(figures)
-    }
-
-    fn measured(&self) -> [Measured; 4] {
-        [
-            self.inlet_pressure,
-            self.inlet_temperature,
-            self.exhaust_pressure,
-            self.exhaust_temperature,
-        ]
-    }
-
-    fn with_measured(&self, [p1, t1, p2, t2]: [Measured; 4]) -> Self {
-        SectionTest {
-            inlet_pressure: p1,
-            inlet_temperature: t1,
-            exhaust_pressure: p2,
-            exhaust_temperature: t2,
+        fn named<F: Copy>(figures: [F; 3]) -> SectionFigures<F> {
+            named(figures)
         }
-    }
+
+        fn measured(&self) -> [Measured; 4] {
+            [
+                self.inlet_pressure,
+                self.inlet_temperature,
+                self.exhaust_pressure,
+                self.$last,
+            ]
+        }
+
+        fn with_measured(&self, [p1, t1, p2, last]: [Measured; 4]) -> Self {
+            $test {
+                inlet_pressure: p1,
+                inlet_temperature: t1,
+                exhaust_pressure: p2,
+                $last: last,
+            }
+        }
+    };
+}
+
+impl Calculation<4, 3> for SectionTest {
+    section_plumbing!(
+        SectionTest,
+        exhaust_temperature,
+        "exhaust temperature",
+        Quantity::Temperature
+    );
 
     fn compute<T: Tracked>(
         &self,
@@ -173,36 +187,12 @@ impl Calculation<4, 3> for SectionTest {
 }
 
 impl Calculation<4, 3> for WetSectionTest {
-    const INPUTS: [(&'static str, Quantity); 4] = [
-        ("inlet pressure", Quantity::Pressure),
-        ("inlet temperature", Quantity::Temperature),
-        ("exhaust pressure", Quantity::Pressure),
-        ("exhaust enthalpy", Quantity::Enthalpy),
-    ];
-    const FIGURES: [(&'static str, Option<Quantity>); 3] = FIGURES;
-    type Figures<F: Copy> = SectionFigures<F>;
-
-    fn named<F: Copy>(figures: [F; 3]) -> SectionFigures<F> {
-        named(figures)
-    }
-
-    fn measured(&self) -> [Measured; 4] {
-        [
-            self.inlet_pressure,
-            self.inlet_temperature,
-            self.exhaust_pressure,
-            self.exhaust_enthalpy,
-        ]
-    }
-
-    fn with_measured(&self, [p1, t1, p2, h2]: [Measured; 4]) -> Self {
-        WetSectionTest {
-            inlet_pressure: p1,
-            inlet_temperature: t1,
-            exhaust_pressure: p2,
-            exhaust_enthalpy: h2,
-        }
-    }
+    section_plumbing!(
+        WetSectionTest,
+        exhaust_enthalpy,
+        "exhaust enthalpy",
+        Quantity::Enthalpy
+    );
 
     fn compute<T: Tracked>(
         &self,
