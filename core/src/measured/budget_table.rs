@@ -68,14 +68,25 @@ impl<const N: usize> fmt::Display for BudgetTable<'_, N> {
             e.systematic_uncertainty,
             e.random_uncertainty,
         )?;
+        let width = self
+            .inputs
+            .iter()
+            .map(|(name, _)| name.chars().count())
+            .max()
+            .unwrap_or(0);
         writeln!(
             f,
-            "  {:<24} {:>14} {:>10} {:>10} {:>6} {:>14}  {:>7}",
+            "  {:<width$} {:>14} {:>10} {:>10} {:>6} {:>14}  {:>7}",
             "input", "value", "unit", "u", "shared", "sensitivity", "share"
         )?;
         for i in 0..N {
             let (input, q) = self.inputs[i];
             let m = &self.measured[i];
+            // An input that neither moves the result nor carries an
+            // uncertainty (an absent stream's zeros) says nothing here.
+            if m.standard_uncertainty() == 0.0 && e.sensitivities[i] == 0.0 {
+                continue;
+            }
             let shared = if m.shared == 0 {
                 ""
             } else {
@@ -87,7 +98,7 @@ impl<const N: usize> fmt::Display for BudgetTable<'_, N> {
             };
             writeln!(
                 f,
-                "  {:<24} {:>14.4} {:>10} {:>10.4} {:>6} {:>14.6e}  {:>6.1} %",
+                "  {:<width$} {:>14.4} {:>10} {:>10.4} {:>6} {:>14.6e}  {:>6.1} %",
                 input,
                 m.value,
                 self.units.symbol(q),

@@ -185,7 +185,7 @@ impl Calculation<10, 5> for ClosedHeaterTest {
             | outlet_flags
             | cascade_flags
             | Flags::NONE
-                .with_if(ttd.value() < 0.0, Flags::FEEDWATER_ABOVE_STEAM)
+                .with_if(to.value() >= te.value(), Flags::FEEDWATER_ABOVE_STEAM)
                 .with_if(dca.value() < 0.0, Flags::DRAIN_BELOW_FEEDWATER)
                 .with_if(rise.value() < 0.0, Flags::REVERSED_HEAT_FLOW)
                 .with_if(extraction_flow.value() < 0.0, Flags::NEGATIVE_FLOW);

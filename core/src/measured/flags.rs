@@ -22,10 +22,11 @@ impl Flags {
     /// An isentropic efficiency outside (0, 1]: impossible for a machine,
     /// so at least one reading is wrong.
     pub const EFFICIENCY_OUT_OF_RANGE: Flags = Flags(1 << 1);
-    /// A closed heater's feedwater leaves hotter than the saturation
-    /// temperature at its shell pressure (negative terminal temperature
-    /// difference): possible only with desuperheating, and then only by a
-    /// few kelvin, so check the readings.
+    /// A closed heater's feedwater leaves at or above the temperature of
+    /// the extraction steam that heats it: impossible, a reading is wrong.
+    /// (A negative terminal temperature difference alone, feedwater
+    /// leaving above the shell's saturation temperature, is what a
+    /// desuperheating zone gives and is not flagged.)
     pub const FEEDWATER_ABOVE_STEAM: Flags = Flags(1 << 2);
     /// A heater's drain leaves colder than the feedwater entering
     /// (negative drain cooler approach): impossible, a reading is wrong.
