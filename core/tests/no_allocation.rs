@@ -228,7 +228,7 @@ fn exercise_everything() -> f64 {
     sum +=
         sr4_04::pressure_region3_hs(1800.0, 4.0) + sr4_04::saturation_temperature_hs(2400.0, 6.0);
     sum += sr5_05::specific_volume(25.0, 650.0);
-    sum + exercise_plant()
+    sum + exercise_plant() + exercise_measured()
 }
 
 /// The plant layer: a cycle with every kind of heater, its ideal twin, a
@@ -311,6 +311,35 @@ fn exercise_plant() -> f64 {
     sum += throttle(&shell, 0.3).map_or(0.0, |s| s.enthalpy());
     sum += mix(&[(1.0, &fw), (0.5, &liquid)], 1.0, n).map_or(0.0, |(m, _)| m);
     sum + heat_duty(1.0, &fw, &shell).unwrap_or(0.0)
+}
+
+/// Every measured-data calculation through the bindings' slice calls,
+/// with and without its uncertainty, and a refused length.
+fn exercise_measured() -> f64 {
+    use ebullio::measured::Measured;
+    use ebullio::MeasuredCalculation;
+    let inputs = [
+        Measured::new(16.5, 0.025),
+        Measured::split(811.15, 1.0, 0.2).sharing(1),
+        Measured::new(4.0, 0.008),
+        Measured::split(608.15, 1.0, 0.2).sharing(1),
+    ];
+    let mut sum = 0.0;
+    for c in MeasuredCalculation::ALL {
+        sum += (c.inputs().len() + c.figures().len() + c.settings().len()) as f64;
+        sum += f64::from(u8::from(c.check_settings(&[]).is_ok()));
+        let mut buffer = [0.0; 16];
+        let values = &mut buffer[..c.figures().len()];
+        let flags = c.evaluate(&[], &inputs, Units::Native, values);
+        sum += values.iter().sum::<f64>() + flags.map_or(0.0, |f| f64::from(f.0));
+        let flags = c.evaluate_with_uncertainty(&[], &inputs, Units::Native, 2.0, |_, e| {
+            sum += e.expanded_uncertainty + e.shares.iter().sum::<f64>();
+        });
+        sum += flags.map_or(0.0, |f| f64::from(f.0));
+        let refused = c.evaluate(&[], &inputs[..2], Units::Native, values);
+        sum += f64::from(u8::from(refused.is_err()));
+    }
+    sum
 }
 
 /// Counts the bytes written, so Display runs without storing text.

@@ -16,6 +16,7 @@ mod measurement;
 mod phase_checks;
 mod point;
 mod section;
+mod setup;
 mod tracked;
 
 pub use calculation::{evaluate, evaluate_with_uncertainty, Calculation, Tested};
@@ -23,4 +24,5 @@ pub use estimate::Estimate;
 pub use flags::Flags;
 pub use measurement::Measured;
 pub use section::{SectionFigures, SectionTest, WetSectionTest};
+pub use setup::Setup;
 pub use tracked::{Sensitive, Tracked};
