@@ -61,6 +61,10 @@ fn measured((value, systematic, random, shared): Input) -> Measured {
 /// and random uncertainty, sensitivities, shares.
 type Figure = (f64, f64, f64, f64, f64, Vec<f64>, Vec<f64>);
 
+/// What the scalar call returns: the figures, the flags' bits, each
+/// figure's unit symbol and each input's.
+type Scalar = (Vec<Figure>, u32, Vec<&'static str>, Vec<&'static str>);
+
 /// Calculation `number` on one set of readings in `units`: each figure
 /// with its uncertainty at `coverage_factor` and its budget, the flags
 /// (bits), and each figure's and input's unit symbol. Refusals are the
@@ -75,7 +79,7 @@ pub(crate) fn measured_scalar(
     units: Option<&Bound<'_, PyAny>>,
     coverage_factor: f64,
     call: &str,
-) -> PyResult<(Vec<Figure>, u32, Vec<&'static str>, Vec<&'static str>)> {
+) -> PyResult<Scalar> {
     let c = calculation(number)?;
     let units = names::units(units, call)?;
     let inputs: Vec<Measured> = inputs.into_iter().map(measured).collect();
@@ -244,6 +248,9 @@ pub(crate) fn measured_many<'py>(
     )
 }
 
+/// The rows of an array call (`[r * n + i]`), its flags and statuses.
+type Filled = (Vec<f64>, Vec<u32>, Vec<StatusCode>);
+
 /// Runs `element` for each of `n` elements (`width` numbers each) over
 /// chunks of [`CHUNK`] elements, on every core when there are enough:
 /// the numbers row by row (`[r * n + i]`), the flags and the statuses.
@@ -252,7 +259,7 @@ fn fill(
     width: usize,
     threads: Threads,
     element: impl Fn(usize, &mut Vec<Measured>, &mut [f64]) -> Result<Flags, Error> + Sync,
-) -> Result<(Vec<f64>, Vec<u32>, Vec<StatusCode>), rayon::ThreadPoolBuildError> {
+) -> Result<Filled, rayon::ThreadPoolBuildError> {
     let mut rows = vec![f64::NAN; n * width];
     let mut flags = vec![0u32; n];
     let mut status = vec![code(ebullio::Status::Ok); n];
