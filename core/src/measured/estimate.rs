@@ -85,6 +85,16 @@ pub(crate) fn propagate<const N: usize>(
         *part = r * r + s;
     }
     let variance = random_variance + systematic_variance;
+    if !variance.is_finite() {
+        // Uncertainties near the largest double overflow when squared:
+        // refused, so that an estimate is never an infinite uncertainty
+        // with NaN shares (found by the random-input campaign).
+        return Err(Error::InvalidPlant {
+            part: crate::plant::PlantPart::single("uncertainty"),
+            what: "the combined uncertainty is too large to compute (an input's uncertainty near the largest number)",
+            figure: None,
+        });
+    }
     let mut shares = [0.0; N];
     if variance > 0.0 {
         for (share, part) in shares.iter_mut().zip(parts) {

@@ -340,4 +340,29 @@ mod tests {
             .evaluate_with_uncertainty(&[], &inputs[..1], Units::Native, 2.0, |_, _| called = true);
         assert!(refused(r) && !called);
     }
+
+    /// Found by the random-input campaign: an uncertainty of 1e300 gave
+    /// u_c = inf and NaN shares with `Ok`; the variance now refuses to
+    /// overflow.
+    #[test]
+    fn an_uncertainty_too_large_to_combine_is_refused() {
+        let inputs = [
+            Measured::new(18.10395124331559, 2.8259694757530966e-6).sharing(1),
+            Measured::exact(775.881754592984).sharing(255),
+            Measured::split(
+                0.003339044114563726,
+                4.644240018422266e-6,
+                6.59144313845373e-7,
+            )
+            .sharing(2),
+            Measured::new(715.0135331693906, 1e300),
+        ];
+        let c = MeasuredCalculation::SectionTest;
+        let r = c.evaluate_with_uncertainty(&[], &inputs, Units::Native, 3.0, |_, _| {});
+        assert!(matches!(r, Err(Error::InvalidPlant { .. })), "{r:?}");
+        // The values alone do not square the uncertainty: computed.
+        assert!(c
+            .evaluate(&[], &inputs, Units::Native, &mut [0.0; 3])
+            .is_ok());
+    }
 }
