@@ -33,6 +33,8 @@ def test_one_function_per_calculation_of_the_core_table():
     assert set(measured.CALCULATIONS) >= {"section_test", "wet_section_test"}
     for name in measured.CALCULATIONS:
         assert callable(getattr(measured, name)) and name in measured.__all__
+    with pytest.raises(AttributeError, match="the calculations are"):
+        measured.section_tset
 
 
 def test_scalar_figures_are_the_plant_layers_with_a_budget():

@@ -44,7 +44,7 @@ from __future__ import annotations
 import enum
 import inspect
 from dataclasses import dataclass
-from typing import Any, Dict, List, Mapping, Optional, Tuple
+from typing import Any, Callable, Dict, List, Mapping, Tuple
 
 import numpy as np
 
@@ -260,3 +260,10 @@ for _row in _native.MEASURED:
     CALCULATIONS[_function.__name__] = tuple(_row)
     __all__.append(_function.__name__)
 del _row, _function
+
+
+def __getattr__(name: str) -> Callable[..., Any]:
+    """Only the calculations built above exist: a misspelt one says which do
+    (and type checkers see each calculation as a function)."""
+    raise AttributeError(f"ebullio.measured has no calculation {name!r}; "
+                         f"the calculations are {sorted(CALCULATIONS)}")
