@@ -220,3 +220,22 @@ def test_refusals_name_what_is_wrong():
         measured.section_test(**READINGS, units="metric", uncertainty={"inlet_pressure": -0.1})
     with pytest.raises(ebullio.InvalidPlantError):
         measured.section_test(**READINGS, units="metric", coverage_factor=0.0)
+
+
+def test_the_budget_reads_as_a_table_of_every_input():
+    r = measured.section_test(**READINGS, units="metric", uncertainty=UNCERTAINTY)
+    table = r.budget("efficiency")
+    lines = table.splitlines()
+    assert lines[0].startswith("section test: efficiency = ")
+    for name in READINGS:
+        row = next(line for line in lines if line.startswith(name))
+        assert f"{r.efficiency.shares[name]:.1%}" in row
+    assert "expanded uncertainty" in lines[-1] and "k = 2" in lines[-1]
+    assert r.inputs["inlet_temperature"] == (538.0, 1.0, 0.3, 1)
+
+
+def test_empty_arrays_give_empty_columns():
+    out = measured.section_test(165.0, 538.0, 40.0, np.array([]), units="metric",
+                                uncertainty=UNCERTAINTY, budget=True)
+    assert out["efficiency"].shape == (0,) and out["status"].shape == (0,)
+    assert out["efficiency_share_of_inlet_pressure"].shape == (0,)

@@ -43,6 +43,7 @@ from __future__ import annotations
 
 import enum
 import inspect
+import math
 from dataclasses import dataclass
 from typing import Any, Callable, Dict, List, Mapping, Tuple
 
@@ -101,11 +102,35 @@ class MeasuredResult:
     an :class:`Estimate` by name (``result.efficiency``), and ``flags``."""
 
     def __init__(self, calculation: str, figures: Dict[str, Estimate], flags: Flags,
+                 inputs: Dict[str, Tuple[float, float, float, int]],
                  input_units: Dict[str, str]):
         self.calculation = calculation
         self.figures = figures
         self.flags = flags
+        #: Each reading as given: (value, systematic, random, shared group).
+        self.inputs = inputs
         self.input_units = input_units
+
+    def budget(self, figure: str) -> str:
+        """The uncertainty budget of ``figure`` as a table: each input's
+        reading, standard uncertainty, sensitivity, contribution |c|·u and
+        share of the variance, then the combined and expanded uncertainty."""
+        e = self.figures[figure]
+        lines = [f"{self.calculation}: {figure} = {e}",
+                 f"{'input':<22}{'reading':>14}{'u':>11}{'sensitivity':>14}"
+                 f"{'|c|·u':>11}{'share':>9}"]
+        for name, (value, systematic, random, _) in self.inputs.items():
+            u = math.hypot(systematic, random)
+            c = e.sensitivities[name]
+            unit = self.input_units[name]
+            lines.append(f"{name:<22}{value:>10.6g} {unit:<3}{u:>11.3g}{c:>14.4g}"
+                         f"{abs(c) * u:>11.3g}{e.shares[name]:>9.1%}")
+        lines.append(f"{'combined standard uncertainty':<48}{e.standard_uncertainty:>11.3g}"
+                     f" ({e.systematic_uncertainty:.3g} systematic,"
+                     f" {e.random_uncertainty:.3g} random)")
+        lines.append(f"{'expanded uncertainty':<48}{e.expanded_uncertainty:>11.3g}"
+                     f" (k = {e.coverage_factor:g})")
+        return "\n".join(lines)
 
     def __getattr__(self, name: str) -> Estimate:
         figures = self.__dict__.get("figures", {})
@@ -205,6 +230,7 @@ def _make(number: int, name: str, inputs: list, figures: list, settings: list):
                                              dict(zip(input_names, sens)),
                                              dict(zip(input_names, shares)))
             return MeasuredResult(name, estimates, Flags(flags),
+                                  dict(zip(input_names, readings)),
                                   dict(zip(input_names, input_units)))
         arrays = [_floats(x) for x in everything]
         shape = np.broadcast_shapes(*(a.shape for a in arrays))
@@ -218,7 +244,8 @@ def _make(number: int, name: str, inputs: list, figures: list, settings: list):
             number, setting_values, columns, given["units"],
             k if with_uncertainty else None, budget, given["threads"], call)
         m, count = len(figure_names), len(input_names)
-        rows = rows.reshape(-1, n)
+        width = m * (1 + 4 * with_uncertainty + 2 * count * budget)
+        rows = rows.reshape(width, n)
         out: Dict[str, np.ndarray] = {}
         for j, figure in enumerate(figure_names):
             out[figure] = rows[j].reshape(shape)
