@@ -239,3 +239,19 @@ def test_empty_arrays_give_empty_columns():
                                 uncertainty=UNCERTAINTY, budget=True)
     assert out["efficiency"].shape == (0,) and out["status"].shape == (0,)
     assert out["efficiency_share_of_inlet_pressure"].shape == (0,)
+
+
+def test_settings_are_keyword_arguments_handed_to_the_core():
+    # The table's calculations take no settings yet: a function built with
+    # one shows it as a keyword and the core refuses the count it gets.
+    import inspect
+    number, name, inputs, figures, _ = measured.CALCULATIONS["section_test"]
+    with_setting = measured._make(number, name, inputs, figures, ["meter kind"])
+    parameter = inspect.signature(with_setting).parameters["meter_kind"]
+    assert parameter.kind is inspect.Parameter.KEYWORD_ONLY
+    with pytest.raises(TypeError):
+        with_setting(**READINGS, units="metric")
+    for t2 in (335.0, np.array([335.0, 340.0])):
+        readings = dict(READINGS, exhaust_temperature=t2)
+        with pytest.raises(ebullio.InvalidPlantError, match="settings"):
+            with_setting(**readings, meter_kind=1, units="metric")

@@ -365,4 +365,85 @@ mod tests {
             .evaluate(&[], &inputs, Units::Native, &mut [0.0; 3])
             .is_ok());
     }
+
+    /// A calculation with a setting, for the settings path (the table's
+    /// calculations have none yet): a reading times a whole-number gain
+    /// code 1 to 3.
+    #[derive(Default)]
+    struct Gained {
+        gain: f64,
+        reading: Measured,
+    }
+
+    impl Calculation<1, 1> for Gained {
+        const INPUTS: [(&'static str, Quantity); 1] = [("reading", Quantity::Pressure)];
+        const FIGURES: [(&'static str, Option<Quantity>); 1] =
+            [("gained", Some(Quantity::Pressure))];
+        type Figures<F: Copy> = F;
+        fn named<F: Copy>([f]: [F; 1]) -> F {
+            f
+        }
+        fn measured(&self) -> [Measured; 1] {
+            [self.reading]
+        }
+        fn with_measured(&self, [reading]: [Measured; 1]) -> Self {
+            Gained {
+                gain: self.gain,
+                reading,
+            }
+        }
+        fn compute<T: crate::measured::Tracked>(
+            &self,
+            [x]: [T; 1],
+            _: Units,
+        ) -> Result<([T; 1], Flags), Error> {
+            Ok(([x * T::constant(self.gain)], Flags::NONE))
+        }
+    }
+
+    const GAINED: Setup<Gained> = Setup {
+        settings: &["gain code"],
+        build: |settings| match settings[0] {
+            g if g == 1.0 || g == 2.0 || g == 3.0 => Ok(Gained {
+                gain: g,
+                ..Gained::default()
+            }),
+            _ => Err(wrong_count("its gain code is not 1, 2 or 3")),
+        },
+    };
+
+    #[test]
+    fn settings_reach_the_calculation_and_are_checked_first() {
+        let inputs = [Measured::new(2.0, 0.5)];
+        let mut values = [0.0];
+        let run = |settings: &[f64], values: &mut [f64]| {
+            Values {
+                settings,
+                inputs: &inputs,
+                units: Units::Native,
+                values,
+            }
+            .visit(GAINED)
+        };
+        assert!(run(&[3.0], &mut values).is_ok());
+        assert_eq!(values, [6.0]);
+        assert!(run(&[4.0], &mut values).is_err());
+        assert!(run(&[], &mut values).is_err());
+        assert!(run(&[1.0, 1.0], &mut values).is_err());
+        assert!(CheckSettings(&[2.0]).visit(GAINED).is_ok());
+        assert!(CheckSettings(&[0.5]).visit(GAINED).is_err());
+        assert_eq!(Settings.visit(GAINED), &["gain code"]);
+        let mut budget = (0.0, 0.0);
+        Estimates {
+            settings: &[2.0],
+            inputs: &inputs,
+            units: Units::Native,
+            coverage_factor: 2.0,
+            each: |_, e: FigureEstimate<'_>| budget = (e.sensitivities[0], e.standard_uncertainty),
+        }
+        .visit(GAINED)
+        .unwrap();
+        // d(g x)/dx = g, u = g u(x) (GUM 5.1.2, one input).
+        assert_eq!(budget, (2.0, 1.0));
+    }
 }
