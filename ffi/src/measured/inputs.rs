@@ -62,9 +62,12 @@ pub struct EbullioMeasuredColumn {
     pub reserved: u32,
 }
 
+// No padding: three pointers, three lengths and two `uint32_t`s, on any
+// pointer width.
 const _: () = {
-    assert!(core::mem::size_of::<EbullioMeasuredInput>() == 32);
-    assert!(core::mem::size_of::<EbullioMeasuredColumn>() == 7 * 8);
+    use core::mem::size_of;
+    assert!(size_of::<EbullioMeasuredInput>() == 32);
+    assert!(size_of::<EbullioMeasuredColumn>() == 6 * size_of::<usize>() + 8);
 };
 
 /// The shared group as the core numbers it; a reserved field that is not
