@@ -464,3 +464,40 @@ fn labels_are_the_cores_names_and_quantities() {
     let status = unsafe { ebullio_measured_name(SECTION, ptr::null_mut(), 64) };
     assert_eq!(status, EbullioStatus::NullPointer);
 }
+
+#[test]
+fn an_empty_array_call_reads_and_writes_nothing() {
+    let empty = EbullioMeasuredColumn {
+        values: ptr::null(),
+        n_values: 0,
+        systematic: ptr::null(),
+        n_systematic: 0,
+        random: ptr::null(),
+        n_random: 0,
+        shared: 0,
+        reserved: 0,
+    };
+    let columns = [empty; 4];
+    // SAFETY: n = 0: no column or output is read or written.
+    let status = unsafe {
+        ebullio_measured_array(
+            SECTION,
+            ptr::null(),
+            0,
+            columns.as_ptr(),
+            4,
+            0,
+            METRIC,
+            2.0,
+            ptr::null_mut(),
+            ptr::null_mut(),
+            ptr::null_mut(),
+            3,
+            ptr::null_mut(),
+            ptr::null_mut(),
+            ptr::null_mut(),
+            ptr::null_mut(),
+        )
+    };
+    assert_eq!(status, EbullioStatus::Ok);
+}
