@@ -107,25 +107,24 @@ pub unsafe extern "C" fn ebullio_measured(
         }
         let budget = n_figures * n_inputs;
         // SAFETY: the caller's contract for every array, as documented.
-        let arrays = unsafe {
-            (
-                InArray::new(settings, n_settings),
-                InArray::new(inputs, n_inputs),
-                OutArray::new(figures, n_figures),
-                OutArray::optional(sensitivities, budget),
-                OutArray::optional(shares, budget),
-                OutArray::optional(flags, 1),
-            )
+        let checked = unsafe {
+            (|| {
+                let settings = InArray::new(settings, n_settings)?;
+                let inputs = InArray::new(inputs, n_inputs)?;
+                let outputs = (
+                    OutArray::new(figures, n_figures)?,
+                    OutArray::optional(sensitivities, budget)?,
+                    OutArray::optional(shares, budget)?,
+                    OutArray::optional(flags, 1)?,
+                );
+                let measured = (0..n_inputs)
+                    .map(|k| inputs.get(k).decode())
+                    .collect::<Result<Vec<Measured>, _>>()?;
+                Ok((settings, measured, outputs))
+            })()
         };
-        let (settings, inputs, figures, sensitivities, shares, flags) = match arrays {
-            (Ok(a), Ok(b), Ok(c), Ok(d), Ok(e), Ok(f)) => (a, b, c, d, e, f),
-            (Err(s), ..) | (_, Err(s), ..) | (_, _, Err(s), ..) => return fail(s),
-            (.., Err(s), _, _) | (.., Err(s), _) | (.., Err(s)) => return fail(s),
-        };
-        let measured: Result<Vec<Measured>, EbullioStatus> =
-            (0..n_inputs).map(|k| inputs.get(k).decode()).collect();
-        let measured = match measured {
-            Ok(m) => m,
+        let (settings, measured, (figures, sensitivities, shares, flags)) = match checked {
+            Ok(c) => c,
             Err(status) => return fail(status),
         };
         let settings: Vec<f64> = (0..n_settings).map(|k| settings.get(k)).collect();
