@@ -86,12 +86,11 @@ pub(crate) fn propagate<const N: usize>(
     }
     let variance = random_variance + systematic_variance;
     if !variance.is_finite() {
-        // Uncertainties near the largest double overflow when squared:
-        // refused, so that an estimate is never an infinite uncertainty
-        // with NaN shares (found by the random-input campaign).
+        // Finite uncertainties so large that their squares overflow.
         return Err(Error::InvalidPlant {
             part: crate::plant::PlantPart::single("uncertainty"),
-            what: "the combined uncertainty is too large to compute (an input's uncertainty near the largest number)",
+            what:
+                "the combined uncertainty overflows: an input's standard uncertainty is too large",
             figure: None,
         });
     }
