@@ -16,7 +16,6 @@ mod measurement;
 mod phase_checks;
 mod point;
 mod section;
-mod setup;
 mod tracked;
 
 pub use calculation::{evaluate, evaluate_with_uncertainty, Calculation, Tested};
@@ -24,5 +23,4 @@ pub use estimate::Estimate;
 pub use flags::Flags;
 pub use measurement::Measured;
 pub use section::{SectionFigures, SectionTest, WetSectionTest};
-pub use setup::Setup;
 pub use tracked::{Sensitive, Tracked};

@@ -7,12 +7,13 @@
 //! ([`super::measured_run`]). Adding a calculation to C and Python is one
 //! line in the table below.
 
-use crate::measured::{SectionTest, Setup, WetSectionTest};
+use crate::measured::{SectionTest, WetSectionTest};
 
 use super::measured_run::Visit;
+use super::MeasuredSetup;
 
 /// The table: `Variant = number, "name" => setup;`, where `setup` is the
-/// calculation's [`Setup`] (`Setup::<C>::WITHOUT_SETTINGS` when it has
+/// calculation's [`MeasuredSetup`] (`MeasuredSetup::<C>::WITHOUT_SETTINGS` when it has
 /// nothing to set). The number is published: never renumbered, never
 /// reused.
 macro_rules! measured_calculations {
@@ -50,10 +51,10 @@ macro_rules! measured_calculations {
 measured_calculations! {
     /// [`SectionTest`]: a turbine section's efficiency and enthalpy drops
     /// from (p, T) at both ends.
-    SectionTest = 1, "section test" => Setup::<SectionTest>::WITHOUT_SETTINGS;
+    SectionTest = 1, "section test" => MeasuredSetup::<SectionTest>::WITHOUT_SETTINGS;
     /// [`WetSectionTest`]: the same with the exhaust enthalpy from a heat
     /// balance.
-    WetSectionTest = 2, "wet section test" => Setup::<WetSectionTest>::WITHOUT_SETTINGS;
+    WetSectionTest = 2, "wet section test" => MeasuredSetup::<WetSectionTest>::WITHOUT_SETTINGS;
 }
 
 impl MeasuredCalculation {

@@ -5,21 +5,21 @@
 //! [`evaluate`] / [`evaluate_with_uncertainty`] on the calculation's own
 //! type. Written once here, so every calculation of the table gets it.
 
-use crate::measured::{evaluate, evaluate_with_uncertainty, Calculation, Flags, Measured, Setup};
+use crate::measured::{evaluate, evaluate_with_uncertainty, Calculation, Flags, Measured};
 use crate::plant::PlantPart;
 use crate::{Error, Quantity, Units};
 
-use super::MeasuredCalculation;
+use super::{MeasuredCalculation, MeasuredSetup};
 
 /// Something done with a calculation on its own type: the table's
 /// dispatch ([`MeasuredCalculation::visit`]) calls `visit` with the
-/// calculation's [`Setup`], its `N` and `M` inferred from its
+/// calculation's [`MeasuredSetup`], its `N` and `M` inferred from its
 /// [`Calculation`] implementation.
 pub(super) trait Visit {
     type Output;
     fn visit<C: Calculation<N, M>, const N: usize, const M: usize>(
         self,
-        setup: Setup<C>,
+        setup: MeasuredSetup<C>,
     ) -> Self::Output;
 }
 
@@ -67,7 +67,7 @@ const fn wrong_count(what: &'static str) -> Error {
 /// The calculation built from `settings` on `inputs`, both of its own
 /// lengths.
 fn built<C: Calculation<N, M>, const N: usize, const M: usize>(
-    setup: Setup<C>,
+    setup: MeasuredSetup<C>,
     settings: &[f64],
     inputs: &[Measured],
 ) -> Result<C, Error> {
@@ -98,7 +98,7 @@ impl Visit for Inputs {
     type Output = &'static [(&'static str, Quantity)];
     fn visit<C: Calculation<N, M>, const N: usize, const M: usize>(
         self,
-        _: Setup<C>,
+        _: MeasuredSetup<C>,
     ) -> Self::Output {
         C::INPUT_LIST
     }
@@ -110,7 +110,7 @@ impl Visit for Figures {
     type Output = &'static [(&'static str, Option<Quantity>)];
     fn visit<C: Calculation<N, M>, const N: usize, const M: usize>(
         self,
-        _: Setup<C>,
+        _: MeasuredSetup<C>,
     ) -> Self::Output {
         C::FIGURE_LIST
     }
@@ -122,7 +122,7 @@ impl Visit for Settings {
     type Output = &'static [&'static str];
     fn visit<C: Calculation<N, M>, const N: usize, const M: usize>(
         self,
-        setup: Setup<C>,
+        setup: MeasuredSetup<C>,
     ) -> Self::Output {
         setup.settings
     }
@@ -134,7 +134,7 @@ impl Visit for CheckSettings<'_> {
     type Output = Result<(), Error>;
     fn visit<C: Calculation<N, M>, const N: usize, const M: usize>(
         self,
-        setup: Setup<C>,
+        setup: MeasuredSetup<C>,
     ) -> Self::Output {
         built(setup, self.0, &[Measured::default(); N]).map(|_| ())
     }
@@ -151,7 +151,7 @@ impl Visit for Values<'_> {
     type Output = Result<Flags, Error>;
     fn visit<C: Calculation<N, M>, const N: usize, const M: usize>(
         self,
-        setup: Setup<C>,
+        setup: MeasuredSetup<C>,
     ) -> Self::Output {
         check_figures::<M>(self.values.len())?;
         let calculation = built(setup, self.settings, self.inputs)?;
@@ -173,7 +173,7 @@ impl<F: FnMut(usize, FigureEstimate<'_>)> Visit for Estimates<'_, F> {
     type Output = Result<Flags, Error>;
     fn visit<C: Calculation<N, M>, const N: usize, const M: usize>(
         mut self,
-        setup: Setup<C>,
+        setup: MeasuredSetup<C>,
     ) -> Self::Output {
         let calculation = built(setup, self.settings, self.inputs)?;
         let (figures, flags) =
@@ -209,7 +209,7 @@ impl MeasuredCalculation {
         self.visit(Figures)
     }
 
-    /// Each setting's name ([`Setup::settings`]); empty for most.
+    /// Each setting's name ([`MeasuredSetup::settings`]); empty for most.
     pub fn settings(self) -> &'static [&'static str] {
         self.visit(Settings)
     }
@@ -401,7 +401,7 @@ mod tests {
         }
     }
 
-    const GAINED: Setup<Gained> = Setup {
+    const GAINED: MeasuredSetup<Gained> = MeasuredSetup {
         settings: &["gain code"],
         build: |settings| match settings[0] {
             g if g == 1.0 || g == 2.0 || g == 3.0 => Ok(Gained {

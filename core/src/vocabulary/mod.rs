@@ -9,12 +9,14 @@
 
 mod measured_calculation;
 mod measured_run;
+mod measured_setup;
 mod reading;
 mod request;
 mod status;
 
 pub use measured_calculation::MeasuredCalculation;
 pub use measured_run::FigureEstimate;
+pub use measured_setup::MeasuredSetup;
 pub use reading::Reading;
 pub use request::Request;
 pub use status::Status;

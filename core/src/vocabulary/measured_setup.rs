@@ -7,8 +7,8 @@
 use crate::Error;
 
 /// The settings of calculation `C` and how to build it from them.
-pub struct Setup<C> {
-    /// Each setting's name, in the order [`Setup::build`] takes them.
+pub struct MeasuredSetup<C> {
+    /// Each setting's name, in the order [`MeasuredSetup::build`] takes them.
     pub settings: &'static [&'static str],
     /// The calculation with these settings, its measured inputs still
     /// default; an error (the core's own refusal) when a setting is not
@@ -16,18 +16,18 @@ pub struct Setup<C> {
     pub build: fn(&[f64]) -> Result<C, Error>,
 }
 
-impl<C> Clone for Setup<C> {
+impl<C> Clone for MeasuredSetup<C> {
     fn clone(&self) -> Self {
         *self
     }
 }
 
-impl<C> Copy for Setup<C> {}
+impl<C> Copy for MeasuredSetup<C> {}
 
-impl<C: Default> Setup<C> {
+impl<C: Default> MeasuredSetup<C> {
     /// A calculation that has nothing to set: its measured inputs are all
     /// it takes.
-    pub const WITHOUT_SETTINGS: Setup<C> = Setup {
+    pub const WITHOUT_SETTINGS: MeasuredSetup<C> = MeasuredSetup {
         settings: &[],
         build: |_| Ok(C::default()),
     };
