@@ -40,30 +40,30 @@ def test_one_function_per_calculation_of_the_core_table():
 def test_scalar_figures_are_the_plant_layers_with_a_budget():
     r = measured.section_test(**READINGS, units="metric", uncertainty=UNCERTAINTY)
     e = plant.section_efficiency(165.0, 538.0, 40.0, 335.0, units="metric")
-    assert bits(r.efficiency.value) == bits(e.isentropic_efficiency)
+    assert bits(r.isentropic_efficiency.value) == bits(e.isentropic_efficiency)
     assert bits(r.used_drop.value) == bits(e.work)
     # A plausible section: 0 < η ≤ 1 (physical limit), no flag.
-    assert 0.0 < r.efficiency.value <= 1.0 and r.flags == Flags(0)
+    assert 0.0 < r.isentropic_efficiency.value <= 1.0 and r.flags == Flags(0)
     for figure in r.figures.values():
         assert math.isclose(sum(figure.shares.values()), 1.0, rel_tol=0, abs_tol=1e-12)
         assert figure.expanded_uncertainty == 2.0 * figure.standard_uncertainty
         assert figure.standard_uncertainty > 0.0
-    assert r.used_drop.unit == "kJ/kg" and r.efficiency.unit == ""
+    assert r.used_drop.unit == "kJ/kg" and r.isentropic_efficiency.unit == ""
     assert r.input_units["inlet_temperature"] == "°C"
 
 
 def test_every_input_exact_gives_zero_uncertainty_and_zero_shares():
     r = measured.section_test(**READINGS, units="metric")
-    assert r.efficiency.standard_uncertainty == 0.0
-    assert set(r.efficiency.shares.values()) == {0.0}
-    assert all(math.isfinite(c) for c in r.efficiency.sensitivities.values())
+    assert r.isentropic_efficiency.standard_uncertainty == 0.0
+    assert set(r.isentropic_efficiency.shares.values()) == {0.0}
+    assert all(math.isfinite(c) for c in r.isentropic_efficiency.sensitivities.values())
 
 
 def test_one_uncertain_input_gives_its_sensitivity_times_its_uncertainty():
     # GUM (JCGM 100:2008) 5.1.2 with a single input: u_c = |c| u.
     r = measured.section_test(**READINGS, units="metric",
                               uncertainty={"exhaust_temperature": 1.5})
-    e = r.efficiency
+    e = r.isentropic_efficiency
     c = e.sensitivities["exhaust_temperature"]
     assert math.isclose(e.standard_uncertainty, abs(c) * 1.5, rel_tol=1e-12)
     assert e.shares["exhaust_temperature"] == 1.0
@@ -75,7 +75,7 @@ def test_the_exhaust_temperature_sensitivity_is_minus_cp_over_the_isentropic_dro
     r = measured.section_test(**READINGS, units="metric")
     cp = State.from_pt(40.0, 335.0, units="metric").cp
     expected = -cp / r.isentropic_drop.value
-    got = r.efficiency.sensitivities["exhaust_temperature"]
+    got = r.isentropic_efficiency.sensitivities["exhaust_temperature"]
     assert math.isclose(got, expected, rel_tol=1e-9)
 
 
@@ -99,17 +99,17 @@ def test_array_elements_are_the_scalar_calls_bit_for_bit():
                     bits(e.sensitivities[input_name])
                 assert bits(out[f"{name}_share_of_{input_name}"][i]) == \
                     bits(e.shares[input_name])
-    shares = sum(out[f"efficiency_share_of_{n}"] for n in READINGS)
+    shares = sum(out[f"isentropic_efficiency_share_of_{n}"] for n in READINGS)
     np.testing.assert_allclose(shares, 1.0, rtol=0, atol=1e-12)
 
 
 def test_values_alone_are_the_same_bits_as_with_the_uncertainty():
     t2 = np.linspace(300.0, 420.0, 7)
     alone = measured.section_test(165.0, 538.0, 40.0, t2, units="metric")
-    assert set(alone) == {"efficiency", "used_drop", "isentropic_drop", "flags", "status"}
+    assert set(alone) == {"isentropic_efficiency", "used_drop", "isentropic_drop", "flags", "status"}
     with_u = measured.section_test(165.0, 538.0, 40.0, t2, units="metric",
                                    uncertainty=UNCERTAINTY)
-    for name in ("efficiency", "used_drop", "isentropic_drop"):
+    for name in ("isentropic_efficiency", "used_drop", "isentropic_drop"):
         assert alone[name].tobytes() == with_u[name].tobytes()
 
 
@@ -119,14 +119,14 @@ def test_inputs_and_uncertainties_broadcast_as_numpy_does():
     random_t2 = np.array([0.2, 0.4])                       # per element
     out = measured.section_test(p1, 538.0, 40.0, t2, units="metric",
                                 uncertainty={"exhaust_temperature": (1.0, random_t2)})
-    assert out["efficiency"].shape == (3, 2) and out["status"].shape == (3, 2)
+    assert out["isentropic_efficiency"].shape == (3, 2) and out["status"].shape == (3, 2)
     for i in range(3):
         for j in range(2):
             r = measured.section_test(p1[i, 0], 538.0, 40.0, t2[j], units="metric",
                                       uncertainty={"exhaust_temperature": (1.0, random_t2[j])})
-            assert bits(out["efficiency"][i, j]) == bits(r.efficiency.value)
-            assert bits(out["efficiency_standard_uncertainty"][i, j]) == \
-                bits(r.efficiency.standard_uncertainty)
+            assert bits(out["isentropic_efficiency"][i, j]) == bits(r.isentropic_efficiency.value)
+            assert bits(out["isentropic_efficiency_standard_uncertainty"][i, j]) == \
+                bits(r.isentropic_efficiency.standard_uncertainty)
     with pytest.raises(ValueError):
         measured.section_test(np.ones(3), 538.0, 40.0, np.ones(2), units="metric")
 
@@ -137,7 +137,7 @@ def test_pandas_columns_missing_values_are_a_not_finite_element():
     out = measured.section_test(165.0, 538.0, 40.0, t2, units="metric")
     assert list(out["status"]) == [Status.OK, Status.NOT_FINITE, Status.OK]
     frame = pd.DataFrame(out, index=t2.index)
-    assert frame["efficiency"].notna().tolist() == [True, False, True]
+    assert frame["isentropic_efficiency"].notna().tolist() == [True, False, True]
 
 
 def test_a_bad_element_keeps_its_status_and_the_others_compute():
@@ -151,10 +151,10 @@ def test_a_bad_element_keeps_its_status_and_the_others_compute():
     assert list(out["status"]) == [Status.OK, Status.NOT_FIXED_BY_MEASUREMENT,
                                    Status.INVALID_PLANT, Status.NOT_FINITE, Status.OK]
     bad = out["status"] != Status.OK
-    assert np.isnan(out["efficiency"][bad]).all()
-    assert np.isnan(out["efficiency_expanded_uncertainty"][bad]).all()
+    assert np.isnan(out["isentropic_efficiency"][bad]).all()
+    assert np.isnan(out["isentropic_efficiency_expanded_uncertainty"][bad]).all()
     assert (out["flags"][bad] == 0).all()
-    assert np.isfinite(out["efficiency"][~bad]).all()
+    assert np.isfinite(out["isentropic_efficiency"][~bad]).all()
     # The scalar call raises what the element's status says.
     with pytest.raises(ebullio.NotFixedByMeasurementError):
         measured.section_test(165.0, 538.0, 40.0, t_sat - 10.0, units="metric")
@@ -173,7 +173,7 @@ def test_flags_on_both_sides_of_their_thresholds_decodable_by_name():
     assert Flags.NEAR_SATURATION in flags[0]
     assert Flags.NEAR_SATURATION not in flags[1]
     # An exhaust hotter than the inlet: η < 0, out of (0, 1].
-    assert flags[2] == Flags.EFFICIENCY_OUT_OF_RANGE and out["efficiency"][2] < 0.0
+    assert flags[2] == Flags.EFFICIENCY_OUT_OF_RANGE and out["isentropic_efficiency"][2] < 0.0
     assert measured.flag_names(out["flags"][2]) == ["efficiency out of range"]
     assert [f.name for f in Flags][:2] == ["NEAR_SATURATION", "EFFICIENCY_OUT_OF_RANGE"]
     r = measured.section_test(165.0, 538.0, 40.0, 560.0, units="metric")
@@ -201,9 +201,9 @@ def test_wet_exhaust_from_a_heat_balance():
     inlet = State.from_pt(9.5, 330.0, units="metric")
     exhaust = State.from_ph(0.068, 2400.0, units="metric")
     e = plant.section_efficiency_between(inlet, exhaust)
-    assert math.isclose(r.efficiency.value, e.isentropic_efficiency, rel_tol=1e-12)
-    assert 0.0 < r.efficiency.value <= 1.0
-    assert r.efficiency.shares["exhaust_enthalpy"] == 1.0
+    assert math.isclose(r.isentropic_efficiency.value, e.isentropic_efficiency, rel_tol=1e-12)
+    assert 0.0 < r.isentropic_efficiency.value <= 1.0
+    assert r.isentropic_efficiency.shares["exhaust_enthalpy"] == 1.0
 
 
 def test_refusals_name_what_is_wrong():
@@ -224,12 +224,12 @@ def test_refusals_name_what_is_wrong():
 
 def test_the_budget_reads_as_a_table_of_every_input():
     r = measured.section_test(**READINGS, units="metric", uncertainty=UNCERTAINTY)
-    table = r.budget("efficiency")
+    table = r.budget("isentropic_efficiency")
     lines = table.splitlines()
-    assert lines[0].startswith("section test: efficiency = ")
+    assert lines[0].startswith("section test: isentropic_efficiency = ")
     for name in READINGS:
         row = next(line for line in lines if line.startswith(name))
-        assert f"{r.efficiency.shares[name]:.1%}" in row
+        assert f"{r.isentropic_efficiency.shares[name]:.1%}" in row
     assert "expanded uncertainty" in lines[-1] and "k = 2" in lines[-1]
     assert r.inputs["inlet_temperature"] == (538.0, 1.0, 0.3, 1)
 
@@ -237,8 +237,8 @@ def test_the_budget_reads_as_a_table_of_every_input():
 def test_empty_arrays_give_empty_columns():
     out = measured.section_test(165.0, 538.0, 40.0, np.array([]), units="metric",
                                 uncertainty=UNCERTAINTY, budget=True)
-    assert out["efficiency"].shape == (0,) and out["status"].shape == (0,)
-    assert out["efficiency_share_of_inlet_pressure"].shape == (0,)
+    assert out["isentropic_efficiency"].shape == (0,) and out["status"].shape == (0,)
+    assert out["isentropic_efficiency_share_of_inlet_pressure"].shape == (0,)
 
 
 def test_settings_are_keyword_arguments_handed_to_the_core():

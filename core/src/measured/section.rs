@@ -50,7 +50,7 @@ pub struct SectionFigures<F> {
 }
 
 const FIGURES: [(&str, Option<Quantity>); 3] = [
-    ("efficiency", None),
+    ("isentropic efficiency", None),
     ("used drop", Some(Quantity::Enthalpy)),
     ("isentropic drop", Some(Quantity::Enthalpy)),
 ];

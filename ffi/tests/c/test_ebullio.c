@@ -882,7 +882,7 @@ static void measured(void) {
     CHECK(quantity == EBULLIO_QUANTITY_TEMPERATURE);
     CHECK_STATUS(ebullio_measured_figure(calc, 0, name, sizeof name, &quantity),
                  EBULLIO_STATUS_OK);
-    CHECK(strcmp(name, "efficiency") == 0 && quantity == EBULLIO_QUANTITY_NONE);
+    CHECK(strcmp(name, "isentropic efficiency") == 0 && quantity == EBULLIO_QUANTITY_NONE);
     CHECK_STATUS(ebullio_measured_flag_name(EBULLIO_MEASURED_FLAG_NEAR_SATURATION, name,
                                             sizeof name),
                  EBULLIO_STATUS_OK);

@@ -14,7 +14,8 @@ calculation in the core is a new function here)::
                      "inlet_temperature": (1.0, 0.3, 1),    # systematic, random, group
                      "exhaust_temperature": (1.0, 0.3, 1)},
     )
-    r.efficiency.value, r.efficiency.expanded_uncertainty, r.efficiency.shares
+    r.isentropic_efficiency.value, r.isentropic_efficiency.expanded_uncertainty
+    r.isentropic_efficiency.shares
     r.flags                                                 # measured.Flags
 
 Inputs are floats, numpy arrays or pandas Series, broadcast together as
@@ -99,7 +100,7 @@ class Estimate:
 
 class MeasuredResult:
     """The figures of one calculation on one set of readings: each figure
-    an :class:`Estimate` by name (``result.efficiency``), and ``flags``."""
+    an :class:`Estimate` by name (``result.isentropic_efficiency``), and ``flags``."""
 
     def __init__(self, calculation: str, figures: Dict[str, Estimate], flags: Flags,
                  inputs: Dict[str, Tuple[float, float, float, int]],
