@@ -248,6 +248,20 @@ pub fn check_c_measured_array(
     };
     let with = call_array(batch, broadcast, true);
     let alone = call_array(batch, broadcast, false);
+    if let Err(refused) = c.check_settings(&batch[0].settings) {
+        // Settings are the call's: refused once, nothing written.
+        let want = EbullioStatus::from(&refused);
+        for out in [&with, &alone] {
+            let untouched = out.values.iter().all(|v| *v == -1.0)
+                && out.statuses.iter().all(|s| *s == EbullioStatus::Panic);
+            findings.check(
+                out.status == want && untouched,
+                "C measured array with refused settings is not refused whole",
+                || format!("{:?} vs core {want:?}: {}", out.status, what(0)),
+            );
+        }
+        return;
+    }
     for (out, uncertainty) in [(&with, true), (&alone, false)] {
         let all_ok = out.statuses.iter().all(|s| *s == EbullioStatus::Ok);
         let batch_status = if all_ok {

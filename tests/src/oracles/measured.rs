@@ -130,12 +130,12 @@ pub fn check_measured(case: &MeasuredCase, findings: &mut Findings) -> Option<Co
             }
         }
         (Err(alone), Err(with)) => findings.check(
-            Status::of(alone) == Status::of(with) || uncertainty_refusal(case, with),
+            Status::of(alone) == Status::of(with) || uncertainty_refusal(with),
             format!("refused differently with the uncertainty [{name}]"),
             || format!("{}: {alone:?} vs {with:?}", what()),
         ),
         (Ok(_), Err(with)) => findings.check(
-            uncertainty_refusal(case, with) || matches!(with, Error::Undefined { .. }),
+            uncertainty_refusal(with) || matches!(with, Error::Undefined { .. }),
             format!("refused only with the uncertainty [{name}]"),
             || format!("{}: {with:?}", what()),
         ),
@@ -147,16 +147,11 @@ pub fn check_measured(case: &MeasuredCase, findings: &mut Findings) -> Option<Co
     Some(core)
 }
 
-/// A refusal of the uncertainty itself, checked before (or after) the
-/// figures: a coverage factor that is not a positive number, or input
-/// uncertainties too large to combine.
-fn uncertainty_refusal(case: &MeasuredCase, error: &Error) -> bool {
-    let k = case.coverage_factor;
-    let huge = case
-        .inputs
-        .iter()
-        .any(|m| m.systematic > 1e150 || m.random > 1e150);
-    matches!(error, Error::InvalidPlant { .. }) && (!(k.is_finite() && k > 0.0) || huge)
+/// A refusal of the uncertainty itself (a coverage factor that is not a
+/// positive number, uncertainties whose combination overflows): the core
+/// names the part "uncertainty". The figures alone do not meet them.
+fn uncertainty_refusal(error: &Error) -> bool {
+    matches!(error, Error::InvalidPlant { part, .. } if part.name == "uncertainty")
 }
 
 fn check_figure(case: &MeasuredCase, figure: &Figure, findings: &mut Findings) {
