@@ -117,19 +117,21 @@ class MeasuredResult:
         reading, standard uncertainty, sensitivity, contribution |c|·u and
         share of the variance, then the combined and expanded uncertainty."""
         e = self.figures[figure]
+        width = max(len(name) for name in self.inputs) + 2
         lines = [f"{self.calculation}: {figure} = {e}",
-                 f"{'input':<22}{'reading':>14}{'u':>11}{'sensitivity':>14}"
+                 f"{'input':<{width}}{'reading':>14}{'u':>11}{'sensitivity':>14}"
                  f"{'|c|·u':>11}{'share':>9}"]
         for name, (value, systematic, random, _) in self.inputs.items():
             u = math.hypot(systematic, random)
             c = e.sensitivities[name]
             unit = self.input_units[name]
-            lines.append(f"{name:<22}{value:>10.6g} {unit:<3}{u:>11.3g}{c:>14.4g}"
+            lines.append(f"{name:<{width}}{value:>10.6g} {unit:<3}{u:>11.3g}{c:>14.4g}"
                          f"{abs(c) * u:>11.3g}{e.shares[name]:>9.1%}")
-        lines.append(f"{'combined standard uncertainty':<48}{e.standard_uncertainty:>11.3g}"
+        label = width + 28
+        lines.append(f"{'combined standard uncertainty':<{label}}{e.standard_uncertainty:>11.3g}"
                      f" ({e.systematic_uncertainty:.3g} systematic,"
                      f" {e.random_uncertainty:.3g} random)")
-        lines.append(f"{'expanded uncertainty':<48}{e.expanded_uncertainty:>11.3g}"
+        lines.append(f"{'expanded uncertainty':<{label}}{e.expanded_uncertainty:>11.3g}"
                      f" (k = {e.coverage_factor:g})")
         return "\n".join(lines)
 
