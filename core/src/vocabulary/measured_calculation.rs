@@ -5,7 +5,8 @@
 //! generic [`crate::measured::evaluate`] and
 //! [`crate::measured::evaluate_with_uncertainty`], through slices
 //! ([`super::measured_run`]). Adding a calculation to C and Python is one
-//! line in the table below.
+//! line in the table below (and its name in the C header's enum, which the
+//! ffi crate's tests hold to this table; DEVELOPERS.md says how).
 
 use crate::measured::{SectionTest, WetSectionTest};
 
