@@ -188,8 +188,12 @@ def test_many_elements_over_every_core_are_the_one_thread_bits():
                                   uncertainty=UNCERTAINTY)
     one = measured.section_test(165.0, 538.0, 40.0, t2, units="metric",
                                 uncertainty=UNCERTAINTY, threads=1)
+    two = measured.section_test(165.0, 538.0, 40.0, t2, units="metric",
+                                uncertainty=UNCERTAINTY, threads=2)
     for key in every:
-        assert every[key].tobytes() == one[key].tobytes(), key
+        assert every[key].tobytes() == one[key].tobytes() == two[key].tobytes(), key
+    with pytest.raises(ValueError, match="threads"):
+        measured.section_test(165.0, 538.0, 40.0, t2, units="metric", threads=0)
 
 
 def test_wet_exhaust_from_a_heat_balance():
