@@ -52,7 +52,9 @@ pub use read::property::Property;
 pub use read::state::{Phase, Region, State};
 pub use read::variable::Variable;
 pub use units::{Quantity, Units};
-pub use vocabulary::{Reading, Request, Status};
+pub use vocabulary::{
+    FigureEstimate, MeasuredCalculation, MeasuredSetup, Reading, Request, Status,
+};
 
 /// The README's Rust example, compiled and run as a doctest.
 #[cfg(doctest)]

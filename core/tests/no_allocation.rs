@@ -483,9 +483,9 @@ impl std::fmt::Write for TextLength {
 
 fn main() {
     // Warm up once (lazy statics of the runtime, if any, allocate here).
-    std::hint::black_box(exercise_everything());
+    std::hint::black_box(exercise_everything() + exercise_measured());
     let before = ALLOCATIONS.load(Ordering::SeqCst);
-    let sum = std::hint::black_box(exercise_everything());
+    let sum = std::hint::black_box(exercise_everything() + exercise_measured());
     let after = ALLOCATIONS.load(Ordering::SeqCst);
     assert!(sum.is_finite());
     assert_eq!(
@@ -499,4 +499,33 @@ fn main() {
     assert!(ALLOCATIONS.load(Ordering::SeqCst) > after);
     drop(probe);
     println!("no_allocation: 1 passed, 0 failed");
+}
+
+/// Every measured-data calculation through the bindings' slice calls,
+/// with and without its uncertainty, and a refused length.
+fn exercise_measured() -> f64 {
+    use ebullio::measured::Measured;
+    use ebullio::MeasuredCalculation;
+    let inputs = [
+        Measured::new(16.5, 0.025),
+        Measured::split(811.15, 1.0, 0.2).sharing(1),
+        Measured::new(4.0, 0.008),
+        Measured::split(608.15, 1.0, 0.2).sharing(1),
+    ];
+    let mut sum = 0.0;
+    for c in MeasuredCalculation::ALL {
+        sum += (c.inputs().len() + c.figures().len() + c.settings().len()) as f64;
+        sum += f64::from(u8::from(c.check_settings(&[]).is_ok()));
+        let mut buffer = [0.0; 16];
+        let values = &mut buffer[..c.figures().len()];
+        let flags = c.evaluate(&[], &inputs, Units::Native, values);
+        sum += values.iter().sum::<f64>() + flags.map_or(0.0, |f| f64::from(f.0));
+        let flags = c.evaluate_with_uncertainty(&[], &inputs, Units::Native, 2.0, |_, e| {
+            sum += e.expanded_uncertainty + e.shares.iter().sum::<f64>();
+        });
+        sum += flags.map_or(0.0, |f| f64::from(f.0));
+        let refused = c.evaluate(&[], &inputs[..2], Units::Native, values);
+        sum += f64::from(u8::from(refused.is_err()));
+    }
+    sum
 }

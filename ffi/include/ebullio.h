@@ -52,6 +52,10 @@
 // The most feedwater heaters a description holds (`EbullioCycleSpec.heaters`).
 #define EBULLIO_MAX_HEATERS 12
 
+// Bytes that hold every name of the measured-data calls with its
+// terminating NUL (a test holds every name to it).
+#define EBULLIO_MEASURED_NAME_CAPACITY 64
+
 // The outcome of a call. `EBULLIO_STATUS_OK` (0) is success; see
 // `ebullio_status_message` for a static description of each code.
 enum EbullioStatus
@@ -82,6 +86,10 @@ enum EbullioStatus
   // A plant description's code (supply kind, heater kind, drains, a
   // yes/no flag, a reserved field) is not one of its values.
   EBULLIO_STATUS_UNKNOWN_PLANT_CODE = 108,
+  // A measured-data call's code is not one of its values: a calculation
+  // number that is not one of `EbullioMeasuredCalculation`, a shared
+  // error group above 255, a reserved field that is not 0.
+  EBULLIO_STATUS_UNKNOWN_MEASURED_CODE = 109,
   // An input value was NaN or infinite.
   EBULLIO_STATUS_NOT_FINITE = 200,
   // An input lies outside the formulation's range of validity.
@@ -568,6 +576,66 @@ typedef uint32_t EbullioComponentKind;
 #endif // __STDC_VERSION__ >= 202311L
 #endif // __cplusplus
 
+// A measured-data calculation (`ebullio_measured`). Its inputs, figures
+// and settings are named by `ebullio_measured_input`,
+// `ebullio_measured_figure` and `ebullio_measured_setting`.
+enum EbullioMeasuredCalculation
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // A turbine section's isentropic efficiency, used and isentropic
+  // enthalpy drops from inlet and exhaust pressure and temperature.
+  EBULLIO_MEASURED_CALCULATION_SECTION_TEST = 1,
+  // The same with the exhaust's enthalpy (from a heat balance) in
+  // place of its temperature, for a wet exhaust.
+  EBULLIO_MEASURED_CALCULATION_WET_SECTION_TEST = 2,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioMeasuredCalculation EbullioMeasuredCalculation;
+#else
+typedef uint32_t EbullioMeasuredCalculation;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// A plausibility flag: one bit of the `flags` a measured-data call
+// writes. A flag never fails a call; it marks a result computed from
+// readings that look wrong. `ebullio_measured_flag_name` names each.
+enum EbullioMeasuredFlag
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // A measured (p, T) lies within twice its standard uncertainty of
+  // the saturation line: p and T do not fix its enthalpy there.
+  EBULLIO_MEASURED_FLAG_NEAR_SATURATION = 1,
+  // An isentropic efficiency outside (0, 1].
+  EBULLIO_MEASURED_FLAG_EFFICIENCY_OUT_OF_RANGE = 2,
+  // A closed heater's feedwater leaves hotter than the saturation
+  // temperature at its shell pressure.
+  EBULLIO_MEASURED_FLAG_FEEDWATER_ABOVE_STEAM = 4,
+  // A heater's drain leaves colder than the feedwater entering.
+  EBULLIO_MEASURED_FLAG_DRAIN_BELOW_FEEDWATER = 8,
+  // A flow found by an energy or mass balance is negative.
+  EBULLIO_MEASURED_FLAG_NEGATIVE_FLOW = 16,
+  // A differential-pressure meter used outside its standard's limits.
+  EBULLIO_MEASURED_FLAG_OUTSIDE_METER_LIMITS = 32,
+  // Steam that should be vapour is at or below saturation.
+  EBULLIO_MEASURED_FLAG_NOT_VAPOUR = 64,
+  // Water that should be liquid is at or above saturation.
+  EBULLIO_MEASURED_FLAG_NOT_LIQUID = 128,
+  // A stream that should heat up cools down.
+  EBULLIO_MEASURED_FLAG_REVERSED_HEAT_FLOW = 256,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioMeasuredFlag EbullioMeasuredFlag;
+#else
+typedef uint32_t EbullioMeasuredFlag;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
 // A turbine casing: a group of stages expanding to an exhaust pressure,
 // each stage group between extractions at the casing's efficiency.
 typedef struct {
@@ -897,6 +965,69 @@ typedef struct {
   // Entropy generated (flow × specific entropy unit).
   double entropy_generation;
 } EbullioHeaterBalance;
+
+// One input of `ebullio_measured_array` as columns: `values` holds
+// `n_values` doubles, `systematic` `n_systematic` and `random` `n_random`
+// (the parts of `EbullioMeasuredInput`). A length of 1 is the same for
+// every element; a length of 0 (the pointer may then be null) is an
+// uncertainty of 0; any other length must be the call's `n`. `shared`
+// and `reserved` as in `EbullioMeasuredInput`, for every element. An
+// array element: its layout is frozen.
+typedef struct {
+  // The measured values.
+  const double *values;
+  // How many: `n`, or 1 for every element.
+  size_t n_values;
+  // Systematic standard uncertainties.
+  const double *systematic;
+  // How many: `n`, 1 for every element, or 0 for none.
+  size_t n_systematic;
+  // Random standard uncertainties.
+  const double *random;
+  // How many: `n`, 1 for every element, or 0 for none.
+  size_t n_random;
+  // The shared systematic error group, 0 to 255, for every element.
+  uint32_t shared;
+  // Must be 0.
+  uint32_t reserved;
+} EbullioMeasuredColumn;
+
+// One measured input of `ebullio_measured`, in the call's units:
+// its value and its standard uncertainty (one standard deviation) split
+// into a systematic and a random part, each 0 or more (a temperature's as
+// a temperature difference). An array element: its layout is frozen.
+typedef struct {
+  // The measured value.
+  double value;
+  // Standard uncertainty of its systematic part (calibration,
+  // installation): the same error on every reading.
+  double systematic;
+  // Standard uncertainty of its random part (scatter of the readings
+  // averaged into the value).
+  double random;
+  // 0: its systematic error is its own. 1 to 255: inputs of the call
+  // with the same number share one systematic error, fully correlated
+  // (one reference, one calibration run), so a difference of two such
+  // readings loses it.
+  uint32_t shared;
+  // Must be 0.
+  uint32_t reserved;
+} EbullioMeasuredInput;
+
+// One figure of `ebullio_measured`, in the call's units (a dimensionless
+// figure as a fraction). An array element: its layout is frozen.
+typedef struct {
+  // The figure.
+  double value;
+  // Its combined standard uncertainty u_c (GUM, law of propagation).
+  double standard_uncertainty;
+  // Its expanded uncertainty, the coverage factor times u_c.
+  double expanded_uncertainty;
+  // The part of u_c from the inputs' systematic errors.
+  double systematic_uncertainty;
+  // The part of u_c from the inputs' random errors.
+  double random_uncertainty;
+} EbullioMeasuredFigure;
 
 #ifdef __cplusplus
 extern "C" {
@@ -1295,6 +1426,177 @@ EbullioStatus ebullio_saturation_at_temperature(double t,
                                                 EbullioState *liquid,
                                                 EbullioState *vapour,
                                                 EbullioErrorDetail *detail);
+
+// Calculation `calculation` over `n` elements: input k of element i is
+// read from `columns[k]` (see `EbullioMeasuredColumn`: a column of
+// length 1 is the same for every element), the `n_settings` `settings`
+// the same for all.
+//
+// Writes, figure j of element i at `[j * n + i]` (one column of `n` per
+// figure): its value into `values`, and when not null its standard
+// uncertainty into `standard_uncertainties` and its expanded uncertainty
+// (at `coverage_factor`) into `expanded_uncertainties`; when not null,
+// its sensitivity to input k and that input's share of its u_c² at
+// `[(j * n_inputs + k) * n + i]` into `sensitivities` and `shares`;
+// element i's flags into `flags[i]` and its status into `statuses[i]`
+// when those are not null. Element i gives bitwise what
+// `ebullio_measured` gives for its readings; a failed element is NaN in
+// every column, flags 0, and its status says why. When no uncertainty
+// output is given, only the values are computed (the same bits, at a
+// fraction of the cost) and `coverage_factor` is not used.
+//
+// Returns `EBULLIO_STATUS_OK` when every element succeeded,
+// `EBULLIO_STATUS_SOME_ELEMENTS_FAILED` when any failed, or an argument
+// status (then nothing was written): counts that are not the
+// calculation's or a column length that is neither `n`, 1 nor (for an
+// uncertainty) 0 is `EBULLIO_STATUS_BAD_LENGTH`; an unknown calculation
+// number, group or reserved field `EBULLIO_STATUS_UNKNOWN_MEASURED_CODE`;
+// settings the calculation refuses the core's status. With `n == 0`
+// nothing is written and the output pointers may be null.
+//
+// # Safety
+// `settings` valid for `n_settings` doubles (when `n_settings > 0`);
+// `columns` for `n_inputs` `EbullioMeasuredColumn`s, each of whose
+// pointers valid for its length; `values` for `n_figures * n` doubles,
+// `standard_uncertainties` and `expanded_uncertainties`, if not null, as
+// many; `sensitivities` and `shares`, if not null, for
+// `n_figures * n_inputs * n`; `flags` and `statuses`, if not null, for
+// `n` values. Outputs must not overlap the inputs.
+EbullioStatus ebullio_measured_array(uint32_t calculation,
+                                     const double *settings,
+                                     size_t n_settings,
+                                     const EbullioMeasuredColumn *columns,
+                                     size_t n_inputs,
+                                     size_t n,
+                                     uint32_t units,
+                                     double coverage_factor,
+                                     double *values,
+                                     double *standard_uncertainties,
+                                     double *expanded_uncertainties,
+                                     size_t n_figures,
+                                     double *sensitivities,
+                                     double *shares,
+                                     uint32_t *flags,
+                                     EbullioStatus *statuses);
+
+// How many measured inputs, figures and settings calculation
+// `calculation` has, each written through its pointer when not null: the
+// counts `ebullio_measured` and `ebullio_measured_array` expect.
+// `EBULLIO_STATUS_UNKNOWN_MEASURED_CODE` for a number that names no
+// calculation (nothing written).
+//
+// # Safety
+// Each pointer, if not null, valid for one `size_t`.
+EbullioStatus ebullio_measured_counts(uint32_t calculation,
+                                      size_t *n_inputs,
+                                      size_t *n_figures,
+                                      size_t *n_settings);
+
+// The name of calculation `calculation` ("section test") into `name`
+// (`capacity` bytes; `EBULLIO_MEASURED_NAME_CAPACITY` always suffice).
+// `EBULLIO_STATUS_BAD_LENGTH` when the name and its NUL do not fit.
+//
+// # Safety
+// `name` valid for `capacity` bytes.
+EbullioStatus ebullio_measured_name(uint32_t calculation,
+                                    char *name,
+                                    size_t capacity);
+
+// Input `index` (from 0, in the order the calls take them) of
+// calculation `calculation`: its name into `name` (as for
+// `ebullio_measured_name`) and, if `quantity` is not null, its
+// `EbullioQuantity`. An index past the calculation's inputs is
+// `EBULLIO_STATUS_UNKNOWN_MEASURED_CODE`. Nothing is written on failure.
+//
+// # Safety
+// `name` valid for `capacity` bytes; `quantity`, if not null, for one
+// `uint32_t`.
+EbullioStatus ebullio_measured_input(uint32_t calculation,
+                                     size_t index,
+                                     char *name,
+                                     size_t capacity,
+                                     uint32_t *quantity);
+
+// Figure `index` (from 0, in the order the calls write them) of
+// calculation `calculation`, as `ebullio_measured_input` names an
+// input; a dimensionless figure (an efficiency, as a fraction) has
+// quantity `EBULLIO_QUANTITY_NONE`.
+//
+// # Safety
+// As for `ebullio_measured_input`.
+EbullioStatus ebullio_measured_figure(uint32_t calculation,
+                                      size_t index,
+                                      char *name,
+                                      size_t capacity,
+                                      uint32_t *quantity);
+
+// Setting `index` of calculation `calculation` (a number that is not a
+// measurement, such as a meter kind code), named as
+// `ebullio_measured_input` names an input.
+//
+// # Safety
+// `name` valid for `capacity` bytes.
+EbullioStatus ebullio_measured_setting(uint32_t calculation,
+                                       size_t index,
+                                       char *name,
+                                       size_t capacity);
+
+// The name of plausibility flag `flag` (one `EbullioMeasuredFlag` bit,
+// "near saturation") into `name`, as for `ebullio_measured_name`; a
+// value that is not one flag's bit is
+// `EBULLIO_STATUS_UNKNOWN_MEASURED_CODE`.
+//
+// # Safety
+// `name` valid for `capacity` bytes.
+EbullioStatus ebullio_measured_flag_name(uint32_t flag,
+                                         char *name,
+                                         size_t capacity);
+
+// Calculation `calculation` (an `EbullioMeasuredCalculation`) on the
+// `n_inputs` measured `inputs` in `units`, with its `n_settings`
+// `settings` (numbers that are not measurements; see
+// `ebullio_measured_setting`; `settings` may be null when there are
+// none). Writes each of its `n_figures` figures into `figures[j]`
+// with its uncertainty at `coverage_factor` (2 for about 95 %); if
+// `sensitivities` is not null, ∂figure j/∂input k into
+// `sensitivities[j * n_inputs + k]` (figure unit per input unit) and, if
+// `shares` is not null, input k's share of figure j's u_c² there (the
+// shares of a figure sum to 1; all 0 when every input is exact); if
+// `flags` is not null, the plausibility flags (`EbullioMeasuredFlag`
+// bits) into `*flags`.
+//
+// The counts must be the calculation's (`ebullio_measured_counts`),
+// else `EBULLIO_STATUS_BAD_LENGTH`; an unknown calculation number, a
+// shared group above 255 or a reserved field that is not 0 is
+// `EBULLIO_STATUS_UNKNOWN_MEASURED_CODE`. Readings the calculation
+// refuses are the core's statuses: `EBULLIO_STATUS_NOT_FINITE`,
+// `EBULLIO_STATUS_OUT_OF_RANGE`, `EBULLIO_STATUS_INVALID_PLANT` (an
+// impossible description, a negative uncertainty, a coverage factor that
+// is not a positive number, a figure that would not be finite),
+// `EBULLIO_STATUS_NOT_FIXED_BY_MEASUREMENT`, ... Implausible readings
+// that can be computed are flags, never a failure. Outputs are written
+// only on success; `detail`, if not null (its `size` set), only on
+// failure.
+//
+// # Safety
+// `settings` valid for `n_settings` doubles (when `n_settings > 0`);
+// `inputs` for `n_inputs` `EbullioMeasuredInput`s; `figures` for
+// `n_figures` `EbullioMeasuredFigure`s; `sensitivities` and `shares`, if
+// not null, for `n_figures * n_inputs` doubles; `flags`, if not null, for
+// one `uint32_t`; `detail`, if not null, an `EbullioErrorDetail`.
+EbullioStatus ebullio_measured(uint32_t calculation,
+                               const double *settings,
+                               size_t n_settings,
+                               const EbullioMeasuredInput *inputs,
+                               size_t n_inputs,
+                               uint32_t units,
+                               double coverage_factor,
+                               EbullioMeasuredFigure *figures,
+                               size_t n_figures,
+                               double *sensitivities,
+                               double *shares,
+                               uint32_t *flags,
+                               EbullioErrorDetail *detail);
 
 #ifdef __cplusplus
 }  // extern "C"

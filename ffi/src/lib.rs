@@ -35,6 +35,8 @@ mod array;
 mod derivative;
 mod plant;
 mod state;
+// Last, so that cbindgen adds its items after the others.
+mod measured;
 
 #[cfg(test)]
 mod abi_tests;
@@ -46,6 +48,13 @@ pub use codes::{
 };
 pub use derivative::{ebullio_derivative, ebullio_derivative_array, ebullio_derivatives_array};
 pub use detail::{EbullioErrorDetail, EBULLIO_MESSAGE_CAPACITY};
+pub use measured::{
+    ebullio_measured, ebullio_measured_array, ebullio_measured_counts, ebullio_measured_figure,
+    ebullio_measured_flag_name, ebullio_measured_input, ebullio_measured_name,
+    ebullio_measured_setting, EbullioMeasuredCalculation, EbullioMeasuredColumn,
+    EbullioMeasuredFigure, EbullioMeasuredFlag, EbullioMeasuredInput,
+    EBULLIO_MEASURED_NAME_CAPACITY,
+};
 pub use plant::{
     ebullio_attemperator_spray, ebullio_closed_heater, ebullio_cycle_solve, ebullio_open_heater,
     ebullio_pump_compression, ebullio_section_efficiency, ebullio_turbine_expansion, EbullioCasing,

@@ -38,6 +38,10 @@ pub enum EbullioStatus {
     /// A plant description's code (supply kind, heater kind, drains, a
     /// yes/no flag, a reserved field) is not one of its values.
     UnknownPlantCode = 108,
+    /// A measured-data call's code is not one of its values: a calculation
+    /// number that is not one of `EbullioMeasuredCalculation`, a shared
+    /// error group above 255, a reserved field that is not 0.
+    UnknownMeasuredCode = 109,
 
     // 200–299: the input values name no state, or the property is absent.
     /// An input value was NaN or infinite.
@@ -102,6 +106,7 @@ impl EbullioStatus {
             }
             EbullioStatus::UnknownVariable => "unknown variable number\0",
             EbullioStatus::UnknownPlantCode => "unknown code in a plant description\0",
+            EbullioStatus::UnknownMeasuredCode => "unknown code in a measured-data call\0",
             EbullioStatus::NotFinite => "an input value is not a finite number\0",
             EbullioStatus::OutOfRange => {
                 "an input value is outside the range of validity of IAPWS-IF97\0"
@@ -150,6 +155,7 @@ impl From<Status> for EbullioStatus {
             Status::BadStructSize => EbullioStatus::BadStructSize,
             Status::UnknownVariable => EbullioStatus::UnknownVariable,
             Status::UnknownPlantCode => EbullioStatus::UnknownPlantCode,
+            Status::UnknownMeasuredCode => EbullioStatus::UnknownMeasuredCode,
             Status::NotFinite => EbullioStatus::NotFinite,
             Status::OutOfRange => EbullioStatus::OutOfRange,
             Status::QualityOutOfRange => EbullioStatus::QualityOutOfRange,

@@ -1,5 +1,6 @@
 //! The numbers every language is given are the core's one vocabulary
-//! (`ebullio::{Status, Reading, InputPair, Units, Method, Variable}`): the
+//! (`ebullio::{Status, Reading, InputPair, Units, Method, Variable,
+//! MeasuredCalculation}` and the measured-data `Flags`): the
 //! C header, the Fortran module and the spreadsheet module (which repeat
 //! them by hand) and the Python `Status` enum are read here as text and
 //! compared name by name, number by number, with the core's tables.
@@ -7,7 +8,8 @@
 use std::collections::BTreeMap;
 use std::path::{Path, PathBuf};
 
-use ebullio::{InputPair, Method, Reading, Status, Units, Variable};
+use ebullio::measured::Flags;
+use ebullio::{InputPair, MeasuredCalculation, Method, Reading, Status, Units, Variable};
 
 fn file(relative: &str) -> String {
     let path: PathBuf = Path::new(env!("CARGO_MANIFEST_DIR")).join(relative);
@@ -83,6 +85,24 @@ fn core_table() -> BTreeMap<&'static str, BTreeMap<String, i64>> {
         (
             "EBULLIO_VARIABLE_",
             family("EBULLIO_VARIABLE_", Variable::ALL, |v| *v as i64),
+        ),
+        (
+            "EBULLIO_MEASURED_CALCULATION_",
+            family(
+                "EBULLIO_MEASURED_CALCULATION_",
+                MeasuredCalculation::ALL,
+                |c| i64::from(c.number()),
+            ),
+        ),
+        (
+            "EBULLIO_MEASURED_FLAG_",
+            Flags::ALL
+                .iter()
+                .map(|(flag, name)| {
+                    let name = name.replace(' ', "_").to_ascii_uppercase();
+                    (format!("EBULLIO_MEASURED_FLAG_{name}"), i64::from(flag.0))
+                })
+                .collect(),
         ),
     ])
 }

@@ -26,11 +26,11 @@ use crate::saturation::By;
 
 /// Elements per work item: large enough that scheduling is noise, small
 /// enough that slow elements (region 3, wet steam) balance over threads.
-const CHUNK: usize = 2048;
+pub(crate) const CHUNK: usize = 2048;
 
 /// Below this many elements one thread does the work: waking the pool
 /// costs more than it saves.
-const PARALLEL_FROM: usize = 8192;
+pub(crate) const PARALLEL_FROM: usize = 8192;
 
 /// How many threads an array call may use.
 #[derive(Clone, Copy)]
@@ -263,7 +263,7 @@ fn read_units(read: Option<&Bound<'_, PyAny>>, units: Units) -> PyResult<Units> 
     }
 }
 
-fn pool_error(error: rayon::ThreadPoolBuildError) -> PyErr {
+pub(crate) fn pool_error(error: rayon::ThreadPoolBuildError) -> PyErr {
     pyo3::exceptions::PyRuntimeError::new_err(format!("could not start the threads: {error}"))
 }
 

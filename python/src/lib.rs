@@ -20,6 +20,7 @@ mod arrays;
 mod columns;
 mod errors;
 mod inputs;
+mod measured;
 mod names;
 mod plant;
 mod saturation;
@@ -43,8 +44,12 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(array_call::solve_states, m)?)?;
     m.add_function(wrap_pyfunction!(inputs::kept, m)?)?;
     m.add_function(wrap_pyfunction!(names::units_required, m)?)?;
+    m.add_function(wrap_pyfunction!(measured::measured_scalar, m)?)?;
+    m.add_function(wrap_pyfunction!(measured::measured_many, m)?)?;
     m.add("PROPERTIES", columns::table(m.py())?)?;
     m.add("TRANSPORT", columns::transport_table(m.py())?)?;
     m.add("STATUS_CODES", errors::status_table(m.py())?)?;
+    m.add("MEASURED", measured::table(m.py())?)?;
+    m.add("MEASURED_FLAGS", measured::flags_table(m.py())?)?;
     Ok(())
 }

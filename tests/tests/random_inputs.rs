@@ -15,9 +15,11 @@
 use ebullio::backward::sr5_05::{locate, Subregion};
 use ebullio::{InputPair, Method, Quantity, Saturation, Units};
 use ebullio_conformance::oracles::c_abi::{check_c_arrays, check_c_scalar};
+use ebullio_conformance::oracles::c_abi_measured::{check_c_measured, check_c_measured_array};
 use ebullio_conformance::oracles::derivatives::{
     check_derivatives, check_saturation, saturation_call,
 };
+use ebullio_conformance::oracles::measured::check_measured;
 use ebullio_conformance::oracles::plant::{check_component, check_cycle};
 use ebullio_conformance::oracles::state::{
     check_solve, describe, pair_name, same_temperature, SolveCase,
@@ -26,6 +28,7 @@ use ebullio_conformance::oracles::transport::check_transport;
 use ebullio_conformance::oracles::Findings;
 use ebullio_conformance::random_inputs::cases::{case_from_state, raw_case};
 use ebullio_conformance::random_inputs::draw::{campaign_seed, Draw, Seeded};
+use ebullio_conformance::random_inputs::measured::{coverage_factor, measured_case};
 use ebullio_conformance::random_inputs::plant::cycle;
 use ebullio_conformance::random_inputs::states::{pair_values, source, values_from};
 use ebullio_conformance::random_inputs::values::value;
@@ -332,6 +335,58 @@ fn cycle_solver_within_physical_limits() {
     }
     eprintln!("cycles: {solved} solved");
     finish(findings, "cycle solver");
+}
+
+/// Batches of measured-data calls per calculation × unit system; each
+/// batch shares its coverage factor, settings and shared groups (as one
+/// array call does) and often one broadcast reading.
+const MEASURED_BATCHES: usize = 60;
+/// Calls per batch.
+const MEASURED_BATCH: usize = 25;
+
+/// Every measured-data calculation of the core's table through the
+/// bindings' slice calls, then through the C ABI's scalar and array calls,
+/// each held to the core.
+#[test]
+fn measured_data_calculations_and_their_c_calls() {
+    use ebullio::MeasuredCalculation;
+    let (mut draw, mut findings) = start("measured");
+    let mut computed = 0;
+    for calculation in MeasuredCalculation::ALL {
+        let inputs = calculation.inputs().len();
+        for units in Units::ALL {
+            for _ in 0..MEASURED_BATCHES {
+                let k = coverage_factor(&mut draw);
+                let mut batch: Vec<_> = (0..MEASURED_BATCH)
+                    .map(|_| measured_case(&mut draw, calculation, units, k))
+                    .collect();
+                let broadcast = draw.chance(0.5).then(|| draw.below(inputs));
+                let first = batch[0].clone();
+                for case in &mut batch {
+                    case.settings.clone_from(&first.settings);
+                    for (input, reading) in case.inputs.iter_mut().enumerate() {
+                        reading.shared = first.inputs[input].shared;
+                        if broadcast == Some(input) {
+                            *reading = first.inputs[input];
+                        }
+                    }
+                }
+                let mut cores = Vec::new();
+                for case in &batch {
+                    if let Some(core) = check_measured(case, &mut findings) {
+                        computed += usize::from(core.estimates.is_ok());
+                        check_c_measured(case, &core, &mut findings);
+                        cores.push(core);
+                    }
+                }
+                if cores.len() == batch.len() {
+                    check_c_measured_array(&batch, &cores, broadcast, &mut findings);
+                }
+            }
+        }
+    }
+    eprintln!("measured: {computed} computed with their uncertainty");
+    finish(findings, "measured data");
 }
 
 /// The bindings' vocabulary in the core (`Request`, `Reading`, `Status`)

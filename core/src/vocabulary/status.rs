@@ -46,6 +46,10 @@ pub enum Status {
     /// A plant description's code (supply kind, heater kind, drains, a
     /// yes/no flag, a reserved field) that is not one of its values.
     UnknownPlantCode = 108,
+    /// A measured-data call's code that is not one of its values: a
+    /// calculation number that names no [`super::MeasuredCalculation`], a
+    /// shared-error group above 255, a reserved field that is not 0.
+    UnknownMeasuredCode = 109,
 
     // 200–299: the input values name no state, or the property is absent.
     /// [`Error::NotFinite`].
@@ -82,7 +86,7 @@ pub enum Status {
 
 impl Status {
     /// Every status, in numbering order.
-    pub const ALL: [Status; 22] = [
+    pub const ALL: [Status; 23] = [
         Status::Ok,
         Status::NullPointer,
         Status::UnknownInputPair,
@@ -93,6 +97,7 @@ impl Status {
         Status::BadStructSize,
         Status::UnknownVariable,
         Status::UnknownPlantCode,
+        Status::UnknownMeasuredCode,
         Status::NotFinite,
         Status::OutOfRange,
         Status::QualityOutOfRange,
@@ -159,10 +164,10 @@ mod tests {
     fn codes_are_the_published_ones() {
         // Published by the C ABI: promised to callers forever.
         let published = [
-            0, 100, 101, 102, 103, 104, 105, 106, 107, 108, 200, 201, 202, 203, 204, 205, 206, 207,
-            300, 400, 900, 901,
+            0, 100, 101, 102, 103, 104, 105, 106, 107, 108, 109, 200, 201, 202, 203, 204, 205, 206,
+            207, 300, 400, 900, 901,
         ];
-        let codes: [i32; 22] = Status::ALL.map(|s| s as i32);
+        let codes: [i32; 23] = Status::ALL.map(|s| s as i32);
         assert_eq!(codes, published);
         for s in Status::ALL {
             assert_eq!(Status::from_code(s as i32), Some(s));

@@ -861,6 +861,125 @@ static void edges(void) {
     CHECK(balance.balancing_flow == -1.0);
 }
 
+/* The measured-data calls on an HP section in bar and degC (an invented
+ * operating point): the efficiency is the plant call's, the shares of
+ * each figure's variance sum to 1, one uncertain input alone gives
+ * u_c = |c| u (GUM 5.1.2), the array is the scalar call bit for bit with
+ * a length-1 column broadcast, a bad element does not stop the others,
+ * and the labels name the inputs. */
+static void measured(void) {
+    const uint32_t calc = EBULLIO_MEASURED_CALCULATION_SECTION_TEST;
+    const uint32_t metric = EBULLIO_UNITS_METRIC_ENGINEERING;
+    size_t n_inputs = 0, n_figures = 0, n_settings = 99;
+    CHECK_STATUS(ebullio_measured_counts(calc, &n_inputs, &n_figures, &n_settings),
+                 EBULLIO_STATUS_OK);
+    CHECK(n_inputs == 4 && n_figures == 3 && n_settings == 0);
+    char name[EBULLIO_MEASURED_NAME_CAPACITY];
+    uint32_t quantity = 0;
+    CHECK_STATUS(ebullio_measured_input(calc, 1, name, sizeof name, &quantity),
+                 EBULLIO_STATUS_OK);
+    CHECK(strcmp(name, "inlet temperature") == 0);
+    CHECK(quantity == EBULLIO_QUANTITY_TEMPERATURE);
+    CHECK_STATUS(ebullio_measured_figure(calc, 0, name, sizeof name, &quantity),
+                 EBULLIO_STATUS_OK);
+    CHECK(strcmp(name, "isentropic efficiency") == 0 && quantity == EBULLIO_QUANTITY_NONE);
+    CHECK_STATUS(ebullio_measured_flag_name(EBULLIO_MEASURED_FLAG_NEAR_SATURATION, name,
+                                            sizeof name),
+                 EBULLIO_STATUS_OK);
+    CHECK(strcmp(name, "near saturation") == 0);
+    CHECK_STATUS(ebullio_measured_name(99, name, sizeof name),
+                 EBULLIO_STATUS_UNKNOWN_MEASURED_CODE);
+
+    EbullioMeasuredInput in[4] = {
+        {165.0, 0.25, 0.0, 0, 0},
+        {538.0, 1.0, 0.3, 1, 0},
+        {40.0, 0.08, 0.0, 0, 0},
+        {335.0, 1.0, 0.3, 1, 0},
+    };
+    EbullioMeasuredFigure fig[3];
+    double sens[12], shares[12];
+    uint32_t flags = 99;
+    CHECK_STATUS(ebullio_measured(calc, NULL, 0, in, 4, metric, 2.0, fig, 3, sens, shares,
+                                  &flags, NULL),
+                 EBULLIO_STATUS_OK);
+    CHECK(flags == 0);
+    CHECK(fig[0].value > 0.0 && fig[0].value <= 1.0);
+    CHECK(fig[0].expanded_uncertainty == 2.0 * fig[0].standard_uncertainty);
+    for (int j = 0; j < 3; ++j) {
+        double sum = 0.0;
+        for (int k = 0; k < 4; ++k) sum += shares[j * 4 + k];
+        CHECK(fabs(sum - 1.0) < 1e-12);
+    }
+    EbullioExpansion e = {.size = sizeof e};
+    CHECK_STATUS(ebullio_section_efficiency(165.0, 538.0, 40.0, 335.0, metric, &e, NULL, NULL,
+                                            NULL),
+                 EBULLIO_STATUS_OK);
+    CHECK(memcmp(&fig[0].value, &e.isentropic_efficiency, sizeof(double)) == 0);
+    CHECK(memcmp(&fig[1].value, &e.work, sizeof(double)) == 0);
+
+    /* Only the exhaust temperature uncertain: u_c(eta) = |d eta/d T2| u(T2). */
+    EbullioMeasuredInput one[4] = {
+        {165.0, 0.0, 0.0, 0, 0},
+        {538.0, 0.0, 0.0, 0, 0},
+        {40.0, 0.0, 0.0, 0, 0},
+        {335.0, 1.5, 0.0, 0, 0},
+    };
+    CHECK_STATUS(ebullio_measured(calc, NULL, 0, one, 4, metric, 2.0, fig, 3, sens, shares,
+                                  NULL, NULL),
+                 EBULLIO_STATUS_OK);
+    CHECK(fabs(fig[0].standard_uncertainty - fabs(sens[3]) * 1.5) <=
+          1e-15 + 1e-12 * fig[0].standard_uncertainty);
+    CHECK(shares[3] == 1.0 && shares[0] == 0.0);
+
+    /* Columns: inlet broadcast, exhausts per element; element 1's exhaust
+     * lies below saturation (Tsat(40 bar) = 250.4 degC, IAPWS R7-97),
+     * element 2's is hotter than its inlet (eta < 0, flagged). */
+    const double p1 = 165.0, t1 = 538.0, u_p1 = 0.25, u_t = 1.0, r_t = 0.3, u_p2 = 0.08;
+    const double p2[3] = {40.0, 40.0, 40.0}, t2[3] = {335.0, 240.0, 560.0};
+    EbullioMeasuredColumn cols[4] = {
+        {&p1, 1, &u_p1, 1, NULL, 0, 0, 0},
+        {&t1, 1, &u_t, 1, &r_t, 1, 1, 0},
+        {p2, 3, &u_p2, 1, NULL, 0, 0, 0},
+        {t2, 3, &u_t, 1, &r_t, 1, 1, 0},
+    };
+    double values[9], standard[9], expanded[9];
+    uint32_t element_flags[3];
+    EbullioStatus statuses[3];
+    CHECK_STATUS(ebullio_measured_array(calc, NULL, 0, cols, 4, 3, metric, 2.0, values,
+                                        standard, expanded, 3, NULL, NULL, element_flags,
+                                        statuses),
+                 EBULLIO_STATUS_SOME_ELEMENTS_FAILED);
+    CHECK(statuses[0] == EBULLIO_STATUS_OK);
+    CHECK(statuses[1] == EBULLIO_STATUS_NOT_FIXED_BY_MEASUREMENT);
+    CHECK(statuses[2] == EBULLIO_STATUS_OK);
+    CHECK(isnan(values[1]) && isnan(standard[4]) && element_flags[1] == 0);
+    CHECK(element_flags[2] == EBULLIO_MEASURED_FLAG_EFFICIENCY_OUT_OF_RANGE);
+    CHECK(values[2] < 0.0);
+    CHECK_STATUS(ebullio_measured(calc, NULL, 0, in, 4, metric, 2.0, fig, 3, NULL, NULL, NULL,
+                                  NULL),
+                 EBULLIO_STATUS_OK);
+    for (int j = 0; j < 3; ++j) {
+        CHECK(memcmp(&values[j * 3], &fig[j].value, sizeof(double)) == 0);
+        CHECK(memcmp(&standard[j * 3], &fig[j].standard_uncertainty, sizeof(double)) == 0);
+        CHECK(memcmp(&expanded[j * 3], &fig[j].expanded_uncertainty, sizeof(double)) == 0);
+    }
+
+    /* Error paths: wrong count, unknown code, a shared group past 255. */
+    CHECK_STATUS(ebullio_measured(calc, NULL, 0, in, 3, metric, 2.0, fig, 3, NULL, NULL, NULL,
+                                  NULL),
+                 EBULLIO_STATUS_BAD_LENGTH);
+    CHECK_STATUS(ebullio_measured(0, NULL, 0, in, 4, metric, 2.0, fig, 3, NULL, NULL, NULL,
+                                  NULL),
+                 EBULLIO_STATUS_UNKNOWN_MEASURED_CODE);
+    in[0].shared = 300;
+    CHECK_STATUS(ebullio_measured(calc, NULL, 0, in, 4, metric, 2.0, fig, 3, NULL, NULL, NULL,
+                                  NULL),
+                 EBULLIO_STATUS_UNKNOWN_MEASURED_CODE);
+    CHECK_STATUS(ebullio_measured(calc, NULL, 0, NULL, 4, metric, 2.0, fig, 3, NULL, NULL, NULL,
+                                  NULL),
+                 EBULLIO_STATUS_NULL_POINTER);
+}
+
 int main(void) {
     versions();
     region1_table5();
@@ -875,6 +994,7 @@ int main(void) {
     edges();
     error_paths();
     messages();
+    measured();
     printf("c: %d checks, %d failed\n", checks, failures);
     return failures == 0 ? EXIT_SUCCESS : EXIT_FAILURE;
 }

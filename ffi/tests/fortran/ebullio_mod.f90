@@ -16,6 +16,7 @@ module ebullio
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_BAD_STRUCT_SIZE = 106
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_UNKNOWN_VARIABLE = 107
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_UNKNOWN_PLANT_CODE = 108
+  integer(c_int32_t), parameter, public :: EBULLIO_STATUS_UNKNOWN_MEASURED_CODE = 109
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_NOT_FINITE = 200
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_OUT_OF_RANGE = 201
   integer(c_int32_t), parameter, public :: EBULLIO_STATUS_QUALITY_OUT_OF_RANGE = 202

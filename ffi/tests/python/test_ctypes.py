@@ -142,5 +142,95 @@ check(status == 102, "unknown units")
 check(abs(prop(H, PT, 3.0, 300.0, 0, 0, None) - 115.331273) < 5e-7, "null status")
 check(message(12345) == b"unknown status code", "unknown code")
 
+# The measured-data calls as a worksheet declares them: structs by hand,
+# a turbine section in bar and degC (an invented operating point).
+class MeasuredInput(ctypes.Structure):
+    _fields_ = [("value", ctypes.c_double), ("systematic", ctypes.c_double),
+                ("random", ctypes.c_double), ("shared", ctypes.c_uint32),
+                ("reserved", ctypes.c_uint32)]
+
+
+class MeasuredFigure(ctypes.Structure):
+    _fields_ = [(name, ctypes.c_double) for name in
+                ("value", "standard_uncertainty", "expanded_uncertainty",
+                 "systematic_uncertainty", "random_uncertainty")]
+
+
+class MeasuredColumn(ctypes.Structure):
+    _fields_ = [("values", ctypes.POINTER(ctypes.c_double)), ("n_values", ctypes.c_size_t),
+                ("systematic", ctypes.POINTER(ctypes.c_double)),
+                ("n_systematic", ctypes.c_size_t),
+                ("random", ctypes.POINTER(ctypes.c_double)), ("n_random", ctypes.c_size_t),
+                ("shared", ctypes.c_uint32), ("reserved", ctypes.c_uint32)]
+
+
+SECTION_TEST, NEAR_SATURATION_FLAG = 1, 1
+measured = lib.ebullio_measured
+measured.argtypes = [ctypes.c_uint32, ctypes.POINTER(ctypes.c_double), ctypes.c_size_t,
+                     ctypes.POINTER(MeasuredInput), ctypes.c_size_t, ctypes.c_uint32,
+                     ctypes.c_double, ctypes.POINTER(MeasuredFigure), ctypes.c_size_t,
+                     ctypes.POINTER(ctypes.c_double), ctypes.POINTER(ctypes.c_double),
+                     ctypes.POINTER(ctypes.c_uint32), ctypes.c_void_p]
+measured.restype = ctypes.c_int32
+measured_array = lib.ebullio_measured_array
+measured_array.argtypes = [ctypes.c_uint32, ctypes.POINTER(ctypes.c_double), ctypes.c_size_t,
+                           ctypes.POINTER(MeasuredColumn), ctypes.c_size_t, ctypes.c_size_t,
+                           ctypes.c_uint32, ctypes.c_double] + [
+    ctypes.POINTER(ctypes.c_double)] * 3 + [ctypes.c_size_t] + [
+    ctypes.POINTER(ctypes.c_double)] * 2 + [ctypes.POINTER(ctypes.c_uint32),
+                                            ctypes.POINTER(ctypes.c_int32)]
+measured_array.restype = ctypes.c_int32
+label = lib.ebullio_measured_input
+label.argtypes = [ctypes.c_uint32, ctypes.c_size_t, ctypes.c_char_p, ctypes.c_size_t,
+                  ctypes.POINTER(ctypes.c_uint32)]
+label.restype = ctypes.c_int32
+
+names = []
+for k in range(4):
+    buffer, quantity = ctypes.create_string_buffer(64), ctypes.c_uint32(0)
+    check(label(SECTION_TEST, k, buffer, 64, ctypes.byref(quantity)) == 0, "input label")
+    names.append((buffer.value.decode(), quantity.value))
+check(names == [("inlet pressure", 1), ("inlet temperature", 2), ("exhaust pressure", 1),
+                ("exhaust temperature", 2)], f"input labels {names}")
+
+readings = [(165.0, 0.25, 0.0, 0), (538.0, 1.0, 0.3, 1), (40.0, 0.08, 0.0, 0),
+            (335.0, 1.0, 0.3, 1)]
+inputs = (MeasuredInput * 4)(*[MeasuredInput(v, s, r, g, 0) for (v, s, r, g) in readings])
+figures, shares = (MeasuredFigure * 3)(), (ctypes.c_double * 12)()
+flags = ctypes.c_uint32(99)
+status = measured(SECTION_TEST, None, 0, inputs, 4, METRIC, 2.0, figures, 3, None, shares,
+                  ctypes.byref(flags), None)
+check(status == 0 and flags.value == 0, f"section test status {status}, flags {flags.value}")
+check(0.0 < figures[0].value <= 1.0, "efficiency within (0, 1]")
+check(all(abs(sum(shares[j * 4:j * 4 + 4]) - 1.0) < 1e-12 for j in range(3)), "shares sum to 1")
+
+# The same readings as columns of one element: the same bits.
+def doubles(*values):
+    return (ctypes.c_double * len(values))(*values)
+
+
+keep = [(doubles(v), doubles(s), doubles(r), g) for (v, s, r, g) in readings]
+columns = (MeasuredColumn * 4)(*[MeasuredColumn(v, 1, s, 1, r, 1, g, 0) for (v, s, r, g) in keep])
+values, standard, expanded = doubles(0, 0, 0), doubles(0, 0, 0), doubles(0, 0, 0)
+element_flags, element_status = (ctypes.c_uint32 * 1)(), (ctypes.c_int32 * 1)()
+status = measured_array(SECTION_TEST, None, 0, columns, 4, 1, METRIC, 2.0, values, standard,
+                        expanded, 3, None, None, element_flags, element_status)
+check(status == 0 and element_status[0] == 0, f"array status {status}")
+check([values[j] for j in range(3)] == [figures[j].value for j in range(3)], "array values")
+check([expanded[j] for j in range(3)] == [figures[j].expanded_uncertainty for j in range(3)],
+      "array expanded uncertainties")
+# An exhaust 0.05 K above saturation at 40 bar, read to +-1 K: p and T
+# cannot tell it from wet steam, so it is flagged.
+t_sat, status = cell(T_, PX, 40.0, 0.0, METRIC)
+check(status == 0 and abs(t_sat - 250.35) < 0.01, f"Tsat(40 bar) {t_sat}")
+near = (MeasuredInput * 4)(*inputs)
+near[3].value = t_sat + 0.05
+status = measured(SECTION_TEST, None, 0, near, 4, METRIC, 2.0, figures, 3, None, None,
+                  ctypes.byref(flags), None)
+check(status == 0 and flags.value & NEAR_SATURATION_FLAG, f"near saturation {status} {flags.value}")
+check(measured(7777, None, 0, inputs, 4, METRIC, 2.0, figures, 3, None, None, None, None) == 109,
+      "unknown calculation")
+check(b"measured" in message(109), "message for 109")
+
 print(f"python ctypes: {checks} checks, {failures} failed")
 sys.exit(1 if failures else 0)

@@ -12,7 +12,9 @@ pandas column at once, over every core.
 Constructors, one per input pair: ``State.from_pt, from_ph, from_ps,
 from_hs, from_rho_t, from_vt, from_vu, from_px, from_tx``; the saturation
 line: ``Saturation.at_pressure, at_temperature``; steam cycles and their
-components: ``ebullio.plant`` (charts of them: ``ebullio.charts``). Each needs ``units=``
+components: ``ebullio.plant`` (charts of them: ``ebullio.charts``);
+performance figures from measured data with their uncertainty:
+``ebullio.measured``. Each needs ``units=``
 ("native", "si", "metric", "us", or an ``ebullio.Units`` member). Arrays
 give a ``StateArray`` with a status per element; bad scalar input raises a
 ``SteamError`` (a ``ValueError``) naming the quantity, its value and the
@@ -38,7 +40,7 @@ from ._native import (
 from ._native import PROPERTIES as _PROPERTY_TABLE
 from ._enums import Method, Phase, Status, Units
 from ._arrays import DerivativeArray, SaturationArray, StateArray, TransportArray
-from . import plant
+from . import measured, plant
 
 #: The names of the properties every state carries, in array-column order.
 PROPERTIES = tuple(row[0] for row in _PROPERTY_TABLE)
@@ -61,6 +63,7 @@ __all__ = [
     "NotConvergedError",
     "InvalidPlantError",
     "NotFixedByMeasurementError",
+    "measured",
     "plant",
     "PROPERTIES",
     "__version__",

@@ -57,7 +57,10 @@ class InvalidPlantError(SteamError): ...
 class NotFixedByMeasurementError(SteamError):
     needs: str
 
-# ebullio.plant and ebullio.charts are pure Python with inline annotations.
+# ebullio.plant, ebullio.charts and ebullio.measured are pure Python with
+# inline annotations (measured's functions, built from the core's table,
+# type as its module __getattr__ says).
+from . import measured as measured
 from . import plant as plant
 
 # A unit system; every constructor needs one (no default: None is refused).

@@ -4,9 +4,11 @@
 //! (tests/fuzz).
 
 pub mod c_abi;
+pub mod c_abi_measured;
 pub mod derivatives;
 pub mod findings;
 pub mod limits;
+pub mod measured;
 pub mod plant;
 pub mod state;
 pub mod transport;

@@ -4,6 +4,7 @@
 
 pub mod cases;
 pub mod draw;
+pub mod measured;
 pub mod plant;
 pub mod states;
 pub mod values;
