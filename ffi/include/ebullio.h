@@ -590,6 +590,28 @@ enum EbullioMeasuredCalculation
   // The same with the exhaust's enthalpy (from a heat balance) in
   // place of its temperature, for a wet exhaust.
   EBULLIO_MEASURED_CALCULATION_WET_SECTION_TEST = 2,
+  // A pump's isentropic efficiency by the thermometric method, from
+  // suction and discharge pressure and temperature.
+  EBULLIO_MEASURED_CALCULATION_PUMP_TEST = 3,
+  // An attemperator's spray and outlet flows from measured temperatures.
+  EBULLIO_MEASURED_CALCULATION_ATTEMPERATOR_TEST = 4,
+  // A closed feedwater heater: TTD, DCA, temperature rise, duty and the
+  // extraction flow by energy balance.
+  EBULLIO_MEASURED_CALCULATION_CLOSED_HEATER_TEST = 5,
+  // An open heater (deaerator): extraction and outlet flows by mass and
+  // energy balance; setting "outlet" 0 saturated, 1 at its measured
+  // temperature.
+  EBULLIO_MEASURED_CALCULATION_OPEN_HEATER_TEST = 6,
+  // A condenser's duty from its cooling water.
+  EBULLIO_MEASURED_CALCULATION_COOLING_WATER_TEST = 7,
+  // A condenser's duty from the steam side.
+  EBULLIO_MEASURED_CALCULATION_CONDENSER_STEAM_TEST = 8,
+  // The turbine-cycle heat rate.
+  EBULLIO_MEASURED_CALCULATION_HEAT_RATE_TEST = 9,
+  // Flow through a differential-pressure meter (ISO 5167); settings:
+  // primary element and fluid numbers, element and pipe expansion
+  // coefficients.
+  EBULLIO_MEASURED_CALCULATION_FLOW_METER = 10,
 };
 #ifndef __cplusplus
 #if __STDC_VERSION__ >= 202311L

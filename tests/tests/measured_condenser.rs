@@ -266,3 +266,35 @@ fn impossible_steam_sides_are_refused() {
     };
     assert!(beyond.evaluate(UNITS).is_err());
 }
+
+/// Found by the random-input campaign: a condenser pressure far below the
+/// triple point's (4.7e-9 bar) gave a NaN subcooling as Ok. Below the
+/// saturation line's lowest pressure no condensate exists: refused.
+#[test]
+fn a_pressure_below_the_triple_point_is_refused() {
+    let below = CondenserSteamTest {
+        pressure: Measured::exact(4.748695017003568e-9),
+        ..steam_side()
+    };
+    assert!(matches!(
+        below.evaluate(UNITS),
+        Err(Error::InvalidPlant { .. })
+    ));
+    assert!(below.evaluate_with_uncertainty(UNITS, 2.0).is_err());
+}
+
+/// Found by the random-input campaign: finite readings that overflow a
+/// figure (a cooling water flow near the largest double times its
+/// enthalpy rise) gave an infinite duty as Ok. Both paths refuse it.
+#[test]
+fn a_figure_that_overflows_is_refused() {
+    let huge = CoolingWaterTest {
+        flow: Measured::exact(f64::MAX),
+        ..cooling_water()
+    };
+    assert!(matches!(huge.evaluate(UNITS), Err(Error::Undefined { .. })));
+    assert!(matches!(
+        huge.evaluate_with_uncertainty(UNITS, 2.0),
+        Err(Error::Undefined { .. })
+    ));
+}

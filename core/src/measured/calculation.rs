@@ -90,7 +90,7 @@ where
     let (figures, flags) = calculation.compute(inputs, units)?;
     let mut out = [0.0; M];
     for (o, (value, (_, quantity))) in out.iter_mut().zip(figures.into_iter().zip(C::FIGURES)) {
-        *o = value * figure_scale(quantity, units);
+        *o = finite_figure(value * figure_scale(quantity, units))?;
     }
     Ok((out, flags))
 }
@@ -128,8 +128,25 @@ where
     for (o, (value, (_, quantity))) in out.iter_mut().zip(figures.into_iter().zip(C::FIGURES)) {
         let scale = figure_scale(quantity, units);
         *o = propagate(value, scale, &measured, &scales, coverage_factor)?;
+        finite_figure(o.value)?;
     }
     Ok((out, flags))
+}
+
+/// A figure as returned: finite, or the call is refused. Finite readings
+/// can still overflow a figure (a flow near the largest double times an
+/// enthalpy) or leave a zero to divide by (no enthalpy difference across
+/// a heater); both paths refuse the same figures, as their values are the
+/// same bits.
+fn finite_figure(value: f64) -> Result<f64, Error> {
+    if value.is_finite() {
+        Ok(value)
+    } else {
+        Err(Error::Undefined {
+            what:
+                "a figure that is not finite: the readings overflow it or leave a zero to divide by",
+        })
+    }
 }
 
 const fn empty_estimate<const N: usize>() -> Estimate<N> {

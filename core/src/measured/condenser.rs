@@ -11,6 +11,7 @@ use super::point::Point;
 use super::stream_state::{tracked_saturation_temperature, Expected, StreamState};
 use super::tracked::Tracked;
 use crate::numerics::constants::CRITICAL_PRESSURE;
+use crate::pairs::saturation::min_saturation_pressure;
 use crate::plant::PlantPart;
 use crate::{Error, Quantity, Units, Variable};
 
@@ -160,10 +161,10 @@ impl Calculation<4, 2> for CondenserSteamTest {
         [m, h_exhaust, p, t]: [T; 4],
         units: Units,
     ) -> Result<([T; 2], Flags), Error> {
-        if p.value() >= CRITICAL_PRESSURE {
+        if !(min_saturation_pressure()..CRITICAL_PRESSURE).contains(&p.value()) {
             return Err(Error::InvalidPlant {
                 part: PlantPart::single("condenser"),
-                what: "its pressure is not below the critical pressure",
+                what: "its pressure lies outside the saturation line (from the triple point to below the critical pressure)",
                 figure: None,
             });
         }

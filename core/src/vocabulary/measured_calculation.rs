@@ -8,9 +8,13 @@
 //! line in the table below (and its name in the C header's enum, which the
 //! ffi crate's tests hold to this table; DEVELOPERS.md says how).
 
-use crate::measured::{SectionTest, WetSectionTest};
+use crate::measured::{
+    AttemperatorTest, ClosedHeaterTest, CondenserSteamTest, CoolingWaterTest, HeatRateTest,
+    PumpTest, SectionTest, WetSectionTest,
+};
 
 use super::measured_run::Visit;
+use super::measured_setup::{FLOW_METER, OPEN_HEATER};
 use super::MeasuredSetup;
 
 /// The table: `Variant = number, "name" => setup;`, where `setup` is the
@@ -56,6 +60,25 @@ measured_calculations! {
     /// [`WetSectionTest`]: the same with the exhaust enthalpy from a heat
     /// balance.
     WetSectionTest = 2, "wet section test" => MeasuredSetup::<WetSectionTest>::WITHOUT_SETTINGS;
+    /// [`PumpTest`]: a pump's efficiency by the thermometric method.
+    PumpTest = 3, "pump test" => MeasuredSetup::<PumpTest>::WITHOUT_SETTINGS;
+    /// [`AttemperatorTest`]: spray and outlet flows from temperatures.
+    AttemperatorTest = 4, "attemperator test" => MeasuredSetup::<AttemperatorTest>::WITHOUT_SETTINGS;
+    /// [`ClosedHeaterTest`]: TTD, DCA, rise, duty and extraction flow.
+    ClosedHeaterTest = 5, "closed heater test" => MeasuredSetup::<ClosedHeaterTest>::WITHOUT_SETTINGS;
+    /// [`crate::measured::OpenHeaterTest`]: extraction and outlet flows;
+    /// setting "outlet": 0 saturated, 1 at its measured temperature.
+    OpenHeaterTest = 6, "open heater test" => OPEN_HEATER;
+    /// [`CoolingWaterTest`]: condenser duty from the cooling water.
+    CoolingWaterTest = 7, "cooling water test" => MeasuredSetup::<CoolingWaterTest>::WITHOUT_SETTINGS;
+    /// [`CondenserSteamTest`]: condenser duty from the steam side.
+    CondenserSteamTest = 8, "condenser steam test" => MeasuredSetup::<CondenserSteamTest>::WITHOUT_SETTINGS;
+    /// [`HeatRateTest`]: the turbine-cycle heat rate.
+    HeatRateTest = 9, "heat rate test" => MeasuredSetup::<HeatRateTest>::WITHOUT_SETTINGS;
+    /// [`crate::measured::FlowMeter`]: flow through a differential-pressure
+    /// meter; settings: primary element and fluid (their published
+    /// numbers), element and pipe expansion coefficients.
+    FlowMeter = 10, "flow meter" => FLOW_METER;
 }
 
 impl MeasuredCalculation {

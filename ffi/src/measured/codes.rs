@@ -19,6 +19,28 @@ pub enum EbullioMeasuredCalculation {
     /// The same with the exhaust's enthalpy (from a heat balance) in
     /// place of its temperature, for a wet exhaust.
     WetSectionTest = 2,
+    /// A pump's isentropic efficiency by the thermometric method, from
+    /// suction and discharge pressure and temperature.
+    PumpTest = 3,
+    /// An attemperator's spray and outlet flows from measured temperatures.
+    AttemperatorTest = 4,
+    /// A closed feedwater heater: TTD, DCA, temperature rise, duty and the
+    /// extraction flow by energy balance.
+    ClosedHeaterTest = 5,
+    /// An open heater (deaerator): extraction and outlet flows by mass and
+    /// energy balance; setting "outlet" 0 saturated, 1 at its measured
+    /// temperature.
+    OpenHeaterTest = 6,
+    /// A condenser's duty from its cooling water.
+    CoolingWaterTest = 7,
+    /// A condenser's duty from the steam side.
+    CondenserSteamTest = 8,
+    /// The turbine-cycle heat rate.
+    HeatRateTest = 9,
+    /// Flow through a differential-pressure meter (ISO 5167); settings:
+    /// primary element and fluid numbers, element and pipe expansion
+    /// coefficients.
+    FlowMeter = 10,
 }
 
 /// A plausibility flag: one bit of the `flags` a measured-data call
@@ -69,7 +91,18 @@ mod tests {
     #[test]
     fn calculations_mirror_the_core_table() {
         use EbullioMeasuredCalculation as C;
-        let c = [C::SectionTest, C::WetSectionTest];
+        let c = [
+            C::SectionTest,
+            C::WetSectionTest,
+            C::PumpTest,
+            C::AttemperatorTest,
+            C::ClosedHeaterTest,
+            C::OpenHeaterTest,
+            C::CoolingWaterTest,
+            C::CondenserSteamTest,
+            C::HeatRateTest,
+            C::FlowMeter,
+        ];
         assert_eq!(c.len(), MeasuredCalculation::ALL.len());
         for (c, core) in c.iter().zip(MeasuredCalculation::ALL) {
             assert_eq!(*c as u32, core.number());
