@@ -293,6 +293,29 @@ fn exercise_plant() -> f64 {
                 .sum::<f64>();
         }
     }
+    // The same plant with its losses: an absolute scale, a generator
+    // curve, mechanical and auxiliary power, an exhaust loss curve.
+    let mut lossy = spec;
+    lossy.losses.throttle_flow = Some(500.0);
+    if let (Ok(generator), Ok(exhaust)) = (
+        Curve::new(&[(0.25, 0.982), (0.5, 0.986), (1.0, 0.988), (1.2, 0.987)]),
+        Curve::new(&[(60.0, 40.0), (150.0, 18.0), (350.0, 70.0)]),
+    ) {
+        lossy.losses.generator = Some(Generator::AgainstLoad {
+            rated_output: 640_000.0,
+            efficiency: generator,
+        });
+        lossy.losses.exhaust = Some(ExhaustLoss {
+            annulus_area: 30.0,
+            curve: exhaust,
+        });
+        sum += generator.points().len() as f64;
+    }
+    lossy.losses.mechanical_losses = 1800.0;
+    lossy.losses.auxiliary_power = 14_000.0;
+    if let Ok(r) = solve_cycle(&lossy) {
+        sum += r.output.net_heat_rate + r.output.power.map_or(0.0, |p| p.net_output);
+    }
     let mut bad = spec;
     bad.feed_pump_efficiency = 2.0;
     // The refusal names its part and figure, and prints without the heap.

@@ -88,6 +88,13 @@ impl ExpansionLine {
         Ok(())
     }
 
+    /// Ends the last stage group, and the line, at `end` instead (the
+    /// used energy end point, past the exhaust loss).
+    pub(super) fn end_at(&mut self, end: State) {
+        self.groups[self.group_count - 1].outlet = end;
+        self.exhaust = end;
+    }
+
     /// The stage groups, from the throttle down.
     pub(super) fn groups(&self) -> &[Group] {
         &self.groups[..self.group_count]

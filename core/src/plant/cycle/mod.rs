@@ -18,9 +18,14 @@
 //! not keep), `record.rs` and `assembly.rs` (the result).
 
 mod assembly;
+pub(super) mod curve;
 mod ends;
+mod exhaust;
 mod expansion;
+mod generator;
 mod limits;
+pub(super) mod losses;
+mod output;
 mod record;
 pub(super) mod result;
 pub(super) mod spec;
@@ -37,6 +42,9 @@ use crate::Error;
 /// Flows are fractions of the throttle flow summed from a few terms each
 /// good to about 1e-15; a flow past its limit by more than this is real.
 const FLOW_ROUNDING: f64 = 1e-12;
+
+/// Seconds in an hour: a heat or steam rate is per kWh, work per kJ.
+const SECONDS_PER_HOUR: f64 = 3600.0;
 
 const CYCLE: PlantPart = PlantPart::single("cycle");
 const REHEATER: PlantPart = PlantPart::single("reheater");
@@ -79,6 +87,13 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
     sweeps::solve_train(spec, &train, &shell, &mut flows)?;
     limits::check_extractions(spec.heaters(), &flows, &shell)?;
     let boiler_heat = limits::check_boiler(&throttle, &flows.boiler_inlet, spec.units)?;
+    let end = exhaust::end_point(
+        spec.losses.exhaust.as_ref(),
+        &mut line,
+        1.0 - flows.extracted_before(spec.heaters().len()),
+        output::throttle_flow(&spec.losses, spec.units)?,
+        spec.units,
+    )?;
     // The result is some 30 kB: built here and finished as this
     // function's value, it is copied no more often than before the split
     // (callgrind on the demo: solve_cycle's instructions unchanged).
@@ -94,7 +109,7 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
         boiler_heat,
     }
     .record(&mut out);
-    out.finish(totals)
+    out.finish(totals, &spec.losses, &end)
 }
 
 /// A heater as refusals name it: "closed heater 2", "open heater 4".

@@ -256,6 +256,72 @@ pub struct CycleResult {
     /// 1 − T_hotwell / T_hottest: the Carnot efficiency between the
     /// cycle's temperature extremes.
     pub carnot_efficiency: f64,
+    /// The plant's output after the description's losses (with none,
+    /// gross and net output are the cycle's net work).
+    pub output: PlantOutput,
+}
+
+/// What the plant delivers: the generator's output (gross) and what is
+/// left after the motor-driven pumps and the auxiliaries (net), per unit
+/// mass of throttle steam in the cycle's specific energy unit (kJ/kg or
+/// Btu/lbm), and as powers when the throttle flow is given.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct PlantOutput {
+    /// Work of the main turbine's casings, which drive the generator.
+    pub shaft_work: f64,
+    /// The generator efficiency at this load (1 without a generator).
+    pub generator_efficiency: f64,
+    /// Generator output: (shaft work − mechanical losses) × efficiency.
+    pub gross_output: f64,
+    /// Work of the pumps driven by motors (all the cycle's pumps).
+    pub motor_pump_work: f64,
+    /// Gross output − motor-driven pump work − auxiliary power.
+    pub net_output: f64,
+    /// Net output / heat input.
+    pub net_efficiency: f64,
+    /// Heat input per electrical energy of gross output (kJ/kWh; Btu/kWh
+    /// in US customary units).
+    pub gross_heat_rate: f64,
+    /// Heat input per electrical energy of net output (kJ/kWh; Btu/kWh in
+    /// US customary units).
+    pub net_heat_rate: f64,
+    /// Specific enthalpy at the last casing's expansion line end point
+    /// (ELEP); the last casing's exhaust point is the used energy end
+    /// point, ELEP + exhaust loss.
+    pub expansion_line_end: f64,
+    /// Exhaust loss per unit mass of exhaust steam (0 without one).
+    pub exhaust_loss: f64,
+    /// Annulus velocity at the last stage (0 without an exhaust loss).
+    pub annulus_velocity: f64,
+    /// The same as powers, when the throttle flow is given.
+    pub power: Option<PlantPower>,
+}
+
+/// A plant's balance as flows of energy: heat flows in kW (W in SI base
+/// units, Btu/h in US customary units), powers in kW (W in SI base
+/// units), the throttle flow in kg/s (lbm/h in US customary units).
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct PlantPower {
+    /// Throttle steam mass flow.
+    pub throttle_flow: f64,
+    /// Heat added in the boiler and reheater (a heat flow).
+    pub heat_input: f64,
+    /// Heat rejected in the condenser (a heat flow).
+    pub condenser_duty: f64,
+    /// Power of the main turbine's casings.
+    pub shaft_power: f64,
+    /// Mechanical losses.
+    pub mechanical_losses: f64,
+    /// Generator losses.
+    pub generator_losses: f64,
+    /// Generator output.
+    pub gross_output: f64,
+    /// Power of the motor-driven pumps.
+    pub motor_pump_power: f64,
+    /// Auxiliary power.
+    pub auxiliary_power: f64,
+    /// Net output.
+    pub net_output: f64,
 }
 
 impl CycleResult {

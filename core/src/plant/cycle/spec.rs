@@ -3,6 +3,7 @@
 //! and the pumps. Fixed capacity, so a description lives on the stack and
 //! crosses the C ABI as one caller-owned block.
 
+use super::losses::Losses;
 use crate::plant::closed_heater::HeaterApproach;
 use crate::plant::fault::refuse;
 use crate::plant::PlantPart;
@@ -110,6 +111,9 @@ pub struct CycleSpec {
     /// Subcooling of the condensate below the condenser saturation
     /// temperature (a temperature difference; 0 for saturated liquid).
     pub condensate_subcooling: f64,
+    /// The plant's losses beyond the machines' efficiencies; none by
+    /// default.
+    pub losses: Losses,
     casings: [Casing; MAX_CASINGS],
     casing_count: usize,
     heaters: [Heater; MAX_HEATERS],
@@ -137,6 +141,7 @@ impl CycleSpec {
             feed_pump_efficiency: 1.0,
             condensate_pump_efficiency: 1.0,
             condensate_subcooling: 0.0,
+            losses: Losses::NONE,
             casings: [none; MAX_CASINGS],
             casing_count: 0,
             heaters: [no_heater; MAX_HEATERS],

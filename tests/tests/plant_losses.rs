@@ -1,0 +1,439 @@
+//! A plant's losses in the cycle description, each against a balance
+//! that closes: the first law over the whole plant (heat in equals net
+//! output plus heat rejected plus losses) and over every component, the second law
+//! per component, a zero loss that leaves the textbook cycle to the bit,
+//! and more loss that never raises the net output.
+//!
+//! The cycle is an invented unit of Tallowmere Station's class (DESIGN.md:
+//! 16.7 MPa / 538 °C, reheat to 538 °C, 6.8 kPa); the exhaust loss curve
+//! is invented too. Their numbers are inputs, never compared with.
+
+use ebullio::plant::{
+    solve_cycle, Casing, Component, Curve, CycleResult, CycleSpec, Drains, ExhaustLoss, Generator,
+    Heater, HeaterApproach, HeaterKind, PointRole, Reheat, Supply, ENTROPY_ALLOWANCE,
+};
+use ebullio::{Error, Quantity, State, Units};
+
+/// The demo unit in `units` (given in MPa, K), without losses.
+fn unit(units: Units) -> CycleSpec {
+    let p = |mpa| units.from_native(Quantity::Pressure, mpa);
+    let t = |k| units.from_native(Quantity::Temperature, k);
+    let dt = |k| units.from_native(Quantity::TemperatureDifference, k);
+    let mut spec = CycleSpec::new(
+        units,
+        Supply::Superheated {
+            pressure: p(16.7),
+            temperature: t(811.15),
+        },
+    );
+    spec.reheat = Some(Reheat {
+        pressure: p(3.7),
+        temperature: t(811.15),
+    });
+    spec.feed_pressure = Some(p(19.0));
+    spec.feed_pump_efficiency = 0.83;
+    spec.condensate_pump_efficiency = 0.78;
+    for (exhaust, eta) in [(4.1, 0.86), (0.9, 0.90), (0.0068, 0.88)] {
+        spec.push_casing(Casing {
+            exhaust_pressure: p(exhaust),
+            isentropic_efficiency: eta,
+        })
+        .unwrap();
+    }
+    let closed = |drains| HeaterKind::Closed {
+        approach: HeaterApproach {
+            terminal_temperature_difference: dt(2.8),
+            drain_cooler_approach: Some(dt(5.6)),
+        },
+        drains,
+    };
+    for (pressure, kind) in [
+        (6.0, closed(Drains::CascadeBackward)),
+        (4.1, closed(Drains::CascadeBackward)),
+        (1.9, closed(Drains::CascadeBackward)),
+        (0.9, HeaterKind::Open),
+        (0.4, closed(Drains::PumpForward)),
+        (0.15, closed(Drains::CascadeBackward)),
+        (0.06, closed(Drains::CascadeBackward)),
+    ] {
+        spec.push_heater(Heater {
+            extraction_pressure: p(pressure),
+            extraction_line_loss: 0.03,
+            kind,
+        })
+        .unwrap();
+    }
+    spec
+}
+
+/// Invented for the demo (not machine data): exhaust loss in kJ/kg
+/// against annulus velocity in m/s, a turn-up at low velocity and a
+/// rise toward choking, the shape such curves have (common practice).
+const INVENTED_EXHAUST_CURVE: [(f64, f64); 7] = [
+    (60.0, 40.0),
+    (100.0, 25.0),
+    (150.0, 18.0),
+    (200.0, 22.0),
+    (250.0, 34.0),
+    (300.0, 50.0),
+    (350.0, 70.0),
+];
+
+/// The invented curve in `units` (velocity, loss).
+fn exhaust_curve(units: Units) -> Curve {
+    let points = INVENTED_EXHAUST_CURVE.map(|(v, loss)| {
+        (
+            units.from_native(Quantity::Speed, v),
+            units.from_native(Quantity::Enthalpy, loss),
+        )
+    });
+    Curve::new(&points).unwrap()
+}
+
+/// m² in `units`' area: the square of its speed's length.
+fn area(units: Units, square_metres: f64) -> f64 {
+    square_metres * units.from_native(Quantity::Speed, 1.0).powi(2)
+}
+
+/// The demo unit with every loss of this file: 520 kg/s, a 98.7 %
+/// generator, 1.8 MW mechanical losses, 14 MW auxiliaries, and an
+/// exhaust loss through 30 m² of annulus (all invented).
+fn unit_with_losses(units: Units) -> CycleSpec {
+    let mut spec = unit(units);
+    let power = |kw| units.from_native(Quantity::Power, kw);
+    spec.losses.throttle_flow = Some(units.from_native(Quantity::MassFlow, 520.0));
+    spec.losses.generator = Some(Generator::Constant { efficiency: 0.987 });
+    spec.losses.mechanical_losses = power(1800.0);
+    spec.losses.auxiliary_power = power(14_000.0);
+    spec.losses.exhaust = Some(ExhaustLoss {
+        annulus_area: area(units, 30.0),
+        curve: exhaust_curve(units),
+    });
+    spec
+}
+
+fn energy_in(c: &Component) -> f64 {
+    c.inlets().iter().map(|s| s.flow * s.enthalpy).sum::<f64>() + c.heat_in
+}
+
+fn energy_out(c: &Component) -> f64 {
+    c.outlets().iter().map(|s| s.flow * s.enthalpy).sum::<f64>() + c.work_out
+}
+
+/// First law per component to 1e-9 (mass to 1e-12 of the throttle
+/// flow), second law per component within the plant layer's allowance.
+fn check_components(r: &CycleResult) {
+    for c in r.components() {
+        let (e_in, e_out) = (energy_in(c), energy_out(c));
+        let name = format!("{} {}", c.kind.name(), c.number);
+        assert!(
+            (e_in - e_out).abs() <= 1e-9 * e_in.abs().max(e_out.abs()),
+            "{name}: energy in {e_in}, out {e_out}"
+        );
+        let m_in: f64 = c.inlets().iter().map(|s| s.flow).sum();
+        let m_out: f64 = c.outlets().iter().map(|s| s.flow).sum();
+        assert!((m_in - m_out).abs() <= 1e-12, "{name}: mass {m_in} {m_out}");
+        let throughput: f64 = c
+            .inlets()
+            .iter()
+            .chain(c.outlets())
+            .map(|s| (s.flow * s.entropy).abs())
+            .sum();
+        assert!(
+            c.entropy_generation >= -ENTROPY_ALLOWANCE * throughput,
+            "{name}: entropy generation {}",
+            c.entropy_generation
+        );
+    }
+}
+
+/// A power of `r` per unit throttle flow, in its specific energy unit:
+/// kW / (kg/s) = kJ/kg, through each unit's own factor.
+fn per_unit_flow(r: &CycleResult, power: f64) -> f64 {
+    let u = r.units;
+    let flow = u.to_native(Quantity::MassFlow, r.output.power.unwrap().throttle_flow);
+    u.from_native(
+        Quantity::Enthalpy,
+        u.to_native(Quantity::Power, power) / flow,
+    )
+}
+
+/// First law over the whole plant, per unit throttle flow: the heat in
+/// leaves as net output, condenser heat and the losses, to 1e-9.
+fn check_plant(r: &CycleResult, mechanical: f64, auxiliary: f64) {
+    let o = &r.output;
+    let generator_losses = (o.shaft_work - mechanical) - o.gross_output;
+    let out = o.net_output + r.condenser_duty + mechanical + generator_losses + auxiliary;
+    assert!(
+        (r.heat_input - out).abs() <= 1e-9 * r.heat_input,
+        "plant energy: in {}, out {out}",
+        r.heat_input
+    );
+    // The components add up to the totals.
+    let heat: f64 = r.components().iter().map(|c| c.heat_in).sum();
+    let work: f64 = r.components().iter().map(|c| c.work_out).sum();
+    assert!((heat - (r.heat_input - r.condenser_duty)).abs() <= 1e-9 * r.heat_input);
+    assert!((work - r.net_work).abs() <= 1e-9 * r.turbine_work);
+    assert!(o.net_efficiency > 0.0 && o.net_efficiency < r.thermal_efficiency);
+}
+
+#[test]
+fn every_loss_closes_the_plant_and_every_component() {
+    for units in Units::ALL {
+        let spec = unit_with_losses(units);
+        let r = solve_cycle(&spec).unwrap();
+        check_components(&r);
+        let p = r.output.power.unwrap();
+        check_plant(
+            &r,
+            per_unit_flow(&r, p.mechanical_losses),
+            per_unit_flow(&r, p.auxiliary_power),
+        );
+        // The same balance in powers.
+        let heat = |x| units.to_native(Quantity::HeatFlow, x);
+        let power = |x| units.to_native(Quantity::Power, x);
+        let out = power(p.net_output)
+            + heat(p.condenser_duty)
+            + power(p.mechanical_losses + p.generator_losses + p.auxiliary_power);
+        assert!((heat(p.heat_input) - out).abs() <= 1e-9 * heat(p.heat_input));
+        // Heat rate is heat per electrical kWh (3600 kJ), in kJ/kWh or
+        // Btu/kWh (Btu (IT) = 1.05505585262 kJ, NIST SP 811 B.8).
+        let kj_per_kwh = if units == Units::UsCustomary {
+            1.055_055_852_62
+        } else {
+            1.0
+        };
+        let net_rate = 3600.0 * heat(p.heat_input) / power(p.net_output) / kj_per_kwh;
+        let gross_rate = 3600.0 * heat(p.heat_input) / power(p.gross_output) / kj_per_kwh;
+        assert!((r.output.net_heat_rate - net_rate).abs() <= 1e-9 * net_rate);
+        assert!((r.output.gross_heat_rate - gross_rate).abs() <= 1e-9 * gross_rate);
+        assert!(r.output.net_heat_rate > r.output.gross_heat_rate);
+        // Losses only raise the net heat rate above the cycle's (the
+        // gross one leaves the pumps out).
+        let cycle_rate = if units == Units::UsCustomary {
+            r.heat_rate_btu_per_kwh
+        } else {
+            r.heat_rate_kj_per_kwh
+        };
+        assert!(r.output.net_heat_rate > cycle_rate);
+    }
+}
+
+#[test]
+fn no_loss_leaves_the_textbook_cycle_to_the_bit() {
+    for units in Units::ALL {
+        let plain = solve_cycle(&unit(units)).unwrap();
+        // Every loss given, each as zero.
+        let mut zero = unit(units);
+        zero.losses.throttle_flow = Some(units.from_native(Quantity::MassFlow, 520.0));
+        zero.losses.generator = Some(Generator::Constant { efficiency: 1.0 });
+        zero.losses.exhaust = Some(ExhaustLoss {
+            annulus_area: area(units, 30.0),
+            curve: Curve::new(&[(0.0, 0.0), (1e6, 0.0)]).unwrap(),
+        });
+        let zeroed = solve_cycle(&zero).unwrap();
+        let mut without_output = zeroed;
+        without_output.output = plain.output;
+        assert_eq!(without_output, plain, "{units:?}");
+        for r in [&plain, &zeroed] {
+            let o = &r.output;
+            assert_eq!(o.gross_output.to_bits(), r.turbine_work.to_bits());
+            assert_eq!(o.net_output.to_bits(), r.net_work.to_bits());
+            assert_eq!(o.net_efficiency.to_bits(), r.thermal_efficiency.to_bits());
+            if units != Units::UsCustomary {
+                assert_eq!(o.net_heat_rate.to_bits(), r.heat_rate_kj_per_kwh.to_bits());
+            }
+        }
+        assert!(plain.output.power.is_none());
+        assert!(zeroed.output.power.is_some());
+    }
+}
+
+#[test]
+fn the_exhaust_loss_moves_work_from_the_last_stage_to_the_condenser() {
+    let units = Units::MetricEngineering;
+    let spec = unit_with_losses(units);
+    let with = solve_cycle(&spec).unwrap();
+    let mut no_exhaust = spec;
+    no_exhaust.losses.exhaust = None;
+    let without = solve_cycle(&no_exhaust).unwrap();
+    let o = &with.output;
+    assert!(o.exhaust_loss > 0.0);
+    // The flows do not depend on the exhaust loss.
+    assert_eq!(with.extraction_fractions(), without.extraction_fractions());
+    let exhaust = with.point(PointRole::CasingExhaust, 3).unwrap();
+    assert_eq!(
+        without
+            .point(PointRole::CasingExhaust, 3)
+            .unwrap()
+            .state
+            .enthalpy(),
+        o.expansion_line_end
+    );
+    // UEEP = ELEP + loss.
+    let ueep = exhaust.state.enthalpy();
+    assert!((ueep - (o.expansion_line_end + o.exhaust_loss)).abs() <= 1e-12 * ueep);
+    let lost = exhaust.flow * o.exhaust_loss;
+    assert!((without.turbine_work - with.turbine_work - lost).abs() <= 1e-9 * lost);
+    assert!((with.condenser_duty - without.condenser_duty - lost).abs() <= 1e-9 * lost);
+    // The velocity is the exhaust volume flow over the annulus, from the
+    // expansion line end point's specific volume.
+    let elep = State::from_ph(exhaust.state.pressure(), o.expansion_line_end, units).unwrap();
+    let volume_flow = exhaust.flow * 520.0 * elep.specific_volume();
+    assert!((o.annulus_velocity - volume_flow / 30.0).abs() <= 1e-12 * o.annulus_velocity);
+    // And the loss is the curve's at that velocity, linear between points.
+    let curve = exhaust_curve(units);
+    let pair = curve
+        .points()
+        .windows(2)
+        .find(|w| w[0].0 <= o.annulus_velocity && o.annulus_velocity <= w[1].0)
+        .unwrap();
+    let share = (o.annulus_velocity - pair[0].0) / (pair[1].0 - pair[0].0);
+    let expected = pair[0].1 + share * (pair[1].1 - pair[0].1);
+    assert!((o.exhaust_loss - expected).abs() <= 1e-12 * expected);
+    assert!(with.output.net_output < without.output.net_output);
+    check_components(&with);
+}
+
+#[test]
+fn more_loss_never_raises_the_net_output() {
+    let units = Units::Native;
+    let base = unit_with_losses(units);
+    let net = |spec: &CycleSpec| solve_cycle(spec).unwrap().output.net_output;
+    let mut last = f64::INFINITY;
+    for efficiency in [1.0, 0.99, 0.98, 0.95] {
+        let mut spec = base;
+        spec.losses.generator = Some(Generator::Constant { efficiency });
+        let n = net(&spec);
+        assert!(n < last, "generator {efficiency}");
+        last = n;
+    }
+    for (mechanical, auxiliary) in [
+        (0.0, 0.0),
+        (1000.0, 0.0),
+        (1000.0, 5000.0),
+        (4000.0, 5000.0),
+    ] {
+        let mut spec = base;
+        spec.losses.mechanical_losses = mechanical;
+        spec.losses.auxiliary_power = auxiliary;
+        let n = net(&spec);
+        if mechanical + auxiliary > 0.0 {
+            assert!(n < last, "{mechanical} {auxiliary}");
+        }
+        last = n;
+    }
+}
+
+/// An invented generator: 98.2 % at quarter load to 98.8 % at full load
+/// and a touch less beyond, rated 640 MW.
+fn invented_generator(units: Units) -> Generator {
+    Generator::AgainstLoad {
+        rated_output: units.from_native(Quantity::Power, 640_000.0),
+        efficiency: Curve::new(&[(0.25, 0.982), (0.5, 0.986), (1.0, 0.988), (1.2, 0.987)]).unwrap(),
+    }
+}
+
+#[test]
+fn a_generator_curve_is_read_at_the_load_it_gives() {
+    for units in Units::ALL {
+        let mut spec = unit_with_losses(units);
+        spec.losses.generator = Some(invented_generator(units));
+        let r = solve_cycle(&spec).unwrap();
+        let p = r.output.power.unwrap();
+        let rated = units.from_native(Quantity::Power, 640_000.0);
+        let load = p.gross_output / rated;
+        let Some(Generator::AgainstLoad { efficiency, .. }) = spec.losses.generator else {
+            unreachable!()
+        };
+        let pair = efficiency
+            .points()
+            .windows(2)
+            .find(|w| w[0].0 <= load && load <= w[1].0)
+            .unwrap();
+        let share = (load - pair[0].0) / (pair[1].0 - pair[0].0);
+        let eta = pair[0].1 + share * (pair[1].1 - pair[0].1);
+        assert!(
+            (r.output.generator_efficiency - eta).abs() <= 1e-12,
+            "{units:?}"
+        );
+        let input = p.shaft_power - p.mechanical_losses;
+        assert!((p.gross_output - eta * input).abs() <= 1e-9 * p.gross_output);
+        check_plant(
+            &r,
+            per_unit_flow(&r, p.mechanical_losses),
+            per_unit_flow(&r, p.auxiliary_power),
+        );
+    }
+}
+
+#[test]
+fn losses_that_need_the_absolute_flow_are_refused_without_it() {
+    let units = Units::Native;
+    for strip in 0..3 {
+        let mut spec = unit_with_losses(units);
+        spec.losses.throttle_flow = None;
+        match strip {
+            0 => spec.losses.exhaust = None,
+            1 => {
+                spec.losses.exhaust = None;
+                spec.losses.mechanical_losses = 0.0;
+            }
+            _ => {
+                spec.losses.exhaust = None;
+                spec.losses.mechanical_losses = 0.0;
+                spec.losses.auxiliary_power = 0.0;
+                spec.losses.generator = Some(invented_generator(units));
+            }
+        }
+        let e = solve_cycle(&spec).unwrap_err();
+        assert!(matches!(e, Error::InvalidPlant { .. }), "{e}");
+        assert!(format!("{e}").contains("throttle flow"), "{e}");
+    }
+    let mut spec = unit_with_losses(units);
+    spec.losses.throttle_flow = None;
+    let e = solve_cycle(&spec).unwrap_err();
+    assert!(format!("{e}").contains("needs the throttle flow"), "{e}");
+    // A constant generator efficiency alone stays per unit throttle flow.
+    let mut spec = unit(units);
+    spec.losses.generator = Some(Generator::Constant { efficiency: 0.987 });
+    let r = solve_cycle(&spec).unwrap();
+    assert!(r.output.power.is_none());
+    assert!((r.output.gross_output - 0.987 * r.turbine_work).abs() <= 1e-12 * r.turbine_work);
+}
+
+#[test]
+fn curves_and_loads_outside_their_range_are_refused() {
+    // Load fractions must rise.
+    assert!(Curve::new(&[(0.5, 0.98), (0.5, 0.99)]).is_err());
+    assert!(Curve::new(&[(0.5, 0.98), (0.4, 0.99)]).is_err());
+    assert!(Curve::new(&[(0.5, 0.98)]).is_err());
+    assert!(Curve::new(&[(0.5, f64::NAN), (0.6, 0.99)]).is_err());
+    let units = Units::Native;
+    // A rating so small the unit runs far past the curve's end.
+    let mut spec = unit_with_losses(units);
+    spec.losses.generator = Some(Generator::AgainstLoad {
+        rated_output: 100_000.0,
+        efficiency: Curve::new(&[(0.25, 0.982), (1.2, 0.987)]).unwrap(),
+    });
+    let e = solve_cycle(&spec).unwrap_err();
+    assert!(
+        format!("{e}").contains("outside its efficiency curve"),
+        "{e}"
+    );
+    // An annulus so small the velocity passes the curve's end.
+    let mut spec = unit_with_losses(units);
+    spec.losses.exhaust = Some(ExhaustLoss {
+        annulus_area: 5.0,
+        curve: exhaust_curve(units),
+    });
+    let e = solve_cycle(&spec).unwrap_err();
+    assert!(
+        format!("{e}").contains("outside its exhaust loss curve"),
+        "{e}"
+    );
+    // A generator efficiency above 1.
+    let mut spec = unit_with_losses(units);
+    spec.losses.generator = Some(Generator::Constant { efficiency: 1.01 });
+    assert!(solve_cycle(&spec).is_err());
+}
