@@ -437,3 +437,92 @@ fn curves_and_loads_outside_their_range_are_refused() {
     spec.losses.generator = Some(Generator::Constant { efficiency: 1.01 });
     assert!(solve_cycle(&spec).is_err());
 }
+
+/// Water-side pressure drops of the demo unit's closed heaters, MPa
+/// (invented: about a bar each, the size such heaters have, common
+/// practice); the open heater, fourth, has none.
+const DROPS: [f64; 7] = [0.12, 0.1, 0.09, 0.0, 0.07, 0.06, 0.05];
+
+fn with_drops(units: Units, scale: f64) -> CycleSpec {
+    let mut spec = unit_with_losses(units);
+    for (slot, drop) in spec.losses.water_pressure_drops.iter_mut().zip(DROPS) {
+        *slot = units.from_native(Quantity::Pressure, drop * scale);
+    }
+    spec
+}
+
+#[test]
+fn water_side_pressure_drops_fall_heater_by_heater_and_the_pumps_make_them_up() {
+    for units in Units::ALL {
+        let r = solve_cycle(&with_drops(units, 1.0)).unwrap();
+        check_components(&r);
+        let p = r.output.power.unwrap();
+        check_plant(
+            &r,
+            per_unit_flow(&r, p.mechanical_losses),
+            per_unit_flow(&r, p.auxiliary_power),
+        );
+        let pressure = |role, number| {
+            let point = r.point(role, number).unwrap();
+            units.to_native(Quantity::Pressure, point.state.pressure())
+        };
+        let out = |number| pressure(PointRole::FeedwaterOut, number);
+        let close = |a: f64, b: f64| assert!((a - b).abs() <= 1e-12 * 20.0, "{a} {b}");
+        // The feed pump (after the open heater 4) discharges at the given
+        // 19 MPa; each closed heater above it drops its own.
+        close(pressure(PointRole::PumpOutlet, 4), 19.0);
+        close(pressure(PointRole::PumpOutlet, 4) - out(3), DROPS[2]);
+        close(out(3) - out(2), DROPS[1]);
+        close(out(2) - out(1), DROPS[0]);
+        close(pressure(PointRole::BoilerInlet, 0), out(1));
+        close(out(1), 19.0 - DROPS[0] - DROPS[1] - DROPS[2]);
+        // Below it the water reaches the open heater at its shell pressure.
+        close(out(5), out(4));
+        close(out(6) - out(5), DROPS[4]);
+        close(out(7) - out(6), DROPS[5]);
+        close(
+            pressure(PointRole::CondensatePumpOutlet, 0) - out(7),
+            DROPS[6],
+        );
+    }
+    // Without a feed pump discharge given, the boiler receives its water at
+    // the throttle pressure, and the pump makes up the drops.
+    let mut spec = with_drops(Units::Native, 1.0);
+    spec.feed_pressure = None;
+    let r = solve_cycle(&spec).unwrap();
+    let p = |role, n| r.point(role, n).unwrap().state.pressure();
+    assert!((p(PointRole::BoilerInlet, 0) - 16.7).abs() <= 1e-12 * 16.7);
+    let discharge = 16.7 + DROPS[0] + DROPS[1] + DROPS[2];
+    assert!((p(PointRole::PumpOutlet, 4) - discharge).abs() <= 1e-12 * discharge);
+    check_components(&r);
+}
+
+#[test]
+fn larger_water_side_drops_cost_pump_work_and_output() {
+    let mut last_pumps = 0.0;
+    let mut last_net = f64::INFINITY;
+    for scale in [0.0, 0.5, 1.0, 2.0] {
+        let r = solve_cycle(&with_drops(Units::Native, scale)).unwrap();
+        assert!(r.pump_work > last_pumps, "{scale}");
+        assert!(r.output.net_output < last_net, "{scale}");
+        last_pumps = r.pump_work;
+        last_net = r.output.net_output;
+    }
+    // None on an open heater, none negative.
+    let mut spec = with_drops(Units::Native, 1.0);
+    spec.losses.water_pressure_drops[3] = 0.05;
+    let e = solve_cycle(&spec).unwrap_err();
+    assert!(format!("{e}").contains("open heater 4"), "{e}");
+    let mut spec = with_drops(Units::Native, 1.0);
+    spec.losses.water_pressure_drops[0] = -0.05;
+    let e = solve_cycle(&spec).unwrap_err();
+    assert!(format!("{e}").contains("closed heater 1"), "{e}");
+    // Drops that leave less than the throttle pressure for the boiler.
+    let mut spec = with_drops(Units::Native, 1.0);
+    spec.losses.water_pressure_drops[0] = 2.5;
+    let e = solve_cycle(&spec).unwrap_err();
+    assert!(
+        format!("{e}").contains("less the heaters' water-side"),
+        "{e}"
+    );
+}

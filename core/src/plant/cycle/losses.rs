@@ -1,10 +1,11 @@
 //! What separates a plant's heat balance from a textbook cycle's, as
 //! data in the cycle's units: an absolute scale (the throttle steam
-//! flow), the generator, mechanical and auxiliary losses, and the last
-//! stage's exhaust loss. Each is optional; [`Losses::NONE`] leaves the
+//! flow), the generator, mechanical and auxiliary losses, the last
+//! stage's exhaust loss, and the heaters' water-side pressure drops. Each is optional; [`Losses::NONE`] leaves the
 //! cycle exactly as without them.
 
 use super::curve::Curve;
+use super::spec::MAX_HEATERS;
 
 /// The generator's efficiency: electrical output over the shaft power
 /// it receives (after the mechanical losses).
@@ -65,6 +66,14 @@ pub struct Losses {
     pub auxiliary_power: f64,
     /// The last stage's exhaust loss; `None` for none.
     pub exhaust: Option<ExhaustLoss>,
+    /// Each closed heater's feedwater (tube) side pressure drop, a
+    /// pressure difference, in the order of [`CycleSpec::heaters`](super::spec::CycleSpec::heaters);
+    /// 0 for none (and for every open heater, which has no tubes). The
+    /// pump below a heater discharges that much higher, so that its water
+    /// reaches the next open heater at its shell pressure and the boiler at
+    /// the throttle pressure, or, with a feed pump discharge pressure
+    /// given, the boiler at that pressure less the drops above the pump.
+    pub water_pressure_drops: [f64; MAX_HEATERS],
 }
 
 impl Losses {
@@ -75,6 +84,7 @@ impl Losses {
         mechanical_losses: 0.0,
         auxiliary_power: 0.0,
         exhaust: None,
+        water_pressure_drops: [0.0; MAX_HEATERS],
     };
 }
 

@@ -176,6 +176,7 @@ fn closed_heater_water(
         let (out, drain) = end_states(
             shell,
             &w.feedwater_in,
+            train.above_pressure[j],
             train.approaches[j],
             heater_part(heater, j),
         )?;
