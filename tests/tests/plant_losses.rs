@@ -9,8 +9,9 @@
 //! is invented too. Their numbers are inputs, never compared with.
 
 use ebullio::plant::{
-    solve_cycle, Casing, Component, Curve, CycleResult, CycleSpec, Drains, ExhaustLoss, Generator,
-    Heater, HeaterApproach, HeaterKind, PointRole, Reheat, Supply, ENTROPY_ALLOWANCE,
+    solve_cycle, Casing, Component, ComponentKind, Curve, CycleResult, CycleSpec, Drains,
+    ExhaustLoss, FeedPumpTurbine, Generator, Heater, HeaterApproach, HeaterKind, Leak, LeakSource,
+    Makeup, PointRole, Reheat, SteamDestination, Supply, WaterLoss, ENTROPY_ALLOWANCE, MAX_LEAKS,
 };
 use ebullio::{Error, Quantity, State, Units};
 
@@ -230,6 +231,13 @@ fn no_loss_leaves_the_textbook_cycle_to_the_bit() {
         zero.losses.exhaust = Some(ExhaustLoss {
             annulus_area: area(units, 30.0),
             curve: Curve::new(&[(0.0, 0.0), (1e6, 0.0)]).unwrap(),
+        });
+        zero.losses.leaks = leaks(0.0);
+        zero.losses.makeup = Some(Makeup {
+            fraction: 0.0,
+            pressure: units.from_native(Quantity::Pressure, 0.2),
+            temperature: units.from_native(Quantity::Temperature, 298.15),
+            lost_as: WaterLoss::Blowdown,
         });
         let zeroed = solve_cycle(&zero).unwrap();
         let mut without_output = zeroed;
@@ -524,5 +532,347 @@ fn larger_water_side_drops_cost_pump_work_and_output() {
     assert!(
         format!("{e}").contains("less the heaters' water-side"),
         "{e}"
+    );
+}
+
+/// Invented leakages of the demo unit (fractions of the throttle flow of
+/// the size such leakages have, common practice): valve stems to heater
+/// 2's shell, the HP exhaust-end gland to heater 6's, the IP inlet gland
+/// to the condenser, the LP inlet gland to heater 7's.
+fn leaks(scale: f64) -> [Option<Leak>; MAX_LEAKS] {
+    let leak = |from, to, fraction: f64| {
+        Some(Leak {
+            from,
+            to,
+            fraction: fraction * scale,
+        })
+    };
+    [
+        leak(
+            LeakSource::CasingInlet(0),
+            SteamDestination::HeaterShell(1),
+            0.002,
+        ),
+        leak(
+            LeakSource::CasingExhaust(0),
+            SteamDestination::HeaterShell(5),
+            0.001,
+        ),
+        leak(
+            LeakSource::CasingInlet(1),
+            SteamDestination::Condenser,
+            0.0015,
+        ),
+        leak(
+            LeakSource::CasingInlet(2),
+            SteamDestination::HeaterShell(6),
+            0.001,
+        ),
+    ]
+}
+
+/// Enthalpy flows per unit throttle flow that cross the plant's boundary
+/// as water: makeup in, and what the boiler loses instead out.
+fn water_crossing(r: &CycleResult, spec: &CycleSpec) -> (f64, f64) {
+    let Some(makeup) = spec.losses.makeup else {
+        return (0.0, 0.0);
+    };
+    let water = State::from_pt(makeup.pressure, makeup.temperature, spec.units).unwrap();
+    let boiler = r
+        .components()
+        .iter()
+        .find(|c| c.kind == ComponentKind::Boiler)
+        .unwrap();
+    let lost = boiler.outlets()[1];
+    (
+        makeup.fraction * water.enthalpy(),
+        lost.flow * lost.enthalpy,
+    )
+}
+
+/// Everything `check_plant` and `check_components` check, with the
+/// makeup's enthalpy crossing the boundary, and the condenser and hotwell
+/// carrying the same water.
+fn check_all(r: &CycleResult, spec: &CycleSpec) {
+    check_components(r);
+    let (makeup_in, lost_out) = water_crossing(r, spec);
+    let p = r.output.power.unwrap();
+    let o = &r.output;
+    let mechanical = per_unit_flow(r, p.mechanical_losses);
+    let auxiliary = per_unit_flow(r, p.auxiliary_power);
+    let generator_losses = (o.shaft_work - mechanical) - o.gross_output;
+    let into = r.heat_input + makeup_in;
+    let out =
+        o.net_output + r.condenser_duty + mechanical + generator_losses + auxiliary + lost_out;
+    assert!(
+        (into - out).abs() <= 1e-9 * into,
+        "plant energy: in {into}, out {out}"
+    );
+    let condenser = r
+        .components()
+        .iter()
+        .find(|c| c.kind == ComponentKind::Condenser)
+        .unwrap();
+    let received: f64 = condenser.inlets().iter().map(|s| s.flow).sum();
+    let hotwell = r.point(PointRole::Hotwell, 0).unwrap();
+    assert!((received - hotwell.flow).abs() <= 1e-12);
+    let heat: f64 = r.components().iter().map(|c| c.heat_in).sum();
+    assert!((heat - (r.heat_input - r.condenser_duty)).abs() <= 1e-9 * r.heat_input);
+}
+
+#[test]
+fn leakages_leave_the_turbine_and_join_their_destinations() {
+    for units in Units::ALL {
+        let mut spec = unit_with_losses(units);
+        spec.losses.leaks = leaks(1.0);
+        let r = solve_cycle(&spec).unwrap();
+        check_all(&r, &spec);
+        // Each leak joins its destination at its source's enthalpy.
+        let joins = |flow: f64, enthalpy: f64| {
+            r.components().iter().any(|c| {
+                c.kind == ComponentKind::MixingPoint
+                    && c.inlets().iter().any(|s| {
+                        (s.flow - flow).abs() <= 1e-15
+                            && (s.enthalpy - enthalpy).abs() <= 1e-12 * enthalpy
+                    })
+            })
+        };
+        let throttle = r.point(PointRole::Throttle, 0).unwrap().state.enthalpy();
+        let hot_reheat = r.point(PointRole::HotReheat, 0).unwrap().state.enthalpy();
+        let cold_reheat = r
+            .point(PointRole::CasingExhaust, 1)
+            .unwrap()
+            .state
+            .enthalpy();
+        assert!(joins(0.002, throttle));
+        assert!(joins(0.001, cold_reheat));
+        assert!(joins(0.0015, hot_reheat));
+        // The IP casing passes what the reheater gives less the IP inlet
+        // gland's leak; the reheater what the HP casing's exhaust carries
+        // less heater 2's extraction there and the HP exhaust gland's leak.
+        let group = |kind, number| {
+            r.components()
+                .iter()
+                .find(|c| c.kind == kind && c.number == number)
+                .unwrap()
+                .inlets()[0]
+                .flow
+        };
+        let reheated = group(ComponentKind::Reheater, 0);
+        assert!((reheated - group(ComponentKind::StageGroup, 2) - 0.0015).abs() <= 1e-15);
+        let hp_exhaust = r.point(PointRole::CasingExhaust, 1).unwrap().flow;
+        let cold_reheat_extraction = r.extraction_fractions()[1];
+        assert!((hp_exhaust - cold_reheat_extraction - 0.001 - reheated).abs() <= 1e-15);
+    }
+    // More leakage, less net output.
+    let mut last = f64::INFINITY;
+    for scale in [0.0, 1.0, 2.0, 4.0] {
+        let mut spec = unit_with_losses(Units::Native);
+        spec.losses.leaks = leaks(scale);
+        let net = solve_cycle(&spec).unwrap().output.net_output;
+        assert!(net < last, "{scale}");
+        last = net;
+    }
+}
+
+#[test]
+fn makeup_replaces_blowdown_or_lost_steam_and_the_balance_closes() {
+    let mut last_rate = 0.0;
+    for (fraction, lost_as) in [
+        (0.0, WaterLoss::Blowdown),
+        (0.005, WaterLoss::Blowdown),
+        (0.01, WaterLoss::Blowdown),
+        (0.01, WaterLoss::ThrottleSteam),
+    ] {
+        for units in Units::ALL {
+            let mut spec = unit_with_losses(units);
+            spec.losses.makeup = Some(Makeup {
+                fraction,
+                pressure: units.from_native(Quantity::Pressure, 0.2),
+                temperature: units.from_native(Quantity::Temperature, 298.15),
+                lost_as,
+            });
+            let r = solve_cycle(&spec).unwrap();
+            if fraction == 0.0 {
+                spec.losses.makeup = None;
+                assert_eq!(r, solve_cycle(&spec).unwrap(), "no makeup, to the bit");
+                continue;
+            }
+            check_all(&r, &spec);
+            let boiler_inlet = r.point(PointRole::BoilerInlet, 0).unwrap();
+            assert!((boiler_inlet.flow - (1.0 + fraction)).abs() <= 1e-15);
+            if units == Units::Native {
+                // Cold water in and hot water or steam out costs heat.
+                assert!(r.output.net_heat_rate > last_rate, "{fraction} {lost_as:?}");
+                last_rate = r.output.net_heat_rate;
+            }
+        }
+    }
+}
+
+/// An invented small unit: 4 MPa saturated steam, a deaerator at 0.5 MPa
+/// and one closed heater at 0.1 MPa; its feed pump turbine takes steam at
+/// the deaerator's extraction point and exhausts into the closed heater,
+/// which needs more steam than that.
+fn small_unit_with_drive() -> CycleSpec {
+    let mut spec = CycleSpec::new(Units::Native, Supply::SaturatedVapour { pressure: 4.0 });
+    spec.feed_pump_efficiency = 0.8;
+    spec.condensate_pump_efficiency = 0.75;
+    spec.push_casing(Casing {
+        exhaust_pressure: 0.01,
+        isentropic_efficiency: 0.85,
+    })
+    .unwrap();
+    for (pressure, kind) in [
+        (0.5, HeaterKind::Open),
+        (
+            0.1,
+            HeaterKind::Closed {
+                approach: HeaterApproach {
+                    terminal_temperature_difference: 3.0,
+                    drain_cooler_approach: None,
+                },
+                drains: Drains::CascadeBackward,
+            },
+        ),
+    ] {
+        spec.push_heater(Heater {
+            extraction_pressure: pressure,
+            extraction_line_loss: 0.0,
+            kind,
+        })
+        .unwrap();
+    }
+    spec.losses.throttle_flow = Some(50.0);
+    spec.losses.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 0,
+        exhaust_to: SteamDestination::HeaterShell(1),
+        isentropic_efficiency: 0.75,
+    });
+    spec
+}
+
+/// The drive turbine's work equals the feed pump's (`pump` its number),
+/// and the output counts neither.
+fn check_drive(r: &CycleResult, pump: u8, steam_from: u8) {
+    let find = |kind, number| {
+        r.components()
+            .iter()
+            .find(|c| c.kind == kind && c.number == number)
+            .unwrap()
+    };
+    let drive = find(ComponentKind::StageGroup, 0);
+    let feed_pump = -find(ComponentKind::Pump, pump).work_out;
+    assert!((drive.work_out - feed_pump).abs() <= 1e-12 * feed_pump);
+    let o = &r.output;
+    assert!((o.shaft_work - (r.turbine_work - drive.work_out)).abs() <= 1e-12 * o.shaft_work);
+    assert!((o.motor_pump_work - (r.pump_work - feed_pump)).abs() <= 1e-12 * r.pump_work);
+    // Its steam leaves at its heater's extraction point.
+    let extraction = r.point(PointRole::Extraction, steam_from).unwrap();
+    assert_eq!(drive.inlets()[0].enthalpy, extraction.state.enthalpy());
+    assert!(drive.entropy_generation > 0.0);
+}
+
+#[test]
+fn a_feed_pump_turbine_takes_the_pump_work_off_the_generator() {
+    for units in Units::ALL {
+        let mut spec = unit_with_losses(units);
+        spec.losses.leaks = leaks(1.0);
+        spec.losses.feed_pump_turbine = Some(FeedPumpTurbine {
+            steam_from: 3,
+            exhaust_to: SteamDestination::Condenser,
+            isentropic_efficiency: 0.8,
+        });
+        let r = solve_cycle(&spec).unwrap();
+        check_all(&r, &spec);
+        check_drive(&r, 4, 4);
+    }
+    // Exhausting into a heater's shell: the sweeps settle the drive's
+    // steam and the heater's extraction together.
+    let spec = small_unit_with_drive();
+    let r = solve_cycle(&spec).unwrap();
+    check_all(&r, &spec);
+    check_drive(&r, 1, 1);
+    let mut motor = spec;
+    motor.losses.feed_pump_turbine = None;
+    let motor = solve_cycle(&motor).unwrap();
+    assert!(r.extraction_fractions()[1] < motor.extraction_fractions()[1]);
+    // Into the demo unit's heater 6 its steam is more than the heater
+    // condenses: refused, naming the heater.
+    let mut spec = unit_with_losses(Units::Native);
+    spec.losses.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 3,
+        exhaust_to: SteamDestination::HeaterShell(5),
+        isentropic_efficiency: 0.8,
+    });
+    let e = solve_cycle(&spec).unwrap_err();
+    assert!(format!("{e}").contains("closed heater 6"), "{e}");
+}
+
+#[test]
+fn side_streams_that_cannot_be_are_refused() {
+    let refused = |change: &dyn Fn(&mut CycleSpec), expect: &str| {
+        let mut spec = unit_with_losses(Units::Native);
+        change(&mut spec);
+        let e = solve_cycle(&spec).unwrap_err();
+        assert!(matches!(e, Error::InvalidPlant { .. }), "{e}");
+        assert!(format!("{e}").contains(expect), "{e}");
+    };
+    let leak = |from, to, fraction| {
+        move |spec: &mut CycleSpec| spec.losses.leaks[0] = Some(Leak { from, to, fraction })
+    };
+    use LeakSource::{CasingExhaust, CasingInlet};
+    use SteamDestination::{Condenser, HeaterShell};
+    refused(&leak(CasingExhaust(2), Condenser, 0.001), "leak 1");
+    refused(&leak(CasingInlet(3), Condenser, 0.001), "leak 1");
+    refused(&leak(CasingInlet(0), HeaterShell(7), 0.001), "leak 1");
+    refused(
+        &leak(CasingExhaust(1), HeaterShell(0), 0.001),
+        "higher pressure",
+    );
+    refused(&leak(CasingInlet(0), Condenser, 1.5), "outside [0, 1]");
+    refused(&leak(CasingInlet(0), Condenser, -0.1), "outside [0, 1]");
+    refused(
+        &|spec: &mut CycleSpec| {
+            for slot in &mut spec.losses.leaks {
+                *slot = Some(Leak {
+                    from: CasingInlet(0),
+                    to: Condenser,
+                    fraction: 0.4,
+                });
+            }
+        },
+        "more",
+    );
+    refused(
+        &|spec: &mut CycleSpec| {
+            spec.losses.feed_pump_turbine = Some(FeedPumpTurbine {
+                steam_from: 9,
+                exhaust_to: Condenser,
+                isentropic_efficiency: 0.8,
+            })
+        },
+        "feed pump turbine",
+    );
+    refused(
+        &|spec: &mut CycleSpec| {
+            spec.losses.feed_pump_turbine = Some(FeedPumpTurbine {
+                steam_from: 3,
+                exhaust_to: Condenser,
+                isentropic_efficiency: 1.5,
+            })
+        },
+        "feed pump turbine",
+    );
+    refused(
+        &|spec: &mut CycleSpec| {
+            spec.losses.makeup = Some(Makeup {
+                fraction: 2.0,
+                pressure: 0.2,
+                temperature: 298.15,
+                lost_as: WaterLoss::Blowdown,
+            })
+        },
+        "makeup",
     );
 }

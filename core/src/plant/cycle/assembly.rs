@@ -22,6 +22,9 @@ pub(super) struct Totals {
     pub(super) extraction_fractions: [f64; MAX_HEATERS],
     pub(super) heater_count: usize,
     pub(super) turbine_work: f64,
+    /// The feed pump turbine's work (in `turbine_work`), which drives the
+    /// feed pump (in `pump_work`) instead of the generator.
+    pub(super) drive_work: f64,
     pub(super) pump_work: f64,
     pub(super) boiler_heat: f64,
     pub(super) reheat_heat: f64,

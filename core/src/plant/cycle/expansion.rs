@@ -95,6 +95,16 @@ impl ExpansionLine {
         self.exhaust = end;
     }
 
+    /// Casing `c`'s inlet and exhaust states (every casing has a group).
+    pub(super) fn casing_ends(&self, c: usize) -> (State, State) {
+        let mut groups = self.groups().iter().filter(|g| g.casing == c);
+        let Some(first) = groups.next() else {
+            return (self.exhaust, self.exhaust);
+        };
+        let last = groups.next_back().unwrap_or(first);
+        (first.inlet, last.outlet)
+    }
+
     /// The stage groups, from the throttle down.
     pub(super) fn groups(&self) -> &[Group] {
         &self.groups[..self.group_count]

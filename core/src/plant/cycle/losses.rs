@@ -1,7 +1,9 @@
 //! What separates a plant's heat balance from a textbook cycle's, as
 //! data in the cycle's units: an absolute scale (the throttle steam
 //! flow), the generator, mechanical and auxiliary losses, the last
-//! stage's exhaust loss, and the heaters' water-side pressure drops. Each is optional; [`Losses::NONE`] leaves the
+//! stage's exhaust loss, the heaters' water-side pressure drops, gland
+//! and valve-stem leakages, makeup water, and a feed pump driven by its
+//! own turbine. Each is optional; [`Losses::NONE`] leaves the
 //! cycle exactly as without them.
 
 use super::curve::Curve;
@@ -47,6 +49,86 @@ pub struct ExhaustLoss {
     pub curve: Curve,
 }
 
+/// The most leakages a description holds.
+pub const MAX_LEAKS: usize = 4;
+
+/// Where a leakage leaves the turbine, by the casing's index in
+/// [`CycleSpec::casings`](super::spec::CycleSpec::casings) (0 is the first).
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub enum LeakSource {
+    /// At the casing's inlet state (valve stems, the inlet-end gland):
+    /// none of the casing's stages passes it.
+    CasingInlet(usize),
+    /// At the casing's exhaust state (its exhaust-end gland), before the
+    /// next casing (and before the reheater); not the last casing's.
+    CasingExhaust(usize),
+}
+
+/// Where steam from outside the extraction lines goes: a leakage, or
+/// the feed pump turbine's exhaust.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub enum SteamDestination {
+    /// The shell of a heater, by its index in
+    /// [`CycleSpec::heaters`](super::spec::CycleSpec::heaters); it joins
+    /// the extraction steam there, throttled to the shell pressure.
+    HeaterShell(usize),
+    /// The condenser.
+    Condenser,
+}
+
+/// A gland or valve-stem leakage: a fixed fraction of the throttle flow
+/// leaves the turbine at `from` and joins `to`.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct Leak {
+    /// Where it leaves the turbine.
+    pub from: LeakSource,
+    /// Where it goes.
+    pub to: SteamDestination,
+    /// Its flow per unit throttle flow, in [0, 1].
+    pub fraction: f64,
+}
+
+/// How the water the makeup replaces leaves the cycle.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub enum WaterLoss {
+    /// Boiler blowdown: saturated liquid at the throttle pressure (a drum
+    /// boiler's; refused at or above the critical pressure).
+    Blowdown,
+    /// Steam lost at the throttle state before the turbine (vents, soot
+    /// blowing).
+    ThrottleSteam,
+}
+
+/// Makeup water into the condenser hotwell, replacing the same flow
+/// lost from the boiler: the boiler then takes 1 + `fraction` of
+/// feedwater per unit throttle flow.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct Makeup {
+    /// Its flow per unit throttle flow, in [0, 1].
+    pub fraction: f64,
+    /// Its pressure as delivered.
+    pub pressure: f64,
+    /// Its temperature as delivered.
+    pub temperature: f64,
+    /// How the water it replaces leaves.
+    pub lost_as: WaterLoss,
+}
+
+/// A boiler feed pump driven by its own turbine on extraction steam: the
+/// pump's work comes from that steam, not from the generator. The
+/// turbine's steam flow is the one whose work equals the pump's (no
+/// mechanical loss between them).
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct FeedPumpTurbine {
+    /// The heater (index in [`CycleSpec::heaters`](super::spec::CycleSpec::heaters))
+    /// whose extraction point supplies its steam.
+    pub steam_from: usize,
+    /// Where it exhausts.
+    pub exhaust_to: SteamDestination,
+    /// Its isentropic efficiency, in (0, 1].
+    pub isentropic_efficiency: f64,
+}
+
 /// The losses of a cycle, in its units. Powers need the throttle flow
 /// to be compared with the per-unit-mass balance; without it every
 /// figure stays per unit throttle flow and a loss that needs the flow
@@ -74,6 +156,12 @@ pub struct Losses {
     /// the throttle pressure, or, with a feed pump discharge pressure
     /// given, the boiler at that pressure less the drops above the pump.
     pub water_pressure_drops: [f64; MAX_HEATERS],
+    /// Gland and valve-stem leakages; `None` slots are none.
+    pub leaks: [Option<Leak>; MAX_LEAKS],
+    /// Makeup water; `None` for none.
+    pub makeup: Option<Makeup>,
+    /// A turbine-driven boiler feed pump; `None` for a motor-driven one.
+    pub feed_pump_turbine: Option<FeedPumpTurbine>,
 }
 
 impl Losses {
@@ -85,6 +173,9 @@ impl Losses {
         auxiliary_power: 0.0,
         exhaust: None,
         water_pressure_drops: [0.0; MAX_HEATERS],
+        leaks: [None; MAX_LEAKS],
+        makeup: None,
+        feed_pump_turbine: None,
     };
 }
 

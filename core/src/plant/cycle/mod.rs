@@ -15,7 +15,10 @@
 //! `expansion.rs` (the expansion line and the extraction lines),
 //! `train.rs` (the feedwater train's pressures and pumps), `sweeps.rs`
 //! (its water states and flows), `limits.rs` (what the balances alone do
-//! not keep), `record.rs` and `assembly.rs` (the result).
+//! not keep), `exhaust.rs` (the last stage's exhaust loss), `record.rs`
+//! and `assembly.rs` (the result), `output.rs` (gross and net output).
+//! `side_streams.rs` holds the leakages, the feed pump turbine and the
+//! makeup, which the sweeps and the record read.
 
 mod assembly;
 pub(super) mod curve;
@@ -28,6 +31,7 @@ pub(super) mod losses;
 mod output;
 mod record;
 pub(super) mod result;
+mod side_streams;
 pub(super) mod spec;
 mod sweeps;
 mod train;
@@ -82,15 +86,19 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
     let mut line = expansion::ExpansionLine::new(throttle);
     line.expand(spec, throttle)?;
     let shell = expansion::heater_shells(spec, &line)?;
+    let mut side = side_streams::SideStreams::new(spec, &line, &shell, &throttle)?;
     let train = train::FeedwaterTrain::new(spec, &throttle, &hotwell, &shell)?;
     let mut flows = sweeps::TrainFlows::new(&train, &hotwell);
-    sweeps::solve_train(spec, &train, &shell, &mut flows)?;
-    limits::check_extractions(spec.heaters(), &flows, &shell)?;
-    let boiler_heat = limits::check_boiler(&throttle, &flows.boiler_inlet, spec.units)?;
+    sweeps::solve_train(spec, &train, &shell, &mut flows, &mut side, &hotwell)?;
+    limits::check_extractions(spec.heaters(), &flows, &shell, &side, &line)?;
+    let boiler_heat = side.boiler_heat(
+        limits::check_boiler(&throttle, &flows.boiler_inlet, spec.units)?,
+        &flows.boiler_inlet,
+    );
     let end = exhaust::end_point(
         spec.losses.exhaust.as_ref(),
         &mut line,
-        1.0 - flows.extracted_before(spec.heaters().len()),
+        1.0 - flows.extracted_before(spec.heaters().len()) - side.withdrawn(),
         output::throttle_flow(&spec.losses, spec.units)?,
         spec.units,
     )?;
@@ -106,9 +114,10 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
         shell: &shell,
         condensate_pump_outlet: train.condensate_pump_outlet,
         flows: &flows,
+        side: &side,
         boiler_heat,
     }
-    .record(&mut out);
+    .record(&mut out)?;
     out.finish(totals, &spec.losses, &end)
 }
 

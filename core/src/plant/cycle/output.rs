@@ -79,7 +79,7 @@ pub(super) fn plant_output(
         "its auxiliary power is negative",
         units,
     )?;
-    let shaft = t.turbine_work;
+    let shaft = t.turbine_work - t.drive_work;
     let generator_input = shaft - mechanical;
     if generator_input <= 0.0 {
         return Err(refuse(
@@ -105,7 +105,7 @@ pub(super) fn plant_output(
         }
     };
     let gross = generator_input * efficiency;
-    let pumps = t.pump_work;
+    let pumps = t.pump_work - t.drive_work;
     let net = gross - pumps - auxiliary;
     if net <= 0.0 {
         return Err(refuse_with(
