@@ -313,8 +313,31 @@ fn exercise_plant() -> f64 {
     }
     lossy.losses.mechanical_losses = 1800.0;
     lossy.losses.auxiliary_power = 14_000.0;
-    if let Ok(r) = solve_cycle(&lossy) {
-        sum += r.output.net_heat_rate + r.output.power.map_or(0.0, |p| p.net_output);
+    lossy.losses.water_pressure_drops[0] = 0.1;
+    lossy.losses.leaks[0] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::HeaterShell(0),
+        fraction: 0.002,
+    });
+    lossy.losses.leaks[1] = Some(Leak {
+        from: LeakSource::CasingInlet(1),
+        to: SteamDestination::Condenser,
+        fraction: 0.0015,
+    });
+    lossy.losses.makeup = Some(Makeup {
+        fraction: 0.01,
+        pressure: 0.2,
+        temperature: 298.15,
+        lost_as: WaterLoss::Blowdown,
+    });
+    lossy.losses.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 1,
+        exhaust_to: SteamDestination::Condenser,
+        isentropic_efficiency: 0.8,
+    });
+    match solve_cycle(&lossy) {
+        Ok(r) => sum += r.output.net_heat_rate + r.output.power.map_or(0.0, |p| p.net_output),
+        Err(e) => panic!("the plant with losses solves: {e}"),
     }
     let mut bad = spec;
     bad.feed_pump_efficiency = 2.0;

@@ -13,7 +13,10 @@ pub const MAX_POINTS: usize = 4 + MAX_CASINGS + 7 * MAX_HEATERS;
 /// The most components a result holds. A cycle records four outside its
 /// turbine and heaters (reheater, condenser, condensate pump, boiler), a
 /// stage group per casing and per extraction point at most, and four per
-/// heater at most (extraction line, heater, drain pump, mixing point).
+/// heater at most (extraction line, heater, drain pump, mixing point):
+/// 68, which leaves room for the losses' side streams (a feed pump
+/// turbine and a mixing point per two streams joining a shell or the
+/// condenser: six at most with [`MAX_LEAKS`](super::losses::MAX_LEAKS) leaks).
 pub const MAX_COMPONENTS: usize = 4 + MAX_CASINGS + 6 * MAX_HEATERS;
 /// The most inlet (or outlet) streams of one component: a closed
 /// heater's steam, cascaded drains and feedwater.
@@ -28,7 +31,8 @@ pub const FIGURE_COUNT: usize = 14;
 pub enum PointRole {
     /// Throttle steam, at the first casing's inlet.
     Throttle = 1,
-    /// A casing's exhaust (the last one's is the condenser inlet).
+    /// A casing's exhaust (the last one's is the condenser inlet: with
+    /// an exhaust loss, the used energy end point).
     CasingExhaust = 2,
     /// Hot reheat, at the second casing's inlet.
     HotReheat = 3,
@@ -100,7 +104,8 @@ pub struct StatePoint {
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
 #[repr(u32)]
 pub enum ComponentKind {
-    /// A stage group of a turbine casing (numbered by casing).
+    /// A stage group of a turbine casing (numbered by casing; 0 is the
+    /// feed pump's own turbine).
     StageGroup = 1,
     /// An extraction line, a throttle (numbered by heater).
     ExtractionLine = 2,
@@ -110,7 +115,9 @@ pub enum ComponentKind {
     OpenHeater = 4,
     /// A drain pump (numbered by heater).
     DrainPump = 5,
-    /// The mixing of a pumped drain into the feedwater (by heater).
+    /// A mixing point (by heater): a pumped drain joining the feedwater
+    /// after it, or leakages and a feed pump turbine's exhaust joining
+    /// its steam; numbered 0 where they join the condenser's.
     MixingPoint = 6,
     /// The pump after an open heater (numbered by heater).
     Pump = 7,
