@@ -65,8 +65,9 @@ pub fn seven_heaters(drains: Drains) -> CycleSpec {
 
 /// The cascaded seven-heater unit with every loss the description takes:
 /// 500 kg/s, a generator curve, mechanical and auxiliary power, an exhaust
-/// loss curve (invented), water-side drops, two leaks, makeup and a feed
-/// pump turbine exhausting to the condenser.
+/// loss curve (invented), water-side drops, three leaks (one returning to
+/// the IP casing), makeup and a feed pump turbine exhausting to the
+/// condenser.
 pub fn seven_heaters_with_losses() -> CycleSpec {
     let mut spec = seven_heaters(Drains::CascadeBackward);
     let losses = &mut spec.losses;
@@ -95,6 +96,11 @@ pub fn seven_heaters_with_losses() -> CycleSpec {
         from: LeakSource::CasingInlet(1),
         to: SteamDestination::Condenser,
         fraction: 0.0015,
+    });
+    losses.leaks[2] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::CasingInlet(1),
+        fraction: 0.01,
     });
     losses.makeup = Some(Makeup {
         fraction: 0.01,

@@ -324,6 +324,11 @@ fn exercise_plant() -> f64 {
         to: SteamDestination::Condenser,
         fraction: 0.0015,
     });
+    lossy.losses.leaks[2] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::CasingInlet(1),
+        fraction: 0.01,
+    });
     lossy.losses.makeup = Some(Makeup {
         fraction: 0.01,
         pressure: 0.2,

@@ -876,3 +876,56 @@ fn side_streams_that_cannot_be_are_refused() {
         "makeup",
     );
 }
+
+#[test]
+fn a_leakage_returning_to_a_later_casing_mixes_at_its_inlet() {
+    let mut last = f64::INFINITY;
+    for fraction in [0.0, 0.01, 0.02] {
+        for units in Units::ALL {
+            // The HP inlet-end gland leaking into the IP inlet (about 1 %
+            // of the throttle flow, common practice for an opposed-flow
+            // HP/IP casing), beside the other leakages.
+            let mut spec = unit_with_losses(units);
+            spec.losses.leaks = leaks(1.0);
+            spec.losses.leaks[3] = Some(Leak {
+                from: LeakSource::CasingInlet(0),
+                to: SteamDestination::CasingInlet(1),
+                fraction,
+            });
+            let r = solve_cycle(&spec).unwrap();
+            check_all(&r, &spec);
+            let component = |kind, number| {
+                r.components()
+                    .iter()
+                    .find(|c| c.kind == kind && c.number == number)
+                    .unwrap()
+            };
+            let reheated = component(ComponentKind::Reheater, 0).outlets()[0];
+            let ip = component(ComponentKind::StageGroup, 2).inlets()[0];
+            let throttle = r.point(PointRole::Throttle, 0).unwrap().state.enthalpy();
+            // The IP casing takes the reheated steam and the leak, less
+            // the IP inlet gland's own leak, at the mixture's enthalpy.
+            let expected_flow = reheated.flow + fraction - 0.0015;
+            assert!((ip.flow - expected_flow).abs() <= 1e-14, "{units:?}");
+            let mixture = (reheated.flow * reheated.enthalpy + fraction * throttle)
+                / (reheated.flow + fraction);
+            assert!(
+                (ip.enthalpy - mixture).abs() <= 1e-11 * mixture,
+                "{units:?}"
+            );
+            if units == Units::Native {
+                assert!(r.output.net_output < last, "{fraction}");
+                last = r.output.net_output;
+            }
+        }
+    }
+    // It returns only downstream.
+    let mut spec = unit_with_losses(Units::Native);
+    spec.losses.leaks[0] = Some(Leak {
+        from: LeakSource::CasingInlet(1),
+        to: SteamDestination::CasingInlet(1),
+        fraction: 0.01,
+    });
+    let e = solve_cycle(&spec).unwrap_err();
+    assert!(format!("{e}").contains("leak 1"), "{e}");
+}

@@ -74,6 +74,10 @@ pub enum SteamDestination {
     HeaterShell(usize),
     /// The condenser.
     Condenser,
+    /// The inlet of a later casing (by its index in
+    /// [`CycleSpec::casings`](super::spec::CycleSpec::casings)), where it
+    /// mixes with the steam arriving there (leakages only).
+    CasingInlet(usize),
 }
 
 /// A gland or valve-stem leakage: a fixed fraction of the throttle flow

@@ -34,7 +34,7 @@ impl SolvedCycle<'_> {
     /// Records every point and component into `out` and returns the
     /// cycle's totals (refused only if a side stream's mixing has no state).
     pub(super) fn record(&self, out: &mut Assembly) -> Result<Totals, Error> {
-        let mut turbine_work = self.record_turbine(out);
+        let mut turbine_work = self.record_turbine(out)?;
         let drive_work = self.record_drive_turbine(out);
         turbine_work += drive_work;
         let reheat_heat = self.reheat_heat();
@@ -102,8 +102,9 @@ impl SolvedCycle<'_> {
     }
 
     /// The throttle, each stage group (the reheater before the second
-    /// casing's first) and each casing's exhaust; returns the turbine work.
-    fn record_turbine(&self, out: &mut Assembly) -> f64 {
+    /// casing's first, leakages returning to a casing before its first)
+    /// and each casing's exhaust; returns the turbine work.
+    fn record_turbine(&self, out: &mut Assembly) -> Result<f64, Error> {
         out.point(PointRole::Throttle, 0, 1.0, &self.throttle);
         let groups = self.line.groups();
         let mut turbine_work = 0.0;
@@ -127,6 +128,19 @@ impl SolvedCycle<'_> {
                     );
                 }
             }
+            let starts_casing = g == 0 || groups[g - 1].casing != group.casing;
+            if starts_casing && group.casing > 0 {
+                let c = group.casing;
+                let arriving =
+                    self.side
+                        .arriving_flow(c, self.line, self.flows, self.heaters.len());
+                join_side_streams(
+                    out,
+                    0,
+                    (arriving, self.line.arriving[c]),
+                    self.side.joining(SteamDestination::CasingInlet(c)),
+                )?;
+            }
             let work = flow * (group.inlet.native().h - group.outlet.native().h);
             turbine_work += work;
             let number = (group.casing + 1) as u8;
@@ -143,7 +157,7 @@ impl SolvedCycle<'_> {
                 out.point(PointRole::CasingExhaust, number, flow, &group.outlet);
             }
         }
-        turbine_work
+        Ok(turbine_work)
     }
 
     /// The steam the reheater takes: what is left after the heaters fed
@@ -285,7 +299,7 @@ fn join_side_streams(
                 *slot = (*flow, state);
             }
             let part = match number {
-                0 => PlantPart::single("mixing point before the condenser"),
+                0 => PlantPart::single("mixing point before a casing or the condenser"),
                 _ => PlantPart {
                     name: "mixing point before heater",
                     number,

@@ -117,7 +117,8 @@ pub enum ComponentKind {
     DrainPump = 5,
     /// A mixing point (by heater): a pumped drain joining the feedwater
     /// after it, or leakages and a feed pump turbine's exhaust joining
-    /// its steam; numbered 0 where they join the condenser's.
+    /// its steam; numbered 0 where they join a casing's inlet steam or
+    /// the condenser's.
     MixingPoint = 6,
     /// The pump after an open heater (numbered by heater).
     Pump = 7,

@@ -7,7 +7,7 @@
 use super::at;
 use super::expansion::ExpansionLine;
 use super::losses::{LeakSource, SteamDestination, WaterLoss, MAX_LEAKS};
-use super::spec::{CycleSpec, HeaterKind, MAX_HEATERS};
+use super::spec::{CycleSpec, HeaterKind, MAX_CASINGS, MAX_HEATERS};
 use super::sweeps::TrainFlows;
 use super::train::FeedwaterTrain;
 use crate::constants::CRITICAL_PRESSURE;
@@ -89,10 +89,12 @@ impl SideStreams {
         let losses = &spec.losses;
         let destination = |to: SteamDestination, part: PlantPart| match to {
             SteamDestination::HeaterShell(j) if j < spec.heaters().len() => Ok(shell[j]),
-            SteamDestination::HeaterShell(_) => {
-                Err(refuse(part, "it goes to a heater the cycle lacks"))
-            }
+            SteamDestination::CasingInlet(c) if c < spec.casings().len() => Ok(line.arriving[c]),
             SteamDestination::Condenser => Ok(line.exhaust),
+            _ => Err(refuse(
+                part,
+                "it goes to a heater or casing the cycle lacks",
+            )),
         };
         let mut leaks = [None; MAX_LEAKS];
         for (k, (slot, leak)) in leaks.iter_mut().zip(&losses.leaks).enumerate() {
@@ -112,6 +114,15 @@ impl SideStreams {
             if destination(leak.to, part)?.native().p > state.native().p {
                 return Err(refuse(part, "it would flow to a higher pressure"));
             }
+            if let SteamDestination::CasingInlet(to) = leak.to {
+                let (LeakSource::CasingInlet(from) | LeakSource::CasingExhaust(from)) = leak.from;
+                if to <= from {
+                    return Err(refuse(
+                        part,
+                        "it returns to its own casing or an earlier one",
+                    ));
+                }
+            }
             // A leak of nothing is no leak, to the bit.
             let flow = fraction(leak.fraction, part)?;
             *slot = (flow > 0.0).then_some(SideLeak {
@@ -128,6 +139,12 @@ impl SideStreams {
                     return Err(refuse(
                         FEED_PUMP_TURBINE,
                         "its steam comes from a heater the cycle lacks",
+                    ));
+                }
+                if let SteamDestination::CasingInlet(_) = t.exhaust_to {
+                    return Err(refuse(
+                        FEED_PUMP_TURBINE,
+                        "it exhausts to the condenser or a heater, not into a casing",
                     ));
                 }
                 let inlet = line.extraction[t.steam_from];
@@ -213,7 +230,8 @@ impl SideStreams {
 
     /// Steam that leaves the turbine outside the extraction lines ahead of
     /// a place in casing `casing` past `extractions` extraction points
-    /// (and past the casing's exhaust if `past_exhaust`).
+    /// (and past the casing's exhaust if `past_exhaust`), less what has
+    /// returned to it at the inlet of that casing or an earlier one.
     pub(super) fn withdrawn_before(
         &self,
         casing: usize,
@@ -225,7 +243,57 @@ impl SideStreams {
             LeakSource::CasingExhaust(c) => c < casing || (c == casing && past_exhaust),
         });
         let drive = self.drive.iter().filter(|d| d.steam_from < extractions);
-        leaks.map(|l| l.flow).chain(drive.map(|d| d.flow)).sum()
+        let returned = self.leaks.iter().flatten().filter(|l| match l.to {
+            SteamDestination::CasingInlet(c) => c <= casing,
+            _ => false,
+        });
+        leaks
+            .map(|l| l.flow)
+            .chain(drive.map(|d| d.flow))
+            .sum::<f64>()
+            - returned.map(|l| l.flow).sum::<f64>()
+    }
+
+    /// The steam arriving at casing `c`'s inlet on `line` before any
+    /// leakage returns there, per unit throttle flow.
+    pub(super) fn arriving_flow(
+        &self,
+        c: usize,
+        line: &ExpansionLine,
+        flows: &TrainFlows,
+        heaters: usize,
+    ) -> f64 {
+        let fed_before = line.extraction_casing[..heaters]
+            .iter()
+            .filter(|&&e| e < c)
+            .count();
+        1.0 - flows.extracted_before(fed_before) - self.withdrawn_before(c - 1, fed_before, true)
+    }
+
+    /// The specific enthalpy at each casing's inlet once the leakages
+    /// returning there have mixed with the steam arriving on `line` with
+    /// `flows`; `None` for a casing none returns to.
+    pub(super) fn inlet_mixtures(
+        &self,
+        line: &ExpansionLine,
+        flows: &TrainFlows,
+        heaters: usize,
+    ) -> [Option<f64>; MAX_CASINGS] {
+        let mut mixtures = [None; MAX_CASINGS];
+        for (c, mixture) in mixtures.iter_mut().enumerate().skip(1) {
+            let (returning, enthalpy) = self
+                .joining(SteamDestination::CasingInlet(c))
+                .fold((0.0, 0.0), |(m, e), (flow, s)| {
+                    (m + flow, e + flow * s.native().h)
+                });
+            if returning > 0.0 {
+                let arriving = self.arriving_flow(c, line, flows, heaters);
+                *mixture = Some(
+                    (arriving * line.arriving[c].native().h + enthalpy) / (arriving + returning),
+                );
+            }
+        }
+        mixtures
     }
 
     /// All the steam that leaves the turbine outside the extraction
