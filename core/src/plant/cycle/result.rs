@@ -272,16 +272,22 @@ pub struct CycleResult {
 /// What the plant delivers: the generator's output (gross) and what is
 /// left after the motor-driven pumps and the auxiliaries (net), per unit
 /// mass of throttle steam in the cycle's specific energy unit (kJ/kg or
-/// Btu/lbm), and as powers when the throttle flow is given.
+/// Btu/lbm), and as powers when the throttle flow is given. Heat rates
+/// and efficiencies are on the cycle's heat input, the heat the water
+/// and steam receive (a turbine cycle's heat rate): the boiler's own
+/// efficiency, fuel to steam, lies outside the cycle.
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct PlantOutput {
-    /// Work of the main turbine's casings, which drive the generator.
+    /// Work of the main turbine's casings, which drive the generator (a
+    /// feed pump turbine's is in the cycle's turbine work, not here).
     pub shaft_work: f64,
     /// The generator efficiency at this load (1 without a generator).
     pub generator_efficiency: f64,
     /// Generator output: (shaft work − mechanical losses) × efficiency.
     pub gross_output: f64,
-    /// Work of the pumps driven by motors (all the cycle's pumps).
+    /// Work of the pumps driven by motors: every pump of the cycle but a
+    /// feed pump driven by its own turbine (the motors' own losses belong
+    /// to the auxiliary power).
     pub motor_pump_work: f64,
     /// Gross output − motor-driven pump work − auxiliary power.
     pub net_output: f64,

@@ -6,7 +6,9 @@
 
 use super::at;
 use super::expansion::ExpansionLine;
-use super::losses::{LeakSource, SteamDestination, WaterLoss, MAX_LEAKS};
+use super::losses::{
+    FeedPumpTurbine, Leak, LeakSource, Makeup, SteamDestination, WaterLoss, MAX_LEAKS,
+};
 use super::spec::{CycleSpec, HeaterKind, MAX_CASINGS, MAX_HEATERS};
 use super::sweeps::TrainFlows;
 use super::train::FeedwaterTrain;
@@ -68,13 +70,137 @@ pub(super) struct SideStreams {
 /// A flow per unit throttle flow: finite, in [0, 1].
 fn fraction(value: f64, part: PlantPart) -> Result<f64, Error> {
     if !(0.0..=1.0).contains(&value) {
+        let limit = if value < 0.0 { 0.0 } else { 1.0 };
         return Err(refuse_with(
             part,
             "its flow per unit throttle flow lies outside [0, 1]",
-            PlantFigure::number("flow per unit throttle flow", value, Some(1.0)),
+            PlantFigure::number("flow per unit throttle flow", value, Some(limit)),
         ));
     }
     Ok(value)
+}
+
+/// The steam already at `to` (its pressure is what a stream joining it
+/// must reach): a heater's shell, a casing's arriving steam, the exhaust.
+fn destination(
+    spec: &CycleSpec,
+    line: &ExpansionLine,
+    shell: &[State; MAX_HEATERS],
+    to: SteamDestination,
+    part: PlantPart,
+) -> Result<State, Error> {
+    match to {
+        SteamDestination::HeaterShell(j) if j < spec.heaters().len() => Ok(shell[j]),
+        SteamDestination::CasingInlet(c) if c < spec.casings().len() => Ok(line.arriving[c]),
+        SteamDestination::Condenser => Ok(line.exhaust),
+        _ => Err(refuse(
+            part,
+            "it goes to a heater or casing the cycle lacks",
+        )),
+    }
+}
+
+/// Leak `k` of `spec` on its `line`: from an existing place to a lower
+/// pressure, downstream if it returns to a casing; `None` for no flow.
+fn side_leak(
+    spec: &CycleSpec,
+    line: &ExpansionLine,
+    shell: &[State; MAX_HEATERS],
+    k: usize,
+    leak: &Leak,
+) -> Result<Option<SideLeak>, Error> {
+    let part = PlantPart::numbered("leak", k);
+    let last = spec.casings().len() - 1;
+    let state = match leak.from {
+        LeakSource::CasingInlet(c) if c <= last => line.casing_ends(c).0,
+        LeakSource::CasingExhaust(c) if c < last => line.casing_ends(c).1,
+        _ => {
+            return Err(refuse(
+                part,
+                "it leaves a casing the cycle lacks, or the last casing's exhaust",
+            ))
+        }
+    };
+    if destination(spec, line, shell, leak.to, part)?.native().p > state.native().p {
+        return Err(refuse(part, "it would flow to a higher pressure"));
+    }
+    if let SteamDestination::CasingInlet(to) = leak.to {
+        let (LeakSource::CasingInlet(from) | LeakSource::CasingExhaust(from)) = leak.from;
+        if to <= from {
+            return Err(refuse(
+                part,
+                "it returns to its own casing or an earlier one",
+            ));
+        }
+    }
+    // A leak of nothing is no leak, to the bit.
+    let flow = fraction(leak.fraction, part)?;
+    Ok((flow > 0.0).then_some(SideLeak {
+        from: leak.from,
+        to: leak.to,
+        flow,
+        state,
+    }))
+}
+
+/// The feed pump turbine `t` on `line`, its flow not yet known.
+fn drive_turbine(
+    spec: &CycleSpec,
+    line: &ExpansionLine,
+    shell: &[State; MAX_HEATERS],
+    t: &FeedPumpTurbine,
+) -> Result<DriveTurbine, Error> {
+    if t.steam_from >= spec.heaters().len() {
+        return Err(refuse(
+            FEED_PUMP_TURBINE,
+            "its steam comes from a heater the cycle lacks",
+        ));
+    }
+    if let SteamDestination::CasingInlet(_) = t.exhaust_to {
+        return Err(refuse(
+            FEED_PUMP_TURBINE,
+            "it exhausts to the condenser or a heater, not into a casing",
+        ));
+    }
+    let inlet = line.extraction[t.steam_from];
+    let p_out = destination(spec, line, shell, t.exhaust_to, FEED_PUMP_TURBINE)?
+        .native()
+        .p;
+    let exhaust = expand(&inlet, p_out, t.isentropic_efficiency)
+        .map_err(at(FEED_PUMP_TURBINE))?
+        .exhaust;
+    Ok(DriveTurbine {
+        steam_from: t.steam_from,
+        to: t.exhaust_to,
+        inlet,
+        exhaust,
+        flow: 0.0,
+    })
+}
+
+/// The makeup `m` of a cycle in `units` with `throttle` steam, and the
+/// water it replaces; `None` for no flow.
+fn makeup_water(m: &Makeup, units: Units, throttle: &State) -> Result<Option<MakeupWater>, Error> {
+    let water = State::from_pt(
+        native(Quantity::Pressure, m.pressure, units)?,
+        native(Quantity::Temperature, m.temperature, units)?,
+        Units::Native,
+    )?;
+    let lost = match m.lost_as {
+        WaterLoss::ThrottleSteam => *throttle,
+        WaterLoss::Blowdown => {
+            let p = throttle.native().p;
+            if p >= CRITICAL_PRESSURE {
+                return Err(refuse(
+                    MAKEUP,
+                    "a boiler above the critical pressure has no drum to blow down",
+                ));
+            }
+            *Saturation::at_pressure(p, Units::Native)?.liquid()
+        }
+    };
+    let flow = fraction(m.fraction, MAKEUP)?;
+    Ok((flow > 0.0).then_some(MakeupWater { flow, water, lost }))
 }
 
 impl SideStreams {
@@ -87,105 +213,19 @@ impl SideStreams {
         throttle: &State,
     ) -> Result<SideStreams, Error> {
         let losses = &spec.losses;
-        let destination = |to: SteamDestination, part: PlantPart| match to {
-            SteamDestination::HeaterShell(j) if j < spec.heaters().len() => Ok(shell[j]),
-            SteamDestination::CasingInlet(c) if c < spec.casings().len() => Ok(line.arriving[c]),
-            SteamDestination::Condenser => Ok(line.exhaust),
-            _ => Err(refuse(
-                part,
-                "it goes to a heater or casing the cycle lacks",
-            )),
-        };
         let mut leaks = [None; MAX_LEAKS];
         for (k, (slot, leak)) in leaks.iter_mut().zip(&losses.leaks).enumerate() {
-            let Some(leak) = leak else { continue };
-            let part = PlantPart::numbered("leak", k);
-            let last = spec.casings().len() - 1;
-            let state = match leak.from {
-                LeakSource::CasingInlet(c) if c <= last => line.casing_ends(c).0,
-                LeakSource::CasingExhaust(c) if c < last => line.casing_ends(c).1,
-                _ => {
-                    return Err(refuse(
-                        part,
-                        "it leaves a casing the cycle lacks, or the last casing's exhaust",
-                    ))
-                }
-            };
-            if destination(leak.to, part)?.native().p > state.native().p {
-                return Err(refuse(part, "it would flow to a higher pressure"));
+            if let Some(leak) = leak {
+                *slot = side_leak(spec, line, shell, k, leak)?;
             }
-            if let SteamDestination::CasingInlet(to) = leak.to {
-                let (LeakSource::CasingInlet(from) | LeakSource::CasingExhaust(from)) = leak.from;
-                if to <= from {
-                    return Err(refuse(
-                        part,
-                        "it returns to its own casing or an earlier one",
-                    ));
-                }
-            }
-            // A leak of nothing is no leak, to the bit.
-            let flow = fraction(leak.fraction, part)?;
-            *slot = (flow > 0.0).then_some(SideLeak {
-                from: leak.from,
-                to: leak.to,
-                flow,
-                state,
-            });
         }
-        let drive = match losses.feed_pump_turbine {
+        let drive = match &losses.feed_pump_turbine {
+            Some(t) => Some(drive_turbine(spec, line, shell, t)?),
             None => None,
-            Some(t) => {
-                if t.steam_from >= spec.heaters().len() {
-                    return Err(refuse(
-                        FEED_PUMP_TURBINE,
-                        "its steam comes from a heater the cycle lacks",
-                    ));
-                }
-                if let SteamDestination::CasingInlet(_) = t.exhaust_to {
-                    return Err(refuse(
-                        FEED_PUMP_TURBINE,
-                        "it exhausts to the condenser or a heater, not into a casing",
-                    ));
-                }
-                let inlet = line.extraction[t.steam_from];
-                let p_out = destination(t.exhaust_to, FEED_PUMP_TURBINE)?.native().p;
-                let exhaust = expand(&inlet, p_out, t.isentropic_efficiency)
-                    .map_err(at(FEED_PUMP_TURBINE))?
-                    .exhaust;
-                Some(DriveTurbine {
-                    steam_from: t.steam_from,
-                    to: t.exhaust_to,
-                    inlet,
-                    exhaust,
-                    flow: 0.0,
-                })
-            }
         };
-        let makeup = match losses.makeup {
+        let makeup = match &losses.makeup {
+            Some(m) => makeup_water(m, spec.units, throttle)?,
             None => None,
-            Some(m) => {
-                let units = spec.units;
-                let water = State::from_pt(
-                    native(Quantity::Pressure, m.pressure, units)?,
-                    native(Quantity::Temperature, m.temperature, units)?,
-                    Units::Native,
-                )?;
-                let lost = match m.lost_as {
-                    WaterLoss::ThrottleSteam => *throttle,
-                    WaterLoss::Blowdown => {
-                        let p = throttle.native().p;
-                        if p >= CRITICAL_PRESSURE {
-                            return Err(refuse(
-                                MAKEUP,
-                                "a boiler above the critical pressure has no drum to blow down",
-                            ));
-                        }
-                        *Saturation::at_pressure(p, Units::Native)?.liquid()
-                    }
-                };
-                let flow = fraction(m.fraction, MAKEUP)?;
-                (flow > 0.0).then_some(MakeupWater { flow, water, lost })
-            }
         };
         Ok(SideStreams {
             leaks,
