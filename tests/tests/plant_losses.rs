@@ -929,3 +929,136 @@ fn a_leakage_returning_to_a_later_casing_mixes_at_its_inlet() {
     let e = solve_cycle(&spec).unwrap_err();
     assert!(format!("{e}").contains("leak 1"), "{e}");
 }
+
+#[test]
+fn the_same_plant_in_every_unit_system() {
+    let spec = |units| {
+        let mut spec = with_drops(units, 1.0);
+        spec.losses.leaks = leaks(1.0);
+        spec.losses.generator = Some(invented_generator(units));
+        spec
+    };
+    let native = solve_cycle(&spec(Units::Native)).unwrap();
+    let n = native.output.power.unwrap();
+    for units in Units::ALL {
+        let r = solve_cycle(&spec(units)).unwrap();
+        let p = r.output.power.unwrap();
+        let power = |x| units.to_native(Quantity::Power, x);
+        let same = |a: f64, b: f64| assert!((a - b).abs() <= 1e-9 * b.abs(), "{units:?}: {a} {b}");
+        same(power(p.net_output), n.net_output);
+        same(power(p.gross_output), n.gross_output);
+        same(
+            units.to_native(Quantity::HeatFlow, p.heat_input),
+            n.heat_input,
+        );
+        same(
+            units.to_native(Quantity::MassFlow, p.throttle_flow),
+            n.throttle_flow,
+        );
+        same(
+            units.to_native(Quantity::Speed, r.output.annulus_velocity),
+            native.output.annulus_velocity,
+        );
+        same(
+            units.to_native(Quantity::Enthalpy, r.output.exhaust_loss),
+            native.output.exhaust_loss,
+        );
+        same(
+            units.to_native(Quantity::HeatRate, r.output.net_heat_rate),
+            native.output.net_heat_rate,
+        );
+        same(
+            r.output.generator_efficiency,
+            native.output.generator_efficiency,
+        );
+    }
+}
+
+#[test]
+fn the_ideal_plant_keeps_its_losses_but_not_its_machines_shortfalls() {
+    let mut spec = unit_with_losses(Units::Native);
+    spec.losses.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 3,
+        exhaust_to: SteamDestination::Condenser,
+        isentropic_efficiency: 0.8,
+    });
+    let ideal = spec.ideal();
+    assert_eq!(
+        ideal
+            .losses
+            .feed_pump_turbine
+            .unwrap()
+            .isentropic_efficiency,
+        1.0
+    );
+    assert_eq!(ideal.losses.exhaust, spec.losses.exhaust);
+    let (actual, ideal) = (solve_cycle(&spec).unwrap(), solve_cycle(&ideal).unwrap());
+    check_all(&ideal, &spec.ideal());
+    assert!(ideal.output.net_heat_rate < actual.output.net_heat_rate);
+}
+
+#[test]
+fn losses_that_cannot_be_are_refused() {
+    let refused = |change: &dyn Fn(&mut CycleSpec), expect: &str| {
+        let mut spec = unit_with_losses(Units::Native);
+        change(&mut spec);
+        let e = solve_cycle(&spec).unwrap_err();
+        assert!(matches!(e, Error::InvalidPlant { .. }), "{e}");
+        assert!(format!("{e}").contains(expect), "{e}");
+    };
+    refused(&|s| s.losses.throttle_flow = Some(0.0), "throttle flow");
+    refused(&|s| s.losses.mechanical_losses = -1.0, "mechanical losses");
+    refused(&|s| s.losses.auxiliary_power = -1.0, "auxiliary power");
+    refused(
+        &|s| s.losses.mechanical_losses = 1e9,
+        "mechanical losses take",
+    );
+    refused(&|s| s.losses.auxiliary_power = 1e9, "auxiliaries take");
+    refused(
+        &|s| {
+            s.losses.exhaust = Some(ExhaustLoss {
+                annulus_area: 0.0,
+                curve: exhaust_curve(Units::Native),
+            })
+        },
+        "annulus area",
+    );
+    refused(
+        &|s| {
+            s.losses.exhaust = Some(ExhaustLoss {
+                annulus_area: 30.0,
+                curve: Curve::new(&[(0.0, -5.0), (1000.0, -5.0)]).unwrap(),
+            })
+        },
+        "negative loss",
+    );
+    refused(
+        &|s| {
+            s.losses.generator = Some(Generator::AgainstLoad {
+                rated_output: 0.0,
+                efficiency: Curve::new(&[(0.0, 0.98), (2.0, 0.99)]).unwrap(),
+            })
+        },
+        "rated output",
+    );
+    refused(
+        &|s| {
+            s.losses.generator = Some(Generator::AgainstLoad {
+                rated_output: 640_000.0,
+                efficiency: Curve::new(&[(0.0, 0.98), (2.0, 1.2)]).unwrap(),
+            })
+        },
+        "outside (0, 1]",
+    );
+    // A curve rising faster than the output with load would give several
+    // operating points (η = L on a 300 MW rating fed some 630 MW).
+    refused(
+        &|s| {
+            s.losses.generator = Some(Generator::AgainstLoad {
+                rated_output: 300_000.0,
+                efficiency: Curve::new(&[(0.5, 0.5), (1.0, 1.0)]).unwrap(),
+            })
+        },
+        "no single load",
+    );
+}

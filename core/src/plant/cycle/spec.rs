@@ -190,12 +190,16 @@ impl CycleSpec {
         self.casings().last().map(|c| c.exhaust_pressure)
     }
 
-    /// The same cycle with isentropic turbine sections and pumps; every
-    /// other part (pressures, losses, heater approaches) is kept.
+    /// The same cycle with isentropic turbine sections and pumps (a feed
+    /// pump turbine's too); every other part (pressures, losses, heater
+    /// approaches) is kept.
     pub fn ideal(&self) -> CycleSpec {
         let mut ideal = *self;
         for casing in &mut ideal.casings[..ideal.casing_count] {
             casing.isentropic_efficiency = 1.0;
+        }
+        if let Some(drive) = &mut ideal.losses.feed_pump_turbine {
+            drive.isentropic_efficiency = 1.0;
         }
         ideal.feed_pump_efficiency = 1.0;
         ideal.condensate_pump_efficiency = 1.0;
