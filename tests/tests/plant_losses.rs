@@ -644,6 +644,13 @@ fn leakages_leave_the_turbine_and_join_their_destinations() {
             .unwrap()
             .state
             .enthalpy();
+        // Every mixing point throttles a leak into lower-pressure steam:
+        // it generates entropy (second law, strictly).
+        for c in r.components() {
+            if c.kind == ComponentKind::MixingPoint {
+                assert!(c.entropy_generation > 0.0, "mixing point {}", c.number);
+            }
+        }
         assert!(joins(0.002, throttle));
         assert!(joins(0.001, cold_reheat));
         assert!(joins(0.0015, hot_reheat));
@@ -817,6 +824,8 @@ fn side_streams_that_cannot_be_are_refused() {
         let e = solve_cycle(&spec).unwrap_err();
         assert!(matches!(e, Error::InvalidPlant { .. }), "{e}");
         assert!(format!("{e}").contains(expect), "{e}");
+        // It fits the C error detail's message (192 bytes with its NUL).
+        assert!(format!("{e}").len() < 192, "{e}");
     };
     let leak = |from, to, fraction| {
         move |spec: &mut CycleSpec| spec.losses.leaks[0] = Some(Leak { from, to, fraction })
@@ -1005,6 +1014,8 @@ fn losses_that_cannot_be_are_refused() {
         let e = solve_cycle(&spec).unwrap_err();
         assert!(matches!(e, Error::InvalidPlant { .. }), "{e}");
         assert!(format!("{e}").contains(expect), "{e}");
+        // It fits the C error detail's message (192 bytes with its NUL).
+        assert!(format!("{e}").len() < 192, "{e}");
     };
     refused(&|s| s.losses.throttle_flow = Some(0.0), "throttle flow");
     refused(&|s| s.losses.mechanical_losses = -1.0, "mechanical losses");
