@@ -293,8 +293,10 @@ fn exercise_plant() -> f64 {
                 .sum::<f64>();
         }
     }
-    // The same plant with its losses: an absolute scale, a generator
-    // curve, mechanical and auxiliary power, an exhaust loss curve.
+    // The same plant with every loss (invented numbers): an absolute
+    // scale, a generator curve, mechanical and auxiliary power, an exhaust
+    // loss curve, a water-side drop, leakages (one back into the IP
+    // casing), makeup and a feed pump turbine.
     let mut lossy = spec;
     lossy.losses.throttle_flow = Some(500.0);
     if let (Ok(generator), Ok(exhaust)) = (
