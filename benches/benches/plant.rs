@@ -1,5 +1,6 @@
 //! The plant layer: one cycle solve (seven heaters with cascaded drains,
-//! the same with two pumped-forward drains, a plain Rankine cycle) and
+//! the same with two pumped-forward drains, the first with every loss, a
+//! plain Rankine cycle) and
 //! the single components a performance calculation calls per sample.
 //!
 //! Run with `cargo bench -p ebullio-benches --bench plant`.
@@ -17,11 +18,15 @@ fn plant(c: &mut Criterion) {
     let cascaded = cycles::seven_heaters(Drains::CascadeBackward);
     let pumped = cycles::seven_heaters(Drains::PumpForward);
     let plain = cycles::plain_rankine();
+    let lossy = cycles::seven_heaters_with_losses();
     group.bench_function("seven_heaters_cascaded", |b| {
         b.iter(|| solve_cycle(black_box(&cascaded)).map(|r| r.thermal_efficiency))
     });
     group.bench_function("seven_heaters_two_pumped_forward", |b| {
         b.iter(|| solve_cycle(black_box(&pumped)).map(|r| r.thermal_efficiency))
+    });
+    group.bench_function("seven_heaters_with_losses", |b| {
+        b.iter(|| solve_cycle(black_box(&lossy)).map(|r| r.output.net_heat_rate))
     });
     group.bench_function("plain_rankine", |b| {
         b.iter(|| solve_cycle(black_box(&plain)).map(|r| r.thermal_efficiency))

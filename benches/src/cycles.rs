@@ -4,7 +4,9 @@
 //! numbers are arbitrary but typical of such units; nothing checks them.
 
 use ebullio::plant::{
-    Casing, CycleSpec, Drains, Heater, HeaterApproach, HeaterKind, Reheat, Supply,
+    Casing, Curve, CycleSpec, Drains, ExhaustLoss, FeedPumpTurbine, Generator, Heater,
+    HeaterApproach, HeaterKind, Leak, LeakSource, Makeup, Reheat, SteamDestination, Supply,
+    WaterLoss,
 };
 use ebullio::Units;
 
@@ -61,6 +63,59 @@ pub fn seven_heaters(drains: Drains) -> CycleSpec {
     spec
 }
 
+/// The cascaded seven-heater unit with every loss the description takes:
+/// 500 kg/s, a generator curve, mechanical and auxiliary power, an exhaust
+/// loss curve (invented), water-side drops, three leaks (one returning to
+/// the IP casing), makeup and a feed pump turbine exhausting to the
+/// condenser.
+pub fn seven_heaters_with_losses() -> CycleSpec {
+    let mut spec = seven_heaters(Drains::CascadeBackward);
+    let losses = &mut spec.losses;
+    losses.throttle_flow = Some(500.0);
+    losses.generator = Some(Generator::AgainstLoad {
+        rated_output: 640_000.0,
+        efficiency: Curve::new(&[(0.25, 0.982), (0.5, 0.986), (1.0, 0.988), (1.2, 0.987)])
+            .expect("a rising curve"),
+    });
+    losses.mechanical_losses = 1800.0;
+    losses.auxiliary_power = 14_000.0;
+    losses.exhaust = Some(ExhaustLoss {
+        annulus_area: 30.0,
+        curve: Curve::new(&[(60.0, 40.0), (150.0, 18.0), (250.0, 34.0), (350.0, 70.0)])
+            .expect("a rising curve"),
+    });
+    for (drop, j) in losses.water_pressure_drops.iter_mut().zip(0..) {
+        *drop = if j == 3 { 0.0 } else { 0.08 };
+    }
+    losses.leaks[0] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::HeaterShell(1),
+        fraction: 0.002,
+    });
+    losses.leaks[1] = Some(Leak {
+        from: LeakSource::CasingInlet(1),
+        to: SteamDestination::Condenser,
+        fraction: 0.0015,
+    });
+    losses.leaks[2] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::CasingInlet(1),
+        fraction: 0.01,
+    });
+    losses.makeup = Some(Makeup {
+        fraction: 0.01,
+        pressure: 0.2,
+        temperature: 298.15,
+        lost_as: WaterLoss::Blowdown,
+    });
+    losses.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 3,
+        exhaust_to: SteamDestination::Condenser,
+        isentropic_efficiency: 0.8,
+    });
+    spec
+}
+
 /// A plain Rankine cycle: one casing, no heaters.
 pub fn plain_rankine() -> CycleSpec {
     let mut spec = CycleSpec::new(
@@ -77,4 +132,22 @@ pub fn plain_rankine() -> CycleSpec {
     .expect("one casing fits");
     spec.feed_pump_efficiency = 0.8;
     spec
+}
+
+#[cfg(test)]
+mod tests {
+    use ebullio::plant::{solve_cycle, Drains};
+
+    /// A bench of a refusal would time the wrong thing.
+    #[test]
+    fn every_bench_cycle_solves() {
+        for spec in [
+            super::seven_heaters(Drains::CascadeBackward),
+            super::seven_heaters(Drains::PumpForward),
+            super::seven_heaters_with_losses(),
+            super::plain_rankine(),
+        ] {
+            assert!(solve_cycle(&spec).is_ok(), "{:?}", solve_cycle(&spec));
+        }
+    }
 }

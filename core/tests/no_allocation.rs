@@ -293,6 +293,59 @@ fn exercise_plant() -> f64 {
                 .sum::<f64>();
         }
     }
+    // The same plant with every loss (invented numbers): an absolute
+    // scale, a generator curve, mechanical and auxiliary power, an exhaust
+    // loss curve, a water-side drop, leakages (one back into the IP
+    // casing), makeup and a feed pump turbine.
+    let mut lossy = spec;
+    lossy.losses.throttle_flow = Some(500.0);
+    if let (Ok(generator), Ok(exhaust)) = (
+        Curve::new(&[(0.25, 0.982), (0.5, 0.986), (1.0, 0.988), (1.2, 0.987)]),
+        Curve::new(&[(60.0, 40.0), (150.0, 18.0), (350.0, 70.0)]),
+    ) {
+        lossy.losses.generator = Some(Generator::AgainstLoad {
+            rated_output: 640_000.0,
+            efficiency: generator,
+        });
+        lossy.losses.exhaust = Some(ExhaustLoss {
+            annulus_area: 30.0,
+            curve: exhaust,
+        });
+        sum += generator.points().len() as f64;
+    }
+    lossy.losses.mechanical_losses = 1800.0;
+    lossy.losses.auxiliary_power = 14_000.0;
+    lossy.losses.water_pressure_drops[0] = 0.1;
+    lossy.losses.leaks[0] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::HeaterShell(0),
+        fraction: 0.002,
+    });
+    lossy.losses.leaks[1] = Some(Leak {
+        from: LeakSource::CasingInlet(1),
+        to: SteamDestination::Condenser,
+        fraction: 0.0015,
+    });
+    lossy.losses.leaks[2] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::CasingInlet(1),
+        fraction: 0.01,
+    });
+    lossy.losses.makeup = Some(Makeup {
+        fraction: 0.01,
+        pressure: 0.2,
+        temperature: 298.15,
+        lost_as: WaterLoss::Blowdown,
+    });
+    lossy.losses.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 1,
+        exhaust_to: SteamDestination::Condenser,
+        isentropic_efficiency: 0.8,
+    });
+    match solve_cycle(&lossy) {
+        Ok(r) => sum += r.output.net_heat_rate + r.output.power.map_or(0.0, |p| p.net_output),
+        Err(e) => panic!("the plant with losses solves: {e}"),
+    }
     let mut bad = spec;
     bad.feed_pump_efficiency = 2.0;
     // The refusal names its part and figure, and prints without the heap.

@@ -262,3 +262,34 @@ fn a_description_that_cannot_be_a_plant_is_refused() {
         Err(Error::InvalidPlant { .. })
     ));
 }
+
+#[test]
+fn a_heater_fed_at_the_hot_reheat_pressure_leaves_the_reheater_its_steam() {
+    // Reproducer: the reheater's component took the flow of the IP
+    // casing's first stage group, which the heater extracting at the hot
+    // reheat state had already left, so its heat differed from the
+    // cycle's reheat figure and the components' heat from the heat input.
+    let mut spec = busy_cycle(Units::Native, 1.0);
+    let mut at_hot_reheat = CycleSpec::new(Units::Native, spec.supply);
+    at_hot_reheat.reheat = spec.reheat;
+    for casing in spec.casings() {
+        at_hot_reheat.push_casing(*casing).unwrap();
+    }
+    for (j, heater) in spec.heaters().iter().enumerate() {
+        let mut heater = *heater;
+        if j == 2 {
+            heater.extraction_pressure = 3.6;
+        }
+        at_hot_reheat.push_heater(heater).unwrap();
+    }
+    spec = at_hot_reheat;
+    let r = solve_cycle(&spec).unwrap();
+    let reheater = r
+        .components()
+        .iter()
+        .find(|c| c.kind == ComponentKind::Reheater)
+        .unwrap();
+    assert!((reheater.heat_in - r.reheat_heat).abs() <= 1e-12 * r.reheat_heat);
+    check_components(&r);
+    check_cycle(&r);
+}

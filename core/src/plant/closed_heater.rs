@@ -4,7 +4,8 @@
 //! difference TTD = T_sat(shell) − T_feedwater,out, and the drain cooler
 //! approach DCA = T_drain,out − T_feedwater,in (no drain cooler: the drain
 //! leaves as saturated liquid). The extraction flow follows from the
-//! energy balance. Water-side pressure drop is not modelled.
+//! energy balance. The stand-alone heater has no water-side pressure drop;
+//! in a cycle, the description may give one.
 
 use super::fault::{finite_figures, in_caller_units, refuse, refuse_with, second_law};
 use super::{finite_flow, native};
@@ -61,7 +62,13 @@ pub fn closed_heater(
 ) -> Result<ClosedHeater, Error> {
     let units = feedwater_in.units();
     let flow = finite_flow(feedwater_flow, CLOSED_HEATER)?;
-    let (fw_out, drain) = end_states(extraction, feedwater_in, approach, CLOSED_HEATER)?;
+    let (fw_out, drain) = end_states(
+        extraction,
+        feedwater_in,
+        feedwater_in.native().p,
+        approach,
+        CLOSED_HEATER,
+    )?;
     let (e, a, b, d) = (
         extraction.native(),
         feedwater_in.native(),
@@ -109,11 +116,13 @@ pub(crate) fn steam_for_duty(
     (duty - cascaded_flow * (h_cascaded - h_drain)) / (h_steam - h_drain)
 }
 
-/// The feedwater outlet and drain states (native units) that the
+/// The feedwater outlet (at `outlet_pressure`, native: below the inlet's
+/// by the tubes' pressure drop) and drain states (native units) that the
 /// approach temperatures fix, with the checks that make them a heater.
 pub(crate) fn end_states(
     extraction: &State,
     feedwater_in: &State,
+    outlet_pressure: f64,
     approach: HeaterApproach,
     part: PlantPart,
 ) -> Result<(State, State), Error> {
@@ -171,7 +180,7 @@ pub(crate) fn end_states(
             ),
         ));
     }
-    let fw_out = State::from_pt(fw.p, t_out, Units::Native).map_err(caller)?;
+    let fw_out = State::from_pt(outlet_pressure, t_out, Units::Native).map_err(caller)?;
     if fw_out.phase() != Phase::CompressedLiquid {
         return Err(refuse(
             part,

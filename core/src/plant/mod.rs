@@ -24,9 +24,14 @@ mod turbine;
 
 pub use attemperator::{spray_for_temperature, Spray};
 pub use closed_heater::{closed_heater, ClosedHeater, HeaterApproach};
+pub use cycle::curve::{Curve, MAX_CURVE_POINTS};
+pub use cycle::losses::{
+    ExhaustLoss, FeedPumpTurbine, Generator, Leak, LeakSource, Losses, Makeup, SteamDestination,
+    WaterLoss, MAX_LEAKS,
+};
 pub use cycle::result::{
-    Component, ComponentKind, CycleResult, PointLabel, PointRole, StatePoint, Stream, FIGURE_COUNT,
-    MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
+    Component, ComponentKind, CycleResult, PlantOutput, PlantPower, PointLabel, PointRole,
+    StatePoint, Stream, FIGURE_COUNT, MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
 };
 pub use cycle::solve_cycle;
 pub use cycle::spec::{

@@ -2,25 +2,29 @@
 //! one by one in the caller's units, each component's entropy balance
 //! checked as it is recorded, and the cycle's figures once all are in.
 
+use super::exhaust::EndPoint;
+use super::losses::Losses;
+use super::output::plant_output;
+use super::result::PlantOutput;
 use super::result::{
     Component, ComponentKind, CycleResult, PointLabel, PointRole, StatePoint, Stream,
     MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
 };
 use super::spec::MAX_HEATERS;
-use super::CYCLE;
+use super::{CYCLE, SECONDS_PER_HOUR};
 use crate::plant::fault::{finite_figures, refuse_with, second_law};
 use crate::plant::{PlantFigure, PlantPart};
 use crate::units::{BTU_KJ, POUND_MASS_KG};
 use crate::{Error, Quantity, State, Units};
-
-/// Seconds in an hour: a heat or steam rate is per kWh, work per kJ.
-const SECONDS_PER_HOUR: f64 = 3600.0;
 
 /// The cycle totals, native units per unit throttle flow.
 pub(super) struct Totals {
     pub(super) extraction_fractions: [f64; MAX_HEATERS],
     pub(super) heater_count: usize,
     pub(super) turbine_work: f64,
+    /// The feed pump turbine's work (in `turbine_work`), which drives the
+    /// feed pump (in `pump_work`) instead of the generator.
+    pub(super) drive_work: f64,
     pub(super) pump_work: f64,
     pub(super) boiler_heat: f64,
     pub(super) reheat_heat: f64,
@@ -93,6 +97,20 @@ impl Assembly {
                 steam_rate_lbm_per_kwh: 0.0,
                 back_work_ratio: 0.0,
                 carnot_efficiency: 0.0,
+                output: PlantOutput {
+                    shaft_work: 0.0,
+                    generator_efficiency: 1.0,
+                    gross_output: 0.0,
+                    motor_pump_work: 0.0,
+                    net_output: 0.0,
+                    net_efficiency: 0.0,
+                    gross_heat_rate: 0.0,
+                    net_heat_rate: 0.0,
+                    expansion_line_end: 0.0,
+                    exhaust_loss: 0.0,
+                    annulus_velocity: 0.0,
+                    power: None,
+                },
             },
         }
     }
@@ -191,8 +209,15 @@ impl Assembly {
         work
     }
 
-    /// The figures, once every limit in [`solve_cycle`](super::solve_cycle)'s list holds.
-    pub(super) fn finish(mut self, t: Totals) -> Result<CycleResult, Error> {
+    /// The figures, once every limit in [`solve_cycle`](super::solve_cycle)'s
+    /// list holds, and the plant's output after its `losses`, with the
+    /// last casing's `end` point.
+    pub(super) fn finish(
+        mut self,
+        t: Totals,
+        losses: &Losses,
+        end: &EndPoint,
+    ) -> Result<CycleResult, Error> {
         if let Some(breach) = self.second_law_breach {
             return Err(breach);
         }
@@ -247,6 +272,21 @@ impl Assembly {
                 r.back_work_ratio,
             ],
         )?;
+        let output = plant_output(losses, self.units, &t, heat_input, end)?;
+        let o = &output;
+        finite_figures(
+            CYCLE,
+            &[
+                o.gross_output,
+                o.net_output,
+                o.gross_heat_rate,
+                o.net_heat_rate,
+            ],
+        )?;
+        if let Some(p) = o.power {
+            finite_figures(CYCLE, &[p.throttle_flow, p.heat_input, p.net_output])?;
+        }
+        self.result.output = output;
         Ok(self.result)
     }
 }

@@ -39,6 +39,9 @@ pub(super) struct ExpansionLine {
     pub(super) reheat: Option<(State, State)>,
     /// The last casing's exhaust, into the condenser.
     pub(super) exhaust: State,
+    /// The steam arriving at each casing's inlet, before any leakage
+    /// returning there joins it.
+    pub(super) arriving: [State; MAX_CASINGS],
 }
 
 impl ExpansionLine {
@@ -58,12 +61,21 @@ impl ExpansionLine {
             extraction_casing: [0usize; MAX_HEATERS],
             reheat: None,
             exhaust: throttle,
+            arriving: [throttle; MAX_CASINGS],
         }
     }
 
     /// Expands `throttle` through every casing of `spec`, reheating
     /// before the second, and finds the steam at each extraction point.
-    pub(super) fn expand(&mut self, spec: &CycleSpec, throttle: State) -> Result<(), Error> {
+    /// A casing with a specific enthalpy in `mixtures` starts from it, at
+    /// its inlet pressure: the steam arriving there mixed with leakages
+    /// that return to it.
+    pub(super) fn expand(
+        &mut self,
+        spec: &CycleSpec,
+        throttle: State,
+        mixtures: &[Option<f64>; MAX_CASINGS],
+    ) -> Result<(), Error> {
         let units = spec.units;
         let heaters = spec.heaters();
         let mut next = 0;
@@ -74,6 +86,10 @@ impl ExpansionLine {
             let p_exhaust = native(Quantity::Pressure, casing.exhaust_pressure, units)?;
             if let (1, Some(reheat)) = (c, spec.reheat) {
                 inlet = self.reheat(inlet, reheat, units)?;
+            }
+            self.arriving[c] = inlet;
+            if let Some(h) = mixtures[c] {
+                inlet = State::from_ph(inlet.native().p, h, Units::Native)?;
             }
             check_pressure_falls(part, inlet.native().p, p_exhaust)?;
             inlet = self.expand_casing(spec, c, inlet, p_exhaust, efficiency, &mut next)?;
@@ -86,6 +102,23 @@ impl ExpansionLine {
         }
         self.exhaust = inlet;
         Ok(())
+    }
+
+    /// Ends the last stage group, and the line, at `end` instead (the
+    /// used energy end point, past the exhaust loss).
+    pub(super) fn end_at(&mut self, end: State) {
+        self.groups[self.group_count - 1].outlet = end;
+        self.exhaust = end;
+    }
+
+    /// Casing `c`'s inlet and exhaust states (every casing has a group).
+    pub(super) fn casing_ends(&self, c: usize) -> (State, State) {
+        let mut groups = self.groups().iter().filter(|g| g.casing == c);
+        let Some(first) = groups.next() else {
+            return (self.exhaust, self.exhaust);
+        };
+        let last = groups.next_back().unwrap_or(first);
+        (first.inlet, last.outlet)
     }
 
     /// The stage groups, from the throttle down.

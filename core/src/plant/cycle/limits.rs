@@ -3,6 +3,8 @@
 //! heats its feedwater above saturation only by the steam's superheat,
 //! and the boiler only heats.
 
+use super::expansion::ExpansionLine;
+use super::side_streams::SideStreams;
 use super::spec::{Heater, HeaterKind, MAX_HEATERS};
 use super::sweeps::TrainFlows;
 use super::{heater_part, FLOW_ROUNDING};
@@ -15,22 +17,29 @@ const BOILER: PlantPart = PlantPart::single("boiler");
 
 /// Every heater's extraction against the steam left after the heaters
 /// above it, and every closed heater's desuperheating zone.
+///
+/// Steam that leaves the turbine outside the extraction lines (`side`:
+/// leakages, a feed pump turbine's) counts against what reaches each
+/// point, and against what is left for the condenser.
 pub(super) fn check_extractions(
     heaters: &[Heater],
     flows: &TrainFlows,
     shell: &[State; MAX_HEATERS],
+    side: &SideStreams,
+    line: &ExpansionLine,
 ) -> Result<(), Error> {
     let mut reaching = 1.0;
     for (j, (heater, w)) in heaters.iter().zip(&flows.water).enumerate() {
         let part = heater_part(heater, j);
-        if w.extraction_flow > reaching + FLOW_ROUNDING {
+        let here = reaching - side.withdrawn_before(line.extraction_casing[j], j, false);
+        if w.extraction_flow + side.drive_at(j) > here + FLOW_ROUNDING {
             return Err(refuse_with(
                 part,
                 "it needs more steam than reaches its extraction point",
                 PlantFigure::number(
                     "extraction per unit throttle flow",
                     w.extraction_flow,
-                    Some(reaching.max(0.0)),
+                    Some(here.max(0.0)),
                 ),
             ));
         }
@@ -44,6 +53,14 @@ pub(super) fn check_extractions(
                 w.extraction_flow,
             )?;
         }
+    }
+    let exhaust = reaching - side.withdrawn();
+    if exhaust < -FLOW_ROUNDING {
+        return Err(refuse_with(
+            PlantPart::single("turbine"),
+            "its extractions, leakages and feed pump turbine take more than the throttle flow",
+            PlantFigure::number("exhaust per unit throttle flow", exhaust, Some(0.0)),
+        ));
     }
     Ok(())
 }

@@ -15,21 +15,30 @@
 //! `expansion.rs` (the expansion line and the extraction lines),
 //! `train.rs` (the feedwater train's pressures and pumps), `sweeps.rs`
 //! (its water states and flows), `limits.rs` (what the balances alone do
-//! not keep), `record.rs` and `assembly.rs` (the result).
+//! not keep), `exhaust.rs` (the last stage's exhaust loss), `record.rs`
+//! and `assembly.rs` (the result), `output.rs` (gross and net output).
+//! `side_streams.rs` holds the leakages, the feed pump turbine and the
+//! makeup, which the sweeps and the record read.
 
 mod assembly;
+pub(super) mod curve;
 mod ends;
+mod exhaust;
 mod expansion;
+mod generator;
 mod limits;
+pub(super) mod losses;
+mod output;
 mod record;
 pub(super) mod result;
+mod side_streams;
 pub(super) mod spec;
 mod sweeps;
 mod train;
 
 use self::assembly::Assembly;
 use self::result::CycleResult;
-use self::spec::{CycleSpec, Heater, HeaterKind};
+use self::spec::{CycleSpec, Heater, HeaterKind, MAX_CASINGS};
 use crate::plant::fault::in_caller_units;
 use crate::plant::PlantPart;
 use crate::Error;
@@ -37,6 +46,9 @@ use crate::Error;
 /// Flows are fractions of the throttle flow summed from a few terms each
 /// good to about 1e-15; a flow past its limit by more than this is real.
 const FLOW_ROUNDING: f64 = 1e-12;
+
+/// Seconds in an hour: a heat or steam rate is per kWh, work per kJ.
+const SECONDS_PER_HOUR: f64 = 3600.0;
 
 const CYCLE: PlantPart = PlantPart::single("cycle");
 const REHEATER: PlantPart = PlantPart::single("reheater");
@@ -71,14 +83,44 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
     let hotwell = ends::hotwell(spec)?;
     ends::check_casing_order(spec)?;
     let throttle = ends::throttle_steam(spec)?;
-    let mut line = expansion::ExpansionLine::new(throttle);
-    line.expand(spec, throttle)?;
-    let shell = expansion::heater_shells(spec, &line)?;
-    let train = train::FeedwaterTrain::new(spec, &throttle, &hotwell, &shell)?;
-    let mut flows = sweeps::TrainFlows::new(&train, &hotwell);
-    sweeps::solve_train(spec, &train, &shell, &mut flows)?;
-    limits::check_extractions(spec.heaters(), &flows, &shell)?;
-    let boiler_heat = limits::check_boiler(&throttle, &flows.boiler_inlet, spec.units)?;
+    // Leakages returning to a later casing mix with the steam arriving
+    // there, whose flow the train decides: the line and the train are
+    // solved again from the mixtures the last pass gave until they settle
+    // (without such leakages, once).
+    let mut mixtures = [None; MAX_CASINGS];
+    let mut pass = 0;
+    let (mut line, shell, side, train, flows) = loop {
+        let mut line = expansion::ExpansionLine::new(throttle);
+        line.expand(spec, throttle, &mixtures)?;
+        let shell = expansion::heater_shells(spec, &line)?;
+        let mut side = side_streams::SideStreams::new(spec, &line, &shell, &throttle)?;
+        let train = train::FeedwaterTrain::new(spec, &throttle, &hotwell, &shell)?;
+        let mut flows = sweeps::TrainFlows::new(&train, &hotwell);
+        sweeps::solve_train(spec, &train, &shell, &mut flows, &mut side, &hotwell)?;
+        let next = side.inlet_mixtures(&line, &flows, spec.heaters().len());
+        if settled(&next, &mixtures) {
+            break (line, shell, side, train, flows);
+        }
+        pass += 1;
+        if pass == MAX_RETURN_PASSES {
+            return Err(Error::NotConverged {
+                what: "leakage returning to a casing",
+            });
+        }
+        mixtures = next;
+    };
+    limits::check_extractions(spec.heaters(), &flows, &shell, &side, &line)?;
+    let boiler_heat = side.boiler_heat(
+        limits::check_boiler(&throttle, &flows.boiler_inlet, spec.units)?,
+        &flows.boiler_inlet,
+    );
+    let end = exhaust::end_point(
+        spec.losses.exhaust.as_ref(),
+        &mut line,
+        1.0 - flows.extracted_before(spec.heaters().len()) - side.withdrawn(),
+        output::throttle_flow(&spec.losses, spec.units)?,
+        spec.units,
+    )?;
     // The result is some 30 kB: built here and finished as this
     // function's value, it is copied no more often than before the split
     // (callgrind on the demo: solve_cycle's instructions unchanged).
@@ -91,10 +133,28 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
         shell: &shell,
         condensate_pump_outlet: train.condensate_pump_outlet,
         flows: &flows,
+        side: &side,
         boiler_heat,
     }
-    .record(&mut out);
-    out.finish(totals)
+    .record(&mut out)?;
+    out.finish(totals, &spec.losses, &end)
+}
+
+/// Passes allowed for leakages returning to a casing. The steam arriving
+/// at a casing depends only on the heaters fed above it, which the
+/// mixture does not change (unless drains pumped forward or a feed pump
+/// turbine couple them to the rest): the second pass confirms the mixture
+/// the first gave, and 20 leave room for the coupled trains.
+const MAX_RETURN_PASSES: usize = 20;
+
+/// Whether the inlet mixtures of two passes agree to rounding (relative
+/// 1e-12: finer than the states they give are solved to).
+fn settled(next: &[Option<f64>; MAX_CASINGS], last: &[Option<f64>; MAX_CASINGS]) -> bool {
+    next.iter().zip(last).all(|pair| match pair {
+        (None, None) => true,
+        (Some(a), Some(b)) => (a - b).abs() <= 1e-12 * a.abs(),
+        _ => false,
+    })
 }
 
 /// A heater as refusals name it: "closed heater 2", "open heater 4".

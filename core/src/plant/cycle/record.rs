@@ -4,11 +4,16 @@
 //! with the work and heat each books.
 
 use super::assembly::{Assembly, Totals};
+use super::at;
 use super::expansion::ExpansionLine;
+use super::losses::SteamDestination;
 use super::result::{ComponentKind, PointRole, MAX_STREAMS};
+use super::side_streams::SideStreams;
 use super::spec::{Drains, Heater, HeaterKind, MAX_HEATERS};
 use super::sweeps::{HeaterWater, TrainFlows};
-use crate::State;
+use crate::plant::mixing::mix;
+use crate::plant::PlantPart;
+use crate::{Error, State, Units};
 
 /// Everything the solve found, native units per unit throttle flow.
 pub(super) struct SolvedCycle<'a> {
@@ -20,17 +25,21 @@ pub(super) struct SolvedCycle<'a> {
     pub(super) shell: &'a [State; MAX_HEATERS],
     pub(super) condensate_pump_outlet: State,
     pub(super) flows: &'a TrainFlows,
+    /// Leakages, the feed pump turbine and makeup.
+    pub(super) side: &'a SideStreams,
     pub(super) boiler_heat: f64,
 }
 
 impl SolvedCycle<'_> {
     /// Records every point and component into `out` and returns the
-    /// cycle's totals.
-    pub(super) fn record(&self, out: &mut Assembly) -> Totals {
-        let turbine_work = self.record_turbine(out);
+    /// cycle's totals (refused only if a side stream's mixing has no state).
+    pub(super) fn record(&self, out: &mut Assembly) -> Result<Totals, Error> {
+        let mut turbine_work = self.record_turbine(out)?;
+        let drive_work = self.record_drive_turbine(out);
+        turbine_work += drive_work;
         let reheat_heat = self.reheat_heat();
-        let mut pump_work = self.record_heaters(out);
-        let (condensate_flow, condenser_duty) = self.record_condenser(out);
+        let mut pump_work = self.record_heaters(out)?;
+        let (condensate_flow, condenser_duty) = self.record_condenser(out)?;
         pump_work += out.pump(
             ComponentKind::CondensatePump,
             PointRole::CondensatePumpOutlet,
@@ -40,12 +49,18 @@ impl SolvedCycle<'_> {
             &self.condensate_pump_outlet,
         );
         let boiler_inlet = &self.flows.boiler_inlet;
-        out.point(PointRole::BoilerInlet, 0, 1.0, boiler_inlet);
+        let feed = self.side.boiler_feed();
+        out.point(PointRole::BoilerInlet, 0, feed, boiler_inlet);
+        let lost = self.side.makeup.map(|m| (m.flow, m.lost));
+        let mut steam: [(f64, &State); 2] = [(1.0, &self.throttle); 2];
+        if let Some((flow, state)) = &lost {
+            steam[1] = (*flow, state);
+        }
         out.component(
             ComponentKind::Boiler,
             0,
-            &[(1.0, boiler_inlet)],
-            &[(1.0, &self.throttle)],
+            &[(feed, boiler_inlet)],
+            &steam[..1 + usize::from(lost.is_some())],
             self.boiler_heat,
             0.0,
         );
@@ -56,37 +71,75 @@ impl SolvedCycle<'_> {
         {
             *f = w.extraction_flow;
         }
-        Totals {
+        Ok(Totals {
             extraction_fractions: fractions,
             heater_count: self.heaters.len(),
             turbine_work,
+            drive_work,
             pump_work,
             boiler_heat: self.boiler_heat,
             reheat_heat,
             condenser_duty,
-        }
+        })
+    }
+
+    /// The feed pump turbine, if any, as a stage group numbered 0;
+    /// returns its work.
+    fn record_drive_turbine(&self, out: &mut Assembly) -> f64 {
+        let Some(drive) = self.side.drive else {
+            return 0.0;
+        };
+        let work = drive.work();
+        out.component(
+            ComponentKind::StageGroup,
+            0,
+            &[(drive.flow, &drive.inlet)],
+            &[(drive.flow, &drive.exhaust)],
+            0.0,
+            work,
+        );
+        work
     }
 
     /// The throttle, each stage group (the reheater before the second
-    /// casing's first) and each casing's exhaust; returns the turbine work.
-    fn record_turbine(&self, out: &mut Assembly) -> f64 {
+    /// casing's first, leakages returning to a casing before its first)
+    /// and each casing's exhaust; returns the turbine work.
+    fn record_turbine(&self, out: &mut Assembly) -> Result<f64, Error> {
         out.point(PointRole::Throttle, 0, 1.0, &self.throttle);
         let groups = self.line.groups();
         let mut turbine_work = 0.0;
         for (g, group) in groups.iter().enumerate() {
-            let flow = 1.0 - self.flows.extracted_before(group.extractions_upstream);
+            let flow = 1.0
+                - self.flows.extracted_before(group.extractions_upstream)
+                - self
+                    .side
+                    .withdrawn_before(group.casing, group.extractions_upstream, false);
             if let Some((cold, hot)) = self.line.reheat {
                 if group.casing == 1 && (g == 0 || groups[g - 1].casing == 0) {
-                    out.point(PointRole::HotReheat, 0, flow, &hot);
+                    let reheated = self.reheat_flow();
+                    out.point(PointRole::HotReheat, 0, reheated, &hot);
                     out.component(
                         ComponentKind::Reheater,
                         0,
-                        &[(flow, &cold)],
-                        &[(flow, &hot)],
-                        flow * (hot.native().h - cold.native().h),
+                        &[(reheated, &cold)],
+                        &[(reheated, &hot)],
+                        reheated * (hot.native().h - cold.native().h),
                         0.0,
                     );
                 }
+            }
+            let starts_casing = g == 0 || groups[g - 1].casing != group.casing;
+            if starts_casing && group.casing > 0 {
+                let c = group.casing;
+                let arriving =
+                    self.side
+                        .arriving_flow(c, self.line, self.flows, self.heaters.len());
+                join_side_streams(
+                    out,
+                    0,
+                    (arriving, self.line.arriving[c]),
+                    self.side.joining(SteamDestination::CasingInlet(c)),
+                )?;
             }
             let work = flow * (group.inlet.native().h - group.outlet.native().h);
             turbine_work += work;
@@ -104,25 +157,32 @@ impl SolvedCycle<'_> {
                 out.point(PointRole::CasingExhaust, number, flow, &group.outlet);
             }
         }
-        turbine_work
+        Ok(turbine_work)
     }
 
-    /// The reheater's heat: the steam left after the heaters fed from
-    /// the first casing, from cold to hot reheat.
-    fn reheat_heat(&self) -> f64 {
+    /// The steam the reheater takes: what is left after the heaters fed
+    /// from the first casing and what leaves it otherwise.
+    fn reheat_flow(&self) -> f64 {
         let n = self.heaters.len();
+        let fed_before = self.line.extraction_casing[..n]
+            .iter()
+            .filter(|&&c| c == 0)
+            .count();
+        1.0 - self.flows.extracted_before(fed_before)
+            - self.side.withdrawn_before(0, fed_before, true)
+    }
+
+    /// The reheater's heat, from cold to hot reheat.
+    fn reheat_heat(&self) -> f64 {
         self.line.reheat.map_or(0.0, |(cold, hot)| {
-            let fed_before = self.line.extraction_casing[..n]
-                .iter()
-                .filter(|&&c| c == 0)
-                .count();
-            (1.0 - self.flows.extracted_before(fed_before)) * (hot.native().h - cold.native().h)
+            self.reheat_flow() * (hot.native().h - cold.native().h)
         })
     }
 
     /// Each heater from the top down with its extraction (and extraction
-    /// line), drains and pumps; returns the pumps' work.
-    fn record_heaters(&self, out: &mut Assembly) -> f64 {
+    /// line), side streams joining its steam, drains and pumps; returns
+    /// the pumps' work.
+    fn record_heaters(&self, out: &mut Assembly) -> Result<f64, Error> {
         let mut pump_work = 0.0;
         for (j, heater) in self.heaters.iter().enumerate() {
             let w = &self.flows.water[j];
@@ -145,7 +205,13 @@ impl SolvedCycle<'_> {
             let cascaded = w
                 .cascaded_in
                 .map(|(flow, from)| (flow, &self.flows.water[from].drain));
-            let mut inlets: [(f64, &State); MAX_STREAMS] = [(m, shell); MAX_STREAMS];
+            let (m, shell) = &join_side_streams(
+                out,
+                number,
+                (m, *shell),
+                self.side.joining(SteamDestination::HeaterShell(j)),
+            )?;
+            let mut inlets: [(f64, &State); MAX_STREAMS] = [(*m, shell); MAX_STREAMS];
             let mut count = 1;
             if let Some(c) = cascaded {
                 inlets[count] = c;
@@ -163,22 +229,33 @@ impl SolvedCycle<'_> {
                 pump_work += work;
             }
         }
-        pump_work
+        Ok(pump_work)
     }
 
     /// The condenser, taking the last casing's exhaust and any drains
     /// cascaded from the lowest heater; returns the condensate flow and
     /// the condenser duty.
-    fn record_condenser(&self, out: &mut Assembly) -> (f64, f64) {
+    fn record_condenser(&self, out: &mut Assembly) -> Result<(f64, f64), Error> {
         let water = &self.flows.water;
         let condensate_flow = self.flows.condensate_flow;
         let hotwell = &self.hotwell;
-        let exhaust_flow = 1.0 - self.flows.extracted_before(self.heaters.len());
-        let mut condenser_in: [(f64, &State); 2] = [(exhaust_flow, &self.line.exhaust); 2];
+        let exhaust_flow =
+            1.0 - self.flows.extracted_before(self.heaters.len()) - self.side.withdrawn();
+        let exhaust = join_side_streams(
+            out,
+            0,
+            (exhaust_flow, self.line.exhaust),
+            self.side.joining(SteamDestination::Condenser),
+        )?;
+        let mut condenser_in: [(f64, &State); MAX_STREAMS] = [(exhaust.0, &exhaust.1); MAX_STREAMS];
         let mut count = 1;
         if let Some((flow, from)) = self.flows.to_condenser {
-            condenser_in[1] = (flow, &water[from].drain);
-            count = 2;
+            condenser_in[count] = (flow, &water[from].drain);
+            count += 1;
+        }
+        if let Some(makeup) = &self.side.makeup {
+            condenser_in[count] = (makeup.flow, &makeup.water);
+            count += 1;
         }
         let condenser_duty = condenser_in[..count]
             .iter()
@@ -194,8 +271,55 @@ impl SolvedCycle<'_> {
             -condenser_duty,
             0.0,
         );
-        (condensate_flow, condenser_duty)
+        Ok((condensate_flow, condenser_duty))
     }
+}
+
+/// Mixes the `joining` side streams into `base` (flow, state), a heater's
+/// steam or the condenser's exhaust, at its pressure, recording one
+/// mixing point (numbered `number`) per [`MAX_STREAMS`] − 1 of them;
+/// returns the mixture, `base` itself when nothing joins.
+fn join_side_streams(
+    out: &mut Assembly,
+    number: u8,
+    base: (f64, State),
+    joining: impl Iterator<Item = (f64, State)>,
+) -> Result<(f64, State), Error> {
+    let p = base.1.native().p;
+    let mut mixture = base;
+    let mut inlets = [base; MAX_STREAMS];
+    let mut count = 1;
+    let mut joining = joining.peekable();
+    while let Some(stream) = joining.next() {
+        inlets[count] = stream;
+        count += 1;
+        if count == MAX_STREAMS || joining.peek().is_none() {
+            let mut streams: [(f64, &State); MAX_STREAMS] = [(0.0, &base.1); MAX_STREAMS];
+            for (slot, (flow, state)) in streams.iter_mut().zip(&inlets[..count]) {
+                *slot = (*flow, state);
+            }
+            let part = match number {
+                0 => PlantPart::single("mixing point before a casing or the condenser"),
+                _ => PlantPart {
+                    name: "mixing point before heater",
+                    number,
+                },
+            };
+            let (flow, state) = mix(&streams[..count], p, Units::Native).map_err(at(part))?;
+            out.component(
+                ComponentKind::MixingPoint,
+                number,
+                &streams[..count],
+                &[(flow, &state)],
+                0.0,
+                0.0,
+            );
+            mixture = (flow, state);
+            inlets[0] = mixture;
+            count = 1;
+        }
+    }
+    Ok(mixture)
 }
 
 /// A closed heater fed by `inlets`, and with pumped-forward drains its

@@ -13,7 +13,10 @@ pub const MAX_POINTS: usize = 4 + MAX_CASINGS + 7 * MAX_HEATERS;
 /// The most components a result holds. A cycle records four outside its
 /// turbine and heaters (reheater, condenser, condensate pump, boiler), a
 /// stage group per casing and per extraction point at most, and four per
-/// heater at most (extraction line, heater, drain pump, mixing point).
+/// heater at most (extraction line, heater, drain pump, mixing point):
+/// 68, which leaves room for the losses' side streams (a feed pump
+/// turbine and a mixing point per two streams joining a shell or the
+/// condenser: six at most with [`MAX_LEAKS`](super::losses::MAX_LEAKS) leaks).
 pub const MAX_COMPONENTS: usize = 4 + MAX_CASINGS + 6 * MAX_HEATERS;
 /// The most inlet (or outlet) streams of one component: a closed
 /// heater's steam, cascaded drains and feedwater.
@@ -28,7 +31,8 @@ pub const FIGURE_COUNT: usize = 14;
 pub enum PointRole {
     /// Throttle steam, at the first casing's inlet.
     Throttle = 1,
-    /// A casing's exhaust (the last one's is the condenser inlet).
+    /// A casing's exhaust (the last one's is the condenser inlet: with
+    /// an exhaust loss, the used energy end point).
     CasingExhaust = 2,
     /// Hot reheat, at the second casing's inlet.
     HotReheat = 3,
@@ -100,7 +104,8 @@ pub struct StatePoint {
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
 #[repr(u32)]
 pub enum ComponentKind {
-    /// A stage group of a turbine casing (numbered by casing).
+    /// A stage group of a turbine casing (numbered by casing; 0 is the
+    /// feed pump's own turbine).
     StageGroup = 1,
     /// An extraction line, a throttle (numbered by heater).
     ExtractionLine = 2,
@@ -110,7 +115,10 @@ pub enum ComponentKind {
     OpenHeater = 4,
     /// A drain pump (numbered by heater).
     DrainPump = 5,
-    /// The mixing of a pumped drain into the feedwater (by heater).
+    /// A mixing point (by heater): a pumped drain joining the feedwater
+    /// after it, or leakages and a feed pump turbine's exhaust joining
+    /// its steam; numbered 0 where they join a casing's inlet steam or
+    /// the condenser's.
     MixingPoint = 6,
     /// The pump after an open heater (numbered by heater).
     Pump = 7,
@@ -256,6 +264,78 @@ pub struct CycleResult {
     /// 1 − T_hotwell / T_hottest: the Carnot efficiency between the
     /// cycle's temperature extremes.
     pub carnot_efficiency: f64,
+    /// The plant's output after the description's losses (with none,
+    /// gross and net output are the cycle's net work).
+    pub output: PlantOutput,
+}
+
+/// What the plant delivers: the generator's output (gross) and what is
+/// left after the motor-driven pumps and the auxiliaries (net), per unit
+/// mass of throttle steam in the cycle's specific energy unit (kJ/kg or
+/// Btu/lbm), and as powers when the throttle flow is given. Heat rates
+/// and efficiencies are on the cycle's heat input, the heat the water
+/// and steam receive (a turbine cycle's heat rate): the boiler's own
+/// efficiency, fuel to steam, lies outside the cycle.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct PlantOutput {
+    /// Work of the main turbine's casings, which drive the generator (a
+    /// feed pump turbine's is in the cycle's turbine work, not here).
+    pub shaft_work: f64,
+    /// The generator efficiency at this load (1 without a generator).
+    pub generator_efficiency: f64,
+    /// Generator output: (shaft work − mechanical losses) × efficiency.
+    pub gross_output: f64,
+    /// Work of the pumps driven by motors: every pump of the cycle but a
+    /// feed pump driven by its own turbine (the motors' own losses belong
+    /// to the auxiliary power).
+    pub motor_pump_work: f64,
+    /// Gross output − motor-driven pump work − auxiliary power.
+    pub net_output: f64,
+    /// Net output / heat input.
+    pub net_efficiency: f64,
+    /// Heat input per electrical energy of gross output (kJ/kWh; Btu/kWh
+    /// in US customary units).
+    pub gross_heat_rate: f64,
+    /// Heat input per electrical energy of net output (kJ/kWh; Btu/kWh in
+    /// US customary units).
+    pub net_heat_rate: f64,
+    /// Specific enthalpy at the last casing's expansion line end point
+    /// (ELEP); the last casing's exhaust point is the used energy end
+    /// point, ELEP + exhaust loss.
+    pub expansion_line_end: f64,
+    /// Exhaust loss per unit mass of exhaust steam (0 without one).
+    pub exhaust_loss: f64,
+    /// Annulus velocity at the last stage (0 without an exhaust loss).
+    pub annulus_velocity: f64,
+    /// The same as powers, when the throttle flow is given.
+    pub power: Option<PlantPower>,
+}
+
+/// A plant's balance as flows of energy: heat flows in kW (W in SI base
+/// units, Btu/h in US customary units), powers in kW (W in SI base
+/// units), the throttle flow in kg/s (lbm/h in US customary units).
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct PlantPower {
+    /// Throttle steam mass flow.
+    pub throttle_flow: f64,
+    /// Heat added in the boiler and reheater (a heat flow).
+    pub heat_input: f64,
+    /// Heat rejected in the condenser (a heat flow).
+    pub condenser_duty: f64,
+    /// Power of the main turbine's casings.
+    pub shaft_power: f64,
+    /// Mechanical losses.
+    pub mechanical_losses: f64,
+    /// Generator losses.
+    pub generator_losses: f64,
+    /// Generator output.
+    pub gross_output: f64,
+    /// Power of the motor-driven pumps.
+    pub motor_pump_power: f64,
+    /// Auxiliary power.
+    pub auxiliary_power: f64,
+    /// Net output.
+    pub net_output: f64,
 }
 
 impl CycleResult {

@@ -3,6 +3,7 @@
 //! and the pumps. Fixed capacity, so a description lives on the stack and
 //! crosses the C ABI as one caller-owned block.
 
+use super::losses::Losses;
 use crate::plant::closed_heater::HeaterApproach;
 use crate::plant::fault::refuse;
 use crate::plant::PlantPart;
@@ -110,6 +111,9 @@ pub struct CycleSpec {
     /// Subcooling of the condensate below the condenser saturation
     /// temperature (a temperature difference; 0 for saturated liquid).
     pub condensate_subcooling: f64,
+    /// The plant's losses beyond the machines' efficiencies; none by
+    /// default.
+    pub losses: Losses,
     casings: [Casing; MAX_CASINGS],
     casing_count: usize,
     heaters: [Heater; MAX_HEATERS],
@@ -137,6 +141,7 @@ impl CycleSpec {
             feed_pump_efficiency: 1.0,
             condensate_pump_efficiency: 1.0,
             condensate_subcooling: 0.0,
+            losses: Losses::NONE,
             casings: [none; MAX_CASINGS],
             casing_count: 0,
             heaters: [no_heater; MAX_HEATERS],
@@ -185,12 +190,16 @@ impl CycleSpec {
         self.casings().last().map(|c| c.exhaust_pressure)
     }
 
-    /// The same cycle with isentropic turbine sections and pumps; every
-    /// other part (pressures, losses, heater approaches) is kept.
+    /// The same cycle with isentropic turbine sections and pumps (a feed
+    /// pump turbine's too); every other part (pressures, losses, heater
+    /// approaches) is kept.
     pub fn ideal(&self) -> CycleSpec {
         let mut ideal = *self;
         for casing in &mut ideal.casings[..ideal.casing_count] {
             casing.isentropic_efficiency = 1.0;
+        }
+        if let Some(drive) = &mut ideal.losses.feed_pump_turbine {
+            drive.isentropic_efficiency = 1.0;
         }
         ideal.feed_pump_efficiency = 1.0;
         ideal.condensate_pump_efficiency = 1.0;

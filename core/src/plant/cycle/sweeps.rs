@@ -4,6 +4,7 @@
 //! couple the two, and the sweeps repeat until the extraction fractions
 //! stop changing.
 
+use super::side_streams::SideStreams;
 use super::spec::{CycleSpec, Drains, Heater, HeaterKind, MAX_HEATERS};
 use super::train::{pump_efficiency, FeedwaterTrain};
 use super::{at, heater_part, FLOW_ROUNDING};
@@ -98,11 +99,17 @@ impl TrainFlows {
 
 /// Sweeps the train of `spec`, starting from `flows` as
 /// [`TrainFlows::new`] leaves them, until its extraction flows settle.
+///
+/// A feed pump turbine's steam follows the pump's work on the flows of
+/// the last sweep; when it exhausts into a heater, the sweeps repeat
+/// until it settles too.
 pub(super) fn solve_train(
     spec: &CycleSpec,
     train: &FeedwaterTrain,
     shell: &[State; MAX_HEATERS],
     flows: &mut TrainFlows,
+    side: &mut SideStreams,
+    hotwell: &State,
 ) -> Result<(), Error> {
     let pumped_forward = spec.heaters().iter().any(|h| {
         matches!(
@@ -113,12 +120,14 @@ pub(super) fn solve_train(
             }
         )
     });
+    let coupled = pumped_forward || side.drive.is_some();
     let mut last_change = f64::INFINITY;
     for sweep in 0..MAX_SWEEPS {
         flows.boiler_inlet = sweep_up(spec, train, shell, &mut flows.water, sweep)?;
-        let change = sweep_down(spec.heaters(), shell, flows)?;
+        let change = sweep_down(spec.heaters(), shell, flows, side)?
+            .max(side.drive_the_feed_pump(spec, train, flows, hotwell));
         let at_rounding_floor = change <= FLOW_ROUNDING && change >= last_change;
-        if !pumped_forward || change <= SWEEP_TOLERANCE || at_rounding_floor {
+        if !coupled || change <= SWEEP_TOLERANCE || at_rounding_floor {
             return Ok(());
         }
         last_change = change;
@@ -176,6 +185,7 @@ fn closed_heater_water(
         let (out, drain) = end_states(
             shell,
             &w.feedwater_in,
+            train.above_pressure[j],
             train.approaches[j],
             heater_part(heater, j),
         )?;
@@ -229,13 +239,16 @@ fn open_heater_water(
 /// Downward: each heater's extraction flow from its energy balance, from
 /// the boiler to the condenser, so the flows above it are known. Returns
 /// the largest change of an extraction flow since the last sweep.
+/// Steam joining a shell from outside the extraction lines (`side`)
+/// counts with the cascaded drains: a known flow at a known enthalpy.
 fn sweep_down(
     heaters: &[Heater],
     shell: &[State; MAX_HEATERS],
     flows: &mut TrainFlows,
+    side: &SideStreams,
 ) -> Result<f64, Error> {
     let water = &mut flows.water;
-    let mut above = 1.0;
+    let mut above = side.boiler_feed();
     let mut cascade: Option<(f64, usize)> = None;
     let mut change: f64 = 0.0;
     for j in 0..heaters.len() {
@@ -244,17 +257,24 @@ fn sweep_down(
             Some((flow, from)) => (flow, water[from].drain.native().h),
             None => (0.0, 0.0),
         };
+        let (joining, joining_enthalpy) = side.joining_shell(j);
+        let (known_flow, h_known) = if joining > 0.0 {
+            let flow = cascaded_flow + joining;
+            (flow, (cascaded_flow * h_cascaded + joining_enthalpy) / flow)
+        } else {
+            (cascaded_flow, h_cascaded)
+        };
         let w = &mut water[j];
         let extraction = match heaters[j].kind {
             HeaterKind::Closed { drains, .. } => {
                 let extraction =
-                    closed_heater_flows(w, drains, above, cascaded_flow, h_cascaded, h_steam);
+                    closed_heater_flows(w, drains, above, known_flow, h_known, h_steam);
                 cascade = (drains == Drains::CascadeBackward).then_some((w.drain_flow, j));
                 extraction
             }
             HeaterKind::Open => {
                 cascade = None;
-                open_heater_flows(w, above, cascaded_flow, h_cascaded, h_steam)
+                open_heater_flows(w, above, known_flow, h_known, h_steam)
             }
         };
         if extraction < 0.0 || w.feedwater_flow < 0.0 {

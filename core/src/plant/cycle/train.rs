@@ -3,12 +3,12 @@
 //! part above it, up to the feed pump's discharge into the boiler; the
 //! condensate pump lifts the hotwell to the lowest of them.
 
-use super::at;
 use super::spec::{CycleSpec, HeaterKind, MAX_HEATERS};
+use super::{at, heater_part};
 use crate::plant::closed_heater::HeaterApproach;
-use crate::plant::fault::refuse;
+use crate::plant::fault::{refuse, refuse_with};
 use crate::plant::pump::compress;
-use crate::plant::{check_efficiency, native, PlantPart};
+use crate::plant::{check_efficiency, native, PlantFigure, PlantPart};
 use crate::{Error, Quantity, State};
 
 const FEED_PUMP: PlantPart = PlantPart::single("feed pump");
@@ -39,14 +39,28 @@ impl FeedwaterTrain {
         hotwell: &State,
         shell: &[State; MAX_HEATERS],
     ) -> Result<FeedwaterTrain, Error> {
+        let drops = water_pressure_drops(spec)?;
+        // The drops between the feed pump and the boiler: of the closed
+        // heaters above the highest open heater.
+        let to_boiler: f64 = spec
+            .heaters()
+            .iter()
+            .zip(&drops)
+            .take_while(|(h, _)| h.kind != HeaterKind::Open)
+            .map(|(_, d)| d)
+            .sum();
         let feed_pressure = match spec.feed_pressure {
-            Some(p) => native(Quantity::Pressure, p, spec.units)?,
+            Some(p) => native(Quantity::Pressure, p, spec.units)? - to_boiler,
             None => throttle.native().p,
         };
         if feed_pressure < throttle.native().p {
             return Err(refuse(
                 FEED_PUMP,
-                "its discharge pressure is below the throttle pressure",
+                if to_boiler > 0.0 {
+                    "its discharge pressure less the heaters' water-side pressure drops is below the throttle pressure"
+                } else {
+                    "its discharge pressure is below the throttle pressure"
+                },
             ));
         }
         let mut above_pressure = [feed_pressure; MAX_HEATERS];
@@ -59,6 +73,8 @@ impl FeedwaterTrain {
             if heater.kind == HeaterKind::Open {
                 line_pressure = shell[j].native().p;
                 to_boiler = false;
+            } else {
+                line_pressure += drops[j];
             }
         }
         let condensate_pump = compress(hotwell, line_pressure, pump_efficiency(spec, to_boiler)?)
@@ -95,6 +111,38 @@ pub(super) fn pump_efficiency(spec: &CycleSpec, to_boiler: bool) -> Result<f64, 
         spec.condensate_pump_efficiency
     };
     check_efficiency(efficiency, train_pump(to_boiler))
+}
+
+/// Each heater's water-side pressure drop, native: finite, not negative,
+/// and none on an open heater.
+fn water_pressure_drops(spec: &CycleSpec) -> Result<[f64; MAX_HEATERS], Error> {
+    let mut drops = [0.0; MAX_HEATERS];
+    let given = &spec.losses.water_pressure_drops;
+    for (j, (heater, drop)) in spec.heaters().iter().zip(given).enumerate() {
+        let part = heater_part(heater, j);
+        let d = native(Quantity::Pressure, *drop, spec.units)?;
+        if d < 0.0 {
+            return Err(refuse_with(
+                part,
+                "its water-side pressure drop is negative",
+                PlantFigure::native(
+                    "pressure drop",
+                    Quantity::Pressure,
+                    d,
+                    Some(0.0),
+                    spec.units,
+                ),
+            ));
+        }
+        if d > 0.0 && heater.kind == HeaterKind::Open {
+            return Err(refuse(
+                part,
+                "an open heater has no tubes for a water-side pressure drop",
+            ));
+        }
+        drops[j] = d;
+    }
+    Ok(drops)
 }
 
 /// The closed heaters' approaches in native temperature differences.
