@@ -62,7 +62,13 @@ pub(super) struct MakeupWater {
 
 /// Every stream outside the extraction lines, native units.
 pub(super) struct SideStreams {
-    leaks: [Option<SideLeak>; MAX_LEAKS],
+    /// The leaks with a flow, in the description's order, in the first
+    /// `leak_count` places; the rest hold the throttle steam at no flow and
+    /// are never read. (Not `[Option<SideLeak>; _]`: the optimiser read an
+    /// absent leak's uninitialised payload before its tag, which memcheck
+    /// reports through the C library.)
+    leaks: [SideLeak; MAX_LEAKS],
+    leak_count: usize,
     pub(super) drive: Option<DriveTurbine>,
     pub(super) makeup: Option<MakeupWater>,
 }
@@ -213,10 +219,20 @@ impl SideStreams {
         throttle: &State,
     ) -> Result<SideStreams, Error> {
         let losses = &spec.losses;
-        let mut leaks = [None; MAX_LEAKS];
-        for (k, (slot, leak)) in leaks.iter_mut().zip(&losses.leaks).enumerate() {
+        let unused = SideLeak {
+            from: LeakSource::CasingInlet(0),
+            to: SteamDestination::Condenser,
+            flow: 0.0,
+            state: *throttle,
+        };
+        let mut leaks = [unused; MAX_LEAKS];
+        let mut leak_count = 0;
+        for (k, leak) in losses.leaks.iter().enumerate() {
             if let Some(leak) = leak {
-                *slot = side_leak(spec, line, shell, k, leak)?;
+                if let Some(side) = side_leak(spec, line, shell, k, leak)? {
+                    leaks[leak_count] = side;
+                    leak_count += 1;
+                }
             }
         }
         let drive = match &losses.feed_pump_turbine {
@@ -229,9 +245,15 @@ impl SideStreams {
         };
         Ok(SideStreams {
             leaks,
+            leak_count,
             drive,
             makeup,
         })
+    }
+
+    /// The leaks with a flow, in the description's order.
+    fn leaks(&self) -> &[SideLeak] {
+        &self.leaks[..self.leak_count]
     }
 
     /// The feedwater the boiler takes per unit throttle flow.
@@ -251,7 +273,7 @@ impl SideStreams {
     /// The streams (flow, state) that join `to` from outside the
     /// extraction lines.
     pub(super) fn joining(&self, to: SteamDestination) -> impl Iterator<Item = (f64, State)> + '_ {
-        let leaks = self.leaks.iter().flatten().map(|l| (l.to, l.flow, l.state));
+        let leaks = self.leaks().iter().map(|l| (l.to, l.flow, l.state));
         let drive = self.drive.iter().map(|d| (d.to, d.flow, d.exhaust));
         leaks
             .chain(drive)
@@ -278,12 +300,18 @@ impl SideStreams {
         extractions: usize,
         past_exhaust: bool,
     ) -> f64 {
-        let leaks = self.leaks.iter().flatten().filter(|l| match l.from {
+        let leaks = self.leaks().iter().filter(|l| match l.from {
             LeakSource::CasingInlet(c) => c <= casing,
             LeakSource::CasingExhaust(c) => c < casing || (c == casing && past_exhaust),
         });
-        let drive = self.drive.iter().filter(|d| d.steam_from < extractions);
-        let returned = self.leaks.iter().flatten().filter(|l| match l.to {
+        // The option's tag is matched before its payload is read: a
+        // filter on the payload let the optimiser read an absent turbine's
+        // (uninitialised) fields first, which memcheck reports.
+        let drive = match &self.drive {
+            Some(d) if d.steam_from < extractions => Some(d),
+            _ => None,
+        };
+        let returned = self.leaks().iter().filter(|l| match l.to {
             SteamDestination::CasingInlet(c) => c <= casing,
             _ => false,
         });
