@@ -57,6 +57,34 @@ fn per_unit_flow(
     }
 }
 
+/// The generator's efficiency at `generator_input` (shaft power less
+/// mechanical losses, per unit throttle `flow`): 1 without a generator,
+/// its constant, or its curve read at the load it then produces.
+fn generator_efficiency(
+    losses: &Losses,
+    units: Units,
+    flow: Option<f64>,
+    generator_input: f64,
+) -> Result<f64, Error> {
+    match losses.generator {
+        None => Ok(1.0),
+        Some(Generator::Constant { efficiency }) => check_efficiency(efficiency, GENERATOR),
+        Some(Generator::AgainstLoad {
+            rated_output,
+            efficiency,
+        }) => {
+            let Some(flow) = flow else {
+                return Err(refuse(
+                    GENERATOR,
+                    "an efficiency against load needs the throttle flow",
+                ));
+            };
+            let rated = native(Quantity::Power, rated_output, units)?;
+            super::generator::efficiency_at_load(&efficiency, rated, generator_input * flow)
+        }
+    }
+}
+
 /// The output of the cycle whose totals are `t` (native, per unit
 /// throttle flow), with its heat input and the last casing's end point.
 pub(super) fn plant_output(
@@ -87,23 +115,7 @@ pub(super) fn plant_output(
             "the mechanical losses take the whole shaft power",
         ));
     }
-    let efficiency = match losses.generator {
-        None => 1.0,
-        Some(Generator::Constant { efficiency }) => check_efficiency(efficiency, GENERATOR)?,
-        Some(Generator::AgainstLoad {
-            rated_output,
-            efficiency,
-        }) => {
-            let Some(flow) = flow else {
-                return Err(refuse(
-                    GENERATOR,
-                    "an efficiency against load needs the throttle flow",
-                ));
-            };
-            let rated = native(Quantity::Power, rated_output, units)?;
-            super::generator::efficiency_at_load(&efficiency, rated, generator_input * flow)?
-        }
-    };
+    let efficiency = generator_efficiency(losses, units, flow, generator_input)?;
     let gross = generator_input * efficiency;
     let pumps = t.pump_work - t.drive_work;
     let net = gross - pumps - auxiliary;
