@@ -346,6 +346,24 @@ fn exercise_plant() -> f64 {
         Ok(r) => sum += r.output.net_heat_rate + r.output.power.map_or(0.0, |p| p.net_output),
         Err(e) => panic!("the plant with losses solves: {e}"),
     }
+    // The same plant off its design point: calibrated, then at 80 % of
+    // its flow both ways of controlling the throttle.
+    let model = OffDesignModel::calibrate(&lossy).expect("the design calibrates");
+    for control in [
+        ThrottleControl::FixedPressure,
+        ThrottleControl::SlidingPressure,
+    ] {
+        let point = OperatingPoint {
+            throttle_flow: 400.0,
+            control,
+            condenser_pressure: None,
+        };
+        match model.solve(&point) {
+            Ok(r) => sum += r.output.net_heat_rate,
+            Err(e) => panic!("the plant solves off design: {e}"),
+        }
+    }
+    sum += model.design().heaters().len() as f64;
     let mut bad = spec;
     bad.feed_pump_efficiency = 2.0;
     // The refusal names its part and figure, and prints without the heap.

@@ -29,6 +29,7 @@ pub use cycle::losses::{
     ExhaustLoss, FeedPumpTurbine, Generator, Leak, LeakSource, Losses, Makeup, SteamDestination,
     WaterLoss, MAX_LEAKS,
 };
+pub use cycle::off_design::{OffDesignModel, OperatingPoint, ThrottleControl};
 pub use cycle::result::{
     Component, ComponentKind, CycleResult, PlantOutput, PlantPower, PointLabel, PointRole,
     StatePoint, Stream, FIGURE_COUNT, MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
