@@ -25,6 +25,11 @@ const DESIGN_FLOW: f64 = 520.0;
 /// The demo unit in `units` (given in MPa, K), with an absolute flow, a
 /// generator, mechanical and auxiliary losses and an exhaust loss.
 fn unit(units: Units) -> CycleSpec {
+    unit_with_heater_3_at(units, 1.9)
+}
+
+/// The demo unit with its third heater extracting at `mpa`.
+fn unit_with_heater_3_at(units: Units, mpa: f64) -> CycleSpec {
     let p = |mpa| units.from_native(Quantity::Pressure, mpa);
     let t = |k| units.from_native(Quantity::Temperature, k);
     let dt = |k| units.from_native(Quantity::TemperatureDifference, k);
@@ -60,7 +65,7 @@ fn unit(units: Units) -> CycleSpec {
     for (pressure, kind) in [
         (6.0, closed(Drains::CascadeBackward)),
         (4.1, closed(Drains::CascadeBackward)),
-        (1.9, closed(Drains::CascadeBackward)),
+        (mpa, closed(Drains::CascadeBackward)),
         (0.9, HeaterKind::Open),
         (0.4, closed(Drains::PumpForward)),
         (0.15, closed(Drains::CascadeBackward)),
@@ -298,6 +303,29 @@ fn a_warmer_condenser_moves_the_last_group_and_costs_heat_rate() {
         assert!(relative(groups.last().unwrap().p_out, 0.01) <= 1e-9);
         assert!(warm.heat_rate_kj_per_kwh > cool.heat_rate_kj_per_kwh);
         assert!(warm.output.net_heat_rate > cool.output.net_heat_rate);
+    }
+}
+
+/// Extraction points keep their places on the line: one at the cold
+/// reheat (the first casing's exhaust) moves with it, one at the hot
+/// reheat (the second casing's inlet) with that, and the reheater keeps
+/// its design fractional pressure loss.
+#[test]
+fn extraction_points_at_a_casing_end_move_with_it() {
+    let units = Units::Native;
+    // Heater 3 at the hot reheat pressure.
+    let spec = unit_with_heater_3_at(units, 3.7);
+    let model = OffDesignModel::calibrate(&spec).unwrap();
+    for control in CONTROLS {
+        let r = model.solve(&at(units, 0.6, control)).unwrap();
+        check_balances(&r);
+        let p = |role, n| r.point(role, n).unwrap().state.pressure();
+        let cold = p(PointRole::CasingExhaust, 1);
+        let hot = p(PointRole::HotReheat, 0);
+        assert_eq!(p(PointRole::Extraction, 2), cold);
+        assert_eq!(p(PointRole::Extraction, 3), hot);
+        assert!(relative(hot / cold, 3.7 / 4.1) <= 1e-12);
+        assert!(cold < 0.7 * 4.1);
     }
 }
 
