@@ -364,6 +364,15 @@ fn exercise_plant() -> f64 {
         }
     }
     sum += model.design().heaters().len() as f64;
+    let flows = [500.0, 350.0, 200.0];
+    match model.load_curve(&flows, ThrottleControl::SlidingPressure, None) {
+        Ok(curve) => {
+            for row in curve.rows() {
+                sum += row.map_or(0.0, |row| row.output.net_heat_rate + row.throttle_pressure);
+            }
+        }
+        Err(e) => panic!("a load curve of three flows is taken: {e}"),
+    }
     let mut bad = spec;
     bad.feed_pump_efficiency = 2.0;
     // The refusal names its part and figure, and prints without the heap.

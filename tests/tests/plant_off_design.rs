@@ -15,7 +15,7 @@
 use ebullio::plant::{
     solve_cycle, Casing, Component, ComponentKind, Curve, CycleResult, CycleSpec, Drains,
     ExhaustLoss, Generator, Heater, HeaterApproach, HeaterKind, OffDesignModel, OperatingPoint,
-    PointRole, Reheat, Supply, ThrottleControl, ENTROPY_ALLOWANCE,
+    PointRole, Reheat, Supply, ThrottleControl, ENTROPY_ALLOWANCE, MAX_LOAD_POINTS,
 };
 use ebullio::{Error, Quantity, State, Units};
 
@@ -453,26 +453,65 @@ fn throttling_at_a_fixed_pressure_costs_heat_rate_at_part_load() {
 
 /// Issue 16, item 5: heat rate rises monotonically as load falls on the
 /// demo unit (common practice: part-load heat rate curves rise toward
-/// low load).
+/// low load), read from one load-curve call.
 #[test]
 fn heat_rate_rises_as_the_load_falls() {
     let units = Units::Native;
     let model = OffDesignModel::calibrate(&unit(units)).unwrap();
+    let flows = LOADS.map(|load| load * DESIGN_FLOW);
     for control in CONTROLS {
-        let rates: Vec<f64> = LOADS
+        let curve = model.load_curve(&flows, control, None).unwrap();
+        let rates: Vec<f64> = curve
+            .rows()
             .iter()
-            .map(|&load| {
-                model
-                    .solve(&at(units, load, control))
-                    .unwrap()
-                    .output
-                    .net_heat_rate
-            })
+            .map(|row| row.unwrap().output.net_heat_rate)
             .collect();
         for pair in rates.windows(2) {
             assert!(pair[1] > pair[0], "{control:?}: {rates:?}");
         }
     }
+}
+
+/// A load curve's rows are the single solves' balances to the bit; a
+/// flow refused keeps its refusal in its row and the others still solve.
+#[test]
+fn a_load_curve_row_is_the_balance_at_its_flow() {
+    let units = Units::UsCustomary;
+    let model = OffDesignModel::calibrate(&unit(units)).unwrap();
+    let flow = |load| units.from_native(Quantity::MassFlow, load * DESIGN_FLOW);
+    let control = ThrottleControl::FixedPressure;
+    let flows = [flow(1.05), flow(1.0), flow(0.45)];
+    let curve = model.load_curve(&flows, control, None).unwrap();
+    assert_eq!(curve.rows().len(), 3);
+    assert!(matches!(
+        curve.rows()[0],
+        Err(Error::InvalidPlant { part, .. }) if part.name == "control valves"
+    ));
+    for (row, &throttle_flow) in curve.rows()[1..].iter().zip(&flows[1..]) {
+        let row = row.unwrap();
+        let r = model
+            .solve(&OperatingPoint {
+                throttle_flow,
+                control,
+                condenser_pressure: None,
+            })
+            .unwrap();
+        assert_eq!(row.output, r.output);
+        assert_eq!(row.thermal_efficiency, r.thermal_efficiency);
+        let throttle = r.point(PointRole::Throttle, 0).unwrap().state.pressure();
+        assert_eq!(row.throttle_pressure, throttle);
+        assert_eq!(row.output.power.unwrap().throttle_flow, throttle_flow);
+    }
+    let too_many = [flow(1.0); MAX_LOAD_POINTS + 1];
+    assert!(model.load_curve(&too_many, control, None).is_err());
+    assert_eq!(
+        model
+            .load_curve(&too_many[..MAX_LOAD_POINTS], control, None)
+            .unwrap()
+            .rows()
+            .len(),
+        MAX_LOAD_POINTS
+    );
 }
 
 #[test]

@@ -20,7 +20,7 @@
 //! `side_streams.rs` holds the leakages, the feed pump turbine and the
 //! makeup, which the sweeps and the record read. Off the design point,
 //! `off_design.rs` runs the same steps at the pressures `cone_law.rs`
-//! gives.
+//! gives, and `load_curve.rs` at several flows.
 
 mod assembly;
 mod cone_law;
@@ -30,6 +30,7 @@ mod exhaust;
 mod expansion;
 mod generator;
 mod limits;
+pub(super) mod load_curve;
 pub(super) mod losses;
 pub(super) mod off_design;
 mod output;
