@@ -14,8 +14,9 @@
 
 use ebullio::plant::{
     solve_cycle, Casing, Component, ComponentKind, Curve, CycleResult, CycleSpec, Drains,
-    ExhaustLoss, Generator, Heater, HeaterApproach, HeaterKind, OffDesignModel, OperatingPoint,
-    PointRole, Reheat, Supply, ThrottleControl, ENTROPY_ALLOWANCE, MAX_LOAD_POINTS,
+    ExhaustLoss, FeedPumpTurbine, Generator, Heater, HeaterApproach, HeaterKind, Leak, LeakSource,
+    Makeup, OffDesignModel, OperatingPoint, PointRole, Reheat, SteamDestination, Supply,
+    ThrottleControl, WaterLoss, ENTROPY_ALLOWANCE, MAX_LOAD_POINTS,
 };
 use ebullio::{Error, Quantity, State, Units};
 
@@ -173,11 +174,23 @@ fn energy_out(c: &Component) -> f64 {
     c.outlets().iter().map(|s| s.flow * s.enthalpy).sum::<f64>() + c.work_out
 }
 
+/// A power of `r` per unit throttle flow, in its specific energy unit:
+/// kW / (kg/s) = kJ/kg, through each unit's own factor.
+fn per_unit_flow(r: &CycleResult, power: f64) -> f64 {
+    let u = r.units;
+    let flow = u.to_native(Quantity::MassFlow, r.output.power.unwrap().throttle_flow);
+    u.from_native(
+        Quantity::Enthalpy,
+        u.to_native(Quantity::Power, power) / flow,
+    )
+}
+
 /// First law per component to 1e-9 (mass to 1e-12 of the throttle
 /// flow), second law per component within the plant layer's allowance,
-/// and the plant's first law: heat in leaves as net output, condenser
-/// heat and the losses.
-fn check_balances(r: &CycleResult) {
+/// and the plant's first law per unit throttle flow: heat in and the
+/// makeup's enthalpy leave as net output, condenser heat, the losses and
+/// the water the makeup replaces (blowdown).
+fn check_balances(r: &CycleResult, spec: &CycleSpec) {
     for c in r.components() {
         let (e_in, e_out) = (energy_in(c), energy_out(c));
         let name = format!("{} {}", c.kind.name(), c.number);
@@ -200,14 +213,37 @@ fn check_balances(r: &CycleResult) {
             c.entropy_generation
         );
     }
-    // Heat flows and powers may differ in unit (Btu/h and kW).
-    let p = r.output.power.unwrap();
-    let heat = |x| r.units.to_native(Quantity::HeatFlow, x);
-    let power = |x| r.units.to_native(Quantity::Power, x);
-    let out = power(p.net_output)
-        + heat(p.condenser_duty)
-        + power(p.mechanical_losses + p.generator_losses + p.auxiliary_power);
-    assert!((heat(p.heat_input) - out).abs() <= 1e-9 * heat(p.heat_input));
+    let (makeup_in, lost_out) = match spec.losses.makeup {
+        None => (0.0, 0.0),
+        Some(makeup) => {
+            let water = State::from_pt(makeup.pressure, makeup.temperature, spec.units).unwrap();
+            let boiler = r
+                .components()
+                .iter()
+                .find(|c| c.kind == ComponentKind::Boiler)
+                .unwrap();
+            let lost = boiler.outlets()[1];
+            (
+                makeup.fraction * water.enthalpy(),
+                lost.flow * lost.enthalpy,
+            )
+        }
+    };
+    let o = &r.output;
+    let p = o.power.unwrap();
+    let mechanical = per_unit_flow(r, p.mechanical_losses);
+    let generator_losses = (o.shaft_work - mechanical) - o.gross_output;
+    let into = r.heat_input + makeup_in;
+    let out = o.net_output
+        + r.condenser_duty
+        + mechanical
+        + generator_losses
+        + per_unit_flow(r, p.auxiliary_power)
+        + lost_out;
+    assert!(
+        (into - out).abs() <= 1e-9 * into,
+        "plant energy: in {into}, out {out}"
+    );
     for (f, x) in r.extraction_fractions().iter().enumerate() {
         assert!((0.0..=1.0).contains(x), "extraction {f}: {x}");
     }
@@ -291,7 +327,7 @@ fn a_warmer_condenser_moves_the_last_group_and_costs_heat_rate() {
                 ..at(units, 0.8, control)
             })
             .unwrap();
-        check_balances(&warm);
+        check_balances(&warm, model.design());
         assert_eq!(
             warm.point(PointRole::Hotwell, 0).unwrap().state.pressure(),
             0.1
@@ -303,6 +339,104 @@ fn a_warmer_condenser_moves_the_last_group_and_costs_heat_rate() {
         assert!(relative(groups.last().unwrap().p_out, 0.01) <= 1e-9);
         assert!(warm.heat_rate_kj_per_kwh > cool.heat_rate_kj_per_kwh);
         assert!(warm.output.net_heat_rate > cool.output.net_heat_rate);
+    }
+}
+
+/// The demo unit with side streams too (invented numbers): water-side
+/// drops, leakages (one returning to the IP casing's inlet), makeup
+/// replacing blowdown, and a feed pump driven by its own turbine on the
+/// deaerator's extraction steam.
+fn unit_with_side_streams(units: Units) -> CycleSpec {
+    let mut spec = unit(units);
+    let p = |mpa| units.from_native(Quantity::Pressure, mpa);
+    let losses = &mut spec.losses;
+    for (drop, j) in losses.water_pressure_drops.iter_mut().zip(0..) {
+        *drop = if j == 3 { 0.0 } else { p(0.08) };
+    }
+    losses.leaks[0] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::HeaterShell(1),
+        fraction: 0.002,
+    });
+    losses.leaks[1] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::CasingInlet(1),
+        fraction: 0.01,
+    });
+    losses.makeup = Some(Makeup {
+        fraction: 0.01,
+        pressure: p(0.2),
+        temperature: units.from_native(Quantity::Temperature, 298.15),
+        lost_as: WaterLoss::Blowdown,
+    });
+    losses.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 3,
+        exhaust_to: SteamDestination::Condenser,
+        isentropic_efficiency: 0.8,
+    });
+    spec
+}
+
+/// Side streams ride along: at the design flow the design balance comes
+/// back, and at every load each balance closes and each group keeps its
+/// cone law.
+#[test]
+fn side_streams_ride_along_off_design() {
+    let units = Units::SiBase;
+    let spec = unit_with_side_streams(units);
+    let design = solve_cycle(&spec).unwrap();
+    let ends = group_ends(&design);
+    let model = OffDesignModel::calibrate(&spec).unwrap();
+    for control in CONTROLS {
+        let r = model.solve(&at(units, 1.0, control)).unwrap();
+        for ((name, a), (_, b)) in r.figures().iter().zip(design.figures()) {
+            assert!(relative(*a, b) <= 1e-9, "{name}: {a} against {b}");
+        }
+        for load in [0.8, 0.5, 0.3] {
+            let r = model.solve(&at(units, load, control)).unwrap();
+            check_balances(&r, model.design());
+            for (g, design) in group_ends(&r).iter().zip(&ends) {
+                assert!(relative(g.flow, design.flow / cone(design) * cone(g)) <= 1e-8);
+            }
+        }
+    }
+}
+
+/// The simplest unit, one casing on saturated steam and no heater: one
+/// stage group from the throttle to the condenser, whose inlet pressure
+/// the cone law alone sets.
+#[test]
+fn a_single_group_on_saturated_steam() {
+    let units = Units::Native;
+    let mut spec = CycleSpec::new(units, Supply::SaturatedVapour { pressure: 7.0 });
+    spec.push_casing(Casing {
+        exhaust_pressure: 0.008,
+        isentropic_efficiency: 0.8,
+    })
+    .unwrap();
+    spec.feed_pump_efficiency = 0.8;
+    spec.losses.throttle_flow = Some(100.0);
+    let model = OffDesignModel::calibrate(&spec).unwrap();
+    let design = &group_ends(&solve_cycle(&spec).unwrap())[0];
+    for control in CONTROLS {
+        let point = OperatingPoint {
+            throttle_flow: 60.0,
+            control,
+            condenser_pressure: None,
+        };
+        let r = model.solve(&point).unwrap();
+        check_balances(&r, model.design());
+        let g = &group_ends(&r)[0];
+        assert!(relative(g.flow, design.flow / cone(design) * cone(g)) <= 1e-8);
+        assert!(g.p_in < 0.65 * 7.0 && g.p_in > 0.55 * 7.0, "{}", g.p_in);
+        let throttle = r.point(PointRole::Throttle, 0).unwrap().state;
+        match control {
+            ThrottleControl::FixedPressure => assert_eq!(throttle.pressure(), 7.0),
+            ThrottleControl::SlidingPressure => {
+                assert!(relative(throttle.pressure(), g.p_in) <= 1e-12);
+                assert_eq!(throttle.quality(), Some(1.0));
+            }
+        }
     }
 }
 
@@ -318,7 +452,7 @@ fn extraction_points_at_a_casing_end_move_with_it() {
     let model = OffDesignModel::calibrate(&spec).unwrap();
     for control in CONTROLS {
         let r = model.solve(&at(units, 0.6, control)).unwrap();
-        check_balances(&r);
+        check_balances(&r, model.design());
         let p = |role, n| r.point(role, n).unwrap().state.pressure();
         let cold = p(PointRole::CasingExhaust, 1);
         let hot = p(PointRole::HotReheat, 0);
@@ -341,7 +475,7 @@ fn a_load_curve_from_30_to_100_percent_solves_and_balances() {
                 let r = model
                     .solve(&at(units, load, control))
                     .unwrap_or_else(|e| panic!("{units:?} {control:?} at {load}: {e}"));
-                check_balances(&r);
+                check_balances(&r, model.design());
             }
         }
     }

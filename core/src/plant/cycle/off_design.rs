@@ -132,8 +132,11 @@ impl OffDesignModel {
     /// The unit at `point`: a full balance as [`solve_cycle`](super::solve_cycle)
     /// gives one, at the stage pressures where every group's cone law
     /// holds with the flows of that balance (to relative 1e-11 in the
-    /// pressures). Errors in the design's units; a balance whose
-    /// pressures do not settle is [`Error::NotConverged`].
+    /// pressures). At a fixed throttle pressure the valves wide open pass
+    /// the flow the first group takes at the design throttle pressure; a
+    /// larger flow is refused (part "control valves"). Errors in the
+    /// design's units; a balance whose pressures do not settle is
+    /// [`Error::NotConverged`].
     pub fn solve(&self, point: &OperatingPoint) -> Result<CycleResult, Error> {
         self.solve_native(point)
             .map_err(|e| in_caller_units(e, self.design.units))
