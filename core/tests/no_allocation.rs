@@ -373,6 +373,10 @@ fn exercise_plant() -> f64 {
         }
         Err(e) => panic!("a load curve of three flows is taken: {e}"),
     }
+    match model.solve_for_output(300_000.0, ThrottleControl::FixedPressure, None) {
+        Ok(r) => sum += r.output.net_heat_rate,
+        Err(e) => panic!("the plant solves at a net output: {e}"),
+    }
     let mut bad = spec;
     bad.feed_pump_efficiency = 2.0;
     // The refusal names its part and figure, and prints without the heap.

@@ -651,6 +651,64 @@ fn a_load_curve_row_is_the_balance_at_its_flow() {
     );
 }
 
+/// The net output of `r` as a power, in its units.
+fn net_power(r: &CycleResult) -> f64 {
+    r.output.power.unwrap().net_output
+}
+
+/// At a target net output the unit runs at the throttle flow that gives
+/// it: the design output at the design flow, and at part load a balance
+/// whose net output is the target, the throttled one needing more heat
+/// per kWh (the valves' exergy, as at a given flow).
+#[test]
+fn a_target_net_output_finds_its_throttle_flow() {
+    for units in [Units::Native, Units::UsCustomary] {
+        let spec = unit(units);
+        let design = solve_cycle(&spec).unwrap();
+        let model = OffDesignModel::calibrate(&spec).unwrap();
+        let full = net_power(&design);
+        for control in CONTROLS {
+            let r = model.solve_for_output(full, control, None).unwrap();
+            let flow = |r: &CycleResult| r.output.power.unwrap().throttle_flow;
+            assert!(relative(flow(&r), flow(&design)) <= 1e-9);
+            for ((name, a), (_, b)) in r.figures().iter().zip(design.figures()) {
+                assert!(relative(*a, b) <= 1e-9, "{name}: {a} against {b}");
+            }
+        }
+        for share in [0.8, 0.5, 0.3] {
+            let target = share * full;
+            let fixed = model
+                .solve_for_output(target, ThrottleControl::FixedPressure, None)
+                .unwrap();
+            let sliding = model
+                .solve_for_output(target, ThrottleControl::SlidingPressure, None)
+                .unwrap();
+            for r in [&fixed, &sliding] {
+                check_balances(r, model.design());
+                assert!(
+                    relative(net_power(r), target) <= 1e-9,
+                    "{units:?} at {share}: {} against {target}",
+                    net_power(r)
+                );
+            }
+            assert!(fixed.output.net_heat_rate > sliding.output.net_heat_rate);
+        }
+        // Wide-open valves at the design pressure give the design output
+        // and no more; no output is no operating point.
+        let above = model.solve_for_output(1.02 * full, ThrottleControl::FixedPressure, None);
+        assert!(matches!(
+            above,
+            Err(Error::InvalidPlant { part, .. }) if part.name == "control valves"
+        ));
+        for target in [0.0, -full] {
+            assert!(matches!(
+                model.solve_for_output(target, ThrottleControl::SlidingPressure, None),
+                Err(Error::InvalidPlant { part, .. }) if part.name == "plant"
+            ));
+        }
+    }
+}
+
 #[test]
 fn what_the_model_cannot_do_is_refused() {
     let units = Units::Native;

@@ -20,7 +20,8 @@
 //! `side_streams.rs` holds the leakages, the feed pump turbine and the
 //! makeup, which the sweeps and the record read. Off the design point,
 //! `off_design.rs` runs the same steps at the pressures `cone_law.rs`
-//! gives, and `load_curve.rs` at several flows.
+//! gives, `load_curve.rs` at several flows and `target_output.rs` at
+//! the flow that gives a net output.
 
 mod assembly;
 mod cone_law;
@@ -39,6 +40,7 @@ pub(super) mod result;
 mod side_streams;
 pub(super) mod spec;
 mod sweeps;
+mod target_output;
 mod train;
 
 use self::assembly::Assembly;

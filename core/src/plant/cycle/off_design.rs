@@ -63,6 +63,8 @@ enum Station {
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct OffDesignModel {
     design: CycleSpec,
+    /// The design throttle flow, kg/s.
+    design_flow: f64,
     /// Each group at design, native units.
     at_design: StageGroups,
     /// Each group's cone-law coefficient K.
@@ -118,6 +120,7 @@ impl OffDesignModel {
         }
         Ok(OffDesignModel {
             design: *design,
+            design_flow,
             at_design,
             flow_coefficients,
             stations,
@@ -127,6 +130,11 @@ impl OffDesignModel {
     /// The design description.
     pub fn design(&self) -> &CycleSpec {
         &self.design
+    }
+
+    /// The design throttle flow, kg/s.
+    pub(super) fn design_flow(&self) -> f64 {
+        self.design_flow
     }
 
     /// The unit at `point`: a full balance as [`solve_cycle`](super::solve_cycle)
