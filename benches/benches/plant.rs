@@ -1,6 +1,7 @@
 //! The plant layer: one cycle solve (seven heaters with cascaded drains,
 //! the same with two pumped-forward drains, the first with every loss, a
-//! plain Rankine cycle) and
+//! plain Rankine cycle), that lossy unit off design (one solve, a
+//! 15-point load curve) and
 //! the single components a performance calculation calls per sample.
 //!
 //! Run with `cargo bench -p ebullio-benches --bench plant`.
@@ -9,7 +10,10 @@ use std::hint::black_box;
 use std::time::Duration;
 
 use criterion::{criterion_group, criterion_main, Criterion};
-use ebullio::plant::{compress, expand, section_efficiency, solve_cycle, Drains};
+use ebullio::plant::{
+    compress, expand, section_efficiency, solve_cycle, Drains, OffDesignModel, OperatingPoint,
+    ThrottleControl,
+};
 use ebullio::{Saturation, State, Units};
 use ebullio_benches::cycles;
 
@@ -30,6 +34,35 @@ fn plant(c: &mut Criterion) {
     });
     group.bench_function("plain_rankine", |b| {
         b.iter(|| solve_cycle(black_box(&plain)).map(|r| r.thermal_efficiency))
+    });
+    group.finish();
+
+    // The lossy unit off its design point: one solve at 70 % of its flow
+    // with sliding pressure, and a 15-point load curve (44-100 %).
+    let mut group = c.benchmark_group("off_design");
+    let model = OffDesignModel::calibrate(&lossy).expect("the design calibrates");
+    let point = OperatingPoint {
+        throttle_flow: 350.0,
+        control: ThrottleControl::SlidingPressure,
+        condenser_pressure: None,
+    };
+    group.bench_function("seven_heaters_with_losses_at_70_percent", |b| {
+        b.iter(|| {
+            model
+                .solve(black_box(&point))
+                .map(|r| r.output.net_heat_rate)
+        })
+    });
+    group.bench_function("seven_heaters_with_losses_15_point_load_curve", |b| {
+        b.iter(|| {
+            model
+                .load_curve(
+                    black_box(&cycles::LOAD_CURVE_FLOWS),
+                    ThrottleControl::SlidingPressure,
+                    None,
+                )
+                .map(|curve| curve.rows().len())
+        })
     });
     group.finish();
 

@@ -116,6 +116,14 @@ pub fn seven_heaters_with_losses() -> CycleSpec {
     spec
 }
 
+/// Fifteen throttle flows (kg/s) for a load curve of
+/// [`seven_heaters_with_losses`]: its design's 500 kg/s down to 44 % of
+/// it, where its invented exhaust loss curve (from 60 m/s) still reads.
+pub const LOAD_CURVE_FLOWS: [f64; 15] = [
+    500.0, 480.0, 460.0, 440.0, 420.0, 400.0, 380.0, 360.0, 340.0, 320.0, 300.0, 280.0, 260.0,
+    240.0, 220.0,
+];
+
 /// A plain Rankine cycle: one casing, no heaters.
 pub fn plain_rankine() -> CycleSpec {
     let mut spec = CycleSpec::new(
@@ -136,7 +144,7 @@ pub fn plain_rankine() -> CycleSpec {
 
 #[cfg(test)]
 mod tests {
-    use ebullio::plant::{solve_cycle, Drains};
+    use ebullio::plant::{solve_cycle, Drains, OffDesignModel, ThrottleControl};
 
     /// A bench of a refusal would time the wrong thing.
     #[test]
@@ -148,6 +156,24 @@ mod tests {
             super::plain_rankine(),
         ] {
             assert!(solve_cycle(&spec).is_ok(), "{:?}", solve_cycle(&spec));
+        }
+    }
+
+    /// Every row of the load curve bench solves, both ways of
+    /// controlling the throttle.
+    #[test]
+    fn every_load_curve_row_solves() {
+        let model = OffDesignModel::calibrate(&super::seven_heaters_with_losses()).unwrap();
+        for control in [
+            ThrottleControl::FixedPressure,
+            ThrottleControl::SlidingPressure,
+        ] {
+            let curve = model
+                .load_curve(&super::LOAD_CURVE_FLOWS, control, None)
+                .unwrap();
+            for (row, flow) in curve.rows().iter().zip(super::LOAD_CURVE_FLOWS) {
+                assert!(row.is_ok(), "{control:?} at {flow} kg/s: {row:?}");
+            }
         }
     }
 }

@@ -346,6 +346,37 @@ fn exercise_plant() -> f64 {
         Ok(r) => sum += r.output.net_heat_rate + r.output.power.map_or(0.0, |p| p.net_output),
         Err(e) => panic!("the plant with losses solves: {e}"),
     }
+    // The same plant off its design point: calibrated, then at 80 % of
+    // its flow both ways of controlling the throttle.
+    let model = OffDesignModel::calibrate(&lossy).expect("the design calibrates");
+    for control in [
+        ThrottleControl::FixedPressure,
+        ThrottleControl::SlidingPressure,
+    ] {
+        let point = OperatingPoint {
+            throttle_flow: 400.0,
+            control,
+            condenser_pressure: None,
+        };
+        match model.solve(&point) {
+            Ok(r) => sum += r.output.net_heat_rate,
+            Err(e) => panic!("the plant solves off design: {e}"),
+        }
+    }
+    sum += model.design().heaters().len() as f64;
+    let flows = [500.0, 350.0, 200.0];
+    match model.load_curve(&flows, ThrottleControl::SlidingPressure, None) {
+        Ok(curve) => {
+            for row in curve.rows() {
+                sum += row.map_or(0.0, |row| row.output.net_heat_rate + row.throttle_pressure);
+            }
+        }
+        Err(e) => panic!("a load curve of three flows is taken: {e}"),
+    }
+    match model.solve_for_output(300_000.0, ThrottleControl::FixedPressure, None) {
+        Ok(r) => sum += r.output.net_heat_rate,
+        Err(e) => panic!("the plant solves at a net output: {e}"),
+    }
     let mut bad = spec;
     bad.feed_pump_efficiency = 2.0;
     // The refusal names its part and figure, and prints without the heap.

@@ -25,10 +25,12 @@ mod turbine;
 pub use attemperator::{spray_for_temperature, Spray};
 pub use closed_heater::{closed_heater, ClosedHeater, HeaterApproach};
 pub use cycle::curve::{Curve, MAX_CURVE_POINTS};
+pub use cycle::load_curve::{LoadCurve, LoadPoint, MAX_LOAD_POINTS};
 pub use cycle::losses::{
     ExhaustLoss, FeedPumpTurbine, Generator, Leak, LeakSource, Losses, Makeup, SteamDestination,
     WaterLoss, MAX_LEAKS,
 };
+pub use cycle::off_design::{OffDesignModel, OperatingPoint, ThrottleControl};
 pub use cycle::result::{
     Component, ComponentKind, CycleResult, PlantOutput, PlantPower, PointLabel, PointRole,
     StatePoint, Stream, FIGURE_COUNT, MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,

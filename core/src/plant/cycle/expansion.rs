@@ -5,7 +5,7 @@
 //! own inlet), so it is solved once, before the feedwater train.
 
 use super::spec::{CycleSpec, Reheat, MAX_CASINGS, MAX_HEATERS};
-use super::{at, heater_part, REHEATER};
+use super::{at, heater_part, CONTROL_VALVES, REHEATER};
 use crate::constants::CRITICAL_PRESSURE;
 use crate::plant::fault::{refuse, refuse_with};
 use crate::plant::mixing::throttle as throttle_to;
@@ -15,7 +15,7 @@ use crate::{Error, Quantity, State, Units};
 
 /// Each casing's exhaust ends one stage group and each extraction point
 /// at most one more, so a line has at most this many.
-const MAX_GROUPS: usize = MAX_CASINGS + MAX_HEATERS;
+pub(super) const MAX_GROUPS: usize = MAX_CASINGS + MAX_HEATERS;
 
 /// A stage group: part of a casing between two extraction points.
 #[derive(Clone, Copy)]
@@ -35,6 +35,8 @@ pub(super) struct ExpansionLine {
     pub(super) extraction: [State; MAX_HEATERS],
     /// The casing each heater takes its steam from.
     pub(super) extraction_casing: [usize; MAX_HEATERS],
+    /// The steam after the control valves, when they throttle it.
+    pub(super) control_valves: Option<State>,
     /// Cold and hot reheat, when the cycle reheats.
     pub(super) reheat: Option<(State, State)>,
     /// The last casing's exhaust, into the condenser.
@@ -59,6 +61,7 @@ impl ExpansionLine {
             group_count: 0,
             extraction: [throttle; MAX_HEATERS],
             extraction_casing: [0usize; MAX_HEATERS],
+            control_valves: None,
             reheat: None,
             exhaust: throttle,
             arriving: [throttle; MAX_CASINGS],
@@ -67,13 +70,16 @@ impl ExpansionLine {
 
     /// Expands `throttle` through every casing of `spec`, reheating
     /// before the second, and finds the steam at each extraction point.
-    /// A casing with a specific enthalpy in `mixtures` starts from it, at
-    /// its inlet pressure: the steam arriving there mixed with leakages
-    /// that return to it.
+    /// With `control_valves` (a native pressure) the throttle steam is
+    /// first throttled to it, at constant enthalpy. A casing with a
+    /// specific enthalpy in `mixtures` starts from it, at its inlet
+    /// pressure: the steam arriving there mixed with leakages that return
+    /// to it.
     pub(super) fn expand(
         &mut self,
         spec: &CycleSpec,
         throttle: State,
+        control_valves: Option<f64>,
         mixtures: &[Option<f64>; MAX_CASINGS],
     ) -> Result<(), Error> {
         let units = spec.units;
@@ -88,6 +94,10 @@ impl ExpansionLine {
                 inlet = self.reheat(inlet, reheat, units)?;
             }
             self.arriving[c] = inlet;
+            if let (0, Some(p)) = (c, control_valves) {
+                inlet = throttle_to(&inlet, p).map_err(at(CONTROL_VALVES))?;
+                self.control_valves = Some(inlet);
+            }
             if let Some(h) = mixtures[c] {
                 inlet = State::from_ph(inlet.native().p, h, Units::Native)?;
             }

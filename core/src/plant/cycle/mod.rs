@@ -18,25 +18,33 @@
 //! not keep), `exhaust.rs` (the last stage's exhaust loss), `record.rs`
 //! and `assembly.rs` (the result), `output.rs` (gross and net output).
 //! `side_streams.rs` holds the leakages, the feed pump turbine and the
-//! makeup, which the sweeps and the record read.
+//! makeup, which the sweeps and the record read. Off the design point,
+//! `off_design.rs` runs the same steps at the pressures `cone_law.rs`
+//! gives, `load_curve.rs` at several flows and `target_output.rs` at
+//! the flow that gives a net output.
 
 mod assembly;
+mod cone_law;
 pub(super) mod curve;
 mod ends;
 mod exhaust;
 mod expansion;
 mod generator;
 mod limits;
+pub(super) mod load_curve;
 pub(super) mod losses;
+pub(super) mod off_design;
 mod output;
 mod record;
 pub(super) mod result;
 mod side_streams;
 pub(super) mod spec;
 mod sweeps;
+mod target_output;
 mod train;
 
 use self::assembly::Assembly;
+use self::cone_law::StageGroups;
 use self::result::CycleResult;
 use self::spec::{CycleSpec, Heater, HeaterKind, MAX_CASINGS};
 use crate::plant::fault::in_caller_units;
@@ -52,6 +60,7 @@ const SECONDS_PER_HOUR: f64 = 3600.0;
 
 const CYCLE: PlantPart = PlantPart::single("cycle");
 const REHEATER: PlantPart = PlantPart::single("reheater");
+const CONTROL_VALVES: PlantPart = PlantPart::single("control valves");
 
 /// Solves the cycle `spec` describes. Every number in the result is per
 /// unit mass of throttle steam, in `spec.units`.
@@ -70,12 +79,19 @@ const REHEATER: PlantPart = PlantPart::single("reheater");
 /// takes above the shell saturation temperature comes from the steam's
 /// superheat alone. Errors are in `spec.units`.
 pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
-    solve(spec).map_err(|e| in_caller_units(e, spec.units))
+    solve(spec, None, None).map_err(|e| in_caller_units(e, spec.units))
 }
 
 /// The steps in the order that also decides which refusal a cycle with
-/// several faults gets, all in native units.
-fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
+/// several faults gets, all in native units. Off-design operation adds
+/// two things: `control_valves`, the pressure (native) the throttle
+/// steam is throttled to before the first stage group, and `groups`,
+/// which receives each stage group's flow and end pressures.
+fn solve(
+    spec: &CycleSpec,
+    control_valves: Option<f64>,
+    groups: Option<&mut StageGroups>,
+) -> Result<CycleResult, Error> {
     ends::check_casings(spec)?;
     // The hotwell first: the condenser's saturation range (triple point
     // to critical point) then refuses a condenser pressure in the
@@ -91,7 +107,7 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
     let mut pass = 0;
     let (mut line, shell, side, train, flows) = loop {
         let mut line = expansion::ExpansionLine::new(throttle);
-        line.expand(spec, throttle, &mixtures)?;
+        line.expand(spec, throttle, control_valves, &mixtures)?;
         let shell = expansion::heater_shells(spec, &line)?;
         let mut side = side_streams::SideStreams::new(spec, &line, &shell, &throttle)?;
         let train = train::FeedwaterTrain::new(spec, &throttle, &hotwell, &shell)?;
@@ -109,6 +125,9 @@ fn solve(spec: &CycleSpec) -> Result<CycleResult, Error> {
         }
         mixtures = next;
     };
+    if let Some(groups) = groups {
+        groups.record(&line, &flows, &side);
+    }
     limits::check_extractions(spec.heaters(), &flows, &shell, &side, &line)?;
     let boiler_heat = side.boiler_heat(
         limits::check_boiler(&throttle, &flows.boiler_inlet, spec.units)?,

@@ -17,9 +17,14 @@ const PLANT: PlantPart = PlantPart::single("plant");
 
 /// The throttle flow in kg/s, when given: finite and positive.
 pub(super) fn throttle_flow(losses: &Losses, units: Units) -> Result<Option<f64>, Error> {
-    let Some(flow) = losses.throttle_flow else {
-        return Ok(None);
-    };
+    losses
+        .throttle_flow
+        .map(|flow| positive_throttle_flow(flow, units))
+        .transpose()
+}
+
+/// A throttle flow given in `units`, in kg/s: finite and positive.
+pub(super) fn positive_throttle_flow(flow: f64, units: Units) -> Result<f64, Error> {
     let flow = native(Quantity::MassFlow, flow, units)?;
     if flow <= 0.0 {
         return Err(refuse_with(
@@ -28,7 +33,7 @@ pub(super) fn throttle_flow(losses: &Losses, units: Units) -> Result<Option<f64>
             PlantFigure::native("throttle flow", Quantity::MassFlow, flow, Some(0.0), units),
         ));
     }
-    Ok(Some(flow))
+    Ok(flow)
 }
 
 /// A power loss per unit throttle flow (kJ/kg from kW over kg/s); a

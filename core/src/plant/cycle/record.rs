@@ -5,7 +5,7 @@
 
 use super::assembly::{Assembly, Totals};
 use super::at;
-use super::expansion::ExpansionLine;
+use super::expansion::{ExpansionLine, Group};
 use super::losses::SteamDestination;
 use super::result::{ComponentKind, PointRole, MAX_STREAMS};
 use super::side_streams::SideStreams;
@@ -101,19 +101,26 @@ impl SolvedCycle<'_> {
         work
     }
 
-    /// The throttle, each stage group (the reheater before the second
+    /// The throttle, the control valves when they throttle (a throttle,
+    /// recorded as extraction line 0), each stage group (the reheater before the second
     /// casing's first, leakages returning to a casing before its first)
     /// and each casing's exhaust; returns the turbine work.
     fn record_turbine(&self, out: &mut Assembly) -> Result<f64, Error> {
         out.point(PointRole::Throttle, 0, 1.0, &self.throttle);
+        if let Some(throttled) = &self.line.control_valves {
+            out.component(
+                ComponentKind::ExtractionLine,
+                0,
+                &[(1.0, &self.throttle)],
+                &[(1.0, throttled)],
+                0.0,
+                0.0,
+            );
+        }
         let groups = self.line.groups();
         let mut turbine_work = 0.0;
         for (g, group) in groups.iter().enumerate() {
-            let flow = 1.0
-                - self.flows.extracted_before(group.extractions_upstream)
-                - self
-                    .side
-                    .withdrawn_before(group.casing, group.extractions_upstream, false);
+            let flow = stage_group_flow(group, self.flows, self.side);
             if let Some((cold, hot)) = self.line.reheat {
                 if group.casing == 1 && (g == 0 || groups[g - 1].casing == 0) {
                     let reheated = self.reheat_flow();
@@ -273,6 +280,13 @@ impl SolvedCycle<'_> {
         );
         Ok((condensate_flow, condenser_duty))
     }
+}
+
+/// The steam through stage `group` per unit throttle flow: what the
+/// heaters above it and the side streams leaving before it leave.
+pub(super) fn stage_group_flow(group: &Group, flows: &TrainFlows, side: &SideStreams) -> f64 {
+    1.0 - flows.extracted_before(group.extractions_upstream)
+        - side.withdrawn_before(group.casing, group.extractions_upstream, false)
 }
 
 /// Mixes the `joining` side streams into `base` (flow, state), a heater's

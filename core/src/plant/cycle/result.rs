@@ -107,7 +107,9 @@ pub enum ComponentKind {
     /// A stage group of a turbine casing (numbered by casing; 0 is the
     /// feed pump's own turbine).
     StageGroup = 1,
-    /// An extraction line, a throttle (numbered by heater).
+    /// An extraction line, a throttle (numbered by heater); numbered 0,
+    /// the turbine's control valves throttling the throttle steam at
+    /// part load (off-design operation at a fixed throttle pressure).
     ExtractionLine = 2,
     /// A closed feedwater heater (numbered by heater).
     ClosedHeater = 3,

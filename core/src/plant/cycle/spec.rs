@@ -185,6 +185,16 @@ impl CycleSpec {
         &self.heaters[..self.heater_count]
     }
 
+    /// The casings, to move their exhaust pressures off design.
+    pub(super) fn casings_mut(&mut self) -> &mut [Casing] {
+        &mut self.casings[..self.casing_count]
+    }
+
+    /// The heaters, to move their extraction pressures off design.
+    pub(super) fn heaters_mut(&mut self) -> &mut [Heater] {
+        &mut self.heaters[..self.heater_count]
+    }
+
     /// The condenser pressure: the last casing's exhaust pressure.
     pub fn condenser_pressure(&self) -> Option<f64> {
         self.casings().last().map(|c| c.exhaust_pressure)

@@ -1,0 +1,104 @@
+//! The unit at a target net output instead of a throttle flow: the
+//! throttle flow is found by secant steps on the net output, each an
+//! off-design solve. The net output rises with the flow nearly in
+//! proportion (the auxiliaries' constant power aside), so the steps
+//! settle in a few.
+
+use super::off_design::{OffDesignModel, OperatingPoint, ThrottleControl};
+use super::result::CycleResult;
+use super::CONTROL_VALVES;
+use crate::plant::fault::{in_caller_units, refuse_with};
+use crate::plant::{native, PlantFigure, PlantPart};
+use crate::{Error, Quantity};
+
+/// Secant steps allowed. Measured: the demo unit of
+/// `plant_off_design.rs` needs at most 4 (after the solve at the design
+/// flow) from 30 % to 100 % of its output, either way of controlling
+/// the throttle: 20 leave room for a less proportional unit.
+const MAX_STEPS: usize = 20;
+/// A net output within this (relative) of its target meets it: above
+/// what the pressures' own tolerance (1e-11) leaves in the output.
+const OUTPUT_TOLERANCE: f64 = 1e-10;
+
+impl OffDesignModel {
+    /// The unit at the throttle flow whose net output (a power, in the
+    /// design's units) is `net_output`, its throttle controlled by
+    /// `control`, its condenser at `condenser_pressure` (`None`: the
+    /// design's): [`OffDesignModel::solve`]'s balance at that flow. At a
+    /// fixed throttle pressure an output above the valves' wide open one
+    /// (at the design flow) is refused (part "control valves"). Errors
+    /// in the design's units.
+    pub fn solve_for_output(
+        &self,
+        net_output: f64,
+        control: ThrottleControl,
+        condenser_pressure: Option<f64>,
+    ) -> Result<CycleResult, Error> {
+        let units = self.design().units;
+        self.output_native(net_output, control, condenser_pressure)
+            .map_err(|e| in_caller_units(e, units))
+    }
+
+    fn output_native(
+        &self,
+        net_output: f64,
+        control: ThrottleControl,
+        condenser_pressure: Option<f64>,
+    ) -> Result<CycleResult, Error> {
+        let units = self.design().units;
+        let target = native(Quantity::Power, net_output, units)?;
+        if target <= 0.0 {
+            return Err(refuse_with(
+                PlantPart::single("plant"),
+                "its target net output is not positive",
+                PlantFigure::native("net output", Quantity::Power, target, Some(0.0), units),
+            ));
+        }
+        let design_flow = self.design_flow();
+        // Net output (kW) and balance at `flow` kg/s.
+        let at = |flow: f64| -> Result<(f64, CycleResult), Error> {
+            let balance = self.solve(&OperatingPoint {
+                throttle_flow: units.from_native(Quantity::MassFlow, flow),
+                control,
+                condenser_pressure,
+            })?;
+            let per_unit = units.to_native(Quantity::Enthalpy, balance.output.net_output);
+            Ok((per_unit * flow, balance))
+        };
+        let (design_output, balance) = at(design_flow)?;
+        if (design_output - target).abs() <= OUTPUT_TOLERANCE * target {
+            return Ok(balance);
+        }
+        if control == ThrottleControl::FixedPressure && target > design_output {
+            return Err(refuse_with(
+                CONTROL_VALVES,
+                "wide open at the design throttle pressure they pass too little steam for this net output",
+                PlantFigure::native(
+                    "net output",
+                    Quantity::Power,
+                    target,
+                    Some(design_output),
+                    units,
+                ),
+            ));
+        }
+        let mut last = (design_flow, design_output - target);
+        let mut flow = design_flow * target / design_output;
+        for _ in 0..MAX_STEPS {
+            if control == ThrottleControl::FixedPressure {
+                flow = flow.min(design_flow);
+            }
+            let (output, balance) = at(flow)?;
+            let residual = output - target;
+            if residual.abs() <= OUTPUT_TOLERANCE * target {
+                return Ok(balance);
+            }
+            let next = flow - residual * (flow - last.0) / (residual - last.1);
+            last = (flow, residual);
+            flow = next;
+        }
+        Err(Error::NotConverged {
+            what: "throttle flow for the net output",
+        })
+    }
+}
