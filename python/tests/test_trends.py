@@ -81,6 +81,16 @@ def test_the_unit_table_names_the_cores_units_and_converts_consistently(system):
         assert unit == SYSTEM_UNITS[system][quantities[name.replace("_", " ")]], name
     assert result.main_steam_flow.unit == SYSTEM_UNITS[system]["mass flow"]
     assert result.heat_input.unit == SYSTEM_UNITS[system]["heat flow"]
+    assert result.heat_rate.unit == SYSTEM_UNITS[system]["heat rate"]
+    heater = measured.closed_heater_test(
+        *[float(convert(v, u, q, system)) for q, u, v in [
+            ("pressure", "bar", 40.0), ("temperature", "°C", 335.0),
+            ("temperature", "°C", 200.0), ("temperature", "°C", 248.0),
+            ("pressure", "bar", 190.0), ("temperature", "°C", 205.0),
+            ("mass flow", "kg/s", 480.0)]],
+        0.0, 0.0, 0.0, units=system)  # no cascade: exact zeros
+    assert heater.terminal_temperature_difference.unit == \
+        SYSTEM_UNITS[system]["temperature difference"]
     scale = 1.0 / 2.326 / 0.45359237 if system == "us" else 1.0  # kJ/kWh -> Btu/kWh
     assert result.heat_rate.value * (1.0 / scale) == pytest.approx(reference.heat_rate.value,
                                                                    rel=1e-12)

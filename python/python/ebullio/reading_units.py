@@ -40,19 +40,26 @@ UNITS: Dict[str, Dict[str, Tuple[float, float]]] = {
     "enthalpy": {"kJ/kg": (1.0, 0.0), "J/kg": (1e-3, 0.0), "Btu/lbm": (_BTU_PER_LBM, 0.0)},
     "length": {"m": (1.0, 0.0), "mm": (1e-3, 0.0), "in": (0.0254, 0.0)},
     "ratio": {"1": (1.0, 0.0)},
+    # Figures only (no map input has them): their units for labels.
+    "temperature difference": {"K": (1.0, 0.0), "°C": (1.0, 0.0), "°F": (1.0 / 1.8, 0.0)},
+    "heat rate": {"kJ/kWh": (1.0, 0.0), "Btu/kWh": (_BTU_KJ, 0.0)},
 }
 
 #: The unit of each quantity in each of the core's unit systems (the
 #: symbols the core prints; ``tests/test_trends.py`` holds them to it).
 SYSTEM_UNITS: Dict[str, Dict[str, str]] = {
     "native": {"pressure": "MPa", "temperature": "K", "mass flow": "kg/s", "power": "kW",
-               "heat flow": "kW", "enthalpy": "kJ/kg", "length": "m", "ratio": "1"},
+               "heat flow": "kW", "enthalpy": "kJ/kg", "length": "m", "ratio": "1",
+               "temperature difference": "K", "heat rate": "kJ/kWh"},
     "si": {"pressure": "Pa", "temperature": "K", "mass flow": "kg/s", "power": "W",
-           "heat flow": "W", "enthalpy": "J/kg", "length": "m", "ratio": "1"},
+           "heat flow": "W", "enthalpy": "J/kg", "length": "m", "ratio": "1",
+           "temperature difference": "K", "heat rate": "kJ/kWh"},
     "metric": {"pressure": "bar", "temperature": "°C", "mass flow": "kg/s", "power": "kW",
-               "heat flow": "kW", "enthalpy": "kJ/kg", "length": "mm", "ratio": "1"},
+               "heat flow": "kW", "enthalpy": "kJ/kg", "length": "mm", "ratio": "1",
+               "temperature difference": "°C", "heat rate": "kJ/kWh"},
     "us": {"pressure": "psia", "temperature": "°F", "mass flow": "lbm/h", "power": "kW",
-           "heat flow": "Btu/h", "enthalpy": "Btu/lbm", "length": "in", "ratio": "1"},
+           "heat flow": "Btu/h", "enthalpy": "Btu/lbm", "length": "in", "ratio": "1",
+           "temperature difference": "°F", "heat rate": "Btu/kWh"},
 }
 
 
