@@ -28,7 +28,7 @@ from . import measured
 from .measurement_map import Constant, MapError, MeasurementMap, Point, demo_map_path, load_map
 from .reading_units import convert, convert_difference
 
-__all__ = ["evaluate", "evaluate_columns", "calculation_inputs", "result_columns", "load_map",
+__all__ = ["evaluate", "evaluate_columns", "evaluate_partitions", "calculation_inputs", "result_columns", "load_map",
            "demo_map_path", "MapError"]
 
 _PARTS = ("standard_uncertainty", "expanded_uncertainty")
@@ -124,3 +124,15 @@ def evaluate(frame, plan, *, threads: Optional[int] = None):
     for column in plan.keep:
         found[column] = np.asarray(found[column])
     return pd.DataFrame(found, index=frame.index)
+
+
+def evaluate_partitions(parts, plan, *, threads: Optional[int] = 1):
+    """:func:`evaluate` over each partition of the ``dask.dataframe``
+    ``parts`` (lazy: ``.compute()`` it, or write it with ``.to_parquet``).
+    On a ``dask.distributed`` cluster each worker process evaluates its
+    partitions; the result is bitwise the local one. ``threads=1`` keeps
+    one core thread per Dask worker thread (None: every core per call)."""
+    if not isinstance(plan, MeasurementMap):
+        plan = load_map(str(plan))
+    meta = evaluate(parts._meta, plan, threads=threads)
+    return parts.map_partitions(evaluate, plan, threads=threads, meta=meta)
