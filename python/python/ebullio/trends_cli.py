@@ -59,8 +59,9 @@ def _parser() -> argparse.ArgumentParser:
     which.add_argument("--map", help="the unit's measurement map (TOML)")
     which.add_argument("--demo-map", action="store_true",
                        help="the shipped map of the demo unit (ebullio.demo_historian's tags)")
-    parser.add_argument("--batch-rows", type=int, default=200_000,
-                        help="rows per batch (default 200000): memory grows with it")
+    parser.add_argument("--batch-rows", type=int, default=50_000,
+                        help="rows per batch (default 50000): memory grows with it, "
+                             "about 2 kB a row for the demo map")
     parser.add_argument("--threads", type=int, default=None,
                         help="threads of the core (default: every core)")
     parser.add_argument("--progress", action=argparse.BooleanOptionalAction, default=None,
@@ -107,7 +108,9 @@ def open_input(path: str, plan, batch_rows: int) -> Tuple[Iterator, Optional[int
     numbers = [c for c in plan.columns if c not in plan.keep]
     try:
         if suffix == ".parquet":
-            source = pq.ParquetFile(path)
+            # pre_buffer=False: with it pyarrow keeps every row group read so
+            # far (memory grew with the file's length).
+            source = pq.ParquetFile(path, pre_buffer=False)
             schema = source.schema_arrow
             plan.check_columns(schema.names, path)
             for name in numbers:
