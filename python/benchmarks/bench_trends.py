@@ -18,8 +18,8 @@ Nothing is asserted; read the figures with the machine's load (printed).
 from __future__ import annotations
 
 import argparse
+import json
 import os
-import resource
 import shutil
 import subprocess
 import sys
@@ -44,6 +44,12 @@ def write_rows(path: str, rows: int) -> None:
             left -= part.num_rows
 
 
+def pq_rows(path: str) -> int:
+    import pyarrow.parquet as pq
+
+    return pq.ParquetFile(path).metadata.num_rows
+
+
 def two_calculation_map(folder: str) -> str:
     """The demo map with its HP section and top heater tests only."""
     from ebullio import trends
@@ -57,14 +63,17 @@ def two_calculation_map(folder: str) -> str:
 
 
 def run_tool(source: str, target: str, unit_map: str, batch_rows: int) -> tuple:
+    """Wall time and the tool's own peak memory (its summary's; a child's
+    rusage would count the memory of this process it was forked from)."""
     tool = shutil.which("ebullio-trends", path=os.path.dirname(sys.executable))
-    before = resource.getrusage(resource.RUSAGE_CHILDREN).ru_maxrss
+    summary = target + ".json"
     started = time.perf_counter()
     subprocess.run([tool, source, target, "--map", unit_map, "--batch-rows", str(batch_rows),
-                    "--no-progress"], check=True, stdout=subprocess.DEVNULL)
+                    "--no-progress", "--summary-json", summary], check=True,
+                   stdout=subprocess.DEVNULL)
     seconds = time.perf_counter() - started
-    peak = resource.getrusage(resource.RUSAGE_CHILDREN).ru_maxrss  # kB, the largest child yet
-    return seconds, peak, before
+    with open(summary, encoding="utf-8") as file:
+        return seconds, json.load(file)["peak_memory_mb"]
 
 
 def pandas_loop(source: str, unit_map: str, rows: int) -> float:
@@ -105,7 +114,9 @@ def main() -> None:
     folder = args.dir or tempfile.mkdtemp(prefix="bench_trends_")
     source = os.path.join(folder, "historian.parquet")
     started = time.perf_counter()
-    write_rows(source, args.rows)
+    if not (os.path.exists(source) and args.dir
+            and pq_rows(source) == args.rows):  # a kept --dir's file is reused
+        write_rows(source, args.rows)
     print(f"input: {args.rows:,} rows, {os.path.getsize(source) / 1e6:.0f} MB Parquet "
           f"(written in {time.perf_counter() - started:.0f} s)")
     cores = os.cpu_count() or 1
@@ -113,12 +124,11 @@ def main() -> None:
     maps = {"section + heater": two_calculation_map(folder),
             "whole demo map": trends.demo_map_path()}
     for label, unit_map in maps.items():
-        seconds, peak, before = run_tool(source, os.path.join(folder, "kpis.parquet"),
-                                         unit_map, args.batch_rows)
-        note = "" if peak > before else " (not above an earlier child's)"
+        seconds, peak = run_tool(source, os.path.join(folder, "kpis.parquet"), unit_map,
+                                 args.batch_rows)
         print(f"ebullio-trends, {label}: {seconds:.1f} s, {args.rows / seconds:,.0f} rows/s, "
               f"{args.rows / seconds / cores:,.0f} rows/s per core, peak memory "
-              f"{peak / 1024:.0f} MB{note}; load average after {os.getloadavg()}")
+              f"{peak:.0f} MB; load average after {os.getloadavg()}")
         loop = pandas_loop(source, unit_map, args.loop_rows)
         print(f"pandas loop of scalar calls, {label}: {loop:,.0f} rows/s "
               f"({args.rows / loop / 3600:.1f} h for the file)")

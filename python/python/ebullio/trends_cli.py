@@ -235,6 +235,7 @@ class Tally:
             "rows": self.rows,
             "seconds": seconds,
             "rows_per_second": self.rows / seconds if seconds > 0 else None,
+            "peak_memory_mb": _peak_memory_mb(),
             "calculations": {
                 name: {
                     "calculation": c.function,
@@ -246,10 +247,21 @@ class Tally:
         }
 
 
+def _peak_memory_mb() -> Optional[float]:
+    """This process's peak resident memory, MB (None where unknown)."""
+    try:
+        import resource
+    except ImportError:  # not on Windows
+        return None
+    peak = resource.getrusage(resource.RUSAGE_SELF).ru_maxrss
+    return peak / 1024.0 if sys.platform != "darwin" else peak / 2**20  # kB; bytes on macOS
+
+
 def summary_text(summary: dict, source: str, target: str) -> str:
-    rate = summary["rows_per_second"]
+    rate, peak = summary["rows_per_second"], summary["peak_memory_mb"]
     lines = [f"{PROGRAM}: {summary['rows']} rows from {source} to {target} in "
-             f"{summary['seconds']:.2f} s" + (f" ({rate:,.0f} rows/s)" if rate else "")]
+             f"{summary['seconds']:.2f} s" + (f" ({rate:,.0f} rows/s)" if rate else "")
+             + (f", peak memory {peak:.0f} MB" if peak else "")]
     for name, c in summary["calculations"].items():
         lines.append(f"  {name} ({c['calculation']}): {c['computed']} rows computed")
         lines += [f"    {n} rows refused: {status}" for status, n in c["status"].items()]
