@@ -290,6 +290,12 @@ def test_an_output_error_exits_5(sample, tmp_path):
         assert done.returncode == trends_cli.EXIT_OUTPUT == 5, done.stderr
         assert "Traceback" not in done.stderr
     assert len(read(paths["parquet"])) == 4 * 1440  # the input not overwritten
+    # A summary that cannot be written fails the run before the output lands.
+    output = tmp_path / "kpis.parquet"
+    done = run(paths["parquet"], output, "--demo-map", "--summary-json",
+               tmp_path / "no" / "summary.json")
+    assert done.returncode == 5 and not output.exists()
+    assert [f for f in os.listdir(tmp_path) if f.endswith(".partial")] == []
 
 
 def test_an_interruption_exits_130_and_leaves_nothing(sample, tmp_path, monkeypatch):

@@ -5,6 +5,7 @@ point, in which unit and with which instrument uncertainty, and which
 The map is a TOML file (read by the standard ``tomllib``, ``tomli`` before
 Python 3.11)::
 
+    title = "Unit 3"            # free text (optional)
     units = "metric"            # the core's unit system the results come out in
     coverage_factor = 2.0       # k of the expanded uncertainties (default 2)
     keep = ["timestamp"]        # columns copied through to the results

@@ -317,6 +317,14 @@ def run(args) -> int:
             bar.update(batch.num_rows)
         if schema is None:
             raise BadInput(f"{args.input}: no data rows")
+        bar.close()
+        summary = tally.summary(time.perf_counter() - started)
+        if args.summary_json:
+            try:
+                with open(args.summary_json, "w", encoding="utf-8") as file:
+                    json.dump(summary, file, indent=1)
+            except OSError as error:
+                raise OutputError(f"{args.summary_json}: {error}") from None
         writer.commit()
     except KeyboardInterrupt:
         writer.discard()
@@ -333,15 +341,7 @@ def run(args) -> int:
     except BaseException:
         writer.discard()
         raise
-    bar.close()
-    summary = tally.summary(time.perf_counter() - started)
     print(summary_text(summary, args.input, args.output))
-    if args.summary_json:
-        try:
-            with open(args.summary_json, "w", encoding="utf-8") as file:
-                json.dump(summary, file, indent=1)
-        except OSError as error:
-            return _fail(f"{args.summary_json}: {error}", EXIT_OUTPUT)
     return EXIT_OK
 
 
