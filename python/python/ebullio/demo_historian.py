@@ -15,7 +15,10 @@ outage with the unit off.
     python -m ebullio.demo_historian --days 1 --out sample.csv
 
 The format follows the file's suffix (.csv or .parquet). The same seed and
-length give the same file.
+length give the same file: python/examples/tallowmere_unit3_sample.csv is
+its first six hours (``--days 0.25``), committed; the year is generated on
+demand. ``ebullio-trends --demo-map`` reads it through the unit's map
+(``ebullio/demo_unit_map.toml``).
 """
 
 from __future__ import annotations
