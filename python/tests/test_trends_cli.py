@@ -123,6 +123,17 @@ def test_the_batch_size_changes_nothing(sample, parquet_run, tmp_path):
     assert_same(read(out), parquet_run[0])
 
 
+def test_values_only_gives_the_same_values_without_the_uncertainties(sample, parquet_run,
+                                                                   tmp_path):
+    _, paths = sample
+    out = str(tmp_path / "values.parquet")
+    assert run(paths["parquet"], out, "--demo-map", "--values-only").returncode == 0
+    values = read(out)
+    assert list(values.columns) == trends.result_columns(PLAN, values_only=True)
+    assert not any("uncertainty" in column for column in values.columns)
+    assert_same(values, parquet_run[0][values.columns])
+
+
 def test_rows_of_the_output_are_the_scalar_calls(sample, parquet_run):
     frame, _ = sample
     found, _, _ = parquet_run

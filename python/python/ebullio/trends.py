@@ -73,19 +73,21 @@ def calculation_inputs(calculation, columns: Mapping[str, Any], rows: int,
     return values, uncertainty
 
 
-def result_columns(plan: MeasurementMap) -> List[str]:
-    """The names of the result columns, in order."""
+def result_columns(plan: MeasurementMap, values_only: bool = False) -> List[str]:
+    """The names of the result columns, in order (``values_only``: without
+    the uncertainty columns)."""
     names: List[str] = []
+    parts = () if values_only else _PARTS
     for name, calculation in plan.calculations.items():
         for figure in calculation.figures:
             names.append(f"{name}.{figure}")
-            names += [f"{name}.{figure}.{part}" for part in _PARTS]
+            names += [f"{name}.{figure}.{part}" for part in parts]
         names += [f"{name}.flags", f"{name}.status"]
     return names + list(plan.keep)
 
 
 def evaluate_columns(columns: Mapping[str, Any], rows: int, plan: MeasurementMap,
-                     threads: Optional[int] = None) -> Dict[str, Any]:
+                     threads: Optional[int] = None, values_only: bool = False) -> Dict[str, Any]:
     """:func:`evaluate` on columns by name (numpy, pandas or pyarrow), as a
     dict of numpy columns (the kept columns as given)."""
     out: Dict[str, Any] = {}
@@ -93,11 +95,11 @@ def evaluate_columns(columns: Mapping[str, Any], rows: int, plan: MeasurementMap
         values, uncertainty = calculation_inputs(calculation, columns, rows, plan.units)
         function = getattr(measured, calculation.function)
         found = function(**values, **calculation.settings, units=plan.units,
-                         uncertainty=uncertainty, coverage_factor=plan.coverage_factor,
-                         threads=threads)
+                         uncertainty=None if values_only else uncertainty,
+                         coverage_factor=plan.coverage_factor, threads=threads)
         for figure in calculation.figures:
             out[f"{name}.{figure}"] = found[figure]
-            for part in _PARTS:
+            for part in () if values_only else _PARTS:
                 out[f"{name}.{figure}.{part}"] = found[f"{figure}_{part}"]
         out[f"{name}.flags"] = found["flags"]
         out[f"{name}.status"] = found["status"]
@@ -106,10 +108,11 @@ def evaluate_columns(columns: Mapping[str, Any], rows: int, plan: MeasurementMap
     return out
 
 
-def evaluate(frame, plan, *, threads: Optional[int] = None):
+def evaluate(frame, plan, *, threads: Optional[int] = None, values_only: bool = False):
     """Every calculation of ``plan`` (a :class:`MeasurementMap` or the path
     of one) over the pandas DataFrame ``frame``: a DataFrame with
-    :func:`result_columns`, indexed like ``frame``. A kept column that is
+    :func:`result_columns`, indexed like ``frame``. ``values_only`` leaves
+    the uncertainties out (the same values, the same bits, sooner). A kept column that is
     ``frame``'s index (a timestamp index) is taken from it. A column the
     map names but ``frame`` lacks is a :class:`MapError` at its line."""
     import pandas as pd
@@ -120,13 +123,13 @@ def evaluate(frame, plan, *, threads: Optional[int] = None):
     if frame.index.name is not None and frame.index.name not in columns:
         columns[frame.index.name] = pd.Series(frame.index, index=frame.index)
     plan.check_columns(list(columns), "the DataFrame")
-    found = evaluate_columns(columns, len(frame), plan, threads)
+    found = evaluate_columns(columns, len(frame), plan, threads, values_only)
     for column in plan.keep:
         found[column] = np.asarray(found[column])
     return pd.DataFrame(found, index=frame.index)
 
 
-def evaluate_partitions(parts, plan, *, threads: Optional[int] = 1):
+def evaluate_partitions(parts, plan, *, threads: Optional[int] = 1, values_only: bool = False):
     """:func:`evaluate` over each partition of the ``dask.dataframe``
     ``parts`` (lazy: ``.compute()`` it, or write it with ``.to_parquet``).
     On a ``dask.distributed`` cluster each worker process evaluates its
@@ -134,5 +137,6 @@ def evaluate_partitions(parts, plan, *, threads: Optional[int] = 1):
     one core thread per Dask worker thread (None: every core per call)."""
     if not isinstance(plan, MeasurementMap):
         plan = load_map(str(plan))
-    meta = evaluate(parts._meta, plan, threads=threads)
-    return parts.map_partitions(evaluate, plan, threads=threads, meta=meta)
+    meta = evaluate(parts._meta, plan, threads=threads, values_only=values_only)
+    return parts.map_partitions(evaluate, plan, threads=threads, values_only=values_only,
+                                meta=meta)

@@ -66,6 +66,8 @@ def _parser() -> argparse.ArgumentParser:
                         help="threads of the core (default: every core)")
     parser.add_argument("--progress", action=argparse.BooleanOptionalAction, default=None,
                         help="progress bar on stderr (default: when stderr is a terminal)")
+    parser.add_argument("--values-only", action="store_true",
+                        help="leave the uncertainty columns out (the same values, sooner)")
     parser.add_argument("--summary-json", metavar="PATH",
                         help="also write the summary as JSON to PATH")
     return parser
@@ -178,7 +180,7 @@ class Writer:
             os.unlink(self.partial)
 
 
-def result_schema(plan, input_schema):
+def result_schema(plan, input_schema, values_only: bool = False):
     """The output's columns: figures float64, flags uint32, status uint16,
     the kept columns as the input has them."""
     import pyarrow as pa
@@ -186,7 +188,7 @@ def result_schema(plan, input_schema):
     from .trends import result_columns
 
     fields = []
-    for name in result_columns(plan):
+    for name in result_columns(plan, values_only):
         if name in plan.keep:
             fields.append(pa.field(name, input_schema.field(name).type))
         elif name.endswith(".flags"):
@@ -306,9 +308,10 @@ def run(args) -> int:
             if batch is None:
                 break
             if schema is None:
-                schema = result_schema(plan, batch.schema)
+                schema = result_schema(plan, batch.schema, args.values_only)
             columns = {name: batch.column(name) for name in plan.columns}
-            found = evaluate_columns(columns, batch.num_rows, plan, args.threads)
+            found = evaluate_columns(columns, batch.num_rows, plan, args.threads,
+                                     args.values_only)
             tally.add(found, batch.num_rows)
             writer.write(pa.RecordBatch.from_arrays(
                 [_arrow(found[f.name], f.type) for f in schema], schema=schema))
