@@ -352,3 +352,14 @@ def test_the_committed_sample_runs_through_the_console_script(tmp_path):
     out_of_range = (kpis["hp_section.flags"] & int(measured.Flags.EFFICIENCY_OUT_OF_RANGE)) != 0
     assert computed.sum() > 300
     assert inside[computed & ~out_of_range].all() and not inside[out_of_range].any()
+
+
+def test_a_reader_that_leaves_early_is_no_error(sample, tmp_path):
+    # `ebullio-trends ... | head -1`: the summary's reader closes the pipe.
+    _, paths = sample
+    child = subprocess.Popen([tool(), paths["parquet"], str(tmp_path / "k.parquet"),
+                              "--demo-map"], stdout=subprocess.PIPE, stderr=subprocess.PIPE)
+    child.stdout.close()
+    errors = child.stderr.read().decode()
+    assert child.wait(timeout=300) == 0 and "Traceback" not in errors
+    assert len(read(str(tmp_path / "k.parquet"))) == 4 * 1440

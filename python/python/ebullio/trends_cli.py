@@ -344,7 +344,10 @@ def run(args) -> int:
     except BaseException:
         writer.discard()
         raise
-    print(summary_text(summary, args.input, args.output))
+    try:
+        print(summary_text(summary, args.input, args.output), flush=True)
+    except BrokenPipeError:  # the reader of stdout left (| head): the output is written
+        os.dup2(os.open(os.devnull, os.O_WRONLY), sys.stdout.fileno())
     return EXIT_OK
 
 
