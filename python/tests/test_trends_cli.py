@@ -360,6 +360,7 @@ def test_a_reader_that_leaves_early_is_no_error(sample, tmp_path):
     child = subprocess.Popen([tool(), paths["parquet"], str(tmp_path / "k.parquet"),
                               "--demo-map"], stdout=subprocess.PIPE, stderr=subprocess.PIPE)
     child.stdout.close()
-    errors = child.stderr.read().decode()
+    with child.stderr:
+        errors = child.stderr.read().decode()
     assert child.wait(timeout=300) == 0 and "Traceback" not in errors
     assert len(read(str(tmp_path / "k.parquet"))) == 4 * 1440
