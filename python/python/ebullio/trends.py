@@ -25,11 +25,11 @@ from typing import Any, Dict, List, Mapping, Optional
 import numpy as np
 
 from . import measured
-from .measurement_map import Constant, MapError, MeasurementMap, Point, demo_map_path, load_map
+from .measurement_map import Constant, MapError, MeasurementMap, demo_map_path, load_map
 from .reading_units import convert, convert_difference
 
-__all__ = ["evaluate", "evaluate_columns", "evaluate_partitions", "calculation_inputs", "result_columns", "load_map",
-           "demo_map_path", "MapError"]
+__all__ = ["evaluate", "evaluate_columns", "evaluate_partitions", "calculation_inputs",
+           "result_columns", "load_map", "demo_map_path", "MapError"]
 
 _PARTS = ("standard_uncertainty", "expanded_uncertainty")
 
