@@ -20,7 +20,8 @@ if [ ! -x "$venv/bin/python" ]; then
   "${PYTHON:-python3}" -m venv "$venv"
 fi
 py="$venv/bin/python"
-"$py" -m pip install --quiet --disable-pip-version-check numpy pandas pytest "dask[dataframe,distributed]" matplotlib
+"$py" -m pip install --quiet --disable-pip-version-check numpy pandas pytest "dask[dataframe,distributed]" matplotlib \
+  pyarrow tqdm "tomli; python_version < '3.11'"
 if ! "$py" -m maturin --version >/dev/null 2>&1; then
   "$py" -m pip install --quiet --disable-pip-version-check "maturin>=1.9.4,<2"
 fi

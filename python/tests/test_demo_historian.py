@@ -40,3 +40,14 @@ def test_the_hp_exhaust_follows_an_expansion_at_a_plausible_efficiency():
 
 def test_a_bad_suffix_is_refused(tmp_path):
     assert demo_historian.main(["--days", "0.01", "--out", str(tmp_path / "x.txt")]) == 1
+
+
+def test_the_committed_sample_is_what_the_generator_writes(tmp_path):
+    # python/examples/tallowmere_unit3_sample.csv: the first six hours, as
+    # `python -m ebullio.demo_historian --days 0.25 --out ...` writes them.
+    from pathlib import Path
+
+    committed = Path(__file__).resolve().parents[1] / "examples" / "tallowmere_unit3_sample.csv"
+    written = tmp_path / "sample.csv"
+    assert demo_historian.main(["--days", "0.25", "--out", str(written)]) == 0
+    assert written.read_bytes() == committed.read_bytes()

@@ -15,7 +15,10 @@ outage with the unit off.
     python -m ebullio.demo_historian --days 1 --out sample.csv
 
 The format follows the file's suffix (.csv or .parquet). The same seed and
-length give the same file.
+length give the same file: python/examples/tallowmere_unit3_sample.csv is
+its first six hours (``--days 0.25``), committed; the year is generated on
+demand. ``ebullio-trends --demo-map`` reads it through the unit's map
+(``ebullio/demo_unit_map.toml``).
 """
 
 from __future__ import annotations
@@ -49,6 +52,8 @@ TAGS: Dict[str, str] = {
     "U3.CW.FLOW": "kg/s, cooling water flow",
     "U3.CW.IN.T": "°C, cooling water inlet temperature",
     "U3.CW.OUT.T": "°C, cooling water outlet temperature",
+    "U3.CRH.FLOW": "kg/s, cold reheat flow: the control system's calculated tag (main "
+    "steam flow less the HP leakages and the top heater's extraction)",
 }
 
 #: The demo unit's design point (DESIGN.md): main steam 167 bar / 538 °C,
@@ -62,6 +67,8 @@ STEAM_TEMPERATURE = 538.0  # °C
 #: (deposits), and the top heater's TTD grows by this much (fouling).
 HP_EFFICIENCY_LOSS = 0.025
 TTD_START, TTD_GROWTH = -1.0, 4.0  # K
+#: Cold reheat flow over main steam flow, the calculated tag's constant.
+COLD_REHEAT_SHARE = 0.895
 #: The week the unit is off (days from the start of the year).
 OUTAGE_DAYS = (200, 207)
 #: The cold reheat thermocouple sticks for these days.
@@ -167,6 +174,9 @@ def generate(days: float = 365.0, seed: int = 3) -> "pandas.DataFrame":  # noqa:
     _stick(columns, minutes)
     _spikes(columns, rng)
     _dropouts(columns, rng)
+    # A calculated tag inherits the faults of the readings it is made from.
+    main_steam_flow = columns["U3.FW.FLOW"] + columns["U3.SHSPRAY.FLOW"]
+    columns["U3.CRH.FLOW"] = COLD_REHEAT_SHARE * main_steam_flow
     index = pd.date_range("2026-01-01", periods=n, freq="min", name="timestamp")
     return pd.DataFrame(columns, index=index)
 
