@@ -11,60 +11,13 @@
 use ebullio::plant::{
     solve_cycle, Casing, Component, ComponentKind, Curve, CycleResult, CycleSpec, Drains,
     ExhaustLoss, FeedPumpTurbine, Generator, Heater, HeaterApproach, HeaterKind, Leak, LeakSource,
-    Makeup, PointRole, Reheat, SteamDestination, Supply, WaterLoss, ENTROPY_ALLOWANCE, MAX_LEAKS,
+    Makeup, PointRole, SteamDestination, Supply, WaterLoss, ENTROPY_ALLOWANCE, MAX_LEAKS,
 };
 use ebullio::{Error, Quantity, State, Units};
 
-/// The demo unit in `units` (given in MPa, K), without losses.
+/// The demo unit in `units`, without losses.
 fn unit(units: Units) -> CycleSpec {
-    let p = |mpa| units.from_native(Quantity::Pressure, mpa);
-    let t = |k| units.from_native(Quantity::Temperature, k);
-    let dt = |k| units.from_native(Quantity::TemperatureDifference, k);
-    let mut spec = CycleSpec::new(
-        units,
-        Supply::Superheated {
-            pressure: p(16.7),
-            temperature: t(811.15),
-        },
-    );
-    spec.reheat = Some(Reheat {
-        pressure: p(3.7),
-        temperature: t(811.15),
-    });
-    spec.feed_pressure = Some(p(19.0));
-    spec.feed_pump_efficiency = 0.83;
-    spec.condensate_pump_efficiency = 0.78;
-    for (exhaust, eta) in [(4.1, 0.86), (0.9, 0.90), (0.0068, 0.88)] {
-        spec.push_casing(Casing {
-            exhaust_pressure: p(exhaust),
-            isentropic_efficiency: eta,
-        })
-        .unwrap();
-    }
-    let closed = |drains| HeaterKind::Closed {
-        approach: HeaterApproach {
-            terminal_temperature_difference: dt(2.8),
-            drain_cooler_approach: Some(dt(5.6)),
-        },
-        drains,
-    };
-    for (pressure, kind) in [
-        (6.0, closed(Drains::CascadeBackward)),
-        (4.1, closed(Drains::CascadeBackward)),
-        (1.9, closed(Drains::CascadeBackward)),
-        (0.9, HeaterKind::Open),
-        (0.4, closed(Drains::PumpForward)),
-        (0.15, closed(Drains::CascadeBackward)),
-        (0.06, closed(Drains::CascadeBackward)),
-    ] {
-        spec.push_heater(Heater {
-            extraction_pressure: p(pressure),
-            extraction_line_loss: 0.03,
-            kind,
-        })
-        .unwrap();
-    }
-    spec
+    ebullio_conformance::demo_unit::lossless(units, 1.9)
 }
 
 /// Invented for the demo (not machine data): exhaust loss in kJ/kg

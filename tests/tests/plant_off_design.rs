@@ -13,10 +13,10 @@
 //! loss curve invented too: inputs, never compared with.
 
 use ebullio::plant::{
-    solve_cycle, Casing, Component, ComponentKind, Curve, CycleResult, CycleSpec, Drains,
-    ExhaustLoss, FeedPumpTurbine, Generator, Heater, HeaterApproach, HeaterKind, Leak, LeakSource,
-    Makeup, OffDesignModel, OperatingPoint, PointRole, Reheat, SteamDestination, Supply,
-    ThrottleControl, WaterLoss, ENTROPY_ALLOWANCE, MAX_LOAD_POINTS,
+    solve_cycle, Casing, Component, ComponentKind, Curve, CycleResult, CycleSpec, ExhaustLoss,
+    FeedPumpTurbine, Generator, Leak, LeakSource, Makeup, OffDesignModel, OperatingPoint,
+    PointRole, SteamDestination, Supply, ThrottleControl, WaterLoss, ENTROPY_ALLOWANCE,
+    MAX_LOAD_POINTS,
 };
 use ebullio::{Error, Quantity, State, Units};
 
@@ -31,54 +31,8 @@ fn unit(units: Units) -> CycleSpec {
 
 /// The demo unit with its third heater extracting at `mpa`.
 fn unit_with_heater_3_at(units: Units, mpa: f64) -> CycleSpec {
-    let p = |mpa| units.from_native(Quantity::Pressure, mpa);
-    let t = |k| units.from_native(Quantity::Temperature, k);
-    let dt = |k| units.from_native(Quantity::TemperatureDifference, k);
     let power = |kw| units.from_native(Quantity::Power, kw);
-    let mut spec = CycleSpec::new(
-        units,
-        Supply::Superheated {
-            pressure: p(16.7),
-            temperature: t(811.15),
-        },
-    );
-    spec.reheat = Some(Reheat {
-        pressure: p(3.7),
-        temperature: t(811.15),
-    });
-    spec.feed_pressure = Some(p(19.0));
-    spec.feed_pump_efficiency = 0.83;
-    spec.condensate_pump_efficiency = 0.78;
-    for (exhaust, eta) in [(4.1, 0.86), (0.9, 0.90), (0.0068, 0.88)] {
-        spec.push_casing(Casing {
-            exhaust_pressure: p(exhaust),
-            isentropic_efficiency: eta,
-        })
-        .unwrap();
-    }
-    let closed = |drains| HeaterKind::Closed {
-        approach: HeaterApproach {
-            terminal_temperature_difference: dt(2.8),
-            drain_cooler_approach: Some(dt(5.6)),
-        },
-        drains,
-    };
-    for (pressure, kind) in [
-        (6.0, closed(Drains::CascadeBackward)),
-        (4.1, closed(Drains::CascadeBackward)),
-        (mpa, closed(Drains::CascadeBackward)),
-        (0.9, HeaterKind::Open),
-        (0.4, closed(Drains::PumpForward)),
-        (0.15, closed(Drains::CascadeBackward)),
-        (0.06, closed(Drains::CascadeBackward)),
-    ] {
-        spec.push_heater(Heater {
-            extraction_pressure: p(pressure),
-            extraction_line_loss: 0.03,
-            kind,
-        })
-        .unwrap();
-    }
+    let mut spec = ebullio_conformance::demo_unit::lossless(units, mpa);
     spec.losses.throttle_flow = Some(units.from_native(Quantity::MassFlow, DESIGN_FLOW));
     spec.losses.generator = Some(Generator::Constant { efficiency: 0.987 });
     spec.losses.mechanical_losses = power(1800.0);
