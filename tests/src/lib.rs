@@ -2,6 +2,7 @@
 //! the IAPWS releases to the digits they print; the random-input
 //! campaign's inputs and oracles.
 
+pub mod balances;
 pub mod demo_unit;
 pub mod monte_carlo;
 pub mod oracles;

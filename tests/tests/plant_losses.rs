@@ -9,11 +9,12 @@
 //! is invented too. Their numbers are inputs, never compared with.
 
 use ebullio::plant::{
-    solve_cycle, Casing, Component, ComponentKind, Curve, CycleResult, CycleSpec, Drains,
-    ExhaustLoss, FeedPumpTurbine, Generator, Heater, HeaterApproach, HeaterKind, Leak, LeakSource,
-    Makeup, PointRole, SteamDestination, Supply, WaterLoss, ENTROPY_ALLOWANCE, MAX_LEAKS,
+    solve_cycle, Casing, ComponentKind, Curve, CycleResult, CycleSpec, Drains, ExhaustLoss,
+    FeedPumpTurbine, Generator, Heater, HeaterApproach, HeaterKind, Leak, LeakSource, Makeup,
+    PointRole, SteamDestination, Supply, WaterLoss, MAX_LEAKS,
 };
 use ebullio::{Error, Quantity, State, Units};
+use ebullio_conformance::balances::check_components;
 
 /// The demo unit in `units`, without losses.
 fn unit(units: Units) -> CycleSpec {
@@ -64,41 +65,6 @@ fn unit_with_losses(units: Units) -> CycleSpec {
         curve: exhaust_curve(units),
     });
     spec
-}
-
-fn energy_in(c: &Component) -> f64 {
-    c.inlets().iter().map(|s| s.flow * s.enthalpy).sum::<f64>() + c.heat_in
-}
-
-fn energy_out(c: &Component) -> f64 {
-    c.outlets().iter().map(|s| s.flow * s.enthalpy).sum::<f64>() + c.work_out
-}
-
-/// First law per component to 1e-9 (mass to 1e-12 of the throttle
-/// flow), second law per component within the plant layer's allowance.
-fn check_components(r: &CycleResult) {
-    for c in r.components() {
-        let (e_in, e_out) = (energy_in(c), energy_out(c));
-        let name = format!("{} {}", c.kind.name(), c.number);
-        assert!(
-            (e_in - e_out).abs() <= 1e-9 * e_in.abs().max(e_out.abs()),
-            "{name}: energy in {e_in}, out {e_out}"
-        );
-        let m_in: f64 = c.inlets().iter().map(|s| s.flow).sum();
-        let m_out: f64 = c.outlets().iter().map(|s| s.flow).sum();
-        assert!((m_in - m_out).abs() <= 1e-12, "{name}: mass {m_in} {m_out}");
-        let throughput: f64 = c
-            .inlets()
-            .iter()
-            .chain(c.outlets())
-            .map(|s| (s.flow * s.entropy).abs())
-            .sum();
-        assert!(
-            c.entropy_generation >= -ENTROPY_ALLOWANCE * throughput,
-            "{name}: entropy generation {}",
-            c.entropy_generation
-        );
-    }
 }
 
 /// A power of `r` per unit throttle flow, in its specific energy unit:

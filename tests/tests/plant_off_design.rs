@@ -13,12 +13,12 @@
 //! loss curve invented too: inputs, never compared with.
 
 use ebullio::plant::{
-    solve_cycle, Casing, Component, ComponentKind, Curve, CycleResult, CycleSpec, ExhaustLoss,
+    solve_cycle, Casing, ComponentKind, Curve, CycleResult, CycleSpec, ExhaustLoss,
     FeedPumpTurbine, Generator, Leak, LeakSource, Makeup, OffDesignModel, OperatingPoint,
-    PointRole, SteamDestination, Supply, ThrottleControl, WaterLoss, ENTROPY_ALLOWANCE,
-    MAX_LOAD_POINTS,
+    PointRole, SteamDestination, Supply, ThrottleControl, WaterLoss, MAX_LOAD_POINTS,
 };
 use ebullio::{Error, Quantity, State, Units};
+use ebullio_conformance::balances::check_components;
 
 /// The design throttle flow, kg/s (invented).
 const DESIGN_FLOW: f64 = 520.0;
@@ -120,14 +120,6 @@ fn cone(g: &GroupEnds) -> f64 {
     ((g.p_in * g.p_in - g.p_out * g.p_out) / (g.p_in * g.v_in)).sqrt()
 }
 
-fn energy_in(c: &Component) -> f64 {
-    c.inlets().iter().map(|s| s.flow * s.enthalpy).sum::<f64>() + c.heat_in
-}
-
-fn energy_out(c: &Component) -> f64 {
-    c.outlets().iter().map(|s| s.flow * s.enthalpy).sum::<f64>() + c.work_out
-}
-
 /// A power of `r` per unit throttle flow, in its specific energy unit:
 /// kW / (kg/s) = kJ/kg, through each unit's own factor.
 fn per_unit_flow(r: &CycleResult, power: f64) -> f64 {
@@ -145,28 +137,7 @@ fn per_unit_flow(r: &CycleResult, power: f64) -> f64 {
 /// makeup's enthalpy leave as net output, condenser heat, the losses and
 /// the water the makeup replaces (blowdown).
 fn check_balances(r: &CycleResult, spec: &CycleSpec) {
-    for c in r.components() {
-        let (e_in, e_out) = (energy_in(c), energy_out(c));
-        let name = format!("{} {}", c.kind.name(), c.number);
-        assert!(
-            (e_in - e_out).abs() <= 1e-9 * e_in.abs().max(e_out.abs()),
-            "{name}: energy in {e_in}, out {e_out}"
-        );
-        let m_in: f64 = c.inlets().iter().map(|s| s.flow).sum();
-        let m_out: f64 = c.outlets().iter().map(|s| s.flow).sum();
-        assert!((m_in - m_out).abs() <= 1e-12, "{name}: mass {m_in} {m_out}");
-        let throughput: f64 = c
-            .inlets()
-            .iter()
-            .chain(c.outlets())
-            .map(|s| (s.flow * s.entropy).abs())
-            .sum();
-        assert!(
-            c.entropy_generation >= -ENTROPY_ALLOWANCE * throughput,
-            "{name}: entropy generation {}",
-            c.entropy_generation
-        );
-    }
+    check_components(r);
     let (makeup_in, lost_out) = match spec.losses.makeup {
         None => (0.0, 0.0),
         Some(makeup) => {
