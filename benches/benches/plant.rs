@@ -11,8 +11,8 @@ use std::time::Duration;
 
 use criterion::{criterion_group, criterion_main, Criterion};
 use ebullio::plant::{
-    compress, expand, section_efficiency, solve_cycle, Drains, OffDesignModel, OperatingPoint,
-    ThrottleControl,
+    compress, expand, section_efficiency, solve_cycle, CondenserCondition, Drains, OffDesignModel,
+    OperatingPoint, ThrottleControl, ALL_IN_SERVICE,
 };
 use ebullio::{Saturation, State, Units};
 use ebullio_benches::cycles;
@@ -44,7 +44,8 @@ fn plant(c: &mut Criterion) {
     let point = OperatingPoint {
         throttle_flow: 350.0,
         control: ThrottleControl::SlidingPressure,
-        condenser_pressure: None,
+        condenser: CondenserCondition::Design,
+        out_of_service: ALL_IN_SERVICE,
     };
     group.bench_function("seven_heaters_with_losses_at_70_percent", |b| {
         b.iter(|| {
@@ -58,8 +59,7 @@ fn plant(c: &mut Criterion) {
             model
                 .load_curve(
                     black_box(&cycles::LOAD_CURVE_FLOWS),
-                    ThrottleControl::SlidingPressure,
-                    None,
+                    &OperatingPoint::new(0.0, ThrottleControl::SlidingPressure),
                 )
                 .map(|curve| curve.rows().len())
         })

@@ -144,7 +144,7 @@ pub fn plain_rankine() -> CycleSpec {
 
 #[cfg(test)]
 mod tests {
-    use ebullio::plant::{solve_cycle, Drains, OffDesignModel, ThrottleControl};
+    use ebullio::plant::{solve_cycle, Drains, OffDesignModel, OperatingPoint, ThrottleControl};
 
     /// A bench of a refusal would time the wrong thing.
     #[test]
@@ -169,7 +169,7 @@ mod tests {
             ThrottleControl::SlidingPressure,
         ] {
             let curve = model
-                .load_curve(&super::LOAD_CURVE_FLOWS, control, None)
+                .load_curve(&super::LOAD_CURVE_FLOWS, &OperatingPoint::new(0.0, control))
                 .unwrap();
             for (row, flow) in curve.rows().iter().zip(super::LOAD_CURVE_FLOWS) {
                 assert!(row.is_ok(), "{control:?} at {flow} kg/s: {row:?}");

@@ -356,7 +356,8 @@ fn exercise_plant() -> f64 {
         let point = OperatingPoint {
             throttle_flow: 400.0,
             control,
-            condenser_pressure: None,
+            condenser: CondenserCondition::Design,
+            out_of_service: ALL_IN_SERVICE,
         };
         match model.solve(&point) {
             Ok(r) => sum += r.output.net_heat_rate,
@@ -365,7 +366,10 @@ fn exercise_plant() -> f64 {
     }
     sum += model.design().heaters().len() as f64;
     let flows = [500.0, 350.0, 200.0];
-    match model.load_curve(&flows, ThrottleControl::SlidingPressure, None) {
+    match model.load_curve(
+        &flows,
+        &OperatingPoint::new(0.0, ThrottleControl::SlidingPressure),
+    ) {
         Ok(curve) => {
             for row in curve.rows() {
                 sum += row.map_or(0.0, |row| row.output.net_heat_rate + row.throttle_pressure);
@@ -373,7 +377,10 @@ fn exercise_plant() -> f64 {
         }
         Err(e) => panic!("a load curve of three flows is taken: {e}"),
     }
-    match model.solve_for_output(300_000.0, ThrottleControl::FixedPressure, None) {
+    match model.solve_for_output(
+        300_000.0,
+        &OperatingPoint::new(0.0, ThrottleControl::FixedPressure),
+    ) {
         Ok(r) => sum += r.output.net_heat_rate,
         Err(e) => panic!("the plant solves at a net output: {e}"),
     }

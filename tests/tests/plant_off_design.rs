@@ -13,9 +13,10 @@
 //! loss curve invented too: inputs, never compared with.
 
 use ebullio::plant::{
-    solve_cycle, Casing, ComponentKind, Curve, CycleResult, CycleSpec, ExhaustLoss,
-    FeedPumpTurbine, Generator, Leak, LeakSource, Makeup, OffDesignModel, OperatingPoint,
-    PointRole, SteamDestination, Supply, ThrottleControl, WaterLoss, MAX_LOAD_POINTS,
+    solve_cycle, Casing, ComponentKind, CondenserCondition, Curve, CycleResult, CycleSpec,
+    ExhaustLoss, FeedPumpTurbine, Generator, Leak, LeakSource, Makeup, OffDesignModel,
+    OperatingPoint, PointRole, SteamDestination, Supply, ThrottleControl, WaterLoss,
+    ALL_IN_SERVICE, MAX_LOAD_POINTS,
 };
 use ebullio::{Error, Quantity, State, Units};
 use ebullio_conformance::balances::check_components;
@@ -67,7 +68,8 @@ fn at(units: Units, fraction: f64, control: ThrottleControl) -> OperatingPoint {
     OperatingPoint {
         throttle_flow: units.from_native(Quantity::MassFlow, fraction * DESIGN_FLOW),
         control,
-        condenser_pressure: None,
+        condenser: CondenserCondition::Design,
+        out_of_service: ALL_IN_SERVICE,
     }
 }
 
@@ -248,7 +250,8 @@ fn a_warmer_condenser_moves_the_last_group_and_costs_heat_rate() {
         let cool = model.solve(&at(units, 0.8, control)).unwrap();
         let warm = model
             .solve(&OperatingPoint {
-                condenser_pressure: Some(0.1),
+                condenser: CondenserCondition::Pressure(0.1),
+                out_of_service: ALL_IN_SERVICE,
                 ..at(units, 0.8, control)
             })
             .unwrap();
@@ -347,7 +350,8 @@ fn a_single_group_on_saturated_steam() {
         let point = OperatingPoint {
             throttle_flow: 60.0,
             control,
-            condenser_pressure: None,
+            condenser: CondenserCondition::Design,
+            out_of_service: ALL_IN_SERVICE,
         };
         let r = model.solve(&point).unwrap();
         check_balances(&r, model.design());
@@ -522,7 +526,9 @@ fn heat_rate_rises_as_the_load_falls() {
     let model = OffDesignModel::calibrate(&unit(units)).unwrap();
     let flows = LOADS.map(|load| load * DESIGN_FLOW);
     for control in CONTROLS {
-        let curve = model.load_curve(&flows, control, None).unwrap();
+        let curve = model
+            .load_curve(&flows, &OperatingPoint::new(0.0, control))
+            .unwrap();
         let rates: Vec<f64> = curve
             .rows()
             .iter()
@@ -543,7 +549,9 @@ fn a_load_curve_row_is_the_balance_at_its_flow() {
     let flow = |load| units.from_native(Quantity::MassFlow, load * DESIGN_FLOW);
     let control = ThrottleControl::FixedPressure;
     let flows = [flow(1.05), flow(1.0), flow(0.45)];
-    let curve = model.load_curve(&flows, control, None).unwrap();
+    let curve = model
+        .load_curve(&flows, &OperatingPoint::new(0.0, control))
+        .unwrap();
     assert_eq!(curve.rows().len(), 3);
     assert!(matches!(
         curve.rows()[0],
@@ -555,7 +563,8 @@ fn a_load_curve_row_is_the_balance_at_its_flow() {
             .solve(&OperatingPoint {
                 throttle_flow,
                 control,
-                condenser_pressure: None,
+                condenser: CondenserCondition::Design,
+                out_of_service: ALL_IN_SERVICE,
             })
             .unwrap();
         assert_eq!(row.output, r.output);
@@ -565,10 +574,15 @@ fn a_load_curve_row_is_the_balance_at_its_flow() {
         assert_eq!(row.output.power.unwrap().throttle_flow, throttle_flow);
     }
     let too_many = [flow(1.0); MAX_LOAD_POINTS + 1];
-    assert!(model.load_curve(&too_many, control, None).is_err());
+    assert!(model
+        .load_curve(&too_many, &OperatingPoint::new(0.0, control))
+        .is_err());
     assert_eq!(
         model
-            .load_curve(&too_many[..MAX_LOAD_POINTS], control, None)
+            .load_curve(
+                &too_many[..MAX_LOAD_POINTS],
+                &OperatingPoint::new(0.0, control)
+            )
             .unwrap()
             .rows()
             .len(),
@@ -593,7 +607,9 @@ fn a_target_net_output_finds_its_throttle_flow() {
         let model = OffDesignModel::calibrate(&spec).unwrap();
         let full = net_power(&design);
         for control in CONTROLS {
-            let r = model.solve_for_output(full, control, None).unwrap();
+            let r = model
+                .solve_for_output(full, &OperatingPoint::new(0.0, control))
+                .unwrap();
             let flow = |r: &CycleResult| r.output.power.unwrap().throttle_flow;
             assert!(relative(flow(&r), flow(&design)) <= 1e-9);
             for ((name, a), (_, b)) in r.figures().iter().zip(design.figures()) {
@@ -603,10 +619,16 @@ fn a_target_net_output_finds_its_throttle_flow() {
         for share in [0.8, 0.5, 0.3] {
             let target = share * full;
             let fixed = model
-                .solve_for_output(target, ThrottleControl::FixedPressure, None)
+                .solve_for_output(
+                    target,
+                    &OperatingPoint::new(0.0, ThrottleControl::FixedPressure),
+                )
                 .unwrap();
             let sliding = model
-                .solve_for_output(target, ThrottleControl::SlidingPressure, None)
+                .solve_for_output(
+                    target,
+                    &OperatingPoint::new(0.0, ThrottleControl::SlidingPressure),
+                )
                 .unwrap();
             for r in [&fixed, &sliding] {
                 check_balances(r, model.design());
@@ -620,14 +642,17 @@ fn a_target_net_output_finds_its_throttle_flow() {
         }
         // Wide-open valves at the design pressure give the design output
         // and no more; no output is no operating point.
-        let above = model.solve_for_output(1.02 * full, ThrottleControl::FixedPressure, None);
+        let above = model.solve_for_output(
+            1.02 * full,
+            &OperatingPoint::new(0.0, ThrottleControl::FixedPressure),
+        );
         assert!(matches!(
             above,
             Err(Error::InvalidPlant { part, .. }) if part.name == "control valves"
         ));
         for target in [0.0, -full] {
             assert!(matches!(
-                model.solve_for_output(target, ThrottleControl::SlidingPressure, None),
+                model.solve_for_output(target, &OperatingPoint::new(0.0, ThrottleControl::SlidingPressure)),
                 Err(Error::InvalidPlant { part, .. }) if part.name == "plant"
             ));
         }

@@ -31,6 +31,10 @@ pub use cycle::losses::{
     WaterLoss, MAX_LEAKS,
 };
 pub use cycle::off_design::{OffDesignModel, OperatingPoint, ThrottleControl};
+pub use cycle::off_design_options::{
+    CondenserCondition, CoolingWater, HeaterTransfer, HeatersOutOfService, OffDesignOptions,
+    ALL_IN_SERVICE,
+};
 pub use cycle::result::{
     Component, ComponentKind, CycleResult, PlantOutput, PlantPower, PointLabel, PointRole,
     StatePoint, Stream, FIGURE_COUNT, MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,

@@ -5,7 +5,7 @@
 //! refusal in its row, the others are still solved. The full balance at
 //! any row's flow is one `solve` away.
 
-use super::off_design::{OffDesignModel, OperatingPoint, ThrottleControl};
+use super::off_design::{OffDesignModel, OperatingPoint};
 use super::result::{CycleResult, PlantOutput};
 use crate::plant::fault::refuse;
 use crate::plant::PlantPart;
@@ -54,15 +54,11 @@ impl LoadCurve {
 
 impl OffDesignModel {
     /// The unit at each of `flows` (throttle steam mass flows, in the
-    /// design's units), its throttle `control`led one way throughout and
-    /// its condenser at `condenser_pressure` (`None`: the design's).
-    /// Refused when there are more than [`MAX_LOAD_POINTS`] flows.
-    pub fn load_curve(
-        &self,
-        flows: &[f64],
-        control: ThrottleControl,
-        condenser_pressure: Option<f64>,
-    ) -> Result<LoadCurve, Error> {
+    /// design's units), every other condition (throttle control,
+    /// condenser, heaters out of service) as in `like`, whose own flow
+    /// is not used. Refused when there are more than [`MAX_LOAD_POINTS`]
+    /// flows.
+    pub fn load_curve(&self, flows: &[f64], like: &OperatingPoint) -> Result<LoadCurve, Error> {
         if flows.len() > MAX_LOAD_POINTS {
             return Err(refuse(
                 PlantPart::single("load curve"),
@@ -76,11 +72,7 @@ impl OffDesignModel {
         };
         for (row, &throttle_flow) in curve.rows.iter_mut().zip(flows) {
             *row = self
-                .solve(&OperatingPoint {
-                    throttle_flow,
-                    control,
-                    condenser_pressure,
-                })
+                .solve(&like.at_flow(throttle_flow))
                 .map(|balance| LoadPoint::of(&balance));
         }
         Ok(curve)

@@ -34,6 +34,7 @@ mod limits;
 pub(super) mod load_curve;
 pub(super) mod losses;
 pub(super) mod off_design;
+pub(super) mod off_design_options;
 mod output;
 mod record;
 pub(super) mod result;

@@ -17,6 +17,9 @@
 use super::cone_law::{GroupOperation, StageGroups};
 use super::expansion::MAX_GROUPS;
 use super::losses::Losses;
+use super::off_design_options::{
+    CondenserCondition, HeatersOutOfService, OffDesignOptions, ALL_IN_SERVICE,
+};
 use super::output::{positive_throttle_flow, throttle_flow};
 use super::result::CycleResult;
 use super::spec::{CycleSpec, Supply, MAX_HEATERS};
@@ -46,8 +49,31 @@ pub struct OperatingPoint {
     pub throttle_flow: f64,
     /// How the throttle pressure follows the flow.
     pub control: ThrottleControl,
-    /// The condenser pressure; `None` for the design's.
-    pub condenser_pressure: Option<f64>,
+    /// The condenser's pressure, or the cooling water that sets it.
+    pub condenser: CondenserCondition,
+    /// The heaters taken out of service.
+    pub out_of_service: HeatersOutOfService,
+}
+
+impl OperatingPoint {
+    /// `throttle_flow` with the throttle `control`led one way, the
+    /// condenser at its design pressure and every heater in service.
+    pub fn new(throttle_flow: f64, control: ThrottleControl) -> OperatingPoint {
+        OperatingPoint {
+            throttle_flow,
+            control,
+            condenser: CondenserCondition::Design,
+            out_of_service: ALL_IN_SERVICE,
+        }
+    }
+
+    /// The same conditions at another throttle flow.
+    pub fn at_flow(&self, throttle_flow: f64) -> OperatingPoint {
+        OperatingPoint {
+            throttle_flow,
+            ..*self
+        }
+    }
 }
 
 /// Where a heater's extraction point lies on the line: at a stage
@@ -71,6 +97,8 @@ pub struct OffDesignModel {
     flow_coefficients: [f64; MAX_GROUPS],
     /// Each heater's extraction point.
     stations: [Station; MAX_HEATERS],
+    /// What the model knows beyond the design balance.
+    options: OffDesignOptions,
 }
 
 /// Passes of the pressures and the balance allowed. The pressures move
@@ -91,10 +119,28 @@ impl OffDesignModel {
     /// √((p_in² − p_out²)/(p_in·v_in)) there. Errors are the design
     /// solve's, in `design.units`.
     pub fn calibrate(design: &CycleSpec) -> Result<OffDesignModel, Error> {
-        Self::calibrate_native(design).map_err(|e| in_caller_units(e, design.units))
+        Self::calibrate_with(design, &OffDesignOptions::NONE)
     }
 
-    fn calibrate_native(design: &CycleSpec) -> Result<OffDesignModel, Error> {
+    /// As [`OffDesignModel::calibrate`], with what the model knows beyond
+    /// the design balance (`options`, in `design.units`).
+    pub fn calibrate_with(
+        design: &CycleSpec,
+        options: &OffDesignOptions,
+    ) -> Result<OffDesignModel, Error> {
+        Self::calibrate_native(design, options).map_err(|e| in_caller_units(e, design.units))
+    }
+
+    fn calibrate_native(
+        design: &CycleSpec,
+        options: &OffDesignOptions,
+    ) -> Result<OffDesignModel, Error> {
+        if options.efficiency_correction.is_some()
+            || options.design_cooling_water.is_some()
+            || options.heater_transfer.is_some()
+        {
+            return Err(refuse(MODEL, "its options are not supported yet"));
+        }
         let Some(design_flow) = throttle_flow(&design.losses, design.units)? else {
             return Err(refuse(
                 MODEL,
@@ -124,6 +170,7 @@ impl OffDesignModel {
             at_design,
             flow_coefficients,
             stations,
+            options: *options,
         })
     }
 
@@ -155,9 +202,23 @@ impl OffDesignModel {
         let flow = positive_throttle_flow(point.throttle_flow, units)?;
         let mut losses = self.design.losses;
         losses.throttle_flow = Some(point.throttle_flow);
-        let condenser = match point.condenser_pressure {
-            Some(p) => native(Quantity::Pressure, p, units)?,
-            None => self.at_design.groups()[self.at_design.groups().len() - 1].outlet_pressure,
+        if point.out_of_service != ALL_IN_SERVICE {
+            return Err(refuse(
+                MODEL,
+                "taking heaters out of service is not supported yet",
+            ));
+        }
+        let condenser = match point.condenser {
+            CondenserCondition::Pressure(p) => native(Quantity::Pressure, p, units)?,
+            CondenserCondition::Design => {
+                self.at_design.groups()[self.at_design.groups().len() - 1].outlet_pressure
+            }
+            CondenserCondition::CoolingWater(_) => {
+                return Err(refuse(
+                    MODEL,
+                    "a condenser by its cooling water is not supported yet",
+                ))
+            }
         };
         // The first pressures from the design's flows and p·v, scaled to
         // the throttle flow.

@@ -22,30 +22,25 @@ const OUTPUT_TOLERANCE: f64 = 1e-10;
 
 impl OffDesignModel {
     /// The unit at the throttle flow whose net output (a power, in the
-    /// design's units) is `net_output`, its throttle controlled by
-    /// `control`, its condenser at `condenser_pressure` (`None`: the
-    /// design's): [`OffDesignModel::solve`]'s balance at that flow. At a
+    /// design's units) is `net_output`, every other condition as in
+    /// `like` (whose own flow is not used): [`OffDesignModel::solve`]'s
+    /// balance at that flow. At a
     /// fixed throttle pressure an output above the valves' wide open one
     /// (at the design flow) is refused (part "control valves"). Errors
     /// in the design's units.
     pub fn solve_for_output(
         &self,
         net_output: f64,
-        control: ThrottleControl,
-        condenser_pressure: Option<f64>,
+        like: &OperatingPoint,
     ) -> Result<CycleResult, Error> {
         let units = self.design().units;
-        self.output_native(net_output, control, condenser_pressure)
+        self.output_native(net_output, like)
             .map_err(|e| in_caller_units(e, units))
     }
 
-    fn output_native(
-        &self,
-        net_output: f64,
-        control: ThrottleControl,
-        condenser_pressure: Option<f64>,
-    ) -> Result<CycleResult, Error> {
+    fn output_native(&self, net_output: f64, like: &OperatingPoint) -> Result<CycleResult, Error> {
         let units = self.design().units;
+        let control = like.control;
         let target = native(Quantity::Power, net_output, units)?;
         if target <= 0.0 {
             return Err(refuse_with(
@@ -57,11 +52,7 @@ impl OffDesignModel {
         let design_flow = self.design_flow();
         // Net output (kW) and balance at `flow` kg/s.
         let at = |flow: f64| -> Result<(f64, CycleResult), Error> {
-            let balance = self.solve(&OperatingPoint {
-                throttle_flow: units.from_native(Quantity::MassFlow, flow),
-                control,
-                condenser_pressure,
-            })?;
+            let balance = self.solve(&like.at_flow(units.from_native(Quantity::MassFlow, flow)))?;
             let per_unit = units.to_native(Quantity::Enthalpy, balance.output.net_output);
             Ok((per_unit * flow, balance))
         };

@@ -1,0 +1,70 @@
+//! What an off-design model takes from the machine beyond the design
+//! balance, and what an operating point may change besides the flow:
+//! the section efficiencies' correction against volume flow, the
+//! condenser's and the closed heaters' heat transfer, the condenser's
+//! condition and heaters taken out of service.
+
+use super::curve::Curve;
+use super::spec::MAX_HEATERS;
+
+/// The condenser's cooling water, in the cycle's units.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct CoolingWater {
+    /// Cooling water temperature at the condenser inlet.
+    pub inlet_temperature: f64,
+    /// Cooling water mass flow.
+    pub flow: f64,
+}
+
+/// How the closed heaters transfer heat off design.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct HeaterTransfer {
+    /// Each zone's UA scales with its flow to this power (relative to
+    /// the design flow).
+    pub ua_flow_exponent: f64,
+}
+
+/// What an off-design model knows beyond the design balance; each part
+/// optional, [`OffDesignOptions::NONE`] for none.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct OffDesignOptions {
+    /// Each section's isentropic efficiency, as a factor on its design
+    /// efficiency, against the ratio of its volume flow to design.
+    /// `None`: the design efficiency at every flow.
+    pub efficiency_correction: Option<Curve>,
+    /// The condenser's cooling water at the design balance, which fixes
+    /// its UA so that an operating point may give the cooling water
+    /// instead of the pressure. `None`: only pressures.
+    pub design_cooling_water: Option<CoolingWater>,
+    /// Closed heaters by their design UA per zone, so that TTD and DCA
+    /// result. `None`: each keeps its design TTD and DCA.
+    pub heater_transfer: Option<HeaterTransfer>,
+}
+
+impl OffDesignOptions {
+    /// Nothing beyond the design balance.
+    pub const NONE: OffDesignOptions = OffDesignOptions {
+        efficiency_correction: None,
+        design_cooling_water: None,
+        heater_transfer: None,
+    };
+}
+
+/// The condenser at an operating point.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub enum CondenserCondition {
+    /// The design condenser pressure.
+    Design,
+    /// This pressure.
+    Pressure(f64),
+    /// The pressure the condenser's design UA gives with this cooling
+    /// water (needs [`OffDesignOptions::design_cooling_water`]).
+    CoolingWater(CoolingWater),
+}
+
+/// Which heaters are out of service, by index in
+/// [`CycleSpec::heaters`](super::spec::CycleSpec::heaters).
+pub type HeatersOutOfService = [bool; MAX_HEATERS];
+
+/// Every heater in service.
+pub const ALL_IN_SERVICE: HeatersOutOfService = [false; MAX_HEATERS];
