@@ -37,7 +37,8 @@ pub use cycle::off_design_options::{
 };
 pub use cycle::result::{
     Component, ComponentKind, CycleResult, PlantOutput, PlantPower, PointLabel, PointRole,
-    StatePoint, Stream, FIGURE_COUNT, MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS,
+    StatePoint, Stream, FIGURE_COUNT, MAX_COMPONENTS, MAX_POINTS, MAX_STREAMS, OUTPUT_FIGURE_COUNT,
+    POWER_FIGURE_COUNT,
 };
 pub use cycle::solve_cycle;
 pub use cycle::spec::{

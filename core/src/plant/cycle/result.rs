@@ -24,6 +24,10 @@ pub const MAX_STREAMS: usize = 3;
 
 /// How many figures [`CycleResult::figures`] gives.
 pub const FIGURE_COUNT: usize = 14;
+/// How many figures [`PlantOutput::figures`] gives (its powers aside).
+pub const OUTPUT_FIGURE_COUNT: usize = 11;
+/// How many figures [`PlantPower::figures`] gives.
+pub const POWER_FIGURE_COUNT: usize = 10;
 
 /// What a state point is.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -204,22 +208,19 @@ impl Component {
     }
 }
 
-/// [`CycleResult::FIGURE_NAMES`] and [`CycleResult::figures`] from the one
-/// list of the figures' fields, so that a name is its field's by
-/// construction.
+/// `FIGURE_NAMES` and `figures()` of a result struct from the one list of
+/// its figures' fields, so that a name is its field's by construction.
 macro_rules! figures {
-    ($($field:ident),* $(,)?) => {
-        /// The names of the cycle's figures, from turbine work to the
-        /// Carnot efficiency, in the order tables show them: their fields'
-        /// names. The one list of them: the bindings take their names and
-        /// order from it (Python's result and `ebullio.plant.TOTALS`) or
-        /// are tested against it (the C result's block of figures, whose
-        /// fields stand in this order).
-        pub const FIGURE_NAMES: [&'static str; FIGURE_COUNT] = [$(stringify!($field)),*];
+    ($count:ident; $($field:ident),* $(,)?) => {
+        /// The names of the figures, in the order tables show them: their
+        /// fields' names. The one list of them: the bindings take their
+        /// names and order from it (Python's results, `ebullio.plant.TOTALS`)
+        /// or are tested against it (the C result's blocks of figures,
+        /// whose fields stand in this order).
+        pub const FIGURE_NAMES: [&'static str; $count] = [$(stringify!($field)),*];
 
-        /// The cycle's figures by name, in the order of
-        /// [`CycleResult::FIGURE_NAMES`].
-        pub fn figures(&self) -> [(&'static str, f64); FIGURE_COUNT] {
+        /// The figures by name, in the order of `FIGURE_NAMES`.
+        pub fn figures(&self) -> [(&'static str, f64); $count] {
             [$((stringify!($field), self.$field)),*]
         }
     };
@@ -340,6 +341,39 @@ pub struct PlantPower {
     pub net_output: f64,
 }
 
+impl PlantOutput {
+    figures! {
+        OUTPUT_FIGURE_COUNT;
+        shaft_work,
+        generator_efficiency,
+        gross_output,
+        motor_pump_work,
+        net_output,
+        net_efficiency,
+        gross_heat_rate,
+        net_heat_rate,
+        expansion_line_end,
+        exhaust_loss,
+        annulus_velocity,
+    }
+}
+
+impl PlantPower {
+    figures! {
+        POWER_FIGURE_COUNT;
+        throttle_flow,
+        heat_input,
+        condenser_duty,
+        shaft_power,
+        mechanical_losses,
+        generator_losses,
+        gross_output,
+        motor_pump_power,
+        auxiliary_power,
+        net_output,
+    }
+}
+
 impl CycleResult {
     /// The state points, in flow order.
     pub fn points(&self) -> &[StatePoint] {
@@ -358,6 +392,7 @@ impl CycleResult {
     }
 
     figures! {
+        FIGURE_COUNT;
         turbine_work,
         pump_work,
         net_work,
