@@ -22,7 +22,9 @@ mod errors;
 mod inputs;
 mod measured;
 mod names;
+mod off_design;
 mod plant;
+mod plant_losses;
 mod saturation;
 mod state;
 

@@ -9,7 +9,7 @@
 
 use ebullio::plant::{
     self, Casing, Component, CycleResult, CycleSpec, Drains, Heater, HeaterApproach, HeaterKind,
-    Reheat, StatePoint, Stream, Supply,
+    Losses, PlantOutput, PlantPower, Reheat, StatePoint, Stream, Supply,
 };
 use ebullio::{Error, InputPair, Method, Property, Region, Request, State, Units};
 use pyo3::exceptions::PyValueError;
@@ -18,6 +18,7 @@ use pyo3::types::{PyDict, PyList};
 
 use crate::errors::to_py;
 use crate::names;
+use crate::plant_losses::{describe_losses, LossesArgs};
 use crate::state::{Origin, PyState};
 
 /// A heater as `plant.py` passes it: (kind, extraction pressure, line
@@ -37,14 +38,15 @@ pub(crate) struct Description {
     condensate_subcooling: f64,
     casings: Vec<(f64, f64)>,
     heaters: Vec<HeaterArgs>,
+    losses: Option<LossesArgs>,
 }
 
-fn core_error(py: Python<'_>, e: Error) -> PyErr {
+pub(crate) fn core_error(py: Python<'_>, e: Error) -> PyErr {
     to_py(py, &e, None)
 }
 
 impl Description {
-    fn spec(&self, py: Python<'_>) -> PyResult<CycleSpec> {
+    pub(crate) fn spec(&self, py: Python<'_>) -> PyResult<CycleSpec> {
         let units = names::unit_system(self.units.bind(py))?;
         let supply = match self.supply {
             (pressure, Some(temperature)) => Supply::Superheated {
@@ -62,6 +64,9 @@ impl Description {
         spec.feed_pump_efficiency = self.feed_pump_efficiency;
         spec.condensate_pump_efficiency = self.condensate_pump_efficiency;
         spec.condensate_subcooling = self.condensate_subcooling;
+        if let Some(losses) = &self.losses {
+            spec.losses = losses.losses(py)?;
+        }
         for &(exhaust_pressure, isentropic_efficiency) in &self.casings {
             spec.push_casing(Casing {
                 exhaust_pressure,
@@ -160,6 +165,14 @@ fn describe<'py>(py: Python<'py>, spec: &CycleSpec) -> PyResult<Bound<'py, PyDic
         })
         .collect();
     d.set_item("heaters", heaters)?;
+    if spec.losses == Losses::NONE {
+        d.set_item("losses", py.None())?;
+    } else {
+        d.set_item(
+            "losses",
+            describe_losses(py, &spec.losses, spec.heaters().len())?,
+        )?;
+    }
     Ok(d)
 }
 
@@ -214,13 +227,26 @@ fn component<'py>(py: Python<'py>, c: &Component) -> PyResult<Bound<'py, PyDict>
     Ok(d)
 }
 
-fn result<'py>(py: Python<'py>, r: &CycleResult) -> PyResult<Bound<'py, PyDict>> {
+fn figures<'py>(py: Python<'py>, named: &[(&str, f64)]) -> PyResult<Bound<'py, PyDict>> {
+    let d = PyDict::new(py);
+    for &(name, value) in named {
+        d.set_item(name, value)?;
+    }
+    Ok(d)
+}
+
+pub(crate) fn result<'py>(py: Python<'py>, r: &CycleResult) -> PyResult<Bound<'py, PyDict>> {
     let d = PyDict::new(py);
     d.set_item("units", names::units_name(r.units))?;
     for (name, value) in r.figures() {
         d.set_item(name, value)?;
     }
     d.set_item("extraction_fractions", r.extraction_fractions().to_vec())?;
+    d.set_item("output", figures(py, &r.output.figures())?)?;
+    match &r.output.power {
+        Some(power) => d.set_item("power", figures(py, &power.figures())?)?,
+        None => d.set_item("power", py.None())?,
+    }
     let points: PyResult<Vec<_>> = r.points().iter().map(|p| point(py, p)).collect();
     d.set_item("points", points?)?;
     let components: PyResult<Vec<_>> = r.components().iter().map(|c| component(py, c)).collect();
@@ -533,6 +559,8 @@ pub(crate) fn register(m: &Bound<'_, PyModule>) -> PyResult<()> {
     let p = PyModule::new(m.py(), "_plant")?;
     // The cycle's figures' names in the core's order: `plant.TOTALS`.
     p.add("FIGURES", CycleResult::FIGURE_NAMES.to_vec())?;
+    p.add("OUTPUT_FIGURES", PlantOutput::FIGURE_NAMES.to_vec())?;
+    p.add("POWER_FIGURES", PlantPower::FIGURE_NAMES.to_vec())?;
     p.add_function(wrap_pyfunction!(solve_cycle, &p)?)?;
     p.add_function(wrap_pyfunction!(ideal_cycle, &p)?)?;
     p.add_function(wrap_pyfunction!(expand, &p)?)?;
@@ -546,5 +574,6 @@ pub(crate) fn register(m: &Bound<'_, PyModule>) -> PyResult<()> {
     p.add_function(wrap_pyfunction!(throttle, &p)?)?;
     p.add_function(wrap_pyfunction!(heat_duty, &p)?)?;
     p.add_function(wrap_pyfunction!(condensate, &p)?)?;
+    crate::off_design::register(&p)?;
     m.add_submodule(&p)
 }

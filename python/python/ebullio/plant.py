@@ -39,6 +39,7 @@ from . import _frames
 from ._enums import Phase, Units
 from ._native import State, units_required
 from ._native import _plant as _core
+from .plant_losses import Losses, _losses_from
 
 __all__ = [
     "Cycle",
@@ -157,7 +158,9 @@ class Cycle:
     pressure; ``feed_pump_efficiency``: the pump that discharges to the
     boiler; ``condensate_pump_efficiency``: every other pump (condensate,
     booster, drain pumps); ``condensate_subcooling``: below the condenser
-    saturation temperature, a temperature difference.
+    saturation temperature, a temperature difference; ``losses``: a
+    ``plant_losses.Losses`` (generator, exhaust loss, leakages, ...) or
+    ``None`` for the textbook cycle.
     """
 
     supply: Supply
@@ -169,6 +172,7 @@ class Cycle:
     feed_pump_efficiency: float = 1.0
     condensate_pump_efficiency: float = 1.0
     condensate_subcooling: float = 0.0
+    losses: Optional[Losses] = None
 
     def __post_init__(self) -> None:
         object.__setattr__(self, "casings", tuple(self.casings))
@@ -186,6 +190,7 @@ class Cycle:
             "condensate_subcooling": self.condensate_subcooling,
             "casings": [(c.exhaust_p, c.efficiency) for c in self.casings],
             "heaters": [h._native() for h in self.heaters],
+            "losses": None if self.losses is None else self.losses._native(),
         }
 
     def solve(self) -> "CycleResult":
@@ -219,6 +224,7 @@ def _from_native(d: Dict[str, Any]) -> Cycle:
         feed_pump_efficiency=d["feed_pump_efficiency"],
         condensate_pump_efficiency=d["condensate_pump_efficiency"],
         condensate_subcooling=d["condensate_subcooling"],
+        losses=_losses_from(d["losses"]),
     )
 
 
@@ -232,6 +238,10 @@ def solve(cycle: Cycle) -> "CycleResult":
 #: The cycle totals, in the order tables show them: the core's figures
 #: (``CycleResult::FIGURE_NAMES``), their names and order taken from it.
 TOTALS = tuple(_core.FIGURES)
+#: The plant's output figures (``CycleResult.output``), the core's names and order.
+OUTPUT = tuple(_core.OUTPUT_FIGURES)
+#: The plant's powers (``CycleResult.power``), the core's names and order.
+POWER = tuple(_core.POWER_FIGURES)
 
 
 class CycleResult:
@@ -263,6 +273,14 @@ class CycleResult:
             dict(p, phase=Phase(p["phase"])) for p in native["points"]
         ]
         self.components: List[Dict[str, Any]] = native["components"]
+        #: What the plant delivers, per unit mass of throttle steam (the
+        #: core's ``PlantOutput``, names in ``OUTPUT``): shaft work, gross
+        #: and net output, gross and net heat rate (kJ/kWh, Btu/kWh in US
+        #: units), the exhaust loss and annulus velocity.
+        self.output: Dict[str, float] = native["output"]
+        #: The same as powers and heat flows (names in ``POWER``) when the
+        #: cycle gives its throttle flow, else ``None``.
+        self.power: Optional[Dict[str, float]] = native["power"]
 
     def totals(self) -> Dict[str, float]:
         """The totals as a dict, in the order of ``TOTALS``."""
