@@ -89,9 +89,12 @@ def test_the_package_readme_runs(reader):
 
 def test_the_top_readme_runs(reader):
     blocks = python_blocks(top_python_section())
-    assert len(blocks) == 2
+    assert len(blocks) == 3
     run(blocks, reader)
     assert (Path.cwd() / "cycle.png").stat().st_size > 10_000
+    assert (Path.cwd() / "load_curve.png").stat().st_size > 10_000
+    assert round(reader["balance"].output["net_heat_rate"]) == 9695
+    assert round(reader["balance"].power["net_output"]) == 101074
     assert (Path.cwd() / "expansion.png").stat().st_size > 10_000
     batch = reader["batch"]
     assert list(batch.to_frame()["status"].astype(str)) == ["ok", "ok", "not finite"]
