@@ -22,6 +22,8 @@ mod spec;
 
 #[cfg(test)]
 mod abi_tests;
+#[cfg(test)]
+mod off_design_abi_tests;
 
 pub use components::{
     ebullio_pump_compression, ebullio_section_efficiency, ebullio_turbine_expansion,
