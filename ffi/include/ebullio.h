@@ -1607,6 +1607,12 @@ EbullioStatus ebullio_derivatives_array(const uint32_t *variables,
 // is not a finite number (a point's quality, NaN off the saturation line,
 // aside): status 0 comes only with finite figures.
 //
+// The losses' codes and counts (a generator kind, a leak's source or
+// destination, the leaks' or a curve's count) are refused the same way;
+// a curve the core cannot read is `EBULLIO_STATUS_INVALID_PLANT`. A
+// caller whose `spec->size` ends before the losses gets the cycle without
+// them, and one whose `out->size` ends before `output` does not get it.
+//
 // # Safety
 // `spec` must point to a readable `EbullioCycleSpec` of at least the
 // `size` it declares; `out` to a writable `EbullioCycleResult` of at
