@@ -9,7 +9,7 @@ use core::ptr;
 
 use ebullio::plant::{
     CondenserCondition, CoolingWater, Curve, HeaterTransfer, OffDesignModel, OffDesignOptions,
-    OperatingPoint, ThrottleControl, ALL_IN_SERVICE, MAX_HEATERS,
+    OperatingPoint, ThrottleControl, MAX_HEATERS,
 };
 use ebullio::Units;
 
@@ -212,7 +212,6 @@ fn everything() -> (
         inlet_temperature: 26.0,
         flow: 14_000.0,
     });
-    point.out_of_service = ALL_IN_SERVICE;
     point.out_of_service[2] = true;
     (c, options, p, point)
 }
