@@ -9,12 +9,155 @@
 //! per component heat in, work out, entropy generation and its inlet then
 //! outlet streams (flow, h, s each).
 //!
-//! `cargo run --release -p ebullio-ffi --example plant_reference`
+//! With the argument `off-design`, the same plant with every loss
+//! (`with_losses`) instead, for `test_plant.c` alone: the design's plant
+//! output (the 21 numbers of `EbullioPlantOutput`, in its order: `output`
+//! below), the unit at 80 % of its flow with sliding pressure (the 14
+//! totals, then its output), a load curve at a fixed throttle pressure at
+//! 40, 60, 80, 100 and 110 % of the flow (per solved row, the throttle
+//! pressure, the thermal efficiency and its output; the 110 % row is
+//! refused), and the unit at 75 % of its design net output (the 14
+//! totals, then its output).
+//!
+//! `cargo run --release -p ebullio-ffi --example plant_reference [off-design]`
 
 use ebullio::plant::{
-    solve_cycle, Casing, CycleSpec, Drains, Heater, HeaterApproach, HeaterKind, Reheat, Supply,
+    solve_cycle, Casing, Curve, CycleResult, CycleSpec, Drains, ExhaustLoss, FeedPumpTurbine,
+    Generator, Heater, HeaterApproach, HeaterKind, Leak, LeakSource, Makeup, OffDesignModel,
+    OperatingPoint, PlantOutput, Reheat, SteamDestination, Supply, ThrottleControl, WaterLoss,
 };
 use ebullio::{Property, Units};
+
+/// The design throttle flow, kg/s (invented).
+const DESIGN_FLOW: f64 = 520.0;
+
+/// Every loss of the demo plant (invented numbers, as
+/// `ffi/src/plant/abi_tests.rs`'s `tallowmere_with_losses` without the
+/// generator curve, and `test_plant.c`'s `with_losses`).
+fn with_losses(spec: &mut CycleSpec) {
+    let l = &mut spec.losses;
+    l.throttle_flow = Some(DESIGN_FLOW);
+    l.generator = Some(Generator::Constant { efficiency: 0.987 });
+    l.mechanical_losses = 1800.0;
+    l.auxiliary_power = 14_000.0;
+    // Invented (not machine data): kJ/kg against m/s.
+    let exhaust = [
+        (10.0, 90.0),
+        (60.0, 40.0),
+        (100.0, 25.0),
+        (150.0, 18.0),
+        (200.0, 22.0),
+        (250.0, 34.0),
+        (300.0, 50.0),
+        (400.0, 90.0),
+    ];
+    l.exhaust = Some(ExhaustLoss {
+        annulus_area: 30.0,
+        curve: Curve::new(&exhaust).expect("a rising curve"),
+    });
+    for j in [0, 1, 2, 4, 5, 6] {
+        l.water_pressure_drops[j] = 0.8;
+    }
+    let leak = |from, to, fraction| Some(Leak { from, to, fraction });
+    l.leaks = [
+        leak(
+            LeakSource::CasingInlet(0),
+            SteamDestination::HeaterShell(1),
+            0.002,
+        ),
+        leak(
+            LeakSource::CasingExhaust(0),
+            SteamDestination::HeaterShell(5),
+            0.001,
+        ),
+        leak(
+            LeakSource::CasingInlet(0),
+            SteamDestination::CasingInlet(1),
+            0.01,
+        ),
+        leak(
+            LeakSource::CasingInlet(2),
+            SteamDestination::Condenser,
+            0.001,
+        ),
+    ];
+    l.makeup = Some(Makeup {
+        fraction: 0.01,
+        pressure: 2.0,
+        temperature: 25.0,
+        lost_as: WaterLoss::Blowdown,
+    });
+    l.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 3,
+        exhaust_to: SteamDestination::Condenser,
+        isentropic_efficiency: 0.8,
+    });
+}
+
+/// The 21 numbers of a plant output, powers last (zeros without them).
+fn output(o: &PlantOutput) -> Vec<f64> {
+    let mut out = vec![
+        o.shaft_work,
+        o.generator_efficiency,
+        o.gross_output,
+        o.motor_pump_work,
+        o.net_output,
+        o.net_efficiency,
+        o.gross_heat_rate,
+        o.net_heat_rate,
+        o.expansion_line_end,
+        o.exhaust_loss,
+        o.annulus_velocity,
+    ];
+    out.extend(o.power.map_or([0.0; 10], |p| {
+        [
+            p.throttle_flow,
+            p.heat_input,
+            p.condenser_duty,
+            p.shaft_power,
+            p.mechanical_losses,
+            p.generator_losses,
+            p.gross_output,
+            p.motor_pump_power,
+            p.auxiliary_power,
+            p.net_output,
+        ]
+    }));
+    out
+}
+
+/// The 14 totals, then the output.
+fn totals_and_output(r: &CycleResult) -> Vec<f64> {
+    let mut out: Vec<f64> = r.figures().map(|(_, value)| value).to_vec();
+    out.extend(output(&r.output));
+    out
+}
+
+/// The off-design numbers of the demo plant with every loss.
+fn off_design(spec: &CycleSpec) -> Vec<f64> {
+    let design = solve_cycle(spec).expect("the demo plant with losses solves");
+    let mut out = output(&design.output);
+    let model = OffDesignModel::calibrate(spec).expect("the demo plant calibrates");
+    let sliding = OperatingPoint::new(0.8 * DESIGN_FLOW, ThrottleControl::SlidingPressure);
+    out.extend(totals_and_output(
+        &model.solve(&sliding).expect("80 % solves"),
+    ));
+    let fixed = OperatingPoint::new(0.0, ThrottleControl::FixedPressure);
+    let flows = [0.4, 0.6, 0.8, 1.0, 1.1].map(|f| f * DESIGN_FLOW);
+    let curve = model.load_curve(&flows, &fixed).expect("five flows fit");
+    for row in curve.rows().iter().flatten() {
+        out.extend([row.throttle_pressure, row.thermal_efficiency]);
+        out.extend(output(&row.output));
+    }
+    let net = design.output.power.expect("the flow is given").net_output;
+    let like = sliding.at_flow(0.0);
+    out.extend(totals_and_output(
+        &model
+            .solve_for_output(0.75 * net, &like)
+            .expect("75 % of the output solves"),
+    ));
+    out
+}
 
 fn main() {
     // The demo plant; feed pressure 187 bar and condensate pump 0.80 are
@@ -67,6 +210,13 @@ fn main() {
             kind,
         })
         .expect("seven heaters fit");
+    }
+    if std::env::args().nth(1).as_deref() == Some("off-design") {
+        with_losses(&mut spec);
+        for x in off_design(&spec) {
+            println!("{:016x}", x.to_bits());
+        }
+        return;
     }
     let r = solve_cycle(&spec).expect("the demo plant solves");
     let mut out = Vec::new();

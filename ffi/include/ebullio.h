@@ -37,6 +37,15 @@
 // (`package.metadata.ebullio.abi-version`), and tested against it.
 #define EBULLIO_ABI_VERSION 1
 
+// The most rows of a load curve (`EbullioLoadCurve.rows`).
+#define EBULLIO_MAX_LOAD_POINTS 16
+
+// The most points of a curve (a generator's efficiency, an exhaust loss).
+#define EBULLIO_MAX_CURVE_POINTS 12
+
+// The most leakages a description holds (`EbullioCycleSpec.leaks`).
+#define EBULLIO_MAX_LEAKS 4
+
 // The most state points a result holds (`EbullioCycleResult.points`).
 #define EBULLIO_MAX_POINTS 92
 
@@ -658,6 +667,137 @@ typedef uint32_t EbullioMeasuredFlag;
 #endif // __STDC_VERSION__ >= 202311L
 #endif // __cplusplus
 
+// The generator (`EbullioCycleSpec.generator_kind`).
+enum EbullioGeneratorKind
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // No generator loss (efficiency 1): what an older caller's zero means.
+  EBULLIO_GENERATOR_KIND_LOSSLESS = 0,
+  // One efficiency at every load, `generator_efficiency`.
+  EBULLIO_GENERATOR_KIND_CONSTANT = 1,
+  // Efficiency against load fraction (output over
+  // `generator_rated_output`), the first `generator_curve_count`
+  // points of `generator_curve`; needs the throttle flow.
+  EBULLIO_GENERATOR_KIND_AGAINST_LOAD = 2,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioGeneratorKind EbullioGeneratorKind;
+#else
+typedef uint32_t EbullioGeneratorKind;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// Where a leakage leaves the turbine (`EbullioLeak.source`).
+enum EbullioLeakSource
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // At the inlet state of casing `source_casing` (valve stems, the
+  // inlet-end gland).
+  EBULLIO_LEAK_SOURCE_CASING_INLET = 1,
+  // At the exhaust state of casing `source_casing` (its exhaust-end
+  // gland); not the last casing's.
+  EBULLIO_LEAK_SOURCE_CASING_EXHAUST = 2,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioLeakSource EbullioLeakSource;
+#else
+typedef uint32_t EbullioLeakSource;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// Where a leakage, or the feed pump turbine's exhaust, goes.
+enum EbullioSteamDestination
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // The shell of the heater whose index in `heaters` is given.
+  EBULLIO_STEAM_DESTINATION_HEATER_SHELL = 1,
+  // The condenser (the index is not read).
+  EBULLIO_STEAM_DESTINATION_CONDENSER = 2,
+  // The inlet of the later casing whose index in `casings` is given
+  // (leakages only).
+  EBULLIO_STEAM_DESTINATION_CASING_INLET = 3,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioSteamDestination EbullioSteamDestination;
+#else
+typedef uint32_t EbullioSteamDestination;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// How the water the makeup replaces leaves the cycle
+// (`EbullioCycleSpec.makeup_lost_as`).
+enum EbullioWaterLoss
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // Boiler blowdown, saturated liquid at the throttle pressure.
+  EBULLIO_WATER_LOSS_BLOWDOWN = 1,
+  // Steam lost at the throttle state (vents, soot blowing).
+  EBULLIO_WATER_LOSS_THROTTLE_STEAM = 2,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioWaterLoss EbullioWaterLoss;
+#else
+typedef uint32_t EbullioWaterLoss;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// How the throttle pressure follows the load
+// (`EbullioOperatingPoint.control`).
+enum EbullioThrottleControl
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // The boiler holds the design throttle pressure; below the design
+  // flow the control valves throttle the steam.
+  EBULLIO_THROTTLE_CONTROL_FIXED_PRESSURE = 1,
+  // The valves stay wide open and the throttle pressure follows the
+  // first stage group's cone law.
+  EBULLIO_THROTTLE_CONTROL_SLIDING_PRESSURE = 2,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioThrottleControl EbullioThrottleControl;
+#else
+typedef uint32_t EbullioThrottleControl;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
+// The condenser at an operating point (`EbullioOperatingPoint.condenser`).
+enum EbullioCondenserCondition
+#if defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+  : uint32_t
+#endif // defined(__cplusplus) || __STDC_VERSION__ >= 202311L
+ {
+  // The design condenser pressure.
+  EBULLIO_CONDENSER_CONDITION_DESIGN = 1,
+  // `condenser_pressure`.
+  EBULLIO_CONDENSER_CONDITION_PRESSURE = 2,
+  // The pressure the condenser's design UA gives with
+  // `cooling_water_inlet_temperature` and `cooling_water_flow` (needs
+  // the options' design cooling water).
+  EBULLIO_CONDENSER_CONDITION_COOLING_WATER = 3,
+};
+#ifndef __cplusplus
+#if __STDC_VERSION__ >= 202311L
+typedef enum EbullioCondenserCondition EbullioCondenserCondition;
+#else
+typedef uint32_t EbullioCondenserCondition;
+#endif // __STDC_VERSION__ >= 202311L
+#endif // __cplusplus
+
 // A turbine casing: a group of stages expanding to an exhaust pressure,
 // each stage group between extractions at the casing's efficiency.
 typedef struct {
@@ -693,6 +833,29 @@ typedef struct {
   double drain_cooler_approach;
 } EbullioHeater;
 
+// A point of a curve, in the units its owner states. Frozen.
+typedef struct {
+  // The abscissa; strictly rising along the curve.
+  double x;
+  // The value at `x`.
+  double y;
+} EbullioCurvePoint;
+
+// A gland or valve-stem leakage: a fixed fraction of the throttle flow
+// from `source` to `destination`. Frozen (it sits in an array).
+typedef struct {
+  // An `EbullioLeakSource`.
+  uint32_t source;
+  // The index in `casings` (0 is the first) of the casing it leaves.
+  uint32_t source_casing;
+  // An `EbullioSteamDestination`.
+  uint32_t destination;
+  // The index (0 is the first) in `heaters` or `casings` of where it goes.
+  uint32_t destination_index;
+  // Its flow per unit throttle flow, in [0, 1].
+  double fraction;
+} EbullioLeak;
+
 // A whole cycle, filled in by the caller: set `size =
 // sizeof(EbullioCycleSpec)`, then every field. Every number is in the
 // unit system `units` (an `EbullioUnits`); temperature differences
@@ -700,6 +863,10 @@ typedef struct {
 // from the highest extraction pressure down and are numbered 1, 2, ... in
 // that order in the result; casings from the throttle to the condenser.
 // Fields are only ever added at the end.
+// The losses (from `has_throttle_flow` on) came after `heaters`: all of
+// them zero, as an older caller's smaller struct leaves them, is the
+// cycle without losses. Indices of heaters and casings in the losses
+// count from 0, in the order of `heaters` and `casings`.
 typedef struct {
   // `sizeof(EbullioCycleSpec)` as the caller's header declares it.
   uint32_t size;
@@ -739,6 +906,70 @@ typedef struct {
   EbullioCasing casings[EBULLIO_MAX_CASINGS];
   // The feedwater heaters; the first `heater_count` are read.
   EbullioHeater heaters[EBULLIO_MAX_HEATERS];
+  // 1 if `throttle_flow` is read (the absolute scale: powers in the
+  // result, and what a generator curve, an exhaust loss and the
+  // off-design calls need), 0 for results per unit throttle flow only.
+  uint32_t has_throttle_flow;
+  // An `EbullioGeneratorKind` (0: lossless).
+  uint32_t generator_kind;
+  // How many points of `generator_curve` are used (`AgainstLoad`), 2
+  // to `EBULLIO_MAX_CURVE_POINTS`.
+  uint32_t generator_curve_count;
+  // 1 if the last casing has an exhaust loss (`exhaust_*` are read), else 0.
+  uint32_t has_exhaust_loss;
+  // How many points of `exhaust_curve` are used, 2 to `EBULLIO_MAX_CURVE_POINTS`.
+  uint32_t exhaust_curve_count;
+  // How many entries of `leaks` are used, 0 to `EBULLIO_MAX_LEAKS`.
+  uint32_t leak_count;
+  // 1 if makeup water enters the hotwell (`makeup_*` are read), else 0.
+  uint32_t has_makeup;
+  // An `EbullioWaterLoss`: how the water the makeup replaces leaves.
+  uint32_t makeup_lost_as;
+  // 1 if the boiler feed pump is driven by its own turbine
+  // (`feed_pump_turbine_*` are read), 0 for a motor-driven one.
+  uint32_t has_feed_pump_turbine;
+  // The index in `heaters` of the heater whose extraction point
+  // supplies the feed pump turbine's steam.
+  uint32_t feed_pump_turbine_steam_from;
+  // An `EbullioSteamDestination` (heater shell or condenser): where the
+  // feed pump turbine exhausts.
+  uint32_t feed_pump_turbine_exhaust_to;
+  // The index in `heaters` of that shell (not read for the condenser).
+  uint32_t feed_pump_turbine_exhaust_index;
+  // Throttle steam mass flow (kg/s; lbm/h in US customary units).
+  double throttle_flow;
+  // The generator's efficiency, in (0, 1] (`Constant`).
+  double generator_efficiency;
+  // The generator's output at load fraction 1, a power (`AgainstLoad`).
+  double generator_rated_output;
+  // Bearing, seal and windage losses of the shaft, a power (0 for none).
+  double mechanical_losses;
+  // Power the auxiliaries draw besides the motor-driven pumps of the
+  // cycle, a power (0 for none).
+  double auxiliary_power;
+  // The last stages' total annulus area, in the square of the length
+  // of the unit system's speed unit: m² (ft² in US customary units).
+  double exhaust_annulus_area;
+  // Makeup flow per unit throttle flow, in [0, 1].
+  double makeup_fraction;
+  // Makeup pressure as delivered.
+  double makeup_pressure;
+  // Makeup temperature as delivered.
+  double makeup_temperature;
+  // The feed pump turbine's isentropic efficiency, in (0, 1].
+  double feed_pump_turbine_efficiency;
+  // Generator efficiency (y, in (0, 1]) against load fraction (x),
+  // interpolated linearly, refused outside the curve.
+  EbullioCurvePoint generator_curve[EBULLIO_MAX_CURVE_POINTS];
+  // Exhaust loss (y, a specific enthalpy) against annulus velocity (x,
+  // a speed): machine data.
+  EbullioCurvePoint exhaust_curve[EBULLIO_MAX_CURVE_POINTS];
+  // Each closed heater's feedwater (tube) side pressure drop, a
+  // pressure difference, in the order of `heaters` (0 for none; not
+  // read for open heaters). The pump below makes it up.
+  double heater_water_pressure_drops[EBULLIO_MAX_HEATERS];
+  // Gland and valve-stem leakages; the first `leak_count` are read.
+  EbullioLeak leaks[EBULLIO_MAX_LEAKS];
 } EbullioCycleSpec;
 
 // One state point of a solved cycle. Frozen (it sits in an array).
@@ -802,12 +1033,81 @@ typedef struct {
   EbullioStream outlets[EBULLIO_MAX_STREAMS];
 } EbullioCycleComponent;
 
+// A plant's balance as flows of energy, copied from the core: heat flows
+// in kW (W in SI base units, Btu/h in US customary units), powers in kW
+// (W in SI base units), the throttle flow in kg/s (lbm/h in US customary
+// units). Frozen.
+typedef struct {
+  // Throttle steam mass flow.
+  double throttle_flow;
+  // Heat added in the boiler and reheater (a heat flow).
+  double heat_input;
+  // Heat rejected in the condenser (a heat flow).
+  double condenser_duty;
+  // Power of the main turbine's casings.
+  double shaft_power;
+  // Mechanical losses.
+  double mechanical_losses;
+  // Generator losses.
+  double generator_losses;
+  // Generator output.
+  double gross_output;
+  // Power of the motor-driven pumps.
+  double motor_pump_power;
+  // Auxiliary power.
+  double auxiliary_power;
+  // Net output.
+  double net_output;
+} EbullioPlantPower;
+
+// What the plant delivers after the description's losses, per unit mass
+// of throttle steam in the cycle's specific energy unit (kJ/kg, Btu/lbm;
+// J/kg in SI base units), and as powers when the throttle flow is given.
+// Heat rates are on the cycle's heat input (the boiler's own efficiency
+// lies outside the cycle). Without losses, gross and net output are the
+// cycle's net work. Frozen.
+typedef struct {
+  // Work of the main turbine's casings (a feed pump turbine's is not here).
+  double shaft_work;
+  // The generator efficiency at this load (1 without a generator).
+  double generator_efficiency;
+  // Generator output: (shaft work - mechanical losses) * efficiency.
+  double gross_output;
+  // Work of the pumps driven by motors.
+  double motor_pump_work;
+  // Gross output - motor-driven pump work - auxiliary power.
+  double net_output;
+  // Net output / heat input.
+  double net_efficiency;
+  // Heat input per electrical energy of gross output (kJ/kWh; Btu/kWh
+  // in US customary units).
+  double gross_heat_rate;
+  // Heat input per electrical energy of net output (kJ/kWh; Btu/kWh in
+  // US customary units).
+  double net_heat_rate;
+  // Specific enthalpy at the last casing's expansion line end point.
+  double expansion_line_end;
+  // Exhaust loss per unit mass of exhaust steam (0 without one).
+  double exhaust_loss;
+  // Annulus velocity at the last stage (0 without an exhaust loss).
+  double annulus_velocity;
+  // 1 if `power` holds the powers (the throttle flow was given), else
+  // 0 and `power` is all zeros.
+  uint32_t has_power;
+  // Reserved; 0.
+  uint32_t reserved;
+  // The same as powers.
+  EbullioPlantPower power;
+} EbullioPlantOutput;
+
 // A solved cycle, written by `ebullio_cycle_solve`. Set `size =
 // sizeof(EbullioCycleResult)` before the call. Specific values are per
 // unit mass of throttle steam in the description's units (kJ/kg or
 // Btu/lbm; J/kg in SI base units); heat and steam rates are in the units
 // their names say, whatever `units` is. Entries past the counts are zero.
 // Fields are only ever added at the end.
+// `output` came after `components`: a caller whose `size` ends before
+// it does not get it.
 typedef struct {
   // `sizeof(EbullioCycleResult)` as the caller's header declares it.
   uint32_t size;
@@ -853,6 +1153,9 @@ typedef struct {
   EbullioCyclePoint points[EBULLIO_MAX_POINTS];
   // The components, in flow order.
   EbullioCycleComponent components[EBULLIO_MAX_COMPONENTS];
+  // The plant's output after the description's losses: gross and net
+  // output and heat rates, and the powers with the throttle flow.
+  EbullioPlantOutput output;
 } EbullioCycleResult;
 
 // Why a call failed. Set `size = sizeof(EbullioErrorDetail)` before the
@@ -987,6 +1290,104 @@ typedef struct {
   // Entropy generated (flow × specific entropy unit).
   double entropy_generation;
 } EbullioHeaterBalance;
+
+// What an off-design model knows beyond the design balance, each part
+// optional: set `size = sizeof(EbullioOffDesignOptions)`, the flags, and
+// the fields they say are read. Numbers in the design's unit system.
+// Fields are only ever added at the end.
+typedef struct {
+  // `sizeof(EbullioOffDesignOptions)` as the caller's header declares it.
+  uint32_t size;
+  // 1 if each section's efficiency follows `efficiency_correction`,
+  // 0 for the design efficiency at every flow.
+  uint32_t has_efficiency_correction;
+  // How many points of `efficiency_correction` are used, 2 to
+  // `EBULLIO_MAX_CURVE_POINTS`.
+  uint32_t efficiency_correction_count;
+  // 1 if the design cooling water is given (the condenser's UA follows
+  // from it, so that an operating point may give cooling water instead
+  // of a pressure), else 0.
+  uint32_t has_design_cooling_water;
+  // 1 if closed heaters work by their design UA per zone
+  // (`heater_ua_flow_exponent` is read), 0 to keep each one's design
+  // TTD and DCA.
+  uint32_t has_heater_transfer;
+  // Reserved; must be 0.
+  uint32_t reserved;
+  // Cooling water temperature at the condenser inlet, at design.
+  double design_cooling_water_inlet_temperature;
+  // Cooling water mass flow, at design.
+  double design_cooling_water_flow;
+  // Each heater zone's UA scales with its flow to this power.
+  double heater_ua_flow_exponent;
+  // Factor on a section's design isentropic efficiency (y) against the
+  // ratio of its volume flow to design (x).
+  EbullioCurvePoint efficiency_correction[EBULLIO_MAX_CURVE_POINTS];
+} EbullioOffDesignOptions;
+
+// Where to run the unit: set `size = sizeof(EbullioOperatingPoint)` and
+// every field. Numbers in the design's unit system. Fields are only ever
+// added at the end.
+typedef struct {
+  // `sizeof(EbullioOperatingPoint)` as the caller's header declares it.
+  uint32_t size;
+  // An `EbullioThrottleControl`.
+  uint32_t control;
+  // An `EbullioCondenserCondition`.
+  uint32_t condenser;
+  // Reserved; must be 0.
+  uint32_t reserved;
+  // Throttle steam mass flow (kg/s; lbm/h in US customary units); not
+  // read by the load curve and the target output calls.
+  double throttle_flow;
+  // Condenser pressure (`EBULLIO_CONDENSER_CONDITION_PRESSURE`).
+  double condenser_pressure;
+  // Cooling water temperature at the condenser inlet
+  // (`EBULLIO_CONDENSER_CONDITION_COOLING_WATER`).
+  double cooling_water_inlet_temperature;
+  // Cooling water mass flow (`EBULLIO_CONDENSER_CONDITION_COOLING_WATER`).
+  double cooling_water_flow;
+  // 1 for each heater out of service, in the order of the design's
+  // `heaters`; 0 in service.
+  uint32_t out_of_service[EBULLIO_MAX_HEATERS];
+} EbullioOperatingPoint;
+
+// One row of a load curve: the unit at one throttle flow, in the
+// design's unit system. Frozen (it sits in an array).
+typedef struct {
+  // `EBULLIO_STATUS_OK`, or why this flow's balance was refused (its
+  // full reason is one `ebullio_off_design_solve` at this flow away);
+  // the numbers below the flow are then zero.
+  EbullioStatus status;
+  // Reserved; 0.
+  uint32_t reserved;
+  // The throttle steam mass flow asked for (kg/s; lbm/h in US
+  // customary units).
+  double throttle_flow;
+  // Throttle steam pressure at the boiler (before the control valves
+  // when they throttle).
+  double throttle_pressure;
+  // The cycle's thermal efficiency.
+  double thermal_efficiency;
+  // Output, heat rates and powers at this flow.
+  EbullioPlantOutput output;
+} EbullioLoadPoint;
+
+// A load curve, written by `ebullio_load_curve`: set `size =
+// sizeof(EbullioLoadCurve)` before the call. Rows past `row_count` are
+// zero. Fields are only ever added at the end.
+typedef struct {
+  // `sizeof(EbullioLoadCurve)` as the caller's header declares it.
+  uint32_t size;
+  // The unit system of every value below (the design's).
+  EbullioUnits units;
+  // How many entries of `rows` are used: one per flow, in their order.
+  uint32_t row_count;
+  // Reserved; 0.
+  uint32_t reserved;
+  // The rows.
+  EbullioLoadPoint rows[EBULLIO_MAX_LOAD_POINTS];
+} EbullioLoadCurve;
 
 // One input of `ebullio_measured_array` as columns: `values` holds
 // `n_values` doubles, `systematic` `n_systematic` and `random` `n_random`
@@ -1206,6 +1607,12 @@ EbullioStatus ebullio_derivatives_array(const uint32_t *variables,
 // is not a finite number (a point's quality, NaN off the saturation line,
 // aside): status 0 comes only with finite figures.
 //
+// The losses' codes and counts (a generator kind, a leak's source or
+// destination, the leaks' or a curve's count) are refused the same way;
+// a curve the core cannot read is `EBULLIO_STATUS_INVALID_PLANT`. A
+// caller whose `spec->size` ends before the losses gets the cycle without
+// them, and one whose `out->size` ends before `output` does not get it.
+//
 // # Safety
 // `spec` must point to a readable `EbullioCycleSpec` of at least the
 // `size` it declares; `out` to a writable `EbullioCycleResult` of at
@@ -1377,6 +1784,83 @@ EbullioStatus ebullio_attemperator_spray(double steam_pressure,
                                          EbullioHeaterBalance *out,
                                          EbullioState *outlet,
                                          EbullioErrorDetail *detail);
+
+// The unit at each of the `flow_count` throttle flows `flows` (in the
+// design's unit system), every other condition as in `*point` (its
+// `throttle_flow` is not read), into the table `*out`: one row per flow,
+// in their order, each `ebullio_off_design_solve`'s balance at that flow
+// reduced to the figures of a part-load chart. The model is calibrated
+// once for all rows.
+//
+// A flow whose balance is refused gets that status in its row, and the
+// other rows are still solved: the call's own status is then 0. The
+// call fails as a whole (nothing written) for what `ebullio_off_design_solve`
+// refuses before solving (the blocks, the design, the calibration), and
+// with `EBULLIO_STATUS_BAD_LENGTH` for more than `EBULLIO_MAX_LOAD_POINTS`
+// flows. `flows` may be null when `flow_count` is 0.
+//
+// # Safety
+// `design`, `options`, `point` and `detail` as for
+// `ebullio_off_design_solve`; `flows` must point to `flow_count`
+// readable doubles (unless `flow_count` is 0); `out` to a writable
+// `EbullioLoadCurve` of at least the `size` it declares.
+EbullioStatus ebullio_load_curve(const EbullioCycleSpec *design,
+                                 const EbullioOffDesignOptions *options,
+                                 const EbullioOperatingPoint *point,
+                                 const double *flows,
+                                 size_t flow_count,
+                                 EbullioLoadCurve *out,
+                                 EbullioErrorDetail *detail);
+
+// Solves the unit `*design` describes at the operating point `*point`
+// into `*out`: a full balance as `ebullio_cycle_solve` writes one, at
+// the stage pressures each stage group's cone law (calibrated on the
+// design balance) gives with that balance's flows.
+//
+// `design` must give its throttle flow (`has_throttle_flow`), the scale
+// of the cone laws. `options` may be null for none. The model is
+// calibrated inside the call (a design solve) and forgotten after it.
+// `*out` is written only on success; `detail` as for `ebullio_cycle_solve`.
+//
+// Statuses: as `ebullio_cycle_solve`'s for the blocks' codes, counts and
+// sizes (`EBULLIO_STATUS_UNKNOWN_PLANT_CODE`, `EBULLIO_STATUS_BAD_LENGTH`,
+// `EBULLIO_STATUS_BAD_STRUCT_SIZE`); the core's refusals (a design
+// without its throttle flow, an option or condition it cannot take, a
+// flow the control valves cannot pass at a fixed throttle pressure) are
+// `EBULLIO_STATUS_INVALID_PLANT` with its reason in the detail; pressures
+// that do not settle, `EBULLIO_STATUS_NOT_CONVERGED`.
+//
+// # Safety
+// `design` must point to a readable `EbullioCycleSpec` of at least the
+// `size` it declares; `options`, if not null, to a readable
+// `EbullioOffDesignOptions` of at least its `size`; `point` to a
+// readable `EbullioOperatingPoint` of at least its `size`; `out` to a
+// writable `EbullioCycleResult` of at least its `size`; `detail`, if not
+// null, to an `EbullioErrorDetail`.
+EbullioStatus ebullio_off_design_solve(const EbullioCycleSpec *design,
+                                       const EbullioOffDesignOptions *options,
+                                       const EbullioOperatingPoint *point,
+                                       EbullioCycleResult *out,
+                                       EbullioErrorDetail *detail);
+
+// Solves the unit at the throttle flow whose net output (a power, in the
+// design's unit system) is `net_output`, every other condition as in
+// `*point` (its `throttle_flow` is not read), into `*out`: the balance
+// `ebullio_off_design_solve` gives at that flow (`out->output.power`
+// holds the flow found).
+//
+// Arguments, statuses and safety as for `ebullio_off_design_solve`; a
+// target output that is not positive, or above what the valves wide open
+// pass at a fixed throttle pressure, is `EBULLIO_STATUS_INVALID_PLANT`.
+//
+// # Safety
+// As for `ebullio_off_design_solve`.
+EbullioStatus ebullio_output_solve(const EbullioCycleSpec *design,
+                                   const EbullioOffDesignOptions *options,
+                                   const EbullioOperatingPoint *point,
+                                   double net_output,
+                                   EbullioCycleResult *out,
+                                   EbullioErrorDetail *detail);
 
 // Solves the state given by `pair` with values `a` and `b` (in the
 // pair's order, in `units`) and fills `*out`.

@@ -56,12 +56,17 @@ pub use measured::{
     EBULLIO_MEASURED_NAME_CAPACITY,
 };
 pub use plant::{
-    ebullio_attemperator_spray, ebullio_closed_heater, ebullio_cycle_solve, ebullio_open_heater,
-    ebullio_pump_compression, ebullio_section_efficiency, ebullio_turbine_expansion, EbullioCasing,
-    EbullioComponentKind, EbullioCompression, EbullioCycleComponent, EbullioCyclePoint,
-    EbullioCycleResult, EbullioCycleSpec, EbullioDrains, EbullioExpansion, EbullioHeater,
-    EbullioHeaterBalance, EbullioHeaterKind, EbullioPointRole, EbullioStream, EbullioSupplyKind,
-    EBULLIO_MAX_CASINGS, EBULLIO_MAX_COMPONENTS, EBULLIO_MAX_HEATERS, EBULLIO_MAX_POINTS,
+    ebullio_attemperator_spray, ebullio_closed_heater, ebullio_cycle_solve, ebullio_load_curve,
+    ebullio_off_design_solve, ebullio_open_heater, ebullio_output_solve, ebullio_pump_compression,
+    ebullio_section_efficiency, ebullio_turbine_expansion, EbullioCasing, EbullioComponentKind,
+    EbullioCompression, EbullioCondenserCondition, EbullioCurvePoint, EbullioCycleComponent,
+    EbullioCyclePoint, EbullioCycleResult, EbullioCycleSpec, EbullioDrains, EbullioExpansion,
+    EbullioGeneratorKind, EbullioHeater, EbullioHeaterBalance, EbullioHeaterKind, EbullioLeak,
+    EbullioLeakSource, EbullioLoadCurve, EbullioLoadPoint, EbullioOffDesignOptions,
+    EbullioOperatingPoint, EbullioPlantOutput, EbullioPlantPower, EbullioPointRole,
+    EbullioSteamDestination, EbullioStream, EbullioSupplyKind, EbullioThrottleControl,
+    EbullioWaterLoss, EBULLIO_MAX_CASINGS, EBULLIO_MAX_COMPONENTS, EBULLIO_MAX_CURVE_POINTS,
+    EBULLIO_MAX_HEATERS, EBULLIO_MAX_LEAKS, EBULLIO_MAX_LOAD_POINTS, EBULLIO_MAX_POINTS,
     EBULLIO_MAX_STREAMS,
 };
 pub use state::{

@@ -100,19 +100,23 @@ valgrind_memcheck() {
         valgrind --error-exitcode=1 --leak-check=full --quiet "$work/c_valgrind"
 }
 
-# The Rust core's own numbers for the plant steps (ffi/examples/plant_reference.rs).
+# The Rust core's own numbers for the plant steps (ffi/examples/plant_reference.rs),
+# without and with the losses and off-design operation.
 plant_reference() {
-    [ -f "$work/plant_reference.txt" ] ||
-        cargo run --release --quiet -p ebullio-ffi --example plant_reference >"$work/plant_reference.txt"
+    { [ -f "$work/plant_reference.txt" ] ||
+        cargo run --release --quiet -p ebullio-ffi --example plant_reference >"$work/plant_reference.txt"; } &&
+        { [ -f "$work/off_design_reference.txt" ] ||
+            cargo run --release --quiet -p ebullio-ffi --example plant_reference -- off-design \
+                >"$work/off_design_reference.txt"; }
 }
 
 plant_c() {
     plant_reference &&
         gcc "${c99[@]}" "${cflags[@]}" "$here/c/test_plant.c" \
             -o "$work/plant_c" "${libs[@]}" "${rpath[@]}" -lm &&
-        "$work/plant_c" "$work/plant_reference.txt" &&
+        "$work/plant_c" "$work/plant_reference.txt" "$work/off_design_reference.txt" &&
         valgrind --error-exitcode=1 --leak-check=full --quiet \
-            "$work/plant_c" "$work/plant_reference.txt"
+            "$work/plant_c" "$work/plant_reference.txt" "$work/off_design_reference.txt"
 }
 
 plant_ctypes() {

@@ -16,6 +16,7 @@ use ebullio::backward::sr5_05::{locate, Subregion};
 use ebullio::{InputPair, Method, Quantity, Saturation, Units};
 use ebullio_conformance::oracles::c_abi::{check_c_arrays, check_c_scalar};
 use ebullio_conformance::oracles::c_abi_measured::{check_c_measured, check_c_measured_array};
+use ebullio_conformance::oracles::c_abi_plant::{check_c_plant, Solved};
 use ebullio_conformance::oracles::derivatives::{
     check_derivatives, check_saturation, saturation_call,
 };
@@ -26,6 +27,7 @@ use ebullio_conformance::oracles::state::{
 };
 use ebullio_conformance::oracles::transport::check_transport;
 use ebullio_conformance::oracles::Findings;
+use ebullio_conformance::random_inputs::c_plant::plant_case;
 use ebullio_conformance::random_inputs::cases::{case_from_state, raw_case};
 use ebullio_conformance::random_inputs::draw::{campaign_seed, Draw, Seeded};
 use ebullio_conformance::random_inputs::measured::{coverage_factor, measured_case};
@@ -335,6 +337,23 @@ fn cycle_solver_within_physical_limits() {
     }
     eprintln!("cycles: {solved} solved");
     finish(findings, "cycle solver");
+}
+
+/// Plant cases through the C cycle and off-design calls (each case a
+/// cycle solve, an off-design solve and a load curve of up to five
+/// flows, every second a target output too).
+const C_PLANT_CASES: usize = 1500;
+
+#[test]
+fn c_abi_cycle_and_off_design_calls_match_the_core() {
+    let (mut draw, mut findings) = start("c_plant");
+    let mut solved = Solved::default();
+    for k in 0..C_PLANT_CASES {
+        let case = plant_case(&mut draw);
+        check_c_plant(&case, k % 2 == 0, &mut solved, &mut findings);
+    }
+    eprintln!("C plant calls: the core solved {solved:?}");
+    finish(findings, "C plant calls");
 }
 
 /// Batches of measured-data calls per calculation × unit system; each

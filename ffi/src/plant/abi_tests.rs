@@ -6,8 +6,10 @@ use core::mem::size_of;
 use core::ptr;
 
 use ebullio::plant::{
-    compress, expand, section_efficiency, solve_cycle, Casing, ComponentKind, CycleSpec, Drains,
-    Heater, HeaterApproach, HeaterKind, PointRole, Reheat, Supply,
+    compress, expand, section_efficiency, solve_cycle, Casing, ComponentKind, Curve, CycleResult,
+    CycleSpec, Drains, ExhaustLoss, FeedPumpTurbine, Generator, Heater, HeaterApproach, HeaterKind,
+    Leak, LeakSource, Losses, Makeup, PlantOutput, PointRole, Reheat, SteamDestination, Supply,
+    WaterLoss,
 };
 use ebullio::{InputPair, Method, Property, State, Units};
 
@@ -18,7 +20,7 @@ use crate::*;
 /// units (bar, °C), both as the C block and as the core's description.
 /// Numbers beyond DESIGN.md (feed pressure 187 bar, condensate pump 0.80)
 /// are invented for the demo.
-fn tallowmere() -> (EbullioCycleSpec, CycleSpec) {
+pub(super) fn tallowmere() -> (EbullioCycleSpec, CycleSpec) {
     let mut c = EbullioCycleSpec::zeroed();
     c.units = EbullioUnits::MetricEngineering as u32;
     c.supply_kind = EbullioSupplyKind::Superheated as u32;
@@ -99,7 +101,7 @@ fn tallowmere() -> (EbullioCycleSpec, CycleSpec) {
 }
 
 /// A result block with every byte set, to show what the call writes.
-fn marked_result() -> Box<EbullioCycleResult> {
+pub(super) fn marked_result() -> Box<EbullioCycleResult> {
     // SAFETY: every field is an integer, a float or a C enum written below;
     // the enum field `units` is set to a valid value before any read.
     let mut r: Box<EbullioCycleResult> = Box::new(unsafe { core::mem::zeroed() });
@@ -116,7 +118,7 @@ fn solve(spec: &EbullioCycleSpec) -> (EbullioStatus, Box<EbullioCycleResult>) {
     (status, r)
 }
 
-fn same(what: &str, a: f64, b: f64) {
+pub(super) fn same(what: &str, a: f64, b: f64) {
     assert_eq!(a.to_bits(), b.to_bits(), "{what}: {a} vs {b}");
 }
 
@@ -154,21 +156,25 @@ fn the_block_of_figures_is_the_cores_list() {
     assert_eq!(names, ebullio::plant::CycleResult::FIGURE_NAMES);
 }
 
-#[test]
-fn the_cycle_block_holds_the_cores_bits() {
-    let (c, core) = tallowmere();
-    let expected = solve_cycle(&core).unwrap();
-    let (status, r) = solve(&c);
-    assert_eq!(status, EbullioStatus::Ok);
-    assert_eq!(r.units, EbullioUnits::MetricEngineering);
+/// The C block holds the core's balance, bit for bit: figures, fractions,
+/// points, components and the plant's output; entries past the counts
+/// are empty.
+pub(super) fn same_balance(r: &EbullioCycleResult, expected: &CycleResult) {
+    assert_eq!(r.units, crate::codes::c_units(expected.units));
+    same_v1_balance(r, expected);
+    same_output(&r.output, &expected.output);
+}
+
+/// As [`same_balance`], for the fields of the first ABI version.
+fn same_v1_balance(r: &EbullioCycleResult, expected: &CycleResult) {
     for ((name, b), a) in expected.figures().into_iter().zip(r.figures()) {
         same(name, a, b);
     }
-    assert_eq!(expected.extraction_fractions().len(), 7);
+    let heaters = expected.extraction_fractions().len();
     for (i, f) in expected.extraction_fractions().iter().enumerate() {
         same("fraction", r.extraction_fractions[i], *f);
     }
-    assert!(r.extraction_fractions[7..].iter().all(|&f| f == 0.0));
+    assert!(r.extraction_fractions[heaters..].iter().all(|&f| f == 0.0));
     assert_eq!(r.point_count as usize, expected.points().len());
     for (c, p) in r.points.iter().zip(expected.points()) {
         assert_eq!(c.role, p.label.role as u32);
@@ -213,6 +219,75 @@ fn the_cycle_block_holds_the_cores_bits() {
             same("stream s", ours.entropy, theirs.entropy);
         }
     }
+}
+
+/// The C output holds the core's, bit for bit, powers included.
+pub(super) fn same_output(c: &EbullioPlantOutput, o: &PlantOutput) {
+    same("shaft work", c.shaft_work, o.shaft_work);
+    same(
+        "generator efficiency",
+        c.generator_efficiency,
+        o.generator_efficiency,
+    );
+    same("gross output", c.gross_output, o.gross_output);
+    same("motor pump work", c.motor_pump_work, o.motor_pump_work);
+    same("net output", c.net_output, o.net_output);
+    same("net efficiency", c.net_efficiency, o.net_efficiency);
+    same("gross heat rate", c.gross_heat_rate, o.gross_heat_rate);
+    same("net heat rate", c.net_heat_rate, o.net_heat_rate);
+    same(
+        "expansion line end",
+        c.expansion_line_end,
+        o.expansion_line_end,
+    );
+    same("exhaust loss", c.exhaust_loss, o.exhaust_loss);
+    same("annulus velocity", c.annulus_velocity, o.annulus_velocity);
+    assert_eq!(c.has_power, u32::from(o.power.is_some()));
+    let p = &c.power;
+    let numbers = [
+        p.throttle_flow,
+        p.heat_input,
+        p.condenser_duty,
+        p.shaft_power,
+        p.mechanical_losses,
+        p.generator_losses,
+        p.gross_output,
+        p.motor_pump_power,
+        p.auxiliary_power,
+        p.net_output,
+    ];
+    match o.power {
+        Some(q) => {
+            let expected = [
+                q.throttle_flow,
+                q.heat_input,
+                q.condenser_duty,
+                q.shaft_power,
+                q.mechanical_losses,
+                q.generator_losses,
+                q.gross_output,
+                q.motor_pump_power,
+                q.auxiliary_power,
+                q.net_output,
+            ];
+            for (a, b) in numbers.into_iter().zip(expected) {
+                same("power", a, b);
+            }
+        }
+        None => assert!(numbers.iter().all(|&x| x.to_bits() == 0)),
+    }
+}
+
+#[test]
+fn the_cycle_block_holds_the_cores_bits() {
+    let (c, core) = tallowmere();
+    let expected = solve_cycle(&core).unwrap();
+    let (status, r) = solve(&c);
+    assert_eq!(status, EbullioStatus::Ok);
+    assert_eq!(r.units, EbullioUnits::MetricEngineering);
+    assert_eq!(expected.extraction_fractions().len(), 7);
+    same_balance(&r, &expected);
+    assert_eq!(r.output.has_power, 0);
 }
 
 /// A plant of one casing and no reheat or heaters: the supply's (pressure,
@@ -314,7 +389,7 @@ fn roles_and_kinds_mirror_the_core_numbers() {
     }
 }
 
-fn detail_text(d: &EbullioErrorDetail) -> String {
+pub(super) fn detail_text(d: &EbullioErrorDetail) -> String {
     let bytes: Vec<u8> = d
         .message
         .iter()
@@ -324,7 +399,7 @@ fn detail_text(d: &EbullioErrorDetail) -> String {
     String::from_utf8(bytes).unwrap()
 }
 
-fn blank_detail() -> EbullioErrorDetail {
+pub(super) fn blank_detail() -> EbullioErrorDetail {
     EbullioErrorDetail::of_status(EbullioStatus::Panic, Units::Native)
 }
 
@@ -367,7 +442,7 @@ fn every_refusal_has_its_status_and_writes_nothing() {
     s.casing_count = 5;
     refused(&s, EbullioStatus::BadLength);
     let mut s = good;
-    s.size -= 8;
+    s.size = super::spec::SPEC_V1_SIZE as u32 - 8;
     refused(&s, EbullioStatus::BadStructSize);
     // The core's refusals, with its reason in the detail.
     let mut s = good;
@@ -891,4 +966,229 @@ fn a_cycle_with_a_figure_that_is_not_finite_is_refused() {
     assert_eq!(r.turbine_work, -1.0, "nothing written on {status:?}");
     assert_eq!(d.status, status);
     assert!(!detail_text(&d).is_empty());
+}
+
+/// The demo plant's design throttle flow, kg/s (invented).
+pub(super) const DESIGN_FLOW: f64 = 520.0;
+
+/// An invented exhaust loss curve (not machine data): kJ/kg against
+/// annulus velocity in m/s, wide enough for the part loads tested.
+const EXHAUST_CURVE: [(f64, f64); 8] = [
+    (10.0, 90.0),
+    (60.0, 40.0),
+    (100.0, 25.0),
+    (150.0, 18.0),
+    (200.0, 22.0),
+    (250.0, 34.0),
+    (300.0, 50.0),
+    (400.0, 90.0),
+];
+
+/// An invented generator efficiency against load fraction.
+const GENERATOR_CURVE: [(f64, f64); 4] = [(0.1, 0.975), (0.5, 0.984), (1.0, 0.988), (2.0, 0.986)];
+
+/// The demo plant with every loss, as the C block and as the core's
+/// description (invented numbers, of the sizes `tests/tests/plant_losses.rs`
+/// uses): 520 kg/s, a generator of constant efficiency 0.987 (or, with
+/// `generator_curve`, against load with a 700 MW rating), 1.8 MW
+/// mechanical losses, 14 MW auxiliaries, an exhaust loss on 30 m² of
+/// annulus, 0.8 bar on each closed heater's tubes, four leakages, 1 %
+/// makeup replacing blowdown and a feed pump turbine on heater 4's steam.
+pub(super) fn tallowmere_with_losses(generator_curve: bool) -> (EbullioCycleSpec, CycleSpec) {
+    let (mut c, mut core) = tallowmere();
+    let l = &mut core.losses;
+    c.has_throttle_flow = 1;
+    c.throttle_flow = DESIGN_FLOW;
+    l.throttle_flow = Some(DESIGN_FLOW);
+    if generator_curve {
+        c.generator_kind = EbullioGeneratorKind::AgainstLoad as u32;
+        c.generator_rated_output = 700_000.0;
+        c.generator_curve_count = GENERATOR_CURVE.len() as u32;
+        for (slot, &(x, y)) in c.generator_curve.iter_mut().zip(&GENERATOR_CURVE) {
+            *slot = EbullioCurvePoint { x, y };
+        }
+        l.generator = Some(Generator::AgainstLoad {
+            rated_output: 700_000.0,
+            efficiency: Curve::new(&GENERATOR_CURVE).unwrap(),
+        });
+    } else {
+        c.generator_kind = EbullioGeneratorKind::Constant as u32;
+        c.generator_efficiency = 0.987;
+        l.generator = Some(Generator::Constant { efficiency: 0.987 });
+    }
+    c.mechanical_losses = 1800.0;
+    c.auxiliary_power = 14_000.0;
+    l.mechanical_losses = 1800.0;
+    l.auxiliary_power = 14_000.0;
+    c.has_exhaust_loss = 1;
+    c.exhaust_annulus_area = 30.0;
+    c.exhaust_curve_count = EXHAUST_CURVE.len() as u32;
+    for (slot, &(x, y)) in c.exhaust_curve.iter_mut().zip(&EXHAUST_CURVE) {
+        *slot = EbullioCurvePoint { x, y };
+    }
+    l.exhaust = Some(ExhaustLoss {
+        annulus_area: 30.0,
+        curve: Curve::new(&EXHAUST_CURVE).unwrap(),
+    });
+    for j in [0, 1, 2, 4, 5, 6] {
+        c.heater_water_pressure_drops[j] = 0.8;
+        l.water_pressure_drops[j] = 0.8;
+    }
+    use EbullioLeakSource as Source;
+    use EbullioSteamDestination as To;
+    let leaks = [
+        (Source::CasingInlet, 0, To::HeaterShell, 1, 0.002),
+        (Source::CasingExhaust, 0, To::HeaterShell, 5, 0.001),
+        (Source::CasingInlet, 0, To::CasingInlet, 1, 0.01),
+        (Source::CasingInlet, 2, To::Condenser, 0, 0.001),
+    ];
+    c.leak_count = leaks.len() as u32;
+    for (k, &(from, casing, to, index, fraction)) in leaks.iter().enumerate() {
+        c.leaks[k] = EbullioLeak {
+            source: from as u32,
+            source_casing: casing,
+            destination: to as u32,
+            destination_index: index,
+            fraction,
+        };
+        let i = index as usize;
+        l.leaks[k] = Some(Leak {
+            from: match from {
+                Source::CasingInlet => LeakSource::CasingInlet(casing as usize),
+                Source::CasingExhaust => LeakSource::CasingExhaust(casing as usize),
+            },
+            to: match to {
+                To::HeaterShell => SteamDestination::HeaterShell(i),
+                To::Condenser => SteamDestination::Condenser,
+                To::CasingInlet => SteamDestination::CasingInlet(i),
+            },
+            fraction,
+        });
+    }
+    c.has_makeup = 1;
+    c.makeup_fraction = 0.01;
+    c.makeup_pressure = 2.0;
+    c.makeup_temperature = 25.0;
+    c.makeup_lost_as = EbullioWaterLoss::Blowdown as u32;
+    l.makeup = Some(Makeup {
+        fraction: 0.01,
+        pressure: 2.0,
+        temperature: 25.0,
+        lost_as: WaterLoss::Blowdown,
+    });
+    c.has_feed_pump_turbine = 1;
+    c.feed_pump_turbine_steam_from = 3;
+    c.feed_pump_turbine_exhaust_to = EbullioSteamDestination::Condenser as u32;
+    c.feed_pump_turbine_efficiency = 0.8;
+    l.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 3,
+        exhaust_to: SteamDestination::Condenser,
+        isentropic_efficiency: 0.8,
+    });
+    (c, core)
+}
+
+#[test]
+fn the_demo_unit_with_every_loss_gives_the_cores_bits() {
+    for generator_curve in [false, true] {
+        let (c, core) = tallowmere_with_losses(generator_curve);
+        assert_eq!(c.decode(), Ok(core));
+        let expected = solve_cycle(&core).unwrap();
+        let (status, r) = solve(&c);
+        assert_eq!(status, EbullioStatus::Ok);
+        same_balance(&r, &expected);
+        assert_eq!(r.output.has_power, 1);
+        // The losses are in the balance: the net output lies below the
+        // cycle's net work (first law; a lossless plant's are equal).
+        assert!(r.output.net_output < r.net_work);
+    }
+}
+
+#[test]
+fn an_older_callers_description_is_the_cycle_without_losses_to_the_bit() {
+    assert_eq!(EbullioCycleSpec::zeroed().losses(), Ok(Losses::NONE));
+    // Every loss set in memory, but the caller's size ends before them:
+    // none is read, and the result's output (past the caller's size too)
+    // is not written.
+    let (mut c, _) = tallowmere_with_losses(true);
+    c.size = super::spec::SPEC_V1_SIZE as u32;
+    let (_, lossless) = tallowmere();
+    assert_eq!(lossless.losses, Losses::NONE);
+    let expected = solve_cycle(&lossless).unwrap();
+    let mut r = marked_result();
+    r.size = super::result::RESULT_V1_SIZE as u32;
+    r.output.net_output = -1.0;
+    // SAFETY: a whole spec and result, their sizes smaller than the structs.
+    let status = unsafe { ebullio_cycle_solve(&c, &mut *r, ptr::null_mut()) };
+    assert_eq!(status, EbullioStatus::Ok);
+    same_v1_balance(&r, &expected);
+    assert_eq!(r.output.net_output, -1.0, "written past the caller's size");
+    // The same description at today's size gives the same bits.
+    let (status, today) = solve(&tallowmere().0);
+    assert_eq!(status, EbullioStatus::Ok);
+    same_balance(&today, &expected);
+}
+
+#[test]
+fn loss_codes_and_counts_are_refused_and_curves_by_the_core() {
+    let (good, _) = tallowmere_with_losses(true);
+    let refused = |spec: &EbullioCycleSpec, want: EbullioStatus| {
+        let mut r = marked_result();
+        let before = r.clone();
+        let mut d = blank_detail();
+        // SAFETY: whole structs with their sizes set.
+        let status = unsafe { ebullio_cycle_solve(spec, &mut *r, &mut d) };
+        assert_eq!(status, want);
+        assert_eq!(d.status, want);
+        assert_eq!(*r, *before, "the result was written on failure");
+        detail_text(&d)
+    };
+    let code = EbullioStatus::UnknownPlantCode;
+    let mut s = good;
+    s.generator_kind = 3;
+    refused(&s, code);
+    let mut s = good;
+    s.has_throttle_flow = 2;
+    refused(&s, code);
+    let mut s = good;
+    s.has_exhaust_loss = 7;
+    refused(&s, code);
+    let mut s = good;
+    s.leaks[3].source = 0;
+    refused(&s, code);
+    let mut s = good;
+    s.leaks[0].destination = 4;
+    refused(&s, code);
+    let mut s = good;
+    s.makeup_lost_as = 0;
+    refused(&s, code);
+    let mut s = good;
+    s.feed_pump_turbine_exhaust_to = 0;
+    refused(&s, code);
+    let mut s = good;
+    s.leak_count = 5;
+    refused(&s, EbullioStatus::BadLength);
+    let mut s = good;
+    s.generator_curve_count = 13;
+    refused(&s, EbullioStatus::BadLength);
+    let mut s = good;
+    s.exhaust_curve_count = 13;
+    refused(&s, EbullioStatus::BadLength);
+    // The core's refusals, with its reason in the detail.
+    let mut s = good;
+    s.exhaust_curve_count = 1;
+    let text = refused(&s, EbullioStatus::InvalidPlant);
+    assert!(text.contains("curve"), "{text}");
+    let mut s = good;
+    s.generator_curve.swap(0, 1);
+    let text = refused(&s, EbullioStatus::InvalidPlant);
+    assert!(text.contains("rise"), "{text}");
+    let mut s = good;
+    s.leaks[0].destination_index = 40;
+    let text = refused(&s, EbullioStatus::InvalidPlant);
+    assert!(text.contains("leak"), "{text}");
+    let mut s = good;
+    s.has_throttle_flow = 0;
+    let text = refused(&s, EbullioStatus::InvalidPlant);
+    assert!(text.contains("throttle flow"), "{text}");
 }

@@ -11,6 +11,7 @@ use ebullio::Property;
 use crate::args::SizePrefixed;
 use crate::codes::{c_units, EbullioUnits};
 
+use super::output::EbullioPlantOutput;
 use super::spec::EBULLIO_MAX_HEATERS;
 
 /// The most state points a result holds (`EbullioCycleResult.points`).
@@ -161,6 +162,8 @@ pub struct EbullioCycleComponent {
 /// Btu/lbm; J/kg in SI base units); heat and steam rates are in the units
 /// their names say, whatever `units` is. Entries past the counts are zero.
 /// Fields are only ever added at the end.
+/// `output` came after `components`: a caller whose `size` ends before
+/// it does not get it.
 #[repr(C)]
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct EbullioCycleResult {
@@ -208,10 +211,13 @@ pub struct EbullioCycleResult {
     pub points: [EbullioCyclePoint; EBULLIO_MAX_POINTS],
     /// The components, in flow order.
     pub components: [EbullioCycleComponent; EBULLIO_MAX_COMPONENTS],
+    /// The plant's output after the description's losses: gross and net
+    /// output and heat rates, and the powers with the throttle flow.
+    pub output: EbullioPlantOutput,
 }
 
 /// Size of `EbullioCycleResult` in its first ABI version: frozen forever.
-const RESULT_V1_SIZE: usize =
+pub(crate) const RESULT_V1_SIZE: usize =
     16 + 14 * 8 + 8 * EBULLIO_MAX_HEATERS + 64 * EBULLIO_MAX_POINTS + 184 * EBULLIO_MAX_COMPONENTS;
 
 const _: () = {
@@ -221,12 +227,14 @@ const _: () = {
     assert!(offset_of!(EbullioCycleResult, turbine_work) == 16);
     assert!(offset_of!(EbullioCycleResult, extraction_fractions) == 128);
     assert!(offset_of!(EbullioCycleResult, points) == 128 + 8 * EBULLIO_MAX_HEATERS);
-    assert!(size_of::<EbullioCycleResult>() == RESULT_V1_SIZE);
+    assert!(offset_of!(EbullioCycleResult, output) == RESULT_V1_SIZE);
+    assert!(size_of::<EbullioCycleResult>() == RESULT_V1_SIZE + size_of::<EbullioPlantOutput>());
 };
 
 // SAFETY: `#[repr(C)]`, starts with `size: u32`, and the const asserts show
 // no padding: four 4-byte fields, doubles, then arrays of padding-free
-// structs whose sizes are multiples of 8.
+// structs whose sizes are multiples of 8, then the padding-free output
+// (doubles, two 4-byte fields, doubles).
 unsafe impl SizePrefixed for EbullioCycleResult {
     const FIRST_SIZE: u32 = RESULT_V1_SIZE as u32;
 }
@@ -287,6 +295,7 @@ impl EbullioCycleResult {
             extraction_fractions: [0.0; EBULLIO_MAX_HEATERS],
             points: [NO_POINT; EBULLIO_MAX_POINTS],
             components: [NO_COMPONENT; EBULLIO_MAX_COMPONENTS],
+            output: EbullioPlantOutput::of(&r.output),
         };
         for (slot, f) in out
             .extraction_fractions
@@ -349,6 +358,7 @@ impl EbullioCycleResult {
             .chain(self.extraction_fractions)
             .chain(points)
             .chain(components)
+            .chain(self.output.numbers())
             .all(f64::is_finite)
     }
 }

@@ -6,7 +6,13 @@ use core::mem::{offset_of, size_of};
 use ebullio::plant::{
     Casing, CycleSpec, Drains, Heater, HeaterApproach, HeaterKind, Reheat, Supply,
 };
+use ebullio::Units;
 
+use super::losses::{
+    EbullioCurvePoint, EbullioLeak, EBULLIO_MAX_CURVE_POINTS, EBULLIO_MAX_LEAKS, NO_CURVE_POINT,
+    NO_LEAK,
+};
+use super::refusal::Refused;
 use crate::args::{PlainInput, SizePrefixed};
 use crate::codes;
 use crate::status::EbullioStatus;
@@ -102,6 +108,10 @@ pub struct EbullioHeater {
 /// from the highest extraction pressure down and are numbered 1, 2, ... in
 /// that order in the result; casings from the throttle to the condenser.
 /// Fields are only ever added at the end.
+/// The losses (from `has_throttle_flow` on) came after `heaters`: all of
+/// them zero, as an older caller's smaller struct leaves them, is the
+/// cycle without losses. Indices of heaters and casings in the losses
+/// count from 0, in the order of `heaters` and `casings`.
 #[repr(C)]
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct EbullioCycleSpec {
@@ -143,10 +153,83 @@ pub struct EbullioCycleSpec {
     pub casings: [EbullioCasing; EBULLIO_MAX_CASINGS],
     /// The feedwater heaters; the first `heater_count` are read.
     pub heaters: [EbullioHeater; EBULLIO_MAX_HEATERS],
+    /// 1 if `throttle_flow` is read (the absolute scale: powers in the
+    /// result, and what a generator curve, an exhaust loss and the
+    /// off-design calls need), 0 for results per unit throttle flow only.
+    pub has_throttle_flow: u32,
+    /// An `EbullioGeneratorKind` (0: lossless).
+    pub generator_kind: u32,
+    /// How many points of `generator_curve` are used (`AgainstLoad`), 2
+    /// to `EBULLIO_MAX_CURVE_POINTS`.
+    pub generator_curve_count: u32,
+    /// 1 if the last casing has an exhaust loss (`exhaust_*` are read), else 0.
+    pub has_exhaust_loss: u32,
+    /// How many points of `exhaust_curve` are used, 2 to `EBULLIO_MAX_CURVE_POINTS`.
+    pub exhaust_curve_count: u32,
+    /// How many entries of `leaks` are used, 0 to `EBULLIO_MAX_LEAKS`.
+    pub leak_count: u32,
+    /// 1 if makeup water enters the hotwell (`makeup_*` are read), else 0.
+    pub has_makeup: u32,
+    /// An `EbullioWaterLoss`: how the water the makeup replaces leaves.
+    pub makeup_lost_as: u32,
+    /// 1 if the boiler feed pump is driven by its own turbine
+    /// (`feed_pump_turbine_*` are read), 0 for a motor-driven one.
+    pub has_feed_pump_turbine: u32,
+    /// The index in `heaters` of the heater whose extraction point
+    /// supplies the feed pump turbine's steam.
+    pub feed_pump_turbine_steam_from: u32,
+    /// An `EbullioSteamDestination` (heater shell or condenser): where the
+    /// feed pump turbine exhausts.
+    pub feed_pump_turbine_exhaust_to: u32,
+    /// The index in `heaters` of that shell (not read for the condenser).
+    pub feed_pump_turbine_exhaust_index: u32,
+    /// Throttle steam mass flow (kg/s; lbm/h in US customary units).
+    pub throttle_flow: f64,
+    /// The generator's efficiency, in (0, 1] (`Constant`).
+    pub generator_efficiency: f64,
+    /// The generator's output at load fraction 1, a power (`AgainstLoad`).
+    pub generator_rated_output: f64,
+    /// Bearing, seal and windage losses of the shaft, a power (0 for none).
+    pub mechanical_losses: f64,
+    /// Power the auxiliaries draw besides the motor-driven pumps of the
+    /// cycle, a power (0 for none).
+    pub auxiliary_power: f64,
+    /// The last stages' total annulus area, in the square of the length
+    /// of the unit system's speed unit: m² (ft² in US customary units).
+    pub exhaust_annulus_area: f64,
+    /// Makeup flow per unit throttle flow, in [0, 1].
+    pub makeup_fraction: f64,
+    /// Makeup pressure as delivered.
+    pub makeup_pressure: f64,
+    /// Makeup temperature as delivered.
+    pub makeup_temperature: f64,
+    /// The feed pump turbine's isentropic efficiency, in (0, 1].
+    pub feed_pump_turbine_efficiency: f64,
+    /// Generator efficiency (y, in (0, 1]) against load fraction (x),
+    /// interpolated linearly, refused outside the curve.
+    pub generator_curve: [EbullioCurvePoint; EBULLIO_MAX_CURVE_POINTS],
+    /// Exhaust loss (y, a specific enthalpy) against annulus velocity (x,
+    /// a speed): machine data.
+    pub exhaust_curve: [EbullioCurvePoint; EBULLIO_MAX_CURVE_POINTS],
+    /// Each closed heater's feedwater (tube) side pressure drop, a
+    /// pressure difference, in the order of `heaters` (0 for none; not
+    /// read for open heaters). The pump below makes it up.
+    pub heater_water_pressure_drops: [f64; EBULLIO_MAX_HEATERS],
+    /// Gland and valve-stem leakages; the first `leak_count` are read.
+    pub leaks: [EbullioLeak; EBULLIO_MAX_LEAKS],
 }
 
 /// Size of `EbullioCycleSpec` in its first ABI version: frozen forever.
-const SPEC_V1_SIZE: usize = 32 + 8 * 8 + 16 * EBULLIO_MAX_CASINGS + 48 * EBULLIO_MAX_HEATERS;
+pub(crate) const SPEC_V1_SIZE: usize =
+    32 + 8 * 8 + 16 * EBULLIO_MAX_CASINGS + 48 * EBULLIO_MAX_HEATERS;
+/// Size with the losses: twelve 4-byte fields, ten doubles, two curves,
+/// the pressure drops and the leakages.
+const SPEC_LOSSES_SIZE: usize = SPEC_V1_SIZE
+    + 12 * 4
+    + 10 * 8
+    + 2 * 16 * EBULLIO_MAX_CURVE_POINTS
+    + 8 * EBULLIO_MAX_HEATERS
+    + 24 * EBULLIO_MAX_LEAKS;
 
 const _: () = {
     assert!(size_of::<EbullioCasing>() == 16);
@@ -155,12 +238,16 @@ const _: () = {
     assert!(offset_of!(EbullioCycleSpec, supply_pressure) == 32);
     assert!(offset_of!(EbullioCycleSpec, casings) == 96);
     assert!(offset_of!(EbullioCycleSpec, heaters) == 96 + 16 * EBULLIO_MAX_CASINGS);
-    assert!(size_of::<EbullioCycleSpec>() == SPEC_V1_SIZE);
+    assert!(offset_of!(EbullioCycleSpec, has_throttle_flow) == SPEC_V1_SIZE);
+    assert!(offset_of!(EbullioCycleSpec, throttle_flow) == SPEC_V1_SIZE + 12 * 4);
+    assert!(offset_of!(EbullioCycleSpec, generator_curve) == SPEC_V1_SIZE + 12 * 4 + 10 * 8);
+    assert!(size_of::<EbullioCycleSpec>() == SPEC_LOSSES_SIZE);
 };
 
 // SAFETY: `#[repr(C)]`, starts with `size: u32`, and the const asserts show
 // no padding: eight 4-byte fields, then doubles, then arrays of padding-free
-// structs of 16 and 48 bytes.
+// structs of 16 and 48 bytes; then twelve 4-byte fields, doubles, and
+// arrays of doubles and of padding-free structs of 16 and 24 bytes.
 unsafe impl SizePrefixed for EbullioCycleSpec {
     const FIRST_SIZE: u32 = SPEC_V1_SIZE as u32;
 }
@@ -205,12 +292,44 @@ impl EbullioCycleSpec {
             condensate_subcooling: 0.0,
             casings: [casing; EBULLIO_MAX_CASINGS],
             heaters: [heater; EBULLIO_MAX_HEATERS],
+            has_throttle_flow: 0,
+            generator_kind: 0,
+            generator_curve_count: 0,
+            has_exhaust_loss: 0,
+            exhaust_curve_count: 0,
+            leak_count: 0,
+            has_makeup: 0,
+            makeup_lost_as: 0,
+            has_feed_pump_turbine: 0,
+            feed_pump_turbine_steam_from: 0,
+            feed_pump_turbine_exhaust_to: 0,
+            feed_pump_turbine_exhaust_index: 0,
+            throttle_flow: 0.0,
+            generator_efficiency: 0.0,
+            generator_rated_output: 0.0,
+            mechanical_losses: 0.0,
+            auxiliary_power: 0.0,
+            exhaust_annulus_area: 0.0,
+            makeup_fraction: 0.0,
+            makeup_pressure: 0.0,
+            makeup_temperature: 0.0,
+            feed_pump_turbine_efficiency: 0.0,
+            generator_curve: [NO_CURVE_POINT; EBULLIO_MAX_CURVE_POINTS],
+            exhaust_curve: [NO_CURVE_POINT; EBULLIO_MAX_CURVE_POINTS],
+            heater_water_pressure_drops: [0.0; EBULLIO_MAX_HEATERS],
+            leaks: [NO_LEAK; EBULLIO_MAX_LEAKS],
         }
+    }
+
+    /// The unit system of its numbers, for the error detail (native if
+    /// the code is unknown; `decode` refuses it).
+    pub(crate) fn units(&self) -> Units {
+        codes::units(self.units).unwrap_or(Units::Native)
     }
 
     /// The core's description. Codes and counts are checked here; every
     /// number is left to the core's solver to judge.
-    pub(crate) fn decode(&self) -> Result<CycleSpec, EbullioStatus> {
+    pub(crate) fn decode(&self) -> Result<CycleSpec, Refused> {
         let units = codes::units(self.units)?;
         let supply = match self.supply_kind {
             1 => Supply::Superheated {
@@ -220,12 +339,12 @@ impl EbullioCycleSpec {
             2 => Supply::SaturatedVapour {
                 pressure: self.supply_pressure,
             },
-            _ => return Err(EbullioStatus::UnknownPlantCode),
+            _ => return Err(EbullioStatus::UnknownPlantCode.into()),
         };
         let casings = count(self.casing_count, EBULLIO_MAX_CASINGS)?;
         let heaters = count(self.heater_count, EBULLIO_MAX_HEATERS)?;
         if self.reserved != 0 {
-            return Err(EbullioStatus::UnknownPlantCode);
+            return Err(EbullioStatus::UnknownPlantCode.into());
         }
         let mut spec = CycleSpec::new(units, supply);
         spec.reheat = flag(self.has_reheat)?.then_some(Reheat {
@@ -240,13 +359,12 @@ impl EbullioCycleSpec {
             spec.push_casing(Casing {
                 exhaust_pressure: c.exhaust_pressure,
                 isentropic_efficiency: c.isentropic_efficiency,
-            })
-            .map_err(|e| EbullioStatus::from(&e))?;
+            })?;
         }
         for h in &self.heaters[..heaters] {
-            spec.push_heater(h.decode()?)
-                .map_err(|e| EbullioStatus::from(&e))?;
+            spec.push_heater(h.decode()?)?;
         }
+        spec.losses = self.losses()?;
         Ok(spec)
     }
 }
@@ -281,7 +399,7 @@ impl EbullioHeater {
 }
 
 /// A yes/no field: 0 or 1, nothing else.
-fn flag(value: u32) -> Result<bool, EbullioStatus> {
+pub(crate) fn flag(value: u32) -> Result<bool, EbullioStatus> {
     match value {
         0 => Ok(false),
         1 => Ok(true),
@@ -290,7 +408,7 @@ fn flag(value: u32) -> Result<bool, EbullioStatus> {
 }
 
 /// A count of array entries in use, at most the array's length.
-fn count(value: u32, capacity: usize) -> Result<usize, EbullioStatus> {
+pub(crate) fn count(value: u32, capacity: usize) -> Result<usize, EbullioStatus> {
     let n = value as usize;
     if n > capacity {
         return Err(EbullioStatus::BadLength);

@@ -2,12 +2,16 @@
  * The plant calls of the C ABI from C99: the demo plant solved through
  * ebullio_cycle_solve and compared bit for bit with the Rust core's own
  * numbers (printed by `cargo run --example plant_reference`, the file
- * named by argv[1]); a recalled textbook cycle; the turbine and pump
- * calls; and the refusals. Built by ffi/tests/run.sh with
+ * named by argv[1]); the same plant with every loss, off its design point
+ * and along a load curve, against the core's numbers too (printed by
+ * `cargo run --example plant_reference -- off-design`, the file named by
+ * argv[2]); a recalled textbook cycle; the turbine and pump calls; and
+ * the refusals. Built by ffi/tests/run.sh with
  *   -std=c99 -Wall -Wextra -Werror -pedantic
  */
 #include <inttypes.h>
 #include <math.h>
+#include <stddef.h>
 #include <stdint.h>
 #include <stdio.h>
 #include <string.h>
@@ -42,6 +46,8 @@ static int failures = 0;
 /* Large blocks live in static storage, not on the stack. */
 static EbullioCycleSpec spec;
 static EbullioCycleResult result;
+static EbullioCycleResult other;
+static EbullioLoadCurve curve;
 
 /* The demo plant (invented): Tallowmere Unit 3, metric engineering units
    (bar, degC). Feed pressure 187 bar and condensate pump 0.80 are invented
@@ -175,10 +181,205 @@ static void demo_plant_bit_for_bit(void) {
             stream(&c->outlets[j]);
         }
     }
-    {
-        uint64_t extra;
-        CHECK(fscanf(reference, "%" SCNx64, &extra) == EOF); /* every number compared */
+}
+
+/* The demo plant's design throttle flow, kg/s (invented). */
+#define DESIGN_FLOW 520.0
+
+/* Every loss of the demo plant (invented numbers, as `with_losses` in
+   ffi/examples/plant_reference.rs): 520 kg/s, a generator of 0.987,
+   1.8 MW mechanical, 14 MW auxiliaries, an exhaust loss on 30 m2 of
+   annulus, 0.8 bar on each closed heater's tubes, four leakages, 1 %
+   makeup for blowdown, a feed pump turbine on heater 4's steam. */
+static void with_losses(EbullioCycleSpec *s) {
+    static const double exhaust[8][2] = {/* m/s, kJ/kg: invented, not machine data */
+                                         {10.0, 90.0},  {60.0, 40.0},  {100.0, 25.0},
+                                         {150.0, 18.0}, {200.0, 22.0}, {250.0, 34.0},
+                                         {300.0, 50.0}, {400.0, 90.0}};
+    static const EbullioLeak leaks[4] = {
+        {EBULLIO_LEAK_SOURCE_CASING_INLET, 0, EBULLIO_STEAM_DESTINATION_HEATER_SHELL, 1, 0.002},
+        {EBULLIO_LEAK_SOURCE_CASING_EXHAUST, 0, EBULLIO_STEAM_DESTINATION_HEATER_SHELL, 5, 0.001},
+        {EBULLIO_LEAK_SOURCE_CASING_INLET, 0, EBULLIO_STEAM_DESTINATION_CASING_INLET, 1, 0.01},
+        {EBULLIO_LEAK_SOURCE_CASING_INLET, 2, EBULLIO_STEAM_DESTINATION_CONDENSER, 0, 0.001}};
+    unsigned i;
+    tallowmere(s);
+    s->has_throttle_flow = 1;
+    s->throttle_flow = DESIGN_FLOW;
+    s->generator_kind = EBULLIO_GENERATOR_KIND_CONSTANT;
+    s->generator_efficiency = 0.987;
+    s->mechanical_losses = 1800.0;
+    s->auxiliary_power = 14000.0;
+    s->has_exhaust_loss = 1;
+    s->exhaust_annulus_area = 30.0;
+    s->exhaust_curve_count = 8;
+    for (i = 0; i < 8; ++i) {
+        s->exhaust_curve[i].x = exhaust[i][0];
+        s->exhaust_curve[i].y = exhaust[i][1];
     }
+    for (i = 0; i < 7; ++i) {
+        s->heater_water_pressure_drops[i] = s->heaters[i].kind == EBULLIO_HEATER_KIND_OPEN ? 0.0 : 0.8;
+    }
+    s->leak_count = 4;
+    memcpy(s->leaks, leaks, sizeof leaks);
+    s->has_makeup = 1;
+    s->makeup_fraction = 0.01;
+    s->makeup_pressure = 2.0;
+    s->makeup_temperature = 25.0;
+    s->makeup_lost_as = EBULLIO_WATER_LOSS_BLOWDOWN;
+    s->has_feed_pump_turbine = 1;
+    s->feed_pump_turbine_steam_from = 3;
+    s->feed_pump_turbine_exhaust_to = EBULLIO_STEAM_DESTINATION_CONDENSER;
+    s->feed_pump_turbine_efficiency = 0.8;
+}
+
+static void totals(const EbullioCycleResult *r) {
+    same("turbine work", r->turbine_work);
+    same("pump work", r->pump_work);
+    same("net work", r->net_work);
+    same("boiler heat", r->boiler_heat);
+    same("reheat heat", r->reheat_heat);
+    same("heat input", r->heat_input);
+    same("condenser duty", r->condenser_duty);
+    same("thermal efficiency", r->thermal_efficiency);
+    same("heat rate kJ/kWh", r->heat_rate_kj_per_kwh);
+    same("heat rate Btu/kWh", r->heat_rate_btu_per_kwh);
+    same("steam rate kg/kWh", r->steam_rate_kg_per_kwh);
+    same("steam rate lbm/kWh", r->steam_rate_lbm_per_kwh);
+    same("back work ratio", r->back_work_ratio);
+    same("Carnot efficiency", r->carnot_efficiency);
+}
+
+static void output(const EbullioPlantOutput *o) {
+    same("shaft work", o->shaft_work);
+    same("generator efficiency", o->generator_efficiency);
+    same("gross output", o->gross_output);
+    same("motor pump work", o->motor_pump_work);
+    same("net output", o->net_output);
+    same("net efficiency", o->net_efficiency);
+    same("gross heat rate", o->gross_heat_rate);
+    same("net heat rate", o->net_heat_rate);
+    same("expansion line end", o->expansion_line_end);
+    same("exhaust loss", o->exhaust_loss);
+    same("annulus velocity", o->annulus_velocity);
+    same("throttle flow", o->power.throttle_flow);
+    same("heat input power", o->power.heat_input);
+    same("condenser duty power", o->power.condenser_duty);
+    same("shaft power", o->power.shaft_power);
+    same("mechanical losses", o->power.mechanical_losses);
+    same("generator losses", o->power.generator_losses);
+    same("gross output power", o->power.gross_output);
+    same("motor pump power", o->power.motor_pump_power);
+    same("auxiliary power", o->power.auxiliary_power);
+    same("net output power", o->power.net_output);
+    /* Every loss takes its share: net < gross < shaft power. */
+    CHECK(o->has_power == 1);
+    CHECK(o->power.net_output < o->power.gross_output &&
+          o->power.gross_output < o->power.shaft_power);
+}
+
+static void operating_point(EbullioOperatingPoint *p, double flow, uint32_t control) {
+    memset(p, 0, sizeof *p);
+    p->size = (uint32_t)sizeof *p;
+    p->control = control;
+    p->condenser = EBULLIO_CONDENSER_CONDITION_DESIGN;
+    p->throttle_flow = flow;
+}
+
+/* The demo plant with every loss at design, at 80 % flow on sliding
+   pressure, along a load curve at fixed pressure (the 110 % row refused:
+   the valves wide open pass less) and at 75 % of its net output, bit for
+   bit with the core; an older caller's smaller blocks. */
+static void losses_and_off_design(void) {
+    static const double flows[5] = {0.4 * DESIGN_FLOW, 0.6 * DESIGN_FLOW, 0.8 * DESIGN_FLOW,
+                                     1.0 * DESIGN_FLOW, 1.1 * DESIGN_FLOW};
+    EbullioOperatingPoint point;
+    EbullioOffDesignOptions none;
+    EbullioErrorDetail why;
+    double target;
+    uint32_t i;
+    memset(&why, 0, sizeof why);
+    why.size = (uint32_t)sizeof why;
+    memset(&none, 0, sizeof none);
+    none.size = (uint32_t)sizeof none;
+    with_losses(&spec);
+    memset(&result, 0, sizeof result);
+    result.size = (uint32_t)sizeof result;
+    CHECK_STATUS(ebullio_cycle_solve(&spec, &result, &why), EBULLIO_STATUS_OK);
+    output(&result.output);
+    target = 0.75 * result.output.power.net_output;
+
+    operating_point(&point, 0.8 * DESIGN_FLOW, EBULLIO_THROTTLE_CONTROL_SLIDING_PRESSURE);
+    memset(&other, 0, sizeof other);
+    other.size = (uint32_t)sizeof other;
+    CHECK_STATUS(ebullio_off_design_solve(&spec, NULL, &point, &other, &why), EBULLIO_STATUS_OK);
+    totals(&other);
+    output(&other.output);
+    /* Sliding pressure: the throttle pressure falls with the flow. */
+    CHECK(other.points[0].role == EBULLIO_POINT_ROLE_THROTTLE && other.points[0].pressure < 167.0);
+
+    operating_point(&point, 0.0, EBULLIO_THROTTLE_CONTROL_FIXED_PRESSURE);
+    memset(&curve, 0, sizeof curve);
+    curve.size = (uint32_t)sizeof curve;
+    CHECK_STATUS(ebullio_load_curve(&spec, &none, &point, flows, 5, &curve, &why),
+                 EBULLIO_STATUS_OK);
+    CHECK(curve.row_count == 5 && curve.units == EBULLIO_UNITS_METRIC_ENGINEERING);
+    for (i = 0; i < 4; ++i) {
+        const EbullioLoadPoint *row = &curve.rows[i];
+        CHECK_STATUS(row->status, EBULLIO_STATUS_OK);
+        CHECK(row->throttle_flow == flows[i]);
+        same("throttle pressure", row->throttle_pressure);
+        same("thermal efficiency", row->thermal_efficiency);
+        output(&row->output);
+        /* The boiler holds the design throttle pressure. */
+        CHECK(row->throttle_pressure == 167.0);
+        /* The heat rate rises as the load falls (issue 16's check on the
+           demo unit; throttling and lower pressures at part load, common
+           practice). */
+        CHECK(i == 0 || row->output.net_heat_rate < curve.rows[i - 1].output.net_heat_rate);
+    }
+    CHECK_STATUS(curve.rows[4].status, EBULLIO_STATUS_INVALID_PLANT);
+    CHECK(curve.rows[4].throttle_flow == flows[4] && curve.rows[5].throttle_flow == 0.0);
+
+    operating_point(&point, 0.0, EBULLIO_THROTTLE_CONTROL_SLIDING_PRESSURE);
+    CHECK_STATUS(ebullio_output_solve(&spec, NULL, &point, target, &other, &why),
+                 EBULLIO_STATUS_OK);
+    totals(&other);
+    output(&other.output);
+    /* The flow found gives the target, to the solver's 1e-10. */
+    CHECK(fabs(other.output.power.net_output - target) <= 1e-9 * target);
+
+    /* Refusals: a flow above the valves' at fixed pressure (the core's
+       reason in the detail), a control that is no code, too many flows. */
+    operating_point(&point, 1.1 * DESIGN_FLOW, EBULLIO_THROTTLE_CONTROL_FIXED_PRESSURE);
+    other.turbine_work = -1.0;
+    CHECK_STATUS(ebullio_off_design_solve(&spec, NULL, &point, &other, &why),
+                 EBULLIO_STATUS_INVALID_PLANT);
+    CHECK(why.status == EBULLIO_STATUS_INVALID_PLANT);
+    CHECK(strstr(why.message, "control valves") != NULL);
+    point.control = 7;
+    CHECK_STATUS(ebullio_off_design_solve(&spec, NULL, &point, &other, NULL),
+                 EBULLIO_STATUS_UNKNOWN_PLANT_CODE);
+    CHECK_STATUS(ebullio_load_curve(&spec, NULL, &point, flows, EBULLIO_MAX_LOAD_POINTS + 1,
+                                    &curve, NULL),
+                 EBULLIO_STATUS_BAD_LENGTH);
+    CHECK(other.turbine_work == -1.0);
+
+    /* An older caller: its description ends before the losses, its
+       result before the output. The losses set in memory are not read
+       (the lossless plant's bits), the output is not written. */
+    spec.size = (uint32_t)offsetof(EbullioCycleSpec, has_throttle_flow);
+    memset(&other, 0, sizeof other);
+    other.size = (uint32_t)offsetof(EbullioCycleResult, output);
+    other.output.net_output = -1.0;
+    CHECK_STATUS(ebullio_cycle_solve(&spec, &other, NULL), EBULLIO_STATUS_OK);
+    tallowmere(&spec);
+    memset(&result, 0, sizeof result);
+    result.size = (uint32_t)sizeof result;
+    CHECK_STATUS(ebullio_cycle_solve(&spec, &result, NULL), EBULLIO_STATUS_OK);
+    CHECK(memcmp((const char *)&other + 4, (const char *)&result + 4,
+                 offsetof(EbullioCycleResult, output) - 4) == 0);
+    CHECK(other.output.net_output == -1.0);
+    CHECK(result.output.has_power == 0 && result.output.net_output == result.net_work);
 }
 
 static void textbook_cycle(void) {
@@ -325,13 +526,27 @@ static void refusals(void) {
     CHECK(result.turbine_work == marked);
 }
 
+/* Every number of the reference file compared. */
+static void reference_used_up(void) {
+    uint64_t extra;
+    CHECK(fscanf(reference, "%" SCNx64, &extra) == EOF);
+    fclose(reference);
+}
+
 int main(int argc, char **argv) {
-    if (argc != 2 || !(reference = fopen(argv[1], "r"))) {
-        fprintf(stderr, "usage: test_plant REFERENCE (from the plant_reference example)\n");
+    if (argc != 3 || !(reference = fopen(argv[1], "r"))) {
+        fprintf(stderr, "usage: test_plant REFERENCE OFF_DESIGN_REFERENCE (from the "
+                        "plant_reference example, without and with `off-design`)\n");
         return 2;
     }
     demo_plant_bit_for_bit();
-    fclose(reference);
+    reference_used_up();
+    if (!(reference = fopen(argv[2], "r"))) {
+        fprintf(stderr, "cannot open %s\n", argv[2]);
+        return 2;
+    }
+    losses_and_off_design();
+    reference_used_up();
     textbook_cycle();
     components();
     heaters();

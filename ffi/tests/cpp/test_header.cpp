@@ -2,6 +2,7 @@
 // one call through it: the extern "C" block, the typed enums and the
 // struct layout C++ sees.
 #include <cmath>
+#include <cstddef>
 #include <cstdio>
 #include <cstring>
 #include <type_traits>
@@ -18,6 +19,22 @@ static_assert(std::is_same<std::underlying_type<EbullioProperty>::type, uint32_t
 static_assert(std::is_same<std::underlying_type<EbullioVariable>::type, uint32_t>::value,
               "variables are 32-bit unsigned");
 static_assert(EBULLIO_STATUS_OK == 0, "0 is success");
+// The plant blocks as the Rust side lays them out (its const asserts):
+// the losses and the output begin where the version-1 structs ended.
+static_assert(offsetof(EbullioCycleSpec, has_throttle_flow) == 736,
+              "EbullioCycleSpec version 1 is 736 bytes");
+static_assert(sizeof(EbullioCycleSpec) == 1440, "EbullioCycleSpec with the losses");
+static_assert(offsetof(EbullioCycleResult, output) == 20832,
+              "EbullioCycleResult version 1 is 20832 bytes");
+static_assert(sizeof(EbullioPlantOutput) == 176, "EbullioPlantOutput layout");
+static_assert(sizeof(EbullioCycleResult) == 20832 + 176, "EbullioCycleResult with the output");
+static_assert(sizeof(EbullioOffDesignOptions) == 48 + 16 * EBULLIO_MAX_CURVE_POINTS,
+              "EbullioOffDesignOptions version 1 layout");
+static_assert(sizeof(EbullioOperatingPoint) == 48 + 4 * EBULLIO_MAX_HEATERS,
+              "EbullioOperatingPoint version 1 layout");
+static_assert(sizeof(EbullioLoadPoint) == 208, "EbullioLoadPoint layout");
+static_assert(sizeof(EbullioLoadCurve) == 16 + 208 * EBULLIO_MAX_LOAD_POINTS,
+              "EbullioLoadCurve version 1 layout");
 
 int main() {
     EbullioState s;

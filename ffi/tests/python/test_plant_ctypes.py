@@ -2,6 +2,8 @@
 header the way a macro module's type declarations would be: the demo plant
 solved by ebullio_cycle_solve and compared bit for bit with the Rust core's
 own numbers (the plant_reference example's output), and a refusal.
+The structs are declared in their version-1 layout, which ends before the
+losses and the plant output: an older caller, whose results stay the same.
 Standard library only.
 Usage: python3 test_plant_ctypes.py path/to/libebullio_c.so REFERENCE
 """

@@ -5,6 +5,7 @@
 
 pub mod c_abi;
 pub mod c_abi_measured;
+pub mod c_abi_plant;
 pub mod derivatives;
 pub mod findings;
 pub mod limits;

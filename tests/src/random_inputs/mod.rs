@@ -2,6 +2,7 @@
 //! [`draw::Draw`], adversarial single values, in-range states to start
 //! from.
 
+pub mod c_plant;
 pub mod cases;
 pub mod draw;
 pub mod measured;
