@@ -36,9 +36,15 @@ impl ZoneKind {
     /// Why a zone whose end temperatures meet or cross is refused.
     fn crossing(self) -> &'static str {
         match self {
-            ZoneKind::DrainCooling => "its drain cooling zone's temperatures meet or cross: no positive log-mean temperature difference",
-            ZoneKind::Condensing => "its condensing zone's temperatures meet or cross: no positive log-mean temperature difference",
-            ZoneKind::Desuperheating => "its desuperheating zone's temperatures meet or cross: no positive log-mean temperature difference",
+            ZoneKind::DrainCooling => {
+                "its drain cooling zone's ends meet or cross: no positive log-mean difference"
+            }
+            ZoneKind::Condensing => {
+                "its condensing zone's ends meet or cross: no positive log-mean difference"
+            }
+            ZoneKind::Desuperheating => {
+                "its desuperheating zone's ends meet or cross: no positive log-mean difference"
+            }
         }
     }
 }
@@ -74,7 +80,7 @@ impl Zone {
                 part,
                 self.kind.crossing(),
                 PlantFigure::native(
-                    "end temperature difference",
+                    "end difference",
                     Quantity::TemperatureDifference,
                     a.min(b),
                     Some(0.0),
@@ -285,9 +291,9 @@ fn heater_ua(
     if zones.condensing.duty.is_nan() || zones.condensing.duty <= 0.0 {
         return Err(refuse_with(
             part,
-            "its condensing zone takes no heat at design: its other zones give all its feedwater's rise",
+            "its zones' temperatures cross: its condensing zone takes no heat at design",
             PlantFigure::native(
-                "condensing duty per unit throttle flow",
+                "condensing duty",
                 Quantity::Enthalpy,
                 zones.condensing.duty,
                 Some(0.0),
