@@ -503,10 +503,8 @@ fn heat_rate_rises_as_the_load_falls() {
     }
 }
 
-/// The demo unit (native units) with closed heater `number`'s approach
-/// replaced.
-fn with_approach(number: usize, approach: HeaterApproach) -> CycleSpec {
-    let design = unit(Units::Native);
+/// `design` with closed heater `number`'s approach replaced.
+fn with_approach(design: &CycleSpec, number: usize, approach: HeaterApproach) -> CycleSpec {
     let mut spec = CycleSpec::new(design.units, design.supply);
     spec.reheat = design.reheat;
     spec.feed_pressure = design.feed_pressure;
@@ -527,6 +525,63 @@ fn with_approach(number: usize, approach: HeaterApproach) -> CycleSpec {
         spec.push_heater(heater).unwrap();
     }
     spec
+}
+
+/// Two other designs of the demo unit: every closed heater without a
+/// drain cooler (`drain_cooler_approach: None`: the drain leaves as
+/// saturated liquid, so there is no drain cooling zone, at design or
+/// off it), and the top heater at a TTD of −1.5 K (its feedwater leaving
+/// above the shell saturation temperature, its condensing zone ending
+/// close to it). Both solve from 20 % to 100 % of the design flow with
+/// a fixed UA and with Dittus–Boelter's exponent: every component
+/// balances, the heat rate rises as the load falls (common practice),
+/// and the drains without a drain cooler stay saturated.
+#[test]
+fn designs_without_drain_coolers_or_with_a_negative_ttd_solve_at_every_load() {
+    let units = Units::Native;
+    let mut no_drain_coolers = unit(units);
+    for k in closed_heaters(&unit(units)) {
+        no_drain_coolers = with_approach(
+            &no_drain_coolers,
+            k as usize,
+            HeaterApproach {
+                terminal_temperature_difference: 2.8,
+                drain_cooler_approach: None,
+            },
+        );
+    }
+    let negative_ttd = with_approach(
+        &unit(units),
+        1,
+        HeaterApproach {
+            terminal_temperature_difference: -1.5,
+            drain_cooler_approach: Some(5.6),
+        },
+    );
+    for (spec, saturated_drains) in [(no_drain_coolers, true), (negative_ttd, false)] {
+        for exponent in [0.0, DITTUS_BOELTER] {
+            let model = OffDesignModel::calibrate_with(&spec, &options(exponent)).unwrap();
+            for control in CONTROLS {
+                let mut rates = Vec::new();
+                for load in [1.0, 0.8, 0.6, 0.4, 0.3, 0.2] {
+                    let r = model.solve(&at(units, load, control)).unwrap();
+                    check_components(&r);
+                    rates.push(r.output.net_heat_rate);
+                    for k in closed_heaters(&spec)
+                        .into_iter()
+                        .filter(|_| saturated_drains)
+                    {
+                        let x = reading(&r, k);
+                        let t_sat = saturation(x.p_shell).0;
+                        assert!((x.t_drain - t_sat).abs() <= 1e-9 * t_sat, "heater {k}");
+                    }
+                }
+                for pair in rates.windows(2) {
+                    assert!(pair[1] > pair[0], "{exponent} {control:?}: {rates:?}");
+                }
+            }
+        }
+    }
 }
 
 /// The refusal of `spec` calibrated with `exponent`, checked to fit the
@@ -563,6 +618,7 @@ fn what_the_heaters_by_their_ua_cannot_take_is_refused() {
     // inlet temperature, so the drain cooling zone's temperatures meet
     // at that end and its UA would be infinite. The cycle itself solves.
     let no_lmtd = with_approach(
+        &unit(Units::Native),
         2,
         HeaterApproach {
             terminal_temperature_difference: 2.8,
@@ -588,6 +644,7 @@ fn what_the_heaters_by_their_ua_cannot_take_is_refused() {
     // cross (the condensing zone would cool the feedwater). The cycle
     // itself solves.
     let crossing = with_approach(
+        &unit(Units::Native),
         7,
         HeaterApproach {
             terminal_temperature_difference: 45.0,

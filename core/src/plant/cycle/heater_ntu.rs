@@ -46,22 +46,13 @@ const APPROACH_TOLERANCE: f64 = 1e-9;
 /// about the approaches' tolerance.
 const FRACTION_TOLERANCE: f64 = 1e-10;
 
-/// Times in a row a refused pass may retreat toward the approaches that
-/// last solved before the refusal stands: each halves the step, so ten
-/// leave a thousandth of it.
-const MAX_RETREATS: usize = 10;
-
 /// The closed heaters' part of the off-design passes: the approaches
 /// each pass takes, from the design's, and from then on those the last
 /// pass's flows give.
 pub(super) struct HeaterPasses<'a> {
     calibrated: &'a CalibratedHeaters,
-    /// Those of the last pass that solved.
-    solved: [ZonedApproach; MAX_HEATERS],
     /// Those the coming pass takes.
     next: [ZonedApproach; MAX_HEATERS],
-    /// Retreats since the last pass that solved.
-    retreats: usize,
 }
 
 impl<'a> HeaterPasses<'a> {
@@ -76,9 +67,7 @@ impl<'a> HeaterPasses<'a> {
         });
         Ok(HeaterPasses {
             calibrated,
-            solved: design,
             next: design,
-            retreats: 0,
         })
     }
 
@@ -107,8 +96,6 @@ impl<'a> HeaterPasses<'a> {
         solved: &HeaterOperations,
         throttle_flow: f64,
     ) -> Result<bool, Error> {
-        self.solved = self.next;
-        self.retreats = 0;
         let mut settled = true;
         for (j, ((next, ua), op)) in self
             .next
@@ -128,30 +115,22 @@ impl<'a> HeaterPasses<'a> {
         Ok(settled)
     }
 
-    /// After a pass refused at the approaches the last balance's flows
-    /// gave: halves their step from those that last solved and returns
-    /// whether the pass may be tried again. Far from the answer those
-    /// flows move with the approaches (an extraction falls, and with it
-    /// the superheat a negative TTD needs), so a whole step can
-    /// overshoot into a heater the cycle refuses.
-    pub(super) fn retreat(&mut self) -> bool {
-        if self.retreats == MAX_RETREATS || self.next == self.solved {
-            return false;
-        }
-        self.retreats += 1;
-        let half = |a: f64, b: f64| 0.5 * (a + b);
-        for (next, solved) in self.next.iter_mut().zip(&self.solved) {
-            let (a, b) = (&mut next.approach, solved.approach);
-            a.terminal_temperature_difference = half(
-                a.terminal_temperature_difference,
-                b.terminal_temperature_difference,
-            );
-            if let (Some(x), Some(y)) = (&mut a.drain_cooler_approach, b.drain_cooler_approach) {
-                *x = half(*x, y);
-            }
-            next.desuperheated = half(next.desuperheated, solved.desuperheated);
-        }
-        true
+    /// After a pass refused: whether to try again, with the approaches
+    /// the flows of its balance give (`solved`, when the refusal came
+    /// after the sweeps, as a limit of the balance does) unless they are
+    /// those it was refused at. Far from the answer the flows move with
+    /// the approaches: an extraction falls, and with it the superheat a
+    /// negative TTD needs (`closed_heater::desuperheating_zone`), so a
+    /// pass may overshoot into a heater the cycle refuses; the approaches
+    /// its own flows give take at most its own superheat, and at the
+    /// answer the flows and the approaches agree.
+    pub(super) fn after_refusal(
+        &mut self,
+        spec: &CycleSpec,
+        solved: &HeaterOperations,
+        throttle_flow: f64,
+    ) -> Result<bool, Error> {
+        Ok(solved.recorded() && !self.advance(spec, solved, throttle_flow)?)
     }
 }
 

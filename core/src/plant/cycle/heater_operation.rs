@@ -86,6 +86,12 @@ impl HeaterOperations {
         }
     }
 
+    /// Whether a solve recorded its closed heaters (it got past its
+    /// sweeps).
+    pub(super) fn recorded(&self) -> bool {
+        self.heaters.iter().any(Option::is_some)
+    }
+
     /// Each heater, by index in the description.
     pub(super) fn heaters(&self) -> &[Option<HeaterOperation>; MAX_HEATERS] {
         &self.heaters
