@@ -118,8 +118,9 @@ impl<'a> HeaterPasses<'a> {
     /// After a pass refused: whether to try again, with the approaches
     /// the flows of its balance give (`solved`, when the refusal came
     /// after the sweeps, as a limit of the balance does) unless they are
-    /// those it was refused at. Far from the answer the flows move with
-    /// the approaches: an extraction falls, and with it the superheat a
+    /// those it was refused at or its zones cannot give any (the refusal
+    /// then stands). Far from the answer the flows move with the
+    /// approaches: an extraction falls, and with it the superheat a
     /// negative TTD needs (`closed_heater::desuperheating_zone`), so a
     /// pass may overshoot into a heater the cycle refuses; the approaches
     /// its own flows give take at most its own superheat, and at the
@@ -129,8 +130,8 @@ impl<'a> HeaterPasses<'a> {
         spec: &CycleSpec,
         solved: &HeaterOperations,
         throttle_flow: f64,
-    ) -> Result<bool, Error> {
-        Ok(solved.recorded() && !self.advance(spec, solved, throttle_flow)?)
+    ) -> bool {
+        solved.recorded() && matches!(self.advance(spec, solved, throttle_flow), Ok(false))
     }
 }
 

@@ -269,16 +269,14 @@ impl OffDesignModel {
                 Ok(balance) => balance,
                 // A pass refused at the approaches the last balance gave
                 // may retry with those its own flows give.
-                Err(error) => {
-                    let retry = match &mut heater_passes {
-                        Some(passes) => passes.after_refusal(&spec, &heaters, flow)?,
-                        None => false,
-                    };
-                    if retry {
-                        continue;
-                    }
-                    return Err(error);
+                Err(_)
+                    if heater_passes
+                        .as_mut()
+                        .is_some_and(|passes| passes.after_refusal(&spec, &heaters, flow)) =>
+                {
+                    continue
                 }
+                Err(error) => return Err(error),
             };
             if solved.groups().len() != self.at_design.groups().len() {
                 return Err(refuse(
