@@ -153,18 +153,17 @@ impl Zones {
                 .native()
                 .t)
         };
-        let drain_cooling = match op.drain_cooler {
-            true => {
-                let duty = op.drain_flow * (h_liquid - op.drain_enthalpy);
-                let cold_out = between(op.inlet_enthalpy + per_tube_flow(duty))?;
-                Some(Zone {
-                    kind: ZoneKind::DrainCooling,
-                    duty,
-                    hot: (saturation, op.drain_temperature),
-                    cold: (op.inlet_temperature, cold_out),
-                })
-            }
-            false => None,
+        let drain_cooling = if op.drain_cooler {
+            let duty = op.drain_flow * (h_liquid - op.drain_enthalpy);
+            let cold_out = between(op.inlet_enthalpy + per_tube_flow(duty))?;
+            Some(Zone {
+                kind: ZoneKind::DrainCooling,
+                duty,
+                hot: (saturation, op.drain_temperature),
+                cold: (op.inlet_temperature, cold_out),
+            })
+        } else {
+            None
         };
         let superheat = op.steam_flow * (op.steam_enthalpy - h_vapour);
         let desuperheating = match desuperheated {
@@ -239,9 +238,10 @@ pub(super) struct CalibratedHeaters {
 
 /// The exponents a UA may scale with flow by: 0 (UA fixed) to 1 (UA
 /// proportional to flow). Forced convection film coefficients scale
-/// with velocity to about 0.8 in turbulent flow (Dittus–Boelter, tube
-/// side) and less in laminar or cross flow; none grows faster than the
-/// flow itself (common practice).
+/// with velocity to the power 0.8 in turbulent tube flow (Dittus–Boelter,
+/// recalled from Incropera & DeWitt) and to lower powers across tube
+/// banks or in laminar flow; none grows faster than the flow itself
+/// (common practice).
 const EXPONENT_RANGE: (f64, f64) = (0.0, 1.0);
 
 impl CalibratedHeaters {
