@@ -149,7 +149,7 @@ fn reading(r: &CycleResult, number: u8) -> Reading {
     }
 }
 
-/// The closed heaters' numbers in the demo unit.
+/// The closed heaters' numbers in `spec`.
 fn closed_heaters(spec: &CycleSpec) -> Vec<u8> {
     spec.heaters()
         .iter()
@@ -211,7 +211,7 @@ fn counterflow(ntu: f64, cr: f64) -> f64 {
 /// steam is superheated) the fraction `desuperheated` of the steam's
 /// superheat, the steam's temperature falling linearly with its
 /// enthalpy; the condensing zone the rest. The feedwater between zones
-/// at its outlet pressure; duties in kW at `throttle` kg/s.
+/// at its outlet pressure; duties in kW (the reading's flows in kg/s).
 struct Zones {
     saturation: f64,
     drain_cooling: Zone,
@@ -429,8 +429,8 @@ fn every_component_balances_from_30_to_100_percent() {
     }
 }
 
-/// The TTD and DCA of every closed heater as the load falls, from the
-/// load curve of `model`.
+/// The TTD and DCA of every closed heater at each of `LOADS`, solved by
+/// `model`.
 fn approaches_along_the_load(
     model: &OffDesignModel,
     control: ThrottleControl,
