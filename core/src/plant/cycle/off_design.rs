@@ -211,7 +211,9 @@ impl OffDesignModel {
     /// The unit at `point`: a full balance as [`solve_cycle`](super::solve_cycle)
     /// gives one, at the stage pressures where every group's cone law
     /// holds with the flows of that balance (to relative 1e-11 in the
-    /// pressures). At a fixed throttle pressure the valves wide open pass
+    /// pressures) and, with [`OffDesignOptions::heater_transfer`], where
+    /// each closed heater's TTD and DCA are those its zones give at those
+    /// flows (to 1e-9 K). At a fixed throttle pressure the valves wide open pass
     /// the flow the first group takes at the design throttle pressure; a
     /// larger flow is refused (part "control valves"). Errors in the
     /// design's units; a balance whose pressures do not settle is
