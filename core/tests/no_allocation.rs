@@ -384,6 +384,27 @@ fn exercise_plant() -> f64 {
         Ok(r) => sum += r.output.net_heat_rate,
         Err(e) => panic!("the plant solves at a net output: {e}"),
     }
+    // Its closed heaters by their design UA per zone, at 80 % and 40 %
+    // of its flow; an exponent outside [0, 1] refused.
+    let by_ua = |exponent| OffDesignOptions {
+        heater_transfer: Some(HeaterTransfer {
+            ua_flow_exponent: exponent,
+        }),
+        ..OffDesignOptions::NONE
+    };
+    let model = OffDesignModel::calibrate_with(&lossy, &by_ua(0.8))
+        .expect("the design calibrates with its heaters' UA");
+    for flow in [400.0, 200.0] {
+        match model.solve(&OperatingPoint::new(flow, ThrottleControl::SlidingPressure)) {
+            Ok(r) => sum += r.output.net_heat_rate,
+            Err(e) => panic!("the plant solves off design with its heaters' UA: {e}"),
+        }
+    }
+    if let Err(refusal) = OffDesignModel::calibrate_with(&lossy, &by_ua(2.0)) {
+        let mut length = TextLength(0);
+        let _ = write!(length, "{refusal}");
+        sum += length.0 as f64;
+    }
     let mut bad = spec;
     bad.feed_pump_efficiency = 2.0;
     // The refusal names its part and figure, and prints without the heap.

@@ -21,7 +21,10 @@
 //! makeup, which the sweeps and the record read. Off the design point,
 //! `off_design.rs` runs the same steps at the pressures `cone_law.rs`
 //! gives, `load_curve.rs` at several flows and `target_output.rs` at
-//! the flow that gives a net output.
+//! the flow that gives a net output; with the closed heaters by their
+//! UA, `heater_operation.rs` records each heater's streams,
+//! `heater_zones.rs` splits it into zones and calibrates their UA and
+//! `heater_ntu.rs` solves them by ε–NTU.
 
 mod assembly;
 mod cone_law;
@@ -30,6 +33,9 @@ mod ends;
 mod exhaust;
 mod expansion;
 mod generator;
+mod heater_ntu;
+mod heater_operation;
+mod heater_zones;
 mod limits;
 pub(super) mod load_curve;
 pub(super) mod losses;
@@ -46,6 +52,7 @@ mod train;
 
 use self::assembly::Assembly;
 use self::cone_law::StageGroups;
+use self::heater_operation::HeaterOperations;
 use self::result::CycleResult;
 use self::spec::{CycleSpec, Heater, HeaterKind, MAX_CASINGS};
 use crate::plant::fault::in_caller_units;
@@ -80,18 +87,20 @@ const CONTROL_VALVES: PlantPart = PlantPart::single("control valves");
 /// takes above the shell saturation temperature comes from the steam's
 /// superheat alone. Errors are in `spec.units`.
 pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
-    solve(spec, None, None).map_err(|e| in_caller_units(e, spec.units))
+    solve(spec, None, None, None).map_err(|e| in_caller_units(e, spec.units))
 }
 
 /// The steps in the order that also decides which refusal a cycle with
 /// several faults gets, all in native units. Off-design operation adds
-/// two things: `control_valves`, the pressure (native) the throttle
-/// steam is throttled to before the first stage group, and `groups`,
-/// which receives each stage group's flow and end pressures.
+/// three things: `control_valves`, the pressure (native) the throttle
+/// steam is throttled to before the first stage group, `groups`, which
+/// receives each stage group's flow and end pressures, and `heaters`,
+/// which receives each closed heater's streams.
 fn solve(
     spec: &CycleSpec,
     control_valves: Option<f64>,
     groups: Option<&mut StageGroups>,
+    heaters: Option<&mut HeaterOperations>,
 ) -> Result<CycleResult, Error> {
     ends::check_casings(spec)?;
     // The hotwell first: the condenser's saturation range (triple point
@@ -128,6 +137,9 @@ fn solve(
     };
     if let Some(groups) = groups {
         groups.record(&line, &flows, &side);
+    }
+    if let Some(heaters) = heaters {
+        heaters.record(spec.heaters(), &shell, &flows.water);
     }
     limits::check_extractions(spec.heaters(), &flows, &shell, &side, &line)?;
     let boiler_heat = side.boiler_heat(

@@ -11,11 +11,16 @@
 //!
 //! Kept at design for now: each section's isentropic efficiency (the
 //! correction against the ratio of volume flow to design is a later
-//! step, at [`OffDesignModel::spec_at`]) and each heater's TTD and DCA
-//! (its UA per zone and ε–NTU are a later step).
+//! step, at [`OffDesignModel::spec_at`]). Each closed heater keeps its
+//! design TTD and DCA, or with [`OffDesignOptions::heater_transfer`]
+//! takes those its zones' UA give at the last pass's flows
+//! (`heater_zones.rs`, `heater_ntu.rs`), iterated with the pressures.
 
 use super::cone_law::{GroupOperation, StageGroups};
 use super::expansion::MAX_GROUPS;
+use super::heater_ntu::HeaterPasses;
+use super::heater_operation::HeaterOperations;
+use super::heater_zones::CalibratedHeaters;
 use super::losses::Losses;
 use super::off_design_options::{
     CondenserCondition, HeatersOutOfService, OffDesignOptions, ALL_IN_SERVICE,
@@ -99,13 +104,20 @@ pub struct OffDesignModel {
     stations: [Station; MAX_HEATERS],
     /// What the model knows beyond the design balance.
     options: OffDesignOptions,
+    /// The closed heaters' UA per zone, with `options.heater_transfer`.
+    heaters: Option<CalibratedHeaters>,
 }
 
 /// Passes of the pressures and the balance allowed. The pressures move
 /// with the flows' small changes and with p·v at the groups' inlets,
 /// contracting about tenfold a pass. Measured: the demo unit of
 /// `plant_off_design.rs` settles in at most 12 passes from 30 % to 100 %
-/// of its flow, either way of controlling the throttle.
+/// of its flow, either way of controlling the throttle; with its heaters
+/// by their UA (`plant_heater_transfer.rs`) in at most 15 with a UA
+/// flow exponent of 0.5 to 1, 16 with 0 (two of them refused and
+/// retried, `HeaterPasses::after_refusal`); designs without drain
+/// coolers or with a negative TTD, at a fixed UA, in at most 30 at 15 %
+/// of the flow.
 const MAX_PASSES: usize = 40;
 /// Pressures that move less than this (relative) between passes have
 /// settled: finer than the cone law is needed, coarser than the states'
@@ -135,10 +147,7 @@ impl OffDesignModel {
         design: &CycleSpec,
         options: &OffDesignOptions,
     ) -> Result<OffDesignModel, Error> {
-        if options.efficiency_correction.is_some()
-            || options.design_cooling_water.is_some()
-            || options.heater_transfer.is_some()
-        {
+        if options.efficiency_correction.is_some() || options.design_cooling_water.is_some() {
             return Err(refuse(MODEL, "its options are not supported yet"));
         }
         let Some(design_flow) = throttle_flow(&design.losses, design.units)? else {
@@ -148,7 +157,13 @@ impl OffDesignModel {
             ));
         };
         let mut at_design = StageGroups::NONE;
-        solve(design, None, Some(&mut at_design))?;
+        let mut heaters_at_design = HeaterOperations::NONE;
+        solve(
+            design,
+            None,
+            Some(&mut at_design),
+            Some(&mut heaters_at_design),
+        )?;
         let mut flow_coefficients = [0.0; MAX_GROUPS];
         for (k, group) in flow_coefficients.iter_mut().zip(at_design.groups()) {
             *k = group.flow_coefficient(design_flow);
@@ -171,6 +186,15 @@ impl OffDesignModel {
             flow_coefficients,
             stations,
             options: *options,
+            heaters: match &options.heater_transfer {
+                Some(transfer) => Some(CalibratedHeaters::calibrate(
+                    design,
+                    &heaters_at_design,
+                    design_flow,
+                    transfer,
+                )?),
+                None => None,
+            },
         })
     }
 
@@ -187,7 +211,9 @@ impl OffDesignModel {
     /// The unit at `point`: a full balance as [`solve_cycle`](super::solve_cycle)
     /// gives one, at the stage pressures where every group's cone law
     /// holds with the flows of that balance (to relative 1e-11 in the
-    /// pressures). At a fixed throttle pressure the valves wide open pass
+    /// pressures) and, with [`OffDesignOptions::heater_transfer`], where
+    /// each closed heater's TTD and DCA are those its zones give at those
+    /// flows (to 1e-9 K). At a fixed throttle pressure the valves wide open pass
     /// the flow the first group takes at the design throttle pressure; a
     /// larger flow is refused (part "control valves"). Errors in the
     /// design's units; a balance whose pressures do not settle is
@@ -223,10 +249,37 @@ impl OffDesignModel {
         // The first pressures from the design's flows and p·v, scaled to
         // the throttle flow.
         let mut pressures = self.cone_pressures(&self.at_design, flow, condenser);
+        // With heater_transfer, the closed heaters' approaches: the
+        // design's, then each pass those the last one's flows give.
+        let mut heater_passes = match &self.heaters {
+            Some(calibrated) => Some(HeaterPasses::new(calibrated, &self.design)?),
+            None => None,
+        };
         for _ in 0..MAX_PASSES {
-            let (spec, control_valves) = self.spec_at(&pressures, point, losses)?;
+            let (mut spec, control_valves) = self.spec_at(&pressures, point, losses)?;
             let mut solved = StageGroups::NONE;
-            let balance = solve(&spec, control_valves, Some(&mut solved))?;
+            let mut heaters = HeaterOperations::NONE;
+            if let Some(passes) = &heater_passes {
+                passes.set_approaches(&mut spec);
+            }
+            let balance = match solve(
+                &spec,
+                control_valves,
+                Some(&mut solved),
+                heater_passes.as_ref().map(|_| &mut heaters),
+            ) {
+                Ok(balance) => balance,
+                // A pass refused at the approaches the last balance gave
+                // may retry with those its own flows give.
+                Err(_)
+                    if heater_passes
+                        .as_mut()
+                        .is_some_and(|passes| passes.after_refusal(&spec, &heaters, flow)) =>
+                {
+                    continue
+                }
+                Err(error) => return Err(error),
+            };
             if solved.groups().len() != self.at_design.groups().len() {
                 return Err(refuse(
                     MODEL,
@@ -234,10 +287,15 @@ impl OffDesignModel {
                 ));
             }
             let next = self.cone_pressures(&solved, flow, condenser);
+            let heaters_settled = match &mut heater_passes {
+                Some(passes) => passes.advance(&spec, &heaters, flow)?,
+                None => true,
+            };
             if next
                 .iter()
                 .zip(&pressures)
                 .all(|(a, b)| (a.0 - b.0).abs() <= PRESSURE_TOLERANCE * b.0)
+                && heaters_settled
             {
                 return Ok(balance);
             }

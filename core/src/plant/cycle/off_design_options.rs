@@ -16,11 +16,18 @@ pub struct CoolingWater {
     pub flow: f64,
 }
 
-/// How the closed heaters transfer heat off design.
+/// How the closed heaters transfer heat off design: each closed heater
+/// is split at the design balance into its zones (drain cooling,
+/// condensing, desuperheating; a zone without duty there has none),
+/// each with UA = duty / LMTD, and off design the zones by ε–NTU give
+/// its TTD and DCA.
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct HeaterTransfer {
-    /// Each zone's UA scales with its flow to this power (relative to
-    /// the design flow).
+    /// Each zone's UA scales with its flow to this power, relative to
+    /// the design flow: the drain cooler with the drains, the condensing
+    /// zone with the feedwater, the desuperheating zone with the
+    /// extraction steam. In [0, 1]: 0.8 for turbulent forced convection
+    /// (Dittus–Boelter, common practice), 0 for a fixed UA.
     pub ua_flow_exponent: f64,
 }
 

@@ -146,7 +146,7 @@ fn water_pressure_drops(spec: &CycleSpec) -> Result<[f64; MAX_HEATERS], Error> {
 }
 
 /// The closed heaters' approaches in native temperature differences.
-fn native_approaches(spec: &CycleSpec) -> Result<[HeaterApproach; MAX_HEATERS], Error> {
+pub(super) fn native_approaches(spec: &CycleSpec) -> Result<[HeaterApproach; MAX_HEATERS], Error> {
     let units = spec.units;
     let dt = |x| native(Quantity::TemperatureDifference, x, units);
     let mut approaches = [HeaterApproach {
