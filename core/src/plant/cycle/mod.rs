@@ -24,8 +24,10 @@
 //! the flow that gives a net output.
 
 mod assembly;
+mod condenser_cooling;
 mod cone_law;
 pub(super) mod curve;
+mod efficiency_correction;
 mod ends;
 mod exhaust;
 mod expansion;
@@ -35,6 +37,7 @@ pub(super) mod load_curve;
 pub(super) mod losses;
 pub(super) mod off_design;
 pub(super) mod off_design_options;
+mod out_of_service;
 mod output;
 mod record;
 pub(super) mod result;
@@ -46,6 +49,7 @@ mod train;
 
 use self::assembly::Assembly;
 use self::cone_law::StageGroups;
+use self::off_design_options::{HeatersOutOfService, ALL_IN_SERVICE};
 use self::result::CycleResult;
 use self::spec::{CycleSpec, Heater, HeaterKind, MAX_CASINGS};
 use crate::plant::fault::in_caller_units;
@@ -80,17 +84,19 @@ const CONTROL_VALVES: PlantPart = PlantPart::single("control valves");
 /// takes above the shell saturation temperature comes from the steam's
 /// superheat alone. Errors are in `spec.units`.
 pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
-    solve(spec, None, None).map_err(|e| in_caller_units(e, spec.units))
+    solve(spec, None, &ALL_IN_SERVICE, None).map_err(|e| in_caller_units(e, spec.units))
 }
 
 /// The steps in the order that also decides which refusal a cycle with
 /// several faults gets, all in native units. Off-design operation adds
-/// two things: `control_valves`, the pressure (native) the throttle
-/// steam is throttled to before the first stage group, and `groups`,
-/// which receives each stage group's flow and end pressures.
+/// three things: `control_valves`, the pressure (native) the throttle
+/// steam is throttled to before the first stage group, the heaters
+/// `out_of_service` (`out_of_service.rs`), and `groups`, which receives
+/// each stage group's flow and end pressures.
 fn solve(
     spec: &CycleSpec,
     control_valves: Option<f64>,
+    out_of_service: &HeatersOutOfService,
     groups: Option<&mut StageGroups>,
 ) -> Result<CycleResult, Error> {
     ends::check_casings(spec)?;
@@ -112,7 +118,7 @@ fn solve(
         let shell = expansion::heater_shells(spec, &line)?;
         let mut side = side_streams::SideStreams::new(spec, &line, &shell, &throttle)?;
         let train = train::FeedwaterTrain::new(spec, &throttle, &hotwell, &shell)?;
-        let mut flows = sweeps::TrainFlows::new(&train, &hotwell);
+        let mut flows = sweeps::TrainFlows::new(&train, &hotwell, out_of_service);
         sweeps::solve_train(spec, &train, &shell, &mut flows, &mut side, &hotwell)?;
         let next = side.inlet_mixtures(&line, &flows, spec.heaters().len());
         if settled(&next, &mixtures) {

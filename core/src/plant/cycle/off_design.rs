@@ -9,17 +9,22 @@
 //! flows that solve gives move the pressures again, and the two are
 //! iterated until the pressures settle.
 //!
-//! Kept at design for now: each section's isentropic efficiency (the
-//! correction against the ratio of volume flow to design is a later
-//! step, at [`OffDesignModel::spec_at`]) and each heater's TTD and DCA
-//! (its UA per zone and ε–NTU are a later step).
+//! The options move more with the pressures: each casing's efficiency
+//! by its volume flow (`efficiency_correction.rs`), the condenser
+//! pressure by its cooling water (`condenser_cooling.rs`); heaters out
+//! of service are bypassed by the design solve itself
+//! (`out_of_service.rs`). Kept at design for now: each heater's TTD and
+//! DCA (its UA per zone and ε–NTU are a later step).
 
+use super::condenser_cooling::{self, CondenserTransfer};
 use super::cone_law::{GroupOperation, StageGroups};
+use super::efficiency_correction::{check_curve, corrected_efficiencies};
 use super::expansion::MAX_GROUPS;
 use super::losses::Losses;
 use super::off_design_options::{
     CondenserCondition, HeatersOutOfService, OffDesignOptions, ALL_IN_SERVICE,
 };
+use super::out_of_service;
 use super::output::{positive_throttle_flow, throttle_flow};
 use super::result::CycleResult;
 use super::spec::{CycleSpec, Supply, MAX_HEATERS};
@@ -99,6 +104,8 @@ pub struct OffDesignModel {
     stations: [Station; MAX_HEATERS],
     /// What the model knows beyond the design balance.
     options: OffDesignOptions,
+    /// The condenser's UA, from the design cooling water.
+    condenser: Option<CondenserTransfer>,
 }
 
 /// Passes of the pressures and the balance allowed. The pressures move
@@ -135,11 +142,14 @@ impl OffDesignModel {
         design: &CycleSpec,
         options: &OffDesignOptions,
     ) -> Result<OffDesignModel, Error> {
-        if options.efficiency_correction.is_some()
-            || options.design_cooling_water.is_some()
-            || options.heater_transfer.is_some()
-        {
-            return Err(refuse(MODEL, "its options are not supported yet"));
+        if options.heater_transfer.is_some() {
+            return Err(refuse(
+                MODEL,
+                "closed heaters by their UA are not supported yet",
+            ));
+        }
+        if let Some(curve) = &options.efficiency_correction {
+            check_curve(curve)?;
         }
         let Some(design_flow) = throttle_flow(&design.losses, design.units)? else {
             return Err(refuse(
@@ -148,7 +158,7 @@ impl OffDesignModel {
             ));
         };
         let mut at_design = StageGroups::NONE;
-        solve(design, None, Some(&mut at_design))?;
+        let balance = solve(design, None, &ALL_IN_SERVICE, Some(&mut at_design))?;
         let mut flow_coefficients = [0.0; MAX_GROUPS];
         for (k, group) in flow_coefficients.iter_mut().zip(at_design.groups()) {
             *k = group.flow_coefficient(design_flow);
@@ -164,6 +174,15 @@ impl OffDesignModel {
             let p = native(Quantity::Pressure, heater.extraction_pressure, design.units)?;
             *station = station_at(at_design.groups(), p);
         }
+        let condenser = match &options.design_cooling_water {
+            Some(water) => Some(CondenserTransfer::calibrate(
+                water,
+                condenser_cooling::duty(&balance, design_flow),
+                at_design.groups()[at_design.groups().len() - 1].outlet_pressure,
+                design.units,
+            )?),
+            None => None,
+        };
         Ok(OffDesignModel {
             design: *design,
             design_flow,
@@ -171,6 +190,7 @@ impl OffDesignModel {
             flow_coefficients,
             stations,
             options: *options,
+            condenser,
         })
     }
 
@@ -202,46 +222,58 @@ impl OffDesignModel {
         let flow = positive_throttle_flow(point.throttle_flow, units)?;
         let mut losses = self.design.losses;
         losses.throttle_flow = Some(point.throttle_flow);
-        if point.out_of_service != ALL_IN_SERVICE {
-            return Err(refuse(
-                MODEL,
-                "taking heaters out of service is not supported yet",
-            ));
-        }
-        let condenser = match point.condenser {
-            CondenserCondition::Pressure(p) => native(Quantity::Pressure, p, units)?,
-            CondenserCondition::Design => {
-                self.at_design.groups()[self.at_design.groups().len() - 1].outlet_pressure
-            }
-            CondenserCondition::CoolingWater(_) => {
-                return Err(refuse(
-                    MODEL,
-                    "a condenser by its cooling water is not supported yet",
-                ))
-            }
+        out_of_service::check(&self.design, &point.out_of_service)?;
+        let design_condenser =
+            self.at_design.groups()[self.at_design.groups().len() - 1].outlet_pressure;
+        // By its cooling water the condenser starts at its design
+        // pressure and follows each pass's duty.
+        let (mut condenser, cooling) = match point.condenser {
+            CondenserCondition::Pressure(p) => (native(Quantity::Pressure, p, units)?, None),
+            CondenserCondition::Design => (design_condenser, None),
+            CondenserCondition::CoolingWater(water) => match &self.condenser {
+                Some(transfer) => (design_condenser, Some((transfer, water))),
+                None => {
+                    return Err(refuse(
+                        MODEL,
+                        "a condenser by its cooling water needs the design cooling water (options.design_cooling_water)",
+                    ))
+                }
+            },
         };
         // The first pressures from the design's flows and p·v, scaled to
         // the throttle flow.
         let mut pressures = self.cone_pressures(&self.at_design, flow, condenser);
+        let mut last = self.at_design;
         for _ in 0..MAX_PASSES {
-            let (spec, control_valves) = self.spec_at(&pressures, point, losses)?;
+            let (spec, control_valves) = self.spec_at(&pressures, point, losses, (&last, flow))?;
             let mut solved = StageGroups::NONE;
-            let balance = solve(&spec, control_valves, Some(&mut solved))?;
+            let balance = solve(
+                &spec,
+                control_valves,
+                &point.out_of_service,
+                Some(&mut solved),
+            )?;
             if solved.groups().len() != self.at_design.groups().len() {
                 return Err(refuse(
                     MODEL,
                     "its stage groups differ from the design's at these pressures",
                 ));
             }
+            if let Some((transfer, water)) = &cooling {
+                let duty = condenser_cooling::duty(&balance, flow);
+                condenser = transfer.condenser_pressure(water, duty, units)?;
+            }
             let next = self.cone_pressures(&solved, flow, condenser);
             if next
                 .iter()
                 .zip(&pressures)
                 .all(|(a, b)| (a.0 - b.0).abs() <= PRESSURE_TOLERANCE * b.0)
+                && self.efficiencies_settled((&last, &solved), flow)?
             {
                 return Ok(balance);
             }
             pressures = next;
+            last = solved;
         }
         Err(Error::NotConverged {
             what: "off-design stage pressures",
@@ -274,23 +306,52 @@ impl OffDesignModel {
         pressures
     }
 
+    /// Whether the casings' corrected efficiencies at the groups of the
+    /// `(last, solved)` passes (at `flow` kg/s) agree, as the pressures
+    /// must (always, without a correction).
+    fn efficiencies_settled(
+        &self,
+        (last, solved): (&StageGroups, &StageGroups),
+        flow: f64,
+    ) -> Result<bool, Error> {
+        let Some(curve) = &self.options.efficiency_correction else {
+            return Ok(true);
+        };
+        let design = (&self.at_design, self.design_flow);
+        let before = corrected_efficiencies(curve, &self.design, design, (last, flow))?;
+        let after = corrected_efficiencies(curve, &self.design, design, (solved, flow))?;
+        Ok(before
+            .iter()
+            .zip(&after)
+            .all(|(a, b)| (a - b).abs() <= PRESSURE_TOLERANCE * b))
+    }
+
     /// The design description at `pressures` (native) and the operating
-    /// `point`, with `losses` at its throttle flow, and the control
-    /// valves' outlet pressure (native) when they throttle.
+    /// `point`, with `losses` at its throttle flow, each casing's
+    /// efficiency corrected for the volume flows of `last` (the last
+    /// pass's groups at `flow` kg/s) when the model has a correction, and
+    /// the control valves' outlet pressure (native) when they throttle.
     fn spec_at(
         &self,
         pressures: &[(f64, f64); MAX_GROUPS],
         point: &OperatingPoint,
         losses: Losses,
+        last: (&StageGroups, f64),
     ) -> Result<(CycleSpec, Option<f64>), Error> {
         let units = self.design.units;
         let to = |p| units.from_native(Quantity::Pressure, p);
         let groups = self.at_design.groups();
-        // Sections and heaters keep their design efficiencies, TTDs and
-        // DCAs: the hook for the volume-flow correction of the
-        // efficiencies and for the heaters' ε–NTU is here.
+        // Heaters keep their design TTDs and DCAs: the hook for their
+        // ε–NTU is here.
         let mut spec = self.design;
         spec.losses = losses;
+        if let Some(curve) = &self.options.efficiency_correction {
+            let design = (&self.at_design, self.design_flow);
+            let efficiencies = corrected_efficiencies(curve, &self.design, design, last)?;
+            for (casing, efficiency) in spec.casings_mut().iter_mut().zip(efficiencies) {
+                casing.isentropic_efficiency = efficiency;
+            }
+        }
         for (c, casing) in spec.casings_mut().iter_mut().enumerate() {
             if let Some(g) = groups.iter().rposition(|group| group.casing == c) {
                 casing.exhaust_pressure = to(pressures[g].1);
