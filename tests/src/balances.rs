@@ -54,9 +54,9 @@ pub fn per_unit_flow(r: &CycleResult, power: f64) -> f64 {
     )
 }
 
-/// [`check_components`], and: first law per component to 1e-9 (mass to 1e-12 of the throttle
-/// flow), second law per component within the plant layer's allowance,
-/// and the plant's first law per unit throttle flow: heat in and the
+/// First law per component to 1e-9 (mass to 1e-12 of the throttle
+/// flow), second law per component within the plant layer's allowance
+/// ([`check_components`]), and the plant's first law per unit throttle flow: heat in and the
 /// makeup's enthalpy leave as net output, condenser heat, the losses and
 /// the water the makeup replaces (blowdown).
 #[track_caller]

@@ -18,7 +18,7 @@
 
 use super::condenser_cooling::{self, CondenserTransfer};
 use super::cone_law::{GroupOperation, StageGroups};
-use super::efficiency_correction::{check_curve, corrected_efficiencies};
+use super::efficiency_correction::{check_curve, corrected_efficiencies, Outside};
 use super::expansion::MAX_GROUPS;
 use super::losses::Losses;
 use super::off_design_options::{
@@ -243,9 +243,12 @@ impl OffDesignModel {
         // The first pressures from the design's flows and p·v, scaled to
         // the throttle flow.
         let mut pressures = self.cone_pressures(&self.at_design, flow, condenser);
-        let mut last = self.at_design;
+        // The groups of the last pass, whose volume flows correct the
+        // efficiencies (none before the first: design efficiencies).
+        let mut last: Option<StageGroups> = None;
         for _ in 0..MAX_PASSES {
-            let (spec, control_valves) = self.spec_at(&pressures, point, losses, (&last, flow))?;
+            let (spec, control_valves) =
+                self.spec_at(&pressures, point, losses, last.as_ref().map(|g| (g, flow)))?;
             let mut solved = StageGroups::NONE;
             let balance = solve(
                 &spec,
@@ -268,12 +271,12 @@ impl OffDesignModel {
                 .iter()
                 .zip(&pressures)
                 .all(|(a, b)| (a.0 - b.0).abs() <= PRESSURE_TOLERANCE * b.0)
-                && self.efficiencies_settled((&last, &solved), flow)?
+                && self.efficiencies_settled(last.as_ref(), &solved, flow)?
             {
                 return Ok(balance);
             }
             pressures = next;
-            last = solved;
+            last = Some(solved);
         }
         Err(Error::NotConverged {
             what: "off-design stage pressures",
@@ -307,36 +310,55 @@ impl OffDesignModel {
     }
 
     /// Whether the casings' corrected efficiencies at the groups of the
-    /// `(last, solved)` passes (at `flow` kg/s) agree, as the pressures
-    /// must (always, without a correction).
+    /// `last` and `solved` passes (at `flow` kg/s) agree, as the
+    /// pressures must (always without a correction, never after the
+    /// first pass with one). Once they do, a volume flow ratio the
+    /// passes took at the curve's end is refused.
     fn efficiencies_settled(
         &self,
-        (last, solved): (&StageGroups, &StageGroups),
+        last: Option<&StageGroups>,
+        solved: &StageGroups,
         flow: f64,
     ) -> Result<bool, Error> {
         let Some(curve) = &self.options.efficiency_correction else {
             return Ok(true);
         };
+        let Some(last) = last else {
+            return Ok(false);
+        };
         let design = (&self.at_design, self.design_flow);
-        let before = corrected_efficiencies(curve, &self.design, design, (last, flow))?;
-        let after = corrected_efficiencies(curve, &self.design, design, (solved, flow))?;
-        Ok(before
+        let at = |groups| {
+            corrected_efficiencies(
+                curve,
+                &self.design,
+                design,
+                (groups, flow),
+                Outside::NearerEnd,
+            )
+        };
+        let (before, after) = (at(last)?, at(solved)?);
+        let settled = before
             .iter()
             .zip(&after)
-            .all(|(a, b)| (a - b).abs() <= PRESSURE_TOLERANCE * b))
+            .all(|(a, b)| (a - b).abs() <= PRESSURE_TOLERANCE * b);
+        if settled {
+            corrected_efficiencies(curve, &self.design, design, (last, flow), Outside::Refused)?;
+        }
+        Ok(settled)
     }
 
     /// The design description at `pressures` (native) and the operating
     /// `point`, with `losses` at its throttle flow, each casing's
     /// efficiency corrected for the volume flows of `last` (the last
-    /// pass's groups at `flow` kg/s) when the model has a correction, and
-    /// the control valves' outlet pressure (native) when they throttle.
+    /// pass's groups at `flow` kg/s; none on the first pass, which keeps
+    /// the design efficiencies) when the model has a correction, and the
+    /// control valves' outlet pressure (native) when they throttle.
     fn spec_at(
         &self,
         pressures: &[(f64, f64); MAX_GROUPS],
         point: &OperatingPoint,
         losses: Losses,
-        last: (&StageGroups, f64),
+        last: Option<(&StageGroups, f64)>,
     ) -> Result<(CycleSpec, Option<f64>), Error> {
         let units = self.design.units;
         let to = |p| units.from_native(Quantity::Pressure, p);
@@ -345,9 +367,10 @@ impl OffDesignModel {
         // ε–NTU is here.
         let mut spec = self.design;
         spec.losses = losses;
-        if let Some(curve) = &self.options.efficiency_correction {
+        if let (Some(curve), Some(last)) = (&self.options.efficiency_correction, last) {
             let design = (&self.at_design, self.design_flow);
-            let efficiencies = corrected_efficiencies(curve, &self.design, design, last)?;
+            let efficiencies =
+                corrected_efficiencies(curve, &self.design, design, last, Outside::NearerEnd)?;
             for (casing, efficiency) in spec.casings_mut().iter_mut().zip(efficiencies) {
                 casing.isentropic_efficiency = efficiency;
             }
