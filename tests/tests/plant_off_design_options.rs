@@ -12,9 +12,10 @@
 //! compared with.
 
 use ebullio::plant::{
-    solve_cycle, ComponentKind, CondenserCondition, CoolingWater, Curve, CycleResult,
-    FeedPumpTurbine, HeatersOutOfService, Leak, LeakSource, OffDesignModel, OffDesignOptions,
-    OperatingPoint, PointRole, SteamDestination, ThrottleControl, ALL_IN_SERVICE,
+    solve_cycle, Casing, ComponentKind, CondenserCondition, CoolingWater, Curve, CycleResult,
+    CycleSpec, Drains, FeedPumpTurbine, Heater, HeaterApproach, HeaterKind, HeatersOutOfService,
+    Leak, LeakSource, OffDesignModel, OffDesignOptions, OperatingPoint, PointRole, Reheat,
+    SteamDestination, Supply, ThrottleControl, ALL_IN_SERVICE,
 };
 use ebullio::{Error, Quantity, Saturation, State, Units};
 use ebullio_conformance::balances::check_plant;
@@ -757,5 +758,105 @@ fn the_cone_law_keeps_its_limiting_forms() {
             assert!(relative(g.flow / nozzle, (1.0 - dp / (2.0 * i.p)).sqrt()) <= 1e-8);
             assert!(g.flow <= nozzle && g.flow >= nozzle * (1.0 - dp / i.p));
         }
+    }
+}
+
+/// Reproducers of the random-input campaign (`random_inputs.rs`,
+/// `off_design_within_physical_limits`), both once refused as not
+/// converged: a 50 MPa, 692 K throttle sliding at 53 % flow, whose first
+/// group's p·v moves so fast with its pressure near the pseudo-critical
+/// line that the passes swung between 28 and 34 MPa; and two heaters
+/// extracting 0.6 bar apart at 117 bar behind a steep correction curve,
+/// whose passes swung wider until a heater needed more steam than
+/// reached it. Each settles now, and its balance closes.
+#[test]
+fn swinging_passes_settle() {
+    let mut steep = CycleSpec::new(
+        Units::SiBase,
+        Supply::Superheated {
+            pressure: 49999999.999992,
+            temperature: 692.3905740201114,
+        },
+    );
+    steep.reheat = Some(Reheat {
+        pressure: 2609972.843038239,
+        temperature: 811.9114916753863,
+    });
+    steep.feed_pump_efficiency = 0.8507834741658811;
+    steep.condensate_pump_efficiency = 0.8891233007191739;
+    steep.condensate_subcooling = 0.2864653325601666;
+    steep.losses.throttle_flow = Some(789.9269002322944);
+    for (exhaust_pressure, isentropic_efficiency) in [
+        (2659989.7233693525, 0.7355122140902753),
+        (682115.3129943842, 0.9204771183118678),
+        (303806.1784727594, 0.7876508759543384),
+        (15394.257768045729, 0.8948264698005962),
+    ] {
+        steep
+            .push_casing(Casing {
+                exhaust_pressure,
+                isentropic_efficiency,
+            })
+            .unwrap();
+    }
+    let mut point = OperatingPoint::new(416.8992671806709, ThrottleControl::SlidingPressure);
+    point.condenser = CondenserCondition::Pressure(11950.586779229598);
+    let model = OffDesignModel::calibrate(&steep).unwrap();
+    check_plant(&model.solve(&point).unwrap(), &steep);
+
+    let mut close = CycleSpec::new(
+        Units::MetricEngineering,
+        Supply::Superheated {
+            pressure: 226.4957092259847,
+            temperature: 514.9832488115841,
+        },
+    );
+    close.feed_pressure = Some(246.2598708271629);
+    close.feed_pump_efficiency = 0.9119779976960858;
+    close.condensate_pump_efficiency = 0.7930420755711463;
+    close.condensate_subcooling = 1.2009216637813445;
+    close.losses.throttle_flow = Some(513.7680950372692);
+    close
+        .push_casing(Casing {
+            exhaust_pressure: 0.09788080971636373,
+            isentropic_efficiency: 0.9752344148599195,
+        })
+        .unwrap();
+    close
+        .push_heater(Heater {
+            extraction_pressure: 117.30534226137516,
+            extraction_line_loss: 0.030939739833022024,
+            kind: HeaterKind::Open,
+        })
+        .unwrap();
+    close
+        .push_heater(Heater {
+            extraction_pressure: 116.66573796484882,
+            extraction_line_loss: 0.04302450328607968,
+            kind: HeaterKind::Closed {
+                approach: HeaterApproach {
+                    terminal_temperature_difference: 4.535520333719122,
+                    drain_cooler_approach: None,
+                },
+                drains: Drains::CascadeBackward,
+            },
+        })
+        .unwrap();
+    let curve = Curve::new(&[
+        (0.8946903710695355, 0.7689538886117508),
+        (0.9473451855347678, 0.970478376670372),
+        (1.0, 1.0),
+        (2.0723154614695103, 0.9740873405472956),
+    ])
+    .unwrap();
+    let mut point = OperatingPoint::new(367.44831458878286, ThrottleControl::SlidingPressure);
+    point.condenser = CondenserCondition::Pressure(0.0860701364659559);
+    for correction in [None, Some(curve)] {
+        let options = OffDesignOptions {
+            efficiency_correction: correction,
+            ..OffDesignOptions::NONE
+        };
+        let model = OffDesignModel::calibrate_with(&close, &options).unwrap();
+        check_plant(&model.solve(&point).unwrap(), &close);
     }
 }

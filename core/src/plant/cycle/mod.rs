@@ -40,6 +40,7 @@ pub(super) mod off_design_options;
 mod out_of_service;
 mod output;
 mod record;
+mod relaxation;
 pub(super) mod result;
 mod side_streams;
 pub(super) mod spec;
