@@ -20,6 +20,7 @@ use ebullio_conformance::oracles::derivatives::{
     check_derivatives, check_saturation, saturation_call,
 };
 use ebullio_conformance::oracles::measured::check_measured;
+use ebullio_conformance::oracles::off_design::check_off_design;
 use ebullio_conformance::oracles::plant::{check_component, check_cycle};
 use ebullio_conformance::oracles::state::{
     check_solve, describe, pair_name, same_temperature, SolveCase,
@@ -29,6 +30,7 @@ use ebullio_conformance::oracles::Findings;
 use ebullio_conformance::random_inputs::cases::{case_from_state, raw_case};
 use ebullio_conformance::random_inputs::draw::{campaign_seed, Draw, Seeded};
 use ebullio_conformance::random_inputs::measured::{coverage_factor, measured_case};
+use ebullio_conformance::random_inputs::off_design::off_design_case;
 use ebullio_conformance::random_inputs::plant::cycle;
 use ebullio_conformance::random_inputs::states::{pair_values, source, values_from};
 use ebullio_conformance::random_inputs::values::value;
@@ -335,6 +337,21 @@ fn cycle_solver_within_physical_limits() {
     }
     eprintln!("cycles: {solved} solved");
     finish(findings, "cycle solver");
+}
+
+/// Off-design models (each calibrated on a drawn design with a throttle
+/// flow, then solved at four drawn operating points).
+const OFF_DESIGN_MODELS: usize = 1200;
+
+#[test]
+fn off_design_within_physical_limits() {
+    let (mut draw, mut findings) = start("off_design");
+    let mut solved = 0;
+    for _ in 0..OFF_DESIGN_MODELS {
+        solved += check_off_design(&off_design_case(&mut draw), &mut findings);
+    }
+    eprintln!("off design: {solved} balances");
+    finish(findings, "off-design model");
 }
 
 /// Batches of measured-data calls per calculation × unit system; each
