@@ -231,34 +231,35 @@ fn cases(units: Units) -> Vec<(&'static str, OffDesignOptions, bool, HeatersOutO
 /// pressure cannot give.
 #[test]
 fn every_balance_closes_at_every_load_with_each_option() {
-    let units = Units::Native;
-    let spec = unit(units);
-    for (name, options, cooled, out_of_service) in cases(units) {
-        let model = OffDesignModel::calibrate_with(&spec, &options).unwrap();
-        for control in CONTROLS {
-            for load in LOADS {
-                let point = OperatingPoint {
-                    out_of_service,
-                    ..at(units, load, control, cooled)
-                };
-                let what = format!("{name}, {control:?} at {load}");
-                let r = match model.solve(&point) {
-                    Err(Error::InvalidPlant { part, figure, .. })
-                        if out_of_service[0]
-                            && load == 1.0
-                            && control == ThrottleControl::FixedPressure =>
-                    {
-                        assert_eq!(part.name, "control valves", "{what}");
-                        let figure = figure.unwrap();
-                        assert!(figure.value > figure.limit.unwrap(), "{what}");
-                        continue;
+    for units in [Units::Native, Units::UsCustomary] {
+        let spec = unit(units);
+        for (name, options, cooled, out_of_service) in cases(units) {
+            let model = OffDesignModel::calibrate_with(&spec, &options).unwrap();
+            for control in CONTROLS {
+                for load in LOADS {
+                    let point = OperatingPoint {
+                        out_of_service,
+                        ..at(units, load, control, cooled)
+                    };
+                    let what = format!("{units:?} {name}, {control:?} at {load}");
+                    let r = match model.solve(&point) {
+                        Err(Error::InvalidPlant { part, figure, .. })
+                            if out_of_service[0]
+                                && load == 1.0
+                                && control == ThrottleControl::FixedPressure =>
+                        {
+                            assert_eq!(part.name, "control valves", "{what}");
+                            let figure = figure.unwrap();
+                            assert!(figure.value > figure.limit.unwrap(), "{what}");
+                            continue;
+                        }
+                        other => other.unwrap(),
+                    };
+                    check_plant(&r, model.design());
+                    assert!(r.thermal_efficiency < r.carnot_efficiency, "{what}");
+                    for (j, x) in r.extraction_fractions().iter().enumerate() {
+                        assert!(!out_of_service[j] || *x == 0.0, "{what}: heater {}", j + 1);
                     }
-                    other => other.unwrap(),
-                };
-                check_plant(&r, model.design());
-                assert!(r.thermal_efficiency < r.carnot_efficiency, "{what}");
-                for (j, x) in r.extraction_fractions().iter().enumerate() {
-                    assert!(!out_of_service[j] || *x == 0.0, "{what}: heater {}", j + 1);
                 }
             }
         }
