@@ -266,6 +266,34 @@ fn every_balance_closes_at_every_load_with_each_option() {
     }
 }
 
+/// A target net output is met with the options on and a heater out
+/// (the secant on the throttle flow sees the same solves), to the
+/// target output's own tolerance.
+#[test]
+fn a_target_net_output_is_met_with_the_options_on() {
+    let units = Units::Native;
+    let model = OffDesignModel::calibrate_with(&unit(units), &all_options(units)).unwrap();
+    let full = model
+        .solve(&at(units, 1.0, ThrottleControl::SlidingPressure, true))
+        .unwrap()
+        .output
+        .power
+        .unwrap()
+        .net_output;
+    for control in CONTROLS {
+        for share in [0.9, 0.6, 0.35] {
+            let like = OperatingPoint {
+                out_of_service: out(5),
+                ..at(units, 0.0, control, true)
+            };
+            let r = model.solve_for_output(share * full, &like).unwrap();
+            check_plant(&r, model.design());
+            let net = r.output.power.unwrap().net_output;
+            assert!(relative(net, share * full) <= 1e-9, "{control:?} {share}");
+        }
+    }
+}
+
 /// y of `curve` at `x`, linear between its points (worked again here).
 fn read_curve(curve: &Curve, x: f64) -> f64 {
     let points = curve.points();
