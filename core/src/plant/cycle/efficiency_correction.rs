@@ -7,9 +7,11 @@
 //! group: the description gives one efficiency per casing and every
 //! group of a casing expands at it, so one factor per casing keeps that
 //! meaning; and the inlet's volume flow is the one the casing's blading
-//! was sized for. (Inside a casing the cone law keeps each group's
-//! volume flow near its design one, p ∝ m; the exhaust's own change
-//! is the exhaust loss's business.)
+//! was sized for. (The cone law keeps every group's inlet volume flow
+//! near its design one, p ∝ m: on the demo unit the ratios stay within
+//! 0.998 to 1.04 from 100 % to 30 % of its flow, the first casing's read
+//! after the control valves; the exhaust's own change is the exhaust
+//! loss's business.)
 
 use super::cone_law::StageGroups;
 use super::curve::Curve;
