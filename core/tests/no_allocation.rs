@@ -405,6 +405,27 @@ fn exercise_plant() -> f64 {
         let _ = write!(length, "{refusal}");
         sum += length.0 as f64;
     }
+    // With the options: efficiencies by volume flow, the condenser by its
+    // cooling water, the lowest heater out of service (invented numbers).
+    if let Ok(correction) = Curve::new(&[(0.5, 0.9), (1.0, 1.0), (1.5, 0.95)]) {
+        let water = CoolingWater {
+            inlet_temperature: 295.15,
+            flow: 16_000.0,
+        };
+        let options = OffDesignOptions {
+            efficiency_correction: Some(correction),
+            design_cooling_water: Some(water),
+            heater_transfer: None,
+        };
+        let model = OffDesignModel::calibrate_with(&lossy, &options).expect("options calibrate");
+        let mut point = OperatingPoint::new(400.0, ThrottleControl::SlidingPressure);
+        point.condenser = CondenserCondition::CoolingWater(water);
+        point.out_of_service[2] = true;
+        match model.solve(&point) {
+            Ok(r) => sum += r.output.net_heat_rate,
+            Err(e) => panic!("the plant solves off design with its options: {e}"),
+        }
+    }
     let mut bad = spec;
     bad.feed_pump_efficiency = 2.0;
     // The refusal names its part and figure, and prints without the heap.

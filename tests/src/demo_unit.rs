@@ -4,7 +4,8 @@
 //! never compared with.
 
 use ebullio::plant::{
-    Casing, CycleSpec, Drains, Heater, HeaterApproach, HeaterKind, Reheat, Supply,
+    Casing, Curve, CycleSpec, Drains, ExhaustLoss, Generator, Heater, HeaterApproach, HeaterKind,
+    Reheat, Supply,
 };
 use ebullio::{Quantity, Units};
 
@@ -58,5 +59,48 @@ pub fn lossless(units: Units, heater_3_mpa: f64) -> CycleSpec {
         })
         .unwrap();
     }
+    spec
+}
+
+/// The design throttle flow, kg/s (invented).
+pub const DESIGN_FLOW: f64 = 520.0;
+
+/// The demo unit in `units` (given in MPa, K), with an absolute flow
+/// ([`DESIGN_FLOW`]), a generator, mechanical and auxiliary losses and
+/// an exhaust loss (all invented): the off-design tests' unit.
+pub fn with_losses(units: Units) -> CycleSpec {
+    with_losses_heater_3_at(units, 1.9)
+}
+
+/// [`with_losses`] with its third heater extracting at `mpa`.
+pub fn with_losses_heater_3_at(units: Units, mpa: f64) -> CycleSpec {
+    let power = |kw| units.from_native(Quantity::Power, kw);
+    let mut spec = lossless(units, mpa);
+    spec.losses.throttle_flow = Some(units.from_native(Quantity::MassFlow, DESIGN_FLOW));
+    spec.losses.generator = Some(Generator::Constant { efficiency: 0.987 });
+    spec.losses.mechanical_losses = power(1800.0);
+    spec.losses.auxiliary_power = power(14_000.0);
+    // Invented (not machine data): loss in kJ/kg against annulus
+    // velocity in m/s, wide enough for the lowest load here.
+    let curve = [
+        (10.0, 90.0),
+        (60.0, 40.0),
+        (100.0, 25.0),
+        (150.0, 18.0),
+        (200.0, 22.0),
+        (250.0, 34.0),
+        (300.0, 50.0),
+        (400.0, 90.0),
+    ]
+    .map(|(v, loss)| {
+        (
+            units.from_native(Quantity::Speed, v),
+            units.from_native(Quantity::Enthalpy, loss),
+        )
+    });
+    spec.losses.exhaust = Some(ExhaustLoss {
+        annulus_area: 30.0 * units.from_native(Quantity::Speed, 1.0).powi(2),
+        curve: Curve::new(&curve).unwrap(),
+    });
     spec
 }

@@ -13,55 +13,15 @@
 //! loss curve invented too: inputs, never compared with.
 
 use ebullio::plant::{
-    solve_cycle, Casing, ComponentKind, CondenserCondition, Curve, CycleResult, CycleSpec,
-    ExhaustLoss, FeedPumpTurbine, Generator, Leak, LeakSource, Makeup, OffDesignModel,
-    OperatingPoint, PointRole, SteamDestination, Supply, ThrottleControl, WaterLoss,
-    ALL_IN_SERVICE, MAX_LOAD_POINTS,
+    solve_cycle, Casing, ComponentKind, CondenserCondition, CycleResult, CycleSpec,
+    FeedPumpTurbine, Leak, LeakSource, Makeup, OffDesignModel, OperatingPoint, PointRole,
+    SteamDestination, Supply, ThrottleControl, WaterLoss, ALL_IN_SERVICE, MAX_LOAD_POINTS,
 };
 use ebullio::{Error, Quantity, State, Units};
-use ebullio_conformance::balances::check_components;
-
-/// The design throttle flow, kg/s (invented).
-const DESIGN_FLOW: f64 = 520.0;
-
-/// The demo unit in `units` (given in MPa, K), with an absolute flow, a
-/// generator, mechanical and auxiliary losses and an exhaust loss.
-fn unit(units: Units) -> CycleSpec {
-    unit_with_heater_3_at(units, 1.9)
-}
-
-/// The demo unit with its third heater extracting at `mpa`.
-fn unit_with_heater_3_at(units: Units, mpa: f64) -> CycleSpec {
-    let power = |kw| units.from_native(Quantity::Power, kw);
-    let mut spec = ebullio_conformance::demo_unit::lossless(units, mpa);
-    spec.losses.throttle_flow = Some(units.from_native(Quantity::MassFlow, DESIGN_FLOW));
-    spec.losses.generator = Some(Generator::Constant { efficiency: 0.987 });
-    spec.losses.mechanical_losses = power(1800.0);
-    spec.losses.auxiliary_power = power(14_000.0);
-    // Invented (not machine data): loss in kJ/kg against annulus
-    // velocity in m/s, wide enough for the lowest load here.
-    let curve = [
-        (10.0, 90.0),
-        (60.0, 40.0),
-        (100.0, 25.0),
-        (150.0, 18.0),
-        (200.0, 22.0),
-        (250.0, 34.0),
-        (300.0, 50.0),
-        (400.0, 90.0),
-    ]
-    .map(|(v, loss)| {
-        (
-            units.from_native(Quantity::Speed, v),
-            units.from_native(Quantity::Enthalpy, loss),
-        )
-    });
-    spec.losses.exhaust = Some(ExhaustLoss {
-        annulus_area: 30.0 * units.from_native(Quantity::Speed, 1.0).powi(2),
-        curve: Curve::new(&curve).unwrap(),
-    });
-    spec
-}
+use ebullio_conformance::balances::check_plant as check_balances;
+use ebullio_conformance::demo_unit::{
+    with_losses as unit, with_losses_heater_3_at as unit_with_heater_3_at, DESIGN_FLOW,
+};
 
 /// `fraction` of the design flow, in `units`.
 fn at(units: Units, fraction: f64, control: ThrottleControl) -> OperatingPoint {
@@ -120,60 +80,6 @@ fn group_ends(r: &CycleResult) -> Vec<GroupEnds> {
 /// proportional to.
 fn cone(g: &GroupEnds) -> f64 {
     ((g.p_in * g.p_in - g.p_out * g.p_out) / (g.p_in * g.v_in)).sqrt()
-}
-
-/// A power of `r` per unit throttle flow, in its specific energy unit:
-/// kW / (kg/s) = kJ/kg, through each unit's own factor.
-fn per_unit_flow(r: &CycleResult, power: f64) -> f64 {
-    let u = r.units;
-    let flow = u.to_native(Quantity::MassFlow, r.output.power.unwrap().throttle_flow);
-    u.from_native(
-        Quantity::Enthalpy,
-        u.to_native(Quantity::Power, power) / flow,
-    )
-}
-
-/// First law per component to 1e-9 (mass to 1e-12 of the throttle
-/// flow), second law per component within the plant layer's allowance,
-/// and the plant's first law per unit throttle flow: heat in and the
-/// makeup's enthalpy leave as net output, condenser heat, the losses and
-/// the water the makeup replaces (blowdown).
-fn check_balances(r: &CycleResult, spec: &CycleSpec) {
-    check_components(r);
-    let (makeup_in, lost_out) = match spec.losses.makeup {
-        None => (0.0, 0.0),
-        Some(makeup) => {
-            let water = State::from_pt(makeup.pressure, makeup.temperature, spec.units).unwrap();
-            let boiler = r
-                .components()
-                .iter()
-                .find(|c| c.kind == ComponentKind::Boiler)
-                .unwrap();
-            let lost = boiler.outlets()[1];
-            (
-                makeup.fraction * water.enthalpy(),
-                lost.flow * lost.enthalpy,
-            )
-        }
-    };
-    let o = &r.output;
-    let p = o.power.unwrap();
-    let mechanical = per_unit_flow(r, p.mechanical_losses);
-    let generator_losses = (o.shaft_work - mechanical) - o.gross_output;
-    let into = r.heat_input + makeup_in;
-    let out = o.net_output
-        + r.condenser_duty
-        + mechanical
-        + generator_losses
-        + per_unit_flow(r, p.auxiliary_power)
-        + lost_out;
-    assert!(
-        (into - out).abs() <= 1e-9 * into,
-        "plant energy: in {into}, out {out}"
-    );
-    for (f, x) in r.extraction_fractions().iter().enumerate() {
-        assert!((0.0..=1.0).contains(x), "extraction {f}: {x}");
-    }
 }
 
 fn relative(a: f64, b: f64) -> f64 {

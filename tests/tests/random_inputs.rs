@@ -21,6 +21,7 @@ use ebullio_conformance::oracles::derivatives::{
     check_derivatives, check_saturation, saturation_call,
 };
 use ebullio_conformance::oracles::measured::check_measured;
+use ebullio_conformance::oracles::off_design::check_off_design;
 use ebullio_conformance::oracles::plant::{check_component, check_cycle};
 use ebullio_conformance::oracles::state::{
     check_solve, describe, pair_name, same_temperature, SolveCase,
@@ -31,6 +32,7 @@ use ebullio_conformance::random_inputs::c_plant::plant_case;
 use ebullio_conformance::random_inputs::cases::{case_from_state, raw_case};
 use ebullio_conformance::random_inputs::draw::{campaign_seed, Draw, Seeded};
 use ebullio_conformance::random_inputs::measured::{coverage_factor, measured_case};
+use ebullio_conformance::random_inputs::off_design::off_design_case;
 use ebullio_conformance::random_inputs::plant::cycle;
 use ebullio_conformance::random_inputs::states::{pair_values, source, values_from};
 use ebullio_conformance::random_inputs::values::value;
@@ -354,6 +356,21 @@ fn c_abi_cycle_and_off_design_calls_match_the_core() {
     }
     eprintln!("C plant calls: the core solved {solved:?}");
     finish(findings, "C plant calls");
+}
+
+/// Off-design models (each calibrated on a drawn design with a throttle
+/// flow, then solved at four drawn operating points).
+const OFF_DESIGN_MODELS: usize = 1200;
+
+#[test]
+fn off_design_within_physical_limits() {
+    let (mut draw, mut findings) = start("off_design");
+    let mut solved = 0;
+    for _ in 0..OFF_DESIGN_MODELS {
+        solved += check_off_design(&off_design_case(&mut draw), &mut findings);
+    }
+    eprintln!("off design: {solved} balances");
+    finish(findings, "off-design model");
 }
 
 /// Batches of measured-data calls per calculation × unit system; each

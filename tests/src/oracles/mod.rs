@@ -10,6 +10,7 @@ pub mod derivatives;
 pub mod findings;
 pub mod limits;
 pub mod measured;
+pub mod off_design;
 pub mod plant;
 pub mod state;
 pub mod transport;

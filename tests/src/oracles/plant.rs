@@ -194,13 +194,28 @@ pub fn check_cycle(spec: &CycleSpec, findings: &mut Findings) -> Option<CycleRes
     findings.case();
     let call = || format!("solve_cycle(&{spec:?})");
     let r = run_plant_call(findings, spec.units, "cycle", &call, || solve_cycle(spec))?;
+    check_solved_cycle(&r, spec.units, &call, findings);
+    Some(r)
+}
+
+/// Checks a solved cycle `r`, asked for in `units` by `call`: every
+/// figure finite, heat in, work out, efficiency in (0, Carnot), the
+/// first law over the cycle and per component, every flow within [0, 1]
+/// of throttle, every state within the formulation's checks, no
+/// component destroying entropy.
+pub fn check_solved_cycle(
+    r: &CycleResult,
+    units: Units,
+    call: &dyn Fn() -> String,
+    findings: &mut Findings,
+) {
     let say = |what: String| move || format!("{}: {what}", call());
     findings.check(
-        r.units == spec.units,
+        r.units == units,
         "cycle: result in other units",
         say(format!("{:?}", r.units)),
     );
-    for (name, x) in cycle_figures(&r) {
+    for (name, x) in cycle_figures(r) {
         findings.check(
             x.is_finite(),
             format!("cycle: {name} not finite"),
@@ -225,7 +240,7 @@ pub fn check_cycle(spec: &CycleSpec, findings: &mut Findings) -> Option<CycleRes
         "cycle: turbine work not positive or pump work negative",
         say(format!("turbine {}, pumps {}", r.turbine_work, r.pump_work)),
     );
-    let carnot = carnot_of_points(&r);
+    let carnot = carnot_of_points(r);
     findings.check(
         r.thermal_efficiency > 0.0
             && r.thermal_efficiency < r.carnot_efficiency
@@ -295,8 +310,23 @@ pub fn check_cycle(spec: &CycleSpec, findings: &mut Findings) -> Option<CycleRes
             "cycle: a component's heat or work not finite",
             say(format!("{:?} {}", c.kind, c.number)),
         );
+        // Each component's own first law and mass balance, independently
+        // of the algebra that solved it (tests/src/balances.rs's
+        // tolerances).
+        let energy_in = c.inlets().iter().map(|s| s.flow * s.enthalpy).sum::<f64>() + c.heat_in;
+        let energy_out = c.outlets().iter().map(|s| s.flow * s.enthalpy).sum::<f64>() + c.work_out;
+        let mass_in: f64 = c.inlets().iter().map(|s| s.flow).sum();
+        let mass_out: f64 = c.outlets().iter().map(|s| s.flow).sum();
+        findings.check(
+            (energy_in - energy_out).abs() <= 1e-9 * energy_in.abs().max(energy_out.abs())
+                && (mass_in - mass_out).abs() <= 1e-12,
+            "cycle: a component's energy or mass does not close",
+            say(format!(
+                "{:?} {}: energy {energy_in} in, {energy_out} out; mass {mass_in} in, {mass_out} out",
+                c.kind, c.number
+            )),
+        );
     }
-    Some(r)
 }
 
 /// No entropy destroyed: `generated` ≥ −`allowance` × the entropies

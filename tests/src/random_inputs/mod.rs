@@ -6,6 +6,7 @@ pub mod c_plant;
 pub mod cases;
 pub mod draw;
 pub mod measured;
+pub mod off_design;
 pub mod plant;
 pub mod states;
 pub mod values;

@@ -52,7 +52,7 @@ fn difference(draw: &mut impl Draw, lo: f64, hi: f64) -> f64 {
 }
 
 /// A cycle within sane limits, native units, then read in `units`.
-fn sane_cycle(draw: &mut impl Draw, units: Units) -> CycleSpec {
+pub fn sane_cycle(draw: &mut impl Draw, units: Units) -> CycleSpec {
     let p = |x: f64| units.from_native(Quantity::Pressure, x);
     let t = |x: f64| units.from_native(Quantity::Temperature, x);
     let dt = |x: f64| units.from_native(Quantity::TemperatureDifference, x);

@@ -2,6 +2,7 @@
 //! are split from, at the design balance (to calibrate their UA) and at
 //! every off-design pass (to solve them by ε–NTU).
 
+use super::off_design_options::HeatersOutOfService;
 use super::spec::{Heater, HeaterKind, MAX_HEATERS};
 use super::sweeps::HeaterWater;
 use crate::State;
@@ -48,16 +49,20 @@ impl HeaterOperations {
         heaters: [None; MAX_HEATERS],
     };
 
-    /// The closed ones of `heaters`, with their shells at `shell` and
-    /// their water sides as the sweeps left them.
+    /// The closed ones of `heaters` in service, with their shells at
+    /// `shell` and their water sides as the sweeps left them.
     pub(super) fn record(
         &mut self,
         heaters: &[Heater],
         shell: &[State; MAX_HEATERS],
         water: &[HeaterWater; MAX_HEATERS],
+        out_of_service: &HeatersOutOfService,
     ) {
         for (j, (slot, heater)) in self.heaters.iter_mut().zip(heaters).enumerate() {
-            let HeaterKind::Closed { approach, .. } = heater.kind else {
+            // A heater out of service passes no steam: its zones have
+            // nothing to say this pass, and it keeps its approaches.
+            let (HeaterKind::Closed { approach, .. }, false) = (heater.kind, out_of_service[j])
+            else {
                 *slot = None;
                 continue;
             };

@@ -27,8 +27,10 @@
 //! `heater_ntu.rs` solves them by ε–NTU.
 
 mod assembly;
+mod condenser_cooling;
 mod cone_law;
 pub(super) mod curve;
+mod efficiency_correction;
 mod ends;
 mod exhaust;
 mod expansion;
@@ -41,8 +43,10 @@ pub(super) mod load_curve;
 pub(super) mod losses;
 pub(super) mod off_design;
 pub(super) mod off_design_options;
+mod out_of_service;
 mod output;
 mod record;
+mod relaxation;
 pub(super) mod result;
 mod side_streams;
 pub(super) mod spec;
@@ -53,6 +57,7 @@ mod train;
 use self::assembly::Assembly;
 use self::cone_law::StageGroups;
 use self::heater_operation::HeaterOperations;
+use self::off_design_options::{HeatersOutOfService, ALL_IN_SERVICE};
 use self::result::CycleResult;
 use self::spec::{CycleSpec, Heater, HeaterKind, MAX_CASINGS};
 use crate::plant::fault::in_caller_units;
@@ -87,18 +92,20 @@ const CONTROL_VALVES: PlantPart = PlantPart::single("control valves");
 /// takes above the shell saturation temperature comes from the steam's
 /// superheat alone. Errors are in `spec.units`.
 pub fn solve_cycle(spec: &CycleSpec) -> Result<CycleResult, Error> {
-    solve(spec, None, None, None).map_err(|e| in_caller_units(e, spec.units))
+    solve(spec, None, &ALL_IN_SERVICE, None, None).map_err(|e| in_caller_units(e, spec.units))
 }
 
 /// The steps in the order that also decides which refusal a cycle with
 /// several faults gets, all in native units. Off-design operation adds
-/// three things: `control_valves`, the pressure (native) the throttle
-/// steam is throttled to before the first stage group, `groups`, which
-/// receives each stage group's flow and end pressures, and `heaters`,
-/// which receives each closed heater's streams.
+/// four things: `control_valves`, the pressure (native) the throttle
+/// steam is throttled to before the first stage group, the heaters
+/// `out_of_service` (`out_of_service.rs`), `groups`, which receives each
+/// stage group's flow and end pressures, and `heaters`, which receives
+/// each closed heater's streams.
 fn solve(
     spec: &CycleSpec,
     control_valves: Option<f64>,
+    out_of_service: &HeatersOutOfService,
     groups: Option<&mut StageGroups>,
     heaters: Option<&mut HeaterOperations>,
 ) -> Result<CycleResult, Error> {
@@ -121,7 +128,7 @@ fn solve(
         let shell = expansion::heater_shells(spec, &line)?;
         let mut side = side_streams::SideStreams::new(spec, &line, &shell, &throttle)?;
         let train = train::FeedwaterTrain::new(spec, &throttle, &hotwell, &shell)?;
-        let mut flows = sweeps::TrainFlows::new(&train, &hotwell);
+        let mut flows = sweeps::TrainFlows::new(&train, &hotwell, out_of_service);
         sweeps::solve_train(spec, &train, &shell, &mut flows, &mut side, &hotwell)?;
         let next = side.inlet_mixtures(&line, &flows, spec.heaters().len());
         if settled(&next, &mixtures) {
@@ -139,7 +146,7 @@ fn solve(
         groups.record(&line, &flows, &side);
     }
     if let Some(heaters) = heaters {
-        heaters.record(spec.heaters(), &shell, &flows.water);
+        heaters.record(spec.heaters(), &shell, &flows.water, out_of_service);
     }
     limits::check_extractions(spec.heaters(), &flows, &shell, &side, &line)?;
     let boiler_heat = side.boiler_heat(

@@ -9,14 +9,18 @@
 //! flows that solve gives move the pressures again, and the two are
 //! iterated until the pressures settle.
 //!
-//! Kept at design for now: each section's isentropic efficiency (the
-//! correction against the ratio of volume flow to design is a later
-//! step, at [`OffDesignModel::spec_at`]). Each closed heater keeps its
-//! design TTD and DCA, or with [`OffDesignOptions::heater_transfer`]
-//! takes those its zones' UA give at the last pass's flows
-//! (`heater_zones.rs`, `heater_ntu.rs`), iterated with the pressures.
+//! The options move more with the pressures: each casing's efficiency
+//! by its volume flow (`efficiency_correction.rs`), the condenser
+//! pressure by its cooling water (`condenser_cooling.rs`); heaters out
+//! of service are bypassed by the design solve itself
+//! (`out_of_service.rs`). Each closed heater keeps its design TTD and
+//! DCA, or with [`OffDesignOptions::heater_transfer`] takes those its
+//! zones' UA give at the last pass's flows (`heater_zones.rs`,
+//! `heater_ntu.rs`), iterated with the pressures.
 
+use super::condenser_cooling::{self, CondenserTransfer};
 use super::cone_law::{GroupOperation, StageGroups};
+use super::efficiency_correction::{check_curve, corrected_efficiencies, Outside};
 use super::expansion::MAX_GROUPS;
 use super::heater_ntu::HeaterPasses;
 use super::heater_operation::HeaterOperations;
@@ -25,7 +29,9 @@ use super::losses::Losses;
 use super::off_design_options::{
     CondenserCondition, HeatersOutOfService, OffDesignOptions, ALL_IN_SERVICE,
 };
+use super::out_of_service;
 use super::output::{positive_throttle_flow, throttle_flow};
+use super::relaxation::Relaxation;
 use super::result::CycleResult;
 use super::spec::{CycleSpec, Supply, MAX_HEATERS};
 use super::{solve, CONTROL_VALVES};
@@ -104,21 +110,26 @@ pub struct OffDesignModel {
     stations: [Station; MAX_HEATERS],
     /// What the model knows beyond the design balance.
     options: OffDesignOptions,
+    /// The condenser's UA, from the design cooling water.
+    condenser: Option<CondenserTransfer>,
     /// The closed heaters' UA per zone, with `options.heater_transfer`.
     heaters: Option<CalibratedHeaters>,
 }
 
 /// Passes of the pressures and the balance allowed. The pressures move
 /// with the flows' small changes and with p·v at the groups' inlets,
-/// contracting about tenfold a pass. Measured: the demo unit of
+/// contracting about tenfold a pass (where they swing instead,
+/// `relaxation.rs` damps them). Measured: the demo unit of
 /// `plant_off_design.rs` settles in at most 12 passes from 30 % to 100 %
-/// of its flow, either way of controlling the throttle; with its heaters
-/// by their UA (`plant_heater_transfer.rs`) in at most 15 with a UA
-/// flow exponent of 0.5 to 1, 16 with 0 (two of them refused and
-/// retried, `HeaterPasses::after_refusal`); designs without drain
-/// coolers or with a negative TTD, at a fixed UA, in at most 30 at 15 %
-/// of the flow.
-const MAX_PASSES: usize = 40;
+/// of its flow, either way of controlling the throttle, 14 with the
+/// options of `plant_off_design_options.rs`; the random campaign's drawn
+/// units (`random_inputs.rs`, `off_design_within_physical_limits`, eight
+/// seeds, some 6600 balances) in at most 38; with its heaters by their
+/// UA (`plant_heater_transfer.rs`) in at most 15 with a UA flow exponent
+/// of 0.5 to 1, 16 with 0 (two of them refused and retried,
+/// `HeaterPasses::after_refusal`); designs without drain coolers or with
+/// a negative TTD, at a fixed UA, in at most 30 at 15 % of the flow.
+const MAX_PASSES: usize = 100;
 /// Pressures that move less than this (relative) between passes have
 /// settled: finer than the cone law is needed, coarser than the states'
 /// own resolution (relative 1e-10 promised, a few 1e-15 met).
@@ -147,8 +158,8 @@ impl OffDesignModel {
         design: &CycleSpec,
         options: &OffDesignOptions,
     ) -> Result<OffDesignModel, Error> {
-        if options.efficiency_correction.is_some() || options.design_cooling_water.is_some() {
-            return Err(refuse(MODEL, "its options are not supported yet"));
+        if let Some(curve) = &options.efficiency_correction {
+            check_curve(curve)?;
         }
         let Some(design_flow) = throttle_flow(&design.losses, design.units)? else {
             return Err(refuse(
@@ -158,9 +169,10 @@ impl OffDesignModel {
         };
         let mut at_design = StageGroups::NONE;
         let mut heaters_at_design = HeaterOperations::NONE;
-        solve(
+        let balance = solve(
             design,
             None,
+            &ALL_IN_SERVICE,
             Some(&mut at_design),
             Some(&mut heaters_at_design),
         )?;
@@ -179,6 +191,15 @@ impl OffDesignModel {
             let p = native(Quantity::Pressure, heater.extraction_pressure, design.units)?;
             *station = station_at(at_design.groups(), p);
         }
+        let condenser = match &options.design_cooling_water {
+            Some(water) => Some(CondenserTransfer::calibrate(
+                water,
+                condenser_cooling::duty(&balance, design_flow),
+                at_design.groups()[at_design.groups().len() - 1].outlet_pressure,
+                design.units,
+            )?),
+            None => None,
+        };
         Ok(OffDesignModel {
             design: *design,
             design_flow,
@@ -186,6 +207,7 @@ impl OffDesignModel {
             flow_coefficients,
             stations,
             options: *options,
+            condenser,
             heaters: match &options.heater_transfer {
                 Some(transfer) => Some(CalibratedHeaters::calibrate(
                     design,
@@ -228,27 +250,31 @@ impl OffDesignModel {
         let flow = positive_throttle_flow(point.throttle_flow, units)?;
         let mut losses = self.design.losses;
         losses.throttle_flow = Some(point.throttle_flow);
-        if point.out_of_service != ALL_IN_SERVICE {
-            return Err(refuse(
-                MODEL,
-                "taking heaters out of service is not supported yet",
-            ));
-        }
-        let condenser = match point.condenser {
-            CondenserCondition::Pressure(p) => native(Quantity::Pressure, p, units)?,
-            CondenserCondition::Design => {
-                self.at_design.groups()[self.at_design.groups().len() - 1].outlet_pressure
-            }
-            CondenserCondition::CoolingWater(_) => {
-                return Err(refuse(
-                    MODEL,
-                    "a condenser by its cooling water is not supported yet",
-                ))
-            }
+        out_of_service::check(&self.design, &point.out_of_service)?;
+        let design_condenser =
+            self.at_design.groups()[self.at_design.groups().len() - 1].outlet_pressure;
+        // By its cooling water the condenser starts at its design
+        // pressure and follows each pass's duty.
+        let (mut condenser, cooling) = match point.condenser {
+            CondenserCondition::Pressure(p) => (native(Quantity::Pressure, p, units)?, None),
+            CondenserCondition::Design => (design_condenser, None),
+            CondenserCondition::CoolingWater(water) => match &self.condenser {
+                Some(transfer) => (design_condenser, Some((transfer, water))),
+                None => {
+                    return Err(refuse(
+                        MODEL,
+                        "a condenser by its cooling water needs the design cooling water (options.design_cooling_water)",
+                    ))
+                }
+            },
         };
         // The first pressures from the design's flows and p·v, scaled to
         // the throttle flow.
         let mut pressures = self.cone_pressures(&self.at_design, flow, condenser);
+        // The groups of the last pass, whose volume flows correct the
+        // efficiencies (none before the first: design efficiencies).
+        let mut last: Option<StageGroups> = None;
+        let mut relaxation = Relaxation::new();
         // With heater_transfer, the closed heaters' approaches: the
         // design's, then each pass those the last one's flows give.
         let mut heater_passes = match &self.heaters {
@@ -256,7 +282,8 @@ impl OffDesignModel {
             None => None,
         };
         for _ in 0..MAX_PASSES {
-            let (mut spec, control_valves) = self.spec_at(&pressures, point, losses)?;
+            let (mut spec, control_valves) =
+                self.spec_at(&pressures, point, losses, last.as_ref().map(|g| (g, flow)))?;
             let mut solved = StageGroups::NONE;
             let mut heaters = HeaterOperations::NONE;
             if let Some(passes) = &heater_passes {
@@ -265,6 +292,7 @@ impl OffDesignModel {
             let balance = match solve(
                 &spec,
                 control_valves,
+                &point.out_of_service,
                 Some(&mut solved),
                 heater_passes.as_ref().map(|_| &mut heaters),
             ) {
@@ -286,20 +314,26 @@ impl OffDesignModel {
                     "its stage groups differ from the design's at these pressures",
                 ));
             }
-            let next = self.cone_pressures(&solved, flow, condenser);
+            if let Some((transfer, water)) = &cooling {
+                let duty = condenser_cooling::duty(&balance, flow);
+                condenser = transfer.condenser_pressure(water, duty, units)?;
+            }
             let heaters_settled = match &mut heater_passes {
                 Some(passes) => passes.advance(&spec, &heaters, flow)?,
                 None => true,
             };
+            let next = self.cone_pressures(&solved, flow, condenser);
             if next
                 .iter()
                 .zip(&pressures)
                 .all(|(a, b)| (a.0 - b.0).abs() <= PRESSURE_TOLERANCE * b.0)
+                && self.efficiencies_settled(last.as_ref(), &solved, flow)?
                 && heaters_settled
             {
                 return Ok(balance);
             }
-            pressures = next;
+            pressures = relaxation.next(&pressures, &next);
+            last = Some(solved);
         }
         Err(Error::NotConverged {
             what: "off-design stage pressures",
@@ -332,23 +366,72 @@ impl OffDesignModel {
         pressures
     }
 
+    /// Whether the casings' corrected efficiencies at the groups of the
+    /// `last` and `solved` passes (at `flow` kg/s) agree, as the
+    /// pressures must (always without a correction, never after the
+    /// first pass with one). Once they do, a volume flow ratio the
+    /// passes took at the curve's end is refused.
+    fn efficiencies_settled(
+        &self,
+        last: Option<&StageGroups>,
+        solved: &StageGroups,
+        flow: f64,
+    ) -> Result<bool, Error> {
+        let Some(curve) = &self.options.efficiency_correction else {
+            return Ok(true);
+        };
+        let Some(last) = last else {
+            return Ok(false);
+        };
+        let design = (&self.at_design, self.design_flow);
+        let at = |groups| {
+            corrected_efficiencies(
+                curve,
+                &self.design,
+                design,
+                (groups, flow),
+                Outside::NearerEnd,
+            )
+        };
+        let (before, after) = (at(last)?, at(solved)?);
+        let settled = before
+            .iter()
+            .zip(&after)
+            .all(|(a, b)| (a - b).abs() <= PRESSURE_TOLERANCE * b);
+        if settled {
+            corrected_efficiencies(curve, &self.design, design, (last, flow), Outside::Refused)?;
+        }
+        Ok(settled)
+    }
+
     /// The design description at `pressures` (native) and the operating
-    /// `point`, with `losses` at its throttle flow, and the control
-    /// valves' outlet pressure (native) when they throttle.
+    /// `point`, with `losses` at its throttle flow, each casing's
+    /// efficiency corrected for the volume flows of `last` (the last
+    /// pass's groups at `flow` kg/s; none on the first pass, which keeps
+    /// the design efficiencies) when the model has a correction, and the
+    /// control valves' outlet pressure (native) when they throttle.
     fn spec_at(
         &self,
         pressures: &[(f64, f64); MAX_GROUPS],
         point: &OperatingPoint,
         losses: Losses,
+        last: Option<(&StageGroups, f64)>,
     ) -> Result<(CycleSpec, Option<f64>), Error> {
         let units = self.design.units;
         let to = |p| units.from_native(Quantity::Pressure, p);
         let groups = self.at_design.groups();
-        // Sections and heaters keep their design efficiencies, TTDs and
-        // DCAs: the hook for the volume-flow correction of the
-        // efficiencies and for the heaters' ε–NTU is here.
+        // Heaters keep their design TTDs and DCAs here; with
+        // heater_transfer the passes set those their zones give.
         let mut spec = self.design;
         spec.losses = losses;
+        if let (Some(curve), Some(last)) = (&self.options.efficiency_correction, last) {
+            let design = (&self.at_design, self.design_flow);
+            let efficiencies =
+                corrected_efficiencies(curve, &self.design, design, last, Outside::NearerEnd)?;
+            for (casing, efficiency) in spec.casings_mut().iter_mut().zip(efficiencies) {
+                casing.isentropic_efficiency = efficiency;
+            }
+        }
         for (c, casing) in spec.casings_mut().iter_mut().enumerate() {
             if let Some(g) = groups.iter().rposition(|group| group.casing == c) {
                 casing.exhaust_pressure = to(pressures[g].1);

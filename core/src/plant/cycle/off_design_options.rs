@@ -7,12 +7,22 @@
 use super::curve::Curve;
 use super::spec::MAX_HEATERS;
 
-/// The condenser's cooling water, in the cycle's units.
+/// The condenser's cooling water, in the cycle's units: liquid water at
+/// 0.2 MPa in the tubes (its enthalpies from the engine there). At the
+/// design balance it fixes the condenser's UA (UA = Q/LMTD against the
+/// condensing temperature); at an operating point the condenser pressure
+/// is the one whose saturation temperature lets that UA carry the
+/// balance's duty (ε = 1 − exp(−NTU), the steam side at one
+/// temperature), the UA scaled by the square root of the cooling water
+/// flow ratio (common practice; the inlet temperature's own effect on
+/// U, air and fouling are not modelled).
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct CoolingWater {
-    /// Cooling water temperature at the condenser inlet.
+    /// Cooling water temperature at the condenser inlet: liquid at
+    /// 0.2 MPa, and at design below the condensing temperature.
     pub inlet_temperature: f64,
-    /// Cooling water mass flow.
+    /// Cooling water mass flow, positive (kg/s; lbm/h in US customary
+    /// units); at design enough to leave below the condensing temperature.
     pub flow: f64,
 }
 
@@ -35,9 +45,15 @@ pub struct HeaterTransfer {
 /// optional, [`OffDesignOptions::NONE`] for none.
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct OffDesignOptions {
-    /// Each section's isentropic efficiency, as a factor on its design
-    /// efficiency, against the ratio of its volume flow to design.
-    /// `None`: the design efficiency at every flow.
+    /// Each casing's isentropic efficiency, as a factor on its design
+    /// efficiency, against the ratio of its volume flow to design, taken
+    /// at its first stage group's inlet (mass flow × specific volume,
+    /// after the control valves for the first casing): every stage group
+    /// of the casing expands at the corrected efficiency. The curve must
+    /// pass through (1, 1), which keeps the design balance; a ratio
+    /// outside it is refused, not extrapolated. A feed pump turbine's
+    /// efficiency is not corrected. `None`: the design efficiency at
+    /// every flow.
     pub efficiency_correction: Option<Curve>,
     /// The condenser's cooling water at the design balance, which fixes
     /// its UA so that an operating point may give the cooling water
@@ -70,7 +86,17 @@ pub enum CondenserCondition {
 }
 
 /// Which heaters are out of service, by index in
-/// [`CycleSpec::heaters`](super::spec::CycleSpec::heaters).
+/// [`CycleSpec::heaters`](super::spec::CycleSpec::heaters). A closed
+/// heater out of service has its extraction closed (the point stays a
+/// stage boundary, so the stage groups are the design's), its feedwater
+/// bypassed (throttled by its design water-side pressure drop, so the
+/// pumps discharge as at design) and the drains cascaded from above
+/// passed on to the next heater in service below, or the condenser. In
+/// the result it keeps its number, points and components, at zero
+/// extraction, steam and drain flows, its feedwater leaving as it came
+/// (its drain points hold that water). Refused: an open heater, a heater
+/// that receives a leakage or a feed pump turbine's exhaust or supplies
+/// the feed pump turbine, and an index the cycle has no heater at.
 pub type HeatersOutOfService = [bool; MAX_HEATERS];
 
 /// Every heater in service.

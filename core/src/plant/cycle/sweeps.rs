@@ -4,6 +4,8 @@
 //! couple the two, and the sweeps repeat until the extraction fractions
 //! stop changing.
 
+use super::off_design_options::HeatersOutOfService;
+use super::out_of_service::{bypass_flows, bypass_water};
 use super::side_streams::SideStreams;
 use super::spec::{CycleSpec, Drains, Heater, HeaterKind, MAX_HEATERS};
 use super::train::{pump_efficiency, FeedwaterTrain};
@@ -50,6 +52,8 @@ pub(super) struct HeaterWater {
     pub(super) drain_flow: f64,
     /// The flow of drains cascaded into this heater, and from which heater.
     pub(super) cascaded_in: Option<(f64, usize)>,
+    /// Out of service: no steam, its feedwater bypassed (`out_of_service.rs`).
+    pub(super) out_of_service: bool,
 }
 
 /// The solved train, native units, per unit throttle flow.
@@ -69,9 +73,14 @@ impl TrainFlows {
     /// A train not yet swept: the hotwell's water everywhere, no steam
     /// extracted. (Built in the caller's frame and filled by
     /// [`solve_train`]: flows returned by value inside a `Result` are
-    /// copied once more.)
-    pub(super) fn new(train: &FeedwaterTrain, hotwell: &State) -> TrainFlows {
-        TrainFlows {
+    /// copied once more.) The heaters marked in `out_of_service` are
+    /// bypassed.
+    pub(super) fn new(
+        train: &FeedwaterTrain,
+        hotwell: &State,
+        out_of_service: &HeatersOutOfService,
+    ) -> TrainFlows {
+        let mut flows = TrainFlows {
             water: [HeaterWater {
                 feedwater_in: *hotwell,
                 feedwater_out: *hotwell,
@@ -84,11 +93,16 @@ impl TrainFlows {
                 outlet_flow: 1.0,
                 drain_flow: 0.0,
                 cascaded_in: None,
+                out_of_service: false,
             }; MAX_HEATERS],
             boiler_inlet: train.condensate_pump_outlet,
             condensate_flow: 1.0,
             to_condenser: None,
+        };
+        for (w, &out) in flows.water.iter_mut().zip(out_of_service) {
+            w.out_of_service = out;
         }
+        flows
     }
 
     /// The steam the first `k` heaters extract.
@@ -154,6 +168,10 @@ fn sweep_up(
         let w = &mut water[j];
         let unchanged = sweep > 0 && w.feedwater_in == line;
         w.feedwater_in = line;
+        if w.out_of_service {
+            line = bypass_water(w, j, train.above_pressure[j])?;
+            continue;
+        }
         line = match heaters[j].kind {
             HeaterKind::Closed { drains, .. } => {
                 closed_heater_water(w, j, &heaters[j], drains, &shell[j], train, unchanged)?
@@ -252,7 +270,13 @@ fn sweep_down(
     let mut cascade: Option<(f64, usize)> = None;
     let mut change: f64 = 0.0;
     for j in 0..heaters.len() {
+        if water[j].out_of_service {
+            // Drains cascaded from above pass it by, to the next below.
+            bypass_flows(&mut water[j], above);
+            continue;
+        }
         let h_steam = shell[j].native().h;
+        let cascade_in = cascade;
         let (cascaded_flow, h_cascaded) = match cascade {
             Some((flow, from)) => (flow, water[from].drain.native().h),
             None => (0.0, 0.0),
@@ -284,7 +308,7 @@ fn sweep_down(
             ));
         }
         w.outlet_flow = above;
-        w.cascaded_in = (cascaded_flow > 0.0).then(|| (cascaded_flow, j.saturating_sub(1)));
+        w.cascaded_in = cascade_in.filter(|&(flow, _)| flow > 0.0);
         change = change.max((extraction - w.extraction_flow).abs());
         w.extraction_flow = extraction;
         above = w.feedwater_flow;
