@@ -7,15 +7,18 @@
 //! the off-design balance at 70 % of the design flow, sliding pressure,
 //! the same; then each of the 15 load-curve rows (30 % to 100 % of the
 //! flow, sliding pressure): throttle pressure, thermal efficiency, the
-//! output and power figures.
+//! output and power figures; then, with every option (an efficiency
+//! correction, the design cooling water, heaters by their UA), the
+//! balance at 60 % of the flow with warmer cooling water and heater 6
+//! out of service, the same figures.
 //!
 //! `cargo run --release -p ebullio-python --example off_design_reference`
 
-use ebullio::plant::Curve;
 use ebullio::plant::{
-    solve_cycle, Casing, CycleResult, CycleSpec, Drains, ExhaustLoss, FeedPumpTurbine, Generator,
-    Heater, HeaterApproach, HeaterKind, Leak, LeakSource, Makeup, OffDesignModel, OperatingPoint,
-    PlantOutput, Reheat, SteamDestination, Supply, ThrottleControl, WaterLoss,
+    solve_cycle, Casing, CondenserCondition, CoolingWater, Curve, CycleResult, CycleSpec, Drains,
+    ExhaustLoss, FeedPumpTurbine, Generator, Heater, HeaterApproach, HeaterKind, HeaterTransfer,
+    Leak, LeakSource, Makeup, OffDesignModel, OffDesignOptions, OperatingPoint, PlantOutput,
+    Reheat, SteamDestination, Supply, ThrottleControl, WaterLoss,
 };
 use ebullio::Units;
 
@@ -164,6 +167,29 @@ fn main() {
         out.extend([row.throttle_pressure, row.thermal_efficiency]);
         output_figures(&row.output, &mut out);
     }
+    let options = OffDesignOptions {
+        efficiency_correction: Some(
+            Curve::new(&[(0.5, 0.93), (1.0, 1.0), (1.5, 0.96)]).expect("a rising curve"),
+        ),
+        design_cooling_water: Some(CoolingWater {
+            inlet_temperature: 22.0,
+            flow: 17_000.0,
+        }),
+        heater_transfer: Some(HeaterTransfer {
+            ua_flow_exponent: 0.8,
+        }),
+    };
+    let model = OffDesignModel::calibrate_with(&spec, &options).expect("the options calibrate");
+    let mut point = OperatingPoint::new(0.6 * DESIGN_FLOW, ThrottleControl::SlidingPressure);
+    point.condenser = CondenserCondition::CoolingWater(CoolingWater {
+        inlet_temperature: 26.0,
+        flow: 17_000.0,
+    });
+    point.out_of_service[5] = true;
+    balance(
+        &model.solve(&point).expect("60 % with the options solves"),
+        &mut out,
+    );
     for value in out {
         println!("{:016x}", value.to_bits());
     }

@@ -21,7 +21,7 @@ import ebullio
 from ebullio import plant
 from ebullio.plant import Cycle
 from ebullio.plant_losses import Losses
-from ebullio.plant_off_design import MAX_LOAD_POINTS, OffDesign
+from ebullio.plant_off_design import MAX_LOAD_POINTS, CoolingWater, OffDesign
 
 ROOT = Path(__file__).resolve().parents[2]
 sys.path.insert(0, str(ROOT / "python" / "examples"))
@@ -64,6 +64,11 @@ def test_the_demo_plant_with_losses_has_the_rust_cores_bits(model, core_numbers)
     for row in curve.rows:
         ours += [row["throttle_pressure"], row["thermal_efficiency"]]
         ours += [row[n] for n in plant.OUTPUT] + [row[f"{n}_power"] for n in plant.POWER]
+    with_options = OffDesign(demo.PLANT, efficiency_correction=[(0.5, 0.93), (1.0, 1.0), (1.5, 0.96)],
+                             design_cooling_water=CoolingWater(t=22.0, flow=17_000.0),
+                             heater_ua_exponent=0.8)
+    ours += figures(with_options.solve(0.6 * demo.DESIGN_FLOW, cooling_water=CoolingWater(t=26.0, flow=17_000.0),
+                                       out_of_service=[5]))
     assert len(ours) == len(core_numbers)
     mismatches = [k for k, (a, b) in enumerate(zip(ours, core_numbers)) if bits(a) != bits(b)]
     assert mismatches == []
@@ -138,7 +143,6 @@ def test_too_many_flows_and_bad_words_are_refused(model):
 
 
 def demo_cooling_water():
-    from ebullio.plant_off_design import CoolingWater
     return CoolingWater(t=20.0, flow=15_000.0)
 
 
