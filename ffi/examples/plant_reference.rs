@@ -19,12 +19,26 @@
 //! refused), and the unit at 75 % of its design net output (the 14
 //! totals, then its output).
 //!
-//! `cargo run --release -p ebullio-ffi --example plant_reference [off-design]`
+//! With the argument `python-demo`, for `python/tests/test_plant_off_design.py`:
+//! the demo plant with losses of `python/examples/tallowmere_load_curve.py`
+//! (its feed pump discharge 186 bar and other pumps 0.78, as
+//! `tallowmere_cycle.py` has them; its losses in `python_demo_losses`):
+//! the design balance's output, the off-design balance at 70 % of the
+//! design flow with sliding pressure, then each of the 15 load-curve rows
+//! (30 % to 100 % of the flow, sliding pressure: throttle pressure,
+//! thermal efficiency, output), then, with every option (an efficiency
+//! correction, the design cooling water, heaters by their UA), the
+//! balance at 60 % of the flow with warmer cooling water and heater 6
+//! out of service (its output). Each output is the 21 numbers of
+//! `EbullioPlantOutput`, as below.
+//!
+//! `cargo run --release -p ebullio-ffi --example plant_reference [off-design | python-demo]`
 
 use ebullio::plant::{
-    solve_cycle, Casing, Curve, CycleResult, CycleSpec, Drains, ExhaustLoss, FeedPumpTurbine,
-    Generator, Heater, HeaterApproach, HeaterKind, Leak, LeakSource, Makeup, OffDesignModel,
-    OperatingPoint, PlantOutput, Reheat, SteamDestination, Supply, ThrottleControl, WaterLoss,
+    solve_cycle, Casing, CondenserCondition, CoolingWater, Curve, CycleResult, CycleSpec, Drains,
+    ExhaustLoss, FeedPumpTurbine, Generator, Heater, HeaterApproach, HeaterKind, HeaterTransfer,
+    Leak, LeakSource, Makeup, OffDesignModel, OffDesignOptions, OperatingPoint, PlantOutput,
+    Reheat, SteamDestination, Supply, ThrottleControl, WaterLoss,
 };
 use ebullio::{Property, Units};
 
@@ -94,35 +108,14 @@ fn with_losses(spec: &mut CycleSpec) {
     });
 }
 
-/// The 21 numbers of a plant output, powers last (zeros without them).
+/// The 21 numbers of a plant output, powers last (zeros without them),
+/// in the core's `FIGURE_NAMES` orders (those of `EbullioPlantOutput`).
 fn output(o: &PlantOutput) -> Vec<f64> {
-    let mut out = vec![
-        o.shaft_work,
-        o.generator_efficiency,
-        o.gross_output,
-        o.motor_pump_work,
-        o.net_output,
-        o.net_efficiency,
-        o.gross_heat_rate,
-        o.net_heat_rate,
-        o.expansion_line_end,
-        o.exhaust_loss,
-        o.annulus_velocity,
-    ];
-    out.extend(o.power.map_or([0.0; 10], |p| {
-        [
-            p.throttle_flow,
-            p.heat_input,
-            p.condenser_duty,
-            p.shaft_power,
-            p.mechanical_losses,
-            p.generator_losses,
-            p.gross_output,
-            p.motor_pump_power,
-            p.auxiliary_power,
-            p.net_output,
-        ]
-    }));
+    let mut out: Vec<f64> = o.figures().map(|(_, value)| value).to_vec();
+    out.extend(
+        o.power
+            .map_or([0.0; 10], |p| p.figures().map(|(_, value)| value)),
+    );
     out
 }
 
@@ -159,10 +152,10 @@ fn off_design(spec: &CycleSpec) -> Vec<f64> {
     out
 }
 
-fn main() {
-    // The demo plant; feed pressure 187 bar and condensate pump 0.80 are
-    // invented beside DESIGN.md's numbers. The C and Python tests build
-    // the same description.
+/// The demo plant with its feed pump discharge at `feed_bar` and its
+/// other pumps at `condensate_pump` (both invented beside DESIGN.md's
+/// numbers).
+fn tallowmere(feed_bar: f64, condensate_pump: f64) -> CycleSpec {
     let mut spec = CycleSpec::new(
         Units::MetricEngineering,
         Supply::Superheated {
@@ -174,9 +167,9 @@ fn main() {
         pressure: 37.0,
         temperature: 538.0,
     });
-    spec.feed_pressure = Some(187.0);
+    spec.feed_pressure = Some(feed_bar);
     spec.feed_pump_efficiency = 0.83;
-    spec.condensate_pump_efficiency = 0.80;
+    spec.condensate_pump_efficiency = condensate_pump;
     for (p, eta) in [(41.0, 0.86), (9.5, 0.90), (0.068, 0.88)] {
         spec.push_casing(Casing {
             exhaust_pressure: p,
@@ -211,7 +204,129 @@ fn main() {
         })
         .expect("seven heaters fit");
     }
-    if std::env::args().nth(1).as_deref() == Some("off-design") {
+    spec
+}
+
+/// The demo's losses (all invented), as `tallowmere_load_curve.py` gives them.
+fn python_demo_losses(spec: &mut CycleSpec) {
+    let curve = |points: &[(f64, f64)]| Curve::new(points).expect("a rising curve");
+    let losses = &mut spec.losses;
+    losses.throttle_flow = Some(DESIGN_FLOW);
+    losses.generator = Some(Generator::AgainstLoad {
+        rated_output: 640_000.0,
+        efficiency: curve(&[
+            (0.2, 0.975),
+            (0.5, 0.984),
+            (0.8, 0.987),
+            (1.0, 0.987),
+            (1.2, 0.986),
+        ]),
+    });
+    losses.mechanical_losses = 1_800.0;
+    losses.auxiliary_power = 22_000.0;
+    losses.exhaust = Some(ExhaustLoss {
+        annulus_area: 30.0,
+        curve: curve(&[
+            (10.0, 90.0),
+            (60.0, 40.0),
+            (100.0, 25.0),
+            (150.0, 18.0),
+            (200.0, 22.0),
+            (250.0, 34.0),
+            (300.0, 50.0),
+            (400.0, 90.0),
+        ]),
+    });
+    losses.water_pressure_drops = [0.8, 0.8, 0.8, 0.0, 0.8, 0.8, 0.8, 0.0, 0.0, 0.0, 0.0, 0.0];
+    losses.leaks[0] = Some(Leak {
+        from: LeakSource::CasingInlet(0),
+        to: SteamDestination::HeaterShell(1),
+        fraction: 0.002,
+    });
+    losses.leaks[1] = Some(Leak {
+        from: LeakSource::CasingExhaust(0),
+        to: SteamDestination::HeaterShell(4),
+        fraction: 0.004,
+    });
+    losses.leaks[2] = Some(Leak {
+        from: LeakSource::CasingInlet(1),
+        to: SteamDestination::Condenser,
+        fraction: 0.0015,
+    });
+    losses.makeup = Some(Makeup {
+        fraction: 0.01,
+        pressure: 2.0,
+        temperature: 25.0,
+        lost_as: WaterLoss::Blowdown,
+    });
+    losses.feed_pump_turbine = Some(FeedPumpTurbine {
+        steam_from: 3,
+        exhaust_to: SteamDestination::Condenser,
+        isentropic_efficiency: 0.80,
+    });
+}
+
+/// The Python demo's numbers (see the module's docs).
+fn python_demo(spec: &CycleSpec) -> Vec<f64> {
+    let mut out = Vec::new();
+    out.extend(output(
+        &solve_cycle(spec)
+            .expect("the demo plant with losses solves")
+            .output,
+    ));
+    let model = OffDesignModel::calibrate(spec).expect("the design calibrates");
+    let sliding = OperatingPoint::new(0.7 * DESIGN_FLOW, ThrottleControl::SlidingPressure);
+    out.extend(output(&model.solve(&sliding).expect("70 % solves").output));
+    let flows: Vec<f64> = (0..15)
+        .map(|k| DESIGN_FLOW * (f64::from(30 + 5 * k) / 100.0))
+        .collect();
+    let curve = model.load_curve(&flows, &sliding).expect("15 flows fit");
+    for row in curve.rows() {
+        let row = row.expect("every row solves");
+        out.extend([row.throttle_pressure, row.thermal_efficiency]);
+        out.extend(output(&row.output));
+    }
+    let options = OffDesignOptions {
+        efficiency_correction: Some(
+            Curve::new(&[(0.5, 0.93), (1.0, 1.0), (1.5, 0.96)]).expect("a rising curve"),
+        ),
+        design_cooling_water: Some(CoolingWater {
+            inlet_temperature: 22.0,
+            flow: 17_000.0,
+        }),
+        heater_transfer: Some(HeaterTransfer {
+            ua_flow_exponent: 0.8,
+        }),
+    };
+    let model = OffDesignModel::calibrate_with(spec, &options).expect("the options calibrate");
+    let mut point = OperatingPoint::new(0.6 * DESIGN_FLOW, ThrottleControl::SlidingPressure);
+    point.condenser = CondenserCondition::CoolingWater(CoolingWater {
+        inlet_temperature: 26.0,
+        flow: 17_000.0,
+    });
+    point.out_of_service[5] = true;
+    out.extend(output(
+        &model
+            .solve(&point)
+            .expect("60 % with the options solves")
+            .output,
+    ));
+    out
+}
+
+fn main() {
+    // The C and Python tests build the same descriptions.
+    let mode = std::env::args().nth(1);
+    if mode.as_deref() == Some("python-demo") {
+        let mut spec = tallowmere(186.0, 0.78);
+        python_demo_losses(&mut spec);
+        for x in python_demo(&spec) {
+            println!("{:016x}", x.to_bits());
+        }
+        return;
+    }
+    let mut spec = tallowmere(187.0, 0.80);
+    if mode.as_deref() == Some("off-design") {
         with_losses(&mut spec);
         for x in off_design(&spec) {
             println!("{:016x}", x.to_bits());

@@ -37,13 +37,13 @@ def model():
 
 @pytest.fixture(scope="module")
 def core_numbers():
-    """The Rust core's numbers (examples/off_design_reference.rs)."""
+    """The Rust core's numbers (ffi/examples/plant_reference.rs, python-demo)."""
     cargo = shutil.which("cargo")
     if cargo is None:
         pytest.skip("cargo is needed to run the Rust reference")
     out = subprocess.run(
-        [cargo, "run", "--release", "--quiet", "-p", "ebullio-python", "--example",
-         "off_design_reference"],
+        [cargo, "run", "--release", "--quiet", "-p", "ebullio-ffi", "--example",
+         "plant_reference", "--", "python-demo"],
         cwd=ROOT, check=True, capture_output=True, text=True, env=dict(os.environ),
     ).stdout.split()
     return [struct.unpack("<d", struct.pack("<Q", int(word, 16)))[0] for word in out]
