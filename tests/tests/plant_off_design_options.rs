@@ -303,6 +303,50 @@ fn a_target_net_output_is_met_with_the_options_on() {
     }
 }
 
+/// With the top heater out at a fixed throttle pressure the valves wide
+/// open pass less than the design flow (its steam goes on through the
+/// turbine, whose first group then needs more pressure: the cone law).
+/// A target output below what they pass is still met; one above the
+/// design output is refused by the valves, the refused output above the
+/// limit it quotes.
+#[test]
+fn a_target_output_with_the_top_heater_out_at_a_fixed_pressure() {
+    let units = Units::Native;
+    let model = OffDesignModel::calibrate(&unit(units)).unwrap();
+    let like = OperatingPoint {
+        out_of_service: out(0),
+        ..at(units, 0.0, ThrottleControl::FixedPressure, false)
+    };
+    let full = model
+        .solve(&at(units, 1.0, ThrottleControl::FixedPressure, false))
+        .unwrap()
+        .output
+        .power
+        .unwrap()
+        .net_output;
+    assert!(model.solve(&at_flow_with(&like, units, 1.0)).is_err());
+    for share in [0.8, 0.5] {
+        let r = model.solve_for_output(share * full, &like).unwrap();
+        check_plant(&r, model.design());
+        let net = r.output.power.unwrap().net_output;
+        assert!(relative(net, share * full) <= 1e-9, "{share}");
+        assert_eq!(r.extraction_fractions()[0], 0.0);
+    }
+    match model.solve_for_output(1.1 * full, &like) {
+        Err(Error::InvalidPlant { part, figure, .. }) => {
+            assert_eq!(part.name, "control valves");
+            let figure = figure.unwrap();
+            assert!(figure.value > figure.limit.unwrap());
+        }
+        other => panic!("{other:?}"),
+    }
+}
+
+/// `like` at `fraction` of the design flow.
+fn at_flow_with(like: &OperatingPoint, units: Units, fraction: f64) -> OperatingPoint {
+    like.at_flow(units.from_native(Quantity::MassFlow, fraction * DESIGN_FLOW))
+}
+
 /// y of `curve` at `x`, linear between its points (worked again here).
 fn read_curve(curve: &Curve, x: f64) -> f64 {
     let points = curve.points();

@@ -19,6 +19,9 @@ const MAX_STEPS: usize = 20;
 /// A net output within this (relative) of its target meets it: above
 /// what the pressures' own tolerance (1e-11) leaves in the output.
 const OUTPUT_TOLERANCE: f64 = 1e-10;
+/// Steps of 5 % below the design flow tried for a first balance the
+/// control valves pass, down to 50 %.
+const WIDEST_FLOW_STEPS: usize = 10;
 
 impl OffDesignModel {
     /// The unit at the throttle flow whose net output (a power, in the
@@ -49,18 +52,17 @@ impl OffDesignModel {
                 PlantFigure::native("net output", Quantity::Power, target, Some(0.0), units),
             ));
         }
-        let design_flow = self.design_flow();
         // Net output (kW) and balance at `flow` kg/s.
         let at = |flow: f64| -> Result<(f64, CycleResult), Error> {
             let balance = self.solve(&like.at_flow(units.from_native(Quantity::MassFlow, flow)))?;
             let per_unit = units.to_native(Quantity::Enthalpy, balance.output.net_output);
             Ok((per_unit * flow, balance))
         };
-        let (design_output, balance) = at(design_flow)?;
-        if (design_output - target).abs() <= OUTPUT_TOLERANCE * target {
+        let (start_flow, (start_output, balance)) = self.widest_flow(control, &at)?;
+        if (start_output - target).abs() <= OUTPUT_TOLERANCE * target {
             return Ok(balance);
         }
-        if control == ThrottleControl::FixedPressure && target > design_output {
+        if control == ThrottleControl::FixedPressure && target > start_output {
             return Err(refuse_with(
                 CONTROL_VALVES,
                 "wide open at the design throttle pressure they pass too little steam for this net output",
@@ -68,16 +70,16 @@ impl OffDesignModel {
                     "net output",
                     Quantity::Power,
                     target,
-                    Some(design_output),
+                    Some(start_output),
                     units,
                 ),
             ));
         }
-        let mut last = (design_flow, design_output - target);
-        let mut flow = design_flow * target / design_output;
+        let mut last = (start_flow, start_output - target);
+        let mut flow = start_flow * target / start_output;
         for _ in 0..MAX_STEPS {
             if control == ThrottleControl::FixedPressure {
-                flow = flow.min(design_flow);
+                flow = flow.min(start_flow);
             }
             let (output, balance) = at(flow)?;
             let residual = output - target;
@@ -91,5 +93,39 @@ impl OffDesignModel {
         Err(Error::NotConverged {
             what: "throttle flow for the net output",
         })
+    }
+
+    /// The flow the secant starts from, its net output and balance: the
+    /// design flow, or at a fixed throttle pressure where the valves
+    /// wide open pass less than that (a heater out of service sends its
+    /// steam on through the turbine, whose first group then needs more
+    /// pressure for the design flow), the largest of 95 %, 90 %, … of it
+    /// they pass: the secant then stays at or below it (so a target
+    /// between that flow's output and the valves' true wide-open one, at
+    /// most 5 % of the flow apart, is refused as beyond the valves).
+    fn widest_flow(
+        &self,
+        control: ThrottleControl,
+        at: &impl Fn(f64) -> Result<(f64, CycleResult), Error>,
+    ) -> Result<(f64, (f64, CycleResult)), Error> {
+        let design_flow = self.design_flow();
+        let refusal = match at(design_flow) {
+            Ok(solved) => return Ok((design_flow, solved)),
+            Err(e) => e,
+        };
+        let valves =
+            |e: &Error| matches!(e, Error::InvalidPlant { part, .. } if *part == CONTROL_VALVES);
+        if control != ThrottleControl::FixedPressure || !valves(&refusal) {
+            return Err(refusal);
+        }
+        for step in 1..=WIDEST_FLOW_STEPS {
+            let flow = design_flow * (1.0 - 0.05 * step as f64);
+            match at(flow) {
+                Ok(solved) => return Ok((flow, solved)),
+                Err(e) if valves(&e) => {}
+                Err(e) => return Err(e),
+            }
+        }
+        Err(refusal)
     }
 }
