@@ -11,8 +11,8 @@ use std::time::Duration;
 
 use criterion::{criterion_group, criterion_main, Criterion};
 use ebullio::plant::{
-    compress, expand, section_efficiency, solve_cycle, CondenserCondition, Drains, OffDesignModel,
-    OperatingPoint, ThrottleControl, ALL_IN_SERVICE,
+    compress, expand, section_efficiency, solve_cycle, CondenserCondition, CoolingWater, Curve,
+    Drains, HeaterTransfer, OffDesignModel, OffDesignOptions, OperatingPoint, ThrottleControl,
 };
 use ebullio::{Saturation, State, Units};
 use ebullio_benches::cycles;
@@ -41,12 +41,7 @@ fn plant(c: &mut Criterion) {
     // with sliding pressure, and a 15-point load curve (44-100 %).
     let mut group = c.benchmark_group("off_design");
     let model = OffDesignModel::calibrate(&lossy).expect("the design calibrates");
-    let point = OperatingPoint {
-        throttle_flow: 350.0,
-        control: ThrottleControl::SlidingPressure,
-        condenser: CondenserCondition::Design,
-        out_of_service: ALL_IN_SERVICE,
-    };
+    let point = OperatingPoint::new(350.0, ThrottleControl::SlidingPressure);
     group.bench_function("seven_heaters_with_losses_at_70_percent", |b| {
         b.iter(|| {
             model
@@ -62,6 +57,38 @@ fn plant(c: &mut Criterion) {
                     &OperatingPoint::new(0.0, ThrottleControl::SlidingPressure),
                 )
                 .map(|curve| curve.rows().len())
+        })
+    });
+    // Every option on (invented machine data): an efficiency correction,
+    // the condenser by its cooling water, heaters by their UA; at 70 %
+    // with warmer cooling water and the lowest heater out of service.
+    let options = OffDesignOptions {
+        efficiency_correction: Some(
+            Curve::new(&[(0.5, 0.93), (1.0, 1.0), (1.5, 0.96)]).expect("a rising curve"),
+        ),
+        design_cooling_water: Some(CoolingWater {
+            inlet_temperature: 295.15,
+            flow: 17_000.0,
+        }),
+        heater_transfer: Some(HeaterTransfer {
+            ua_flow_exponent: 0.8,
+        }),
+    };
+    let with_options = OffDesignModel::calibrate_with(&lossy, &options).expect("options calibrate");
+    let mut warm = point;
+    warm.condenser = CondenserCondition::CoolingWater(CoolingWater {
+        inlet_temperature: 299.15,
+        flow: 17_000.0,
+    });
+    warm.out_of_service[6] = true;
+    with_options
+        .solve(&warm)
+        .expect("the bench times a balance, not a refusal");
+    group.bench_function("seven_heaters_every_option_at_70_percent", |b| {
+        b.iter(|| {
+            with_options
+                .solve(black_box(&warm))
+                .map(|r| r.output.net_heat_rate)
         })
     });
     group.finish();
