@@ -38,7 +38,7 @@ pub struct Saturation {
 /// gives about 3e-10 MPa above pc (Eq. 2) within about 1e-9 K below Tc,
 /// held at pc, so that a saturated state's own pressure is one the line
 /// accepts.
-fn line_pressure(t: f64) -> f64 {
+pub(crate) fn line_pressure(t: f64) -> f64 {
     saturation_pressure(t).min(CRITICAL_PRESSURE)
 }
 
@@ -146,26 +146,39 @@ impl Saturation {
 
     /// Both phases at native `p`, `t` on the line.
     fn at(p: f64, t: f64, units: Units) -> Result<Saturation, Error> {
-        let (liquid, vapour, region) = if t <= REGION13_TEMPERATURE {
-            (
-                region1::gibbs(p, t).properties(p, t),
-                region2::gibbs(p, t).properties(p, t),
-                (Region::One, Region::Two),
-            )
-        } else if t >= CRITICAL_TEMPERATURE {
+        if t <= REGION13_TEMPERATURE {
+            let (liquid, vapour) = (gibbs_liquid(p, t), gibbs_vapour(p, t));
+            return Ok(Saturation::of_phases(liquid, vapour, Region::Two, units));
+        }
+        let (liquid, vapour) = if t >= CRITICAL_TEMPERATURE {
             let critical = region3_phase(p, t, Branch::Supercritical)?;
-            (critical, critical, (Region::Three, Region::Three))
+            (critical, critical)
         } else {
             (
                 region3_phase(p, t, Branch::Liquid)?,
                 region3_phase(p, t, Branch::Vapour)?,
-                (Region::Three, Region::Three),
             )
         };
-        Ok(Saturation {
-            liquid: State::single_phase(liquid, region.0, Phase::SaturatedLiquid, units),
-            vapour: State::single_phase(vapour, region.1, Phase::SaturatedVapour, units),
-        })
+        Ok(Saturation::of_phases(liquid, vapour, Region::Three, units))
+    }
+
+    /// The saturation point of two phases at the same (p, T): the vapour's
+    /// region is region 3 or 2, the liquid's region 3 or 1.
+    pub(crate) fn of_phases(
+        liquid: Properties,
+        vapour: Properties,
+        vapour_region: Region,
+        units: Units,
+    ) -> Saturation {
+        let liquid_region = if vapour_region == Region::Two {
+            Region::One
+        } else {
+            Region::Three
+        };
+        Saturation {
+            liquid: State::single_phase(liquid, liquid_region, Phase::SaturatedLiquid, units),
+            vapour: State::single_phase(vapour, vapour_region, Phase::SaturatedVapour, units),
+        }
     }
 
     /// The saturated liquid, x = 0.
@@ -264,6 +277,17 @@ pub(crate) fn check_quality(x: f64) -> Result<(), Error> {
         return Err(Error::QualityOutOfRange { value: x });
     }
     Ok(())
+}
+
+/// The saturated liquid of region 1 at native `p` = psat(T), `t` ≤ 623.15 K;
+/// the vapour of region 2 there is [`gibbs_vapour`].
+pub(crate) fn gibbs_liquid(p: f64, t: f64) -> Properties {
+    region1::gibbs(p, t).properties(p, t)
+}
+
+/// The saturated vapour of region 2 at native `p` = psat(T), `t` ≤ 623.15 K.
+pub(crate) fn gibbs_vapour(p: f64, t: f64) -> Properties {
+    region2::gibbs(p, t).properties(p, t)
 }
 
 /// One saturated phase in region 3 at native `p`, `t`.
