@@ -20,7 +20,9 @@ use crate::numerics::constants::*;
 use crate::pairs::gibbs_region_state;
 use crate::pairs::method::Method;
 use crate::pairs::pt;
-use crate::pairs::saturation::{gibbs_liquid, gibbs_vapour, line_pressure, Saturation};
+use crate::pairs::saturation::{
+    gibbs_liquid, gibbs_vapour, line_pressure, Saturation, REGION3_DOME_DENSITIES,
+};
 use crate::read::state::{Region, State};
 use crate::refine::inverse::{refine, Bounds, Equation, Given};
 use crate::units::input::solve_given;
@@ -107,12 +109,6 @@ pub(crate) fn solve(rho: f64, t: f64, units: Units) -> Result<State, Error> {
         units,
     ))
 }
-
-/// Densities, kg/m³, outside which no state above 623.15 K is wet: the
-/// saturated phases of region 3 at 623.15 K are 113.6 and 574.7 kg/m³, and
-/// the dome narrows toward the critical point (the module's test checks
-/// the line against these bounds).
-const REGION3_DOME_DENSITIES: core::ops::RangeInclusive<f64> = 113.0..=576.0;
 
 /// The isotherm a (ρ, T) solve lies on, and the range of density on it.
 struct Isotherm {
@@ -347,22 +343,6 @@ mod tests {
             highest = highest.max(gibbs_vapour(p, t).v / ideal_gas_volume(p, t));
         }
         assert!(highest < 1.0 - 1e-6, "{highest}");
-    }
-
-    /// The saturated phases of region 3 lie inside `REGION3_DOME_DENSITIES`
-    /// from 623.15 K to the critical point.
-    #[test]
-    fn region3_dome_lies_inside_its_density_bounds() {
-        let (mut lightest, mut densest) = (f64::INFINITY, 0.0_f64);
-        for t in grid(REGION13_TEMPERATURE, CRITICAL_TEMPERATURE, 4_000) {
-            let Ok(sat) = Saturation::at_native_temperature(t) else {
-                continue;
-            };
-            lightest = lightest.min(1.0 / sat.vapour().native().v);
-            densest = densest.max(1.0 / sat.liquid().native().v);
-        }
-        assert!(REGION3_DOME_DENSITIES.contains(&lightest), "{lightest}");
-        assert!(REGION3_DOME_DENSITIES.contains(&densest), "{densest}");
     }
 
     /// Region 2's equation on B23 has pv/(RT) above `Z_B23_MIN`.

@@ -20,6 +20,7 @@ use crate::read::variable::Variable;
 use crate::refine::region3_density::{density, density_near, Branch};
 use crate::units::input::native_input;
 use crate::units::{Quantity, Units};
+use core::ops::RangeInclusive;
 
 /// Lowest saturation pressure of the range of validity, psat(273.15 K),
 /// MPa, from the region 4 equation.
@@ -259,6 +260,14 @@ const NEAR_SPAN: f64 = 0.5;
 /// the margin covers the random-input campaign's cases, up to 1.5e-5 K.
 pub(crate) const UNRESOLVED_BELOW_CRITICAL: f64 = 2e-5;
 
+/// Region 3's part of the dome, from 623.15 K to the critical point: its
+/// saturated phases' densities (kg/m³) and internal energies (kJ/kg) lie
+/// within these (113.6 and 2418.1 for the vapour at 623.15 K, 574.7 and
+/// 1642.1 for the liquid; the module's test checks the line against them).
+/// A state outside either range is not wet above 623.15 K.
+pub(crate) const REGION3_DOME_DENSITIES: RangeInclusive<f64> = 113.0..=576.0;
+pub(crate) const REGION3_DOME_ENERGIES: RangeInclusive<f64> = 1_642.0..=2_418.2;
+
 /// Within this many kelvins of Tc the densities are not carried along the
 /// line: the slopes that carry them are not resolved there (about 1.3e-5
 /// K), and from the carried guess the density iteration found the other
@@ -317,5 +326,28 @@ impl State {
         native_input(units, Quantity::Temperature, t)?;
         check_quality(x)?;
         Saturation::at_temperature(t, units)?.mixture(x)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// The saturated phases of region 3 lie inside `REGION3_DOME_DENSITIES`
+    /// and `REGION3_DOME_ENERGIES` from 623.15 K to the critical point.
+    #[test]
+    fn region3_dome_lies_inside_its_bounds() {
+        let n = 4_000;
+        for k in 0..=n {
+            let t = REGION13_TEMPERATURE
+                + (CRITICAL_TEMPERATURE - REGION13_TEMPERATURE) * f64::from(k) / f64::from(n);
+            let Ok(sat) = Saturation::at_native_temperature(t) else {
+                continue;
+            };
+            for phase in [sat.liquid().native(), sat.vapour().native()] {
+                assert!(REGION3_DOME_DENSITIES.contains(&(1.0 / phase.v)), "{t} K");
+                assert!(REGION3_DOME_ENERGIES.contains(&phase.u), "{t} K");
+            }
+        }
     }
 }

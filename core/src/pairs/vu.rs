@@ -2,7 +2,11 @@
 //! variables of simulators that integrate mass and energy balances of a
 //! fixed volume.
 //!
-//! No IAPWS backward equation exists for this pair. Each single-phase
+//! No IAPWS backward equation exists for this pair. Wet steam well inside
+//! the dome is tried first: above 623.15 K by Newton's method on T and
+//! both saturated densities together ([`crate::refine::wet_region3`]),
+//! below it by the wet iteration described next from a start on fits of
+//! the saturated phases ([`crate::start::wet_vu_start`]). Each single-phase
 //! region is tried with Newton's method on its basic equation from a
 //! physically reasonable start, in the order the specific volume makes
 //! likely, and a solution is accepted only where that region's equation is
@@ -17,9 +21,7 @@
 //! Valid wherever a (p, T) state is. Within millikelvins of 623.15 K on
 //! the saturation line, where the saturated phases of regions 1/2 and of
 //! region 3 differ by the formulation's inconsistency, wet steam can have
-//! a root on each side; the one at or below 623.15 K is returned. This
-//! pair costs more than the others (microseconds for wet steam); see the
-//! benchmarks.
+//! a root on each side; the one at or below 623.15 K is returned.
 
 use crate::equations::free_energy::Properties;
 use crate::equations::saturation_line::{saturation_pressure, saturation_pressure_slope};
@@ -28,7 +30,9 @@ use crate::locate::range;
 use crate::locate::regions::{locate, region3_phase, single_phase, Located};
 use crate::numerics::constants::*;
 use crate::numerics::math::ln;
-use crate::pairs::saturation::{Saturation, UNRESOLVED_BELOW_CRITICAL};
+use crate::pairs::saturation::{
+    Saturation, REGION3_DOME_DENSITIES, REGION3_DOME_ENERGIES, UNRESOLVED_BELOW_CRITICAL,
+};
 use crate::read::state::{Region, State};
 use crate::read::variable::Variable;
 use crate::refine::bracketed_root::{bracketed_root, End, Step, Verdict};
@@ -36,6 +40,8 @@ use crate::refine::inverse::{
     onto_saturated_liquid, refine, reproduces_as_promised, within_promise, Bounds, Equation, Given,
 };
 use crate::refine::region3_density::Branch;
+use crate::refine::wet_region3::wet_in_region3;
+use crate::start::wet_vu_start;
 use crate::units::input::solve_given;
 use crate::units::{Quantity, Units};
 use core::convert::Infallible;
@@ -70,6 +76,9 @@ pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
     let beside = |extreme: f64| within_promise(Given::SpecificVolume, extreme, v);
     if !((v_min..=v_max).contains(&v) || beside(v_min) || beside(v_max)) {
         return Err(NO_STATE);
+    }
+    if let Some(state) = wet_in_region3_at_once(v, u).or_else(|| wet_below_623_at_once(v, u)) {
+        return Ok(state.in_units(units));
     }
     let liquid_like = v < 1.0 / CRITICAL_DENSITY;
     let order: [Equation; 4] = if liquid_like {
@@ -115,6 +124,54 @@ pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
     }
     Err(NO_STATE)
 }
+
+/// Wet steam well inside region 3's part of the dome, by Newton's method
+/// on T and both saturated densities together ([`wet_in_region3`]: the
+/// quality from v, u reproduced to the wet iteration's aim); `None` near
+/// the lines and where that iteration gives up, for the single-phase
+/// attempts and the wet iteration along the isochore to decide. No
+/// single-phase state shares (v, u) with such a state: region 3's single
+/// phase on its isochore lies above the dome, where u is higher, and
+/// regions 1, 2 and 5 cannot hold these v and u together (see
+/// [`could_hold`]).
+fn wet_in_region3_at_once(v: f64, u: f64) -> Option<State> {
+    if !(REGION3_DOME_DENSITIES.contains(&(1.0 / v)) && REGION3_DOME_ENERGIES.contains(&u)) {
+        return None;
+    }
+    let point = wet_in_region3((Given::SpecificVolume, v), (Given::InternalEnergy, u))?;
+    let sat = Saturation::of_phases(point.liquid, point.vapour, Region::Three, Units::Native);
+    sat.mixture(point.x).ok()
+}
+
+/// Wet steam below 623.15 K well inside the dome (a quality at least
+/// [`X_CLEAR`] from either line, a temperature at least [`SEAM_CLEAR`] from
+/// 623.15 K and 273.15 K), by the wet iteration along the isochore from the
+/// fitted line's start ([`wet_vu_start`]); `None` elsewhere, for the
+/// single-phase attempts and the iteration from the isochore's dew point
+/// to decide. No single-phase state shares (v, u) with such a state.
+fn wet_below_623_at_once(v: f64, u: f64) -> Option<State> {
+    if u >= U_VAPOUR_HIGHEST {
+        return None;
+    }
+    let start = wet_vu_start::wet_temperature_start(v, u)?;
+    let state = wet_state_from(v, u, REGION13_TEMPERATURE, start).ok()??;
+    let (t, x) = (state.native().t, state.quality()?);
+    let clear = (X_CLEAR..=1.0 - X_CLEAR).contains(&x)
+        && t > MIN_TEMPERATURE + SEAM_CLEAR
+        && t < REGION13_TEMPERATURE - SEAM_CLEAR;
+    clear.then_some(state)
+}
+
+/// Kelvins a wet state taken from [`wet_below_623_at_once`] keeps from
+/// 623.15 K, where the saturated phases of regions 1/2 and region 3 differ
+/// by the formulation's inconsistency and a point may have a root on each
+/// side, and from the range's floor.
+const SEAM_CLEAR: f64 = 0.01;
+
+/// How far from the saturation lines (in quality) a wet state must lie to
+/// be taken from [`wet_below_623_at_once`]: nearer, the single phase and
+/// the iteration from the isochore's dew point decide.
+const X_CLEAR: f64 = 1e-6;
 
 const NO_STATE: Error = Error::NoStateInRange {
     pair: "specific volume and internal energy",
@@ -638,6 +695,11 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     } else {
         t_max
     };
+    wet_state_from(v, u, t_max, start)
+}
+
+/// [`wet_state`] from the temperature `start` inside its bracket.
+fn wet_state_from(v: f64, u: f64, t_max: f64, start: f64) -> Result<Option<State>, Error> {
     let mut walk = IsochoreWalk {
         v,
         u,
