@@ -7,7 +7,7 @@
 //! pair's alone: 24–27 (ρ, T) in regions 1, 2, 3 and 5, 29 (v, T) in region
 //! 1; wet steam of quality 0.1 … 0.8: (ρ, T) 28 at 20 MPa and 30 at 1 MPa,
 //! (h, s) 31 at 20 MPa and 32 at 1 MPa, (v, u) 33 at 20, 34 at 1 and 35 at
-//! 0.01 MPa).
+//! 0.01 MPa; 36–39 (v, u) in regions 1, 2, 3 and 5).
 use std::hint::black_box;
 fn main() {
     let which: u32 = std::env::args()
@@ -79,6 +79,9 @@ fn main() {
     let rho_t = |s: &ebullio::State| (s.density(), s.temperature());
     let h_s = |s: &ebullio::State| (s.enthalpy(), s.entropy());
     let v_u = |s: &ebullio::State| (s.specific_volume(), s.internal_energy());
+    let single = |pts: &[(f64, f64); 8]| {
+        pts.map(|(p, t)| v_u(&ebullio::State::from_pt(p, t, native).unwrap()))
+    };
     let slow_pairs: Option<[(f64, f64); 8]> = match which {
         24 | 29 => Some(dense(&pts1)),
         25 => Some(dense(&pts2)),
@@ -91,6 +94,10 @@ fn main() {
         33 => Some(wet(20.0, v_u)),
         34 => Some(wet(1.0, v_u)),
         35 => Some(wet(0.01, v_u)),
+        36 => Some(single(&pts1)),
+        37 => Some(single(&pts2)),
+        38 => Some(single(&pts3)),
+        39 => Some(single(&pts5)),
         _ => None,
     };
     let slow_pairs = slow_pairs.unwrap_or_default();
@@ -178,12 +185,12 @@ fn main() {
                     .unwrap()
                     .specific_volume()
             }
-            24..=35 => {
+            24..=39 => {
                 let (a, b) = black_box(slow_pairs[k & 7]);
                 let state = match which {
                     29 => ebullio::State::from_vt(1.0 / a, b, native),
                     31 | 32 => ebullio::State::from_hs(a, b, native),
-                    33..=35 => ebullio::State::from_vu(a, b, native),
+                    33..=39 => ebullio::State::from_vu(a, b, native),
                     _ => ebullio::State::from_rho_t(a, b, native),
                 };
                 state.unwrap().temperature()

@@ -1258,16 +1258,16 @@ fn cycles() -> Vec<CycleSpec> {
 /// of the pairs' states and move with them). Never re-record these in a
 /// refactor; see the module comment.
 const RECORDED: [(&str, u64, u64); 6] = [
-    ("pairs", 0x5268_f92a_6961_dbdf, 60817),
+    ("pairs", 0xbded_5e75_9ccb_a828, 60817),
     ("saturation", 0x707c_2a99_54c1_3289, 4145),
-    ("derivatives", 0x36e4_a57f_bfd7_41ed, 1055364),
-    ("transport", 0xa2c1_7164_e334_2784, 307280),
+    ("derivatives", 0xc5da_7327_4b5d_3652, 1055364),
+    ("transport", 0x32f0_acfe_1c2f_d4e8, 307280),
     ("plant", 0x83f1_7866_25f4_643a, 1211),
-    ("equations", 0xa1da_bc3d_6b4e_002a, 54221),
+    ("equations", 0x21bd_f3e4_c1b1_6518, 54221),
 ];
 
 /// The hash of all families together, over their hashes and counts.
-const RECORDED_TOTAL: u64 = 0x20e6_ac29_10f4_7576;
+const RECORDED_TOTAL: u64 = 0xecb4_fb55_f01f_6e60;
 
 #[test]
 fn every_result_is_bitwise_the_recorded_one() {

@@ -33,10 +33,11 @@ const MAX_STEPS: u32 = 12;
 /// safeguards are needed (`pairs::saturation::UNRESOLVED_BELOW_CRITICAL`).
 const CRITICAL_MARGIN: f64 = 0.01;
 
-/// Kelvins above 623.15 K the fast path keeps to: at the seam the phases of
-/// regions 1/2 and of region 3 differ by the formulation's inconsistency,
-/// and the one-dimensional iterations decide which root wins.
-const SEAM_MARGIN: f64 = 0.01;
+/// Kelvins from 623.15 K a fast path keeps (this one above, `pairs::vu`'s
+/// below): at the seam the phases of regions 1/2 and of region 3 differ by
+/// the formulation's inconsistency, a point may have a root on each side,
+/// and the one-dimensional iterations decide which wins.
+pub(crate) const SEAM_CLEAR: f64 = 0.01;
 
 /// How near psat the phases' pressures must come, relative: a few times
 /// the rounding of p(ρ) (as `region3_density` settles).
@@ -51,9 +52,10 @@ pub(crate) struct WetPoint {
 }
 
 /// How far from the saturation lines (in quality) a wet state must lie to
-/// be taken from here: nearer, the one-dimensional iterations decide
-/// between wet steam and the single phase.
-const X_CLEAR: f64 = 1e-6;
+/// be taken from a fast path (this one, and `pairs::vu`'s below 623.15 K):
+/// nearer, the one-dimensional iterations decide between wet steam and the
+/// single phase.
+pub(crate) const X_CLEAR: f64 = 1e-6;
 
 /// The aim on the second given value, as the one-dimensional iterations'
 /// (relative, and absolute in its native unit).
@@ -70,7 +72,7 @@ const START: (f64, f64, f64) = (640.0, 481.612_172_212_446_3, 177.401_242_749_99
 /// within [`X_CLEAR`] of a line, or the iteration gives up.
 pub(crate) fn wet_in_region3(a: (Given, f64), b: (Given, f64)) -> Option<WetPoint> {
     let (t_low, t_high) = (
-        REGION13_TEMPERATURE + SEAM_MARGIN,
+        REGION13_TEMPERATURE + SEAM_CLEAR,
         CRITICAL_TEMPERATURE - CRITICAL_MARGIN,
     );
     let (mut t, mut rho_l, mut rho_g) = START;
