@@ -66,6 +66,40 @@ const AIMED: (f64, f64) = (1e-13, 1e-12);
 /// (computed on R7-97 region 3 at psat; the module's test checks them).
 const START: (f64, f64, f64) = (640.0, 481.612_172_212_446_3, 177.401_242_749_990_5);
 
+/// Region 3's equation at the start's two phases, as
+/// `Equation::Region3.evaluate` gives them, bit for bit (the module's
+/// test): the first step needs no evaluation.
+const START_PHASES: (Properties, Properties) = (
+    Properties {
+        p: 20.265_942_167_298_693,
+        t: 640.0,
+        v: 0.002_076_359_481_128_074_7,
+        u: 1_799.904_655_730_804_5,
+        h: 1_841.984_036_893_868_3,
+        s: 4.037_801_221_789_899,
+        g: -742.208_745_051_667_6,
+        cp: 26.468_397_119_679_26,
+        cv: 3.484_262_376_764_198_7,
+        w: 409.348_579_990_952_3,
+        alpha_v: 0.040_349_596_827_131_88,
+        kappa_t: 0.094_131_018_869_858_47,
+    },
+    Properties {
+        p: 20.265_942_167_297_556,
+        t: 640.0,
+        v: 0.005_636_939_090_721_525_4,
+        u: 2_280.178_553_477_237_5,
+        h: 2_394.416_435_090_379,
+        s: 4.900_974_052_144_407,
+        g: -742.206_958_282_041_9,
+        cp: 52.520_818_475_778_945,
+        cv: 4.271_733_739_548_84,
+        w: 380.127_891_343_091_33,
+        alpha_v: 0.080_091_876_945_613_87,
+        kappa_t: 0.479_635_345_241_685_55,
+    },
+);
+
 /// Wet steam with the quality the lever rule gives from `a`, reproducing
 /// `b` by the same rule to [`AIMED`] with pressures on the line to
 /// [`SETTLED_PRESSURE`], from [`START`]; `None` where the quality lies
@@ -76,11 +110,8 @@ pub(crate) fn wet_in_region3(a: (Given, f64), b: (Given, f64)) -> Option<WetPoin
         CRITICAL_TEMPERATURE - CRITICAL_MARGIN,
     );
     let (mut t, mut rho_l, mut rho_g) = START;
+    let (mut l, mut g) = START_PHASES;
     for _ in 0..MAX_STEPS {
-        let (l, g) = (
-            Equation::Region3.evaluate(rho_l, t),
-            Equation::Region3.evaluate(rho_g, t),
-        );
         if !(l.kappa_t > 0.0 && g.kappa_t > 0.0) {
             return None;
         }
@@ -113,6 +144,10 @@ pub(crate) fn wet_in_region3(a: (Given, f64), b: (Given, f64)) -> Option<WetPoin
                 && next.2 > 0.0;
             if inside {
                 (t, rho_l, rho_g) = next;
+                (l, g) = (
+                    Equation::Region3.evaluate(rho_l, t),
+                    Equation::Region3.evaluate(rho_g, t),
+                );
                 break;
             }
             share *= 0.5;
@@ -180,6 +215,17 @@ fn step(
 mod tests {
     use super::*;
     use crate::pairs::saturation::Saturation;
+
+    /// The start's phases are region 3's equation at the start, to the bit.
+    #[test]
+    fn the_start_phases_are_the_equations() {
+        let (t, rho_l, rho_g) = START;
+        let evaluated = (
+            Equation::Region3.evaluate(rho_l, t),
+            Equation::Region3.evaluate(rho_g, t),
+        );
+        assert_eq!(evaluated, START_PHASES);
+    }
 
     /// The start's densities are the saturated phases' at its T.
     #[test]
