@@ -83,7 +83,8 @@ fn pairs(c: &mut Criterion) {
         group.finish();
     }
 
-    // Wet steam: quality 0.1 … 0.9 at a low and a region 3 pressure.
+    // Wet steam: quality 0.1 … 0.8 at 0.01 and 1 MPa and in region 3's part
+    // of the dome (20 MPa).
     let mut group = c.benchmark_group("pairs/wet");
     for p in [0.01, 1.0, 20.0] {
         let wet: Vec<State> = (1..=8)
@@ -95,6 +96,7 @@ fn pairs(c: &mut Criterion) {
             ("EnthalpyEntropy", InputPair::EnthalpyEntropy),
             ("VolumeInternalEnergy", InputPair::VolumeInternalEnergy),
             ("DensityTemperature", InputPair::DensityTemperature),
+            ("VolumeTemperature", InputPair::VolumeTemperature),
         ] {
             let inputs: Vec<(f64, f64)> = wet
                 .iter()
@@ -102,6 +104,7 @@ fn pairs(c: &mut Criterion) {
                     InputPair::PressureEnthalpy => (s.pressure(), s.enthalpy()),
                     InputPair::EnthalpyEntropy => (s.enthalpy(), s.entropy()),
                     InputPair::VolumeInternalEnergy => (s.specific_volume(), s.internal_energy()),
+                    InputPair::VolumeTemperature => (s.specific_volume(), s.temperature()),
                     _ => (s.density(), s.temperature()),
                 })
                 .collect();

@@ -2,7 +2,12 @@
 //! (1–8 the basic equations and (p,T) states, 9–14 (p,h) and (p,s) in
 //! regions 1, 2 and 5, 15 a region 3 saturation point at 20 MPa, 16–17 wet (h,s) at 0.01 and
 //! 20 MPa, 18–19 wet (v,u) at 1 and 20 MPa, 20–23 region 3 (p,T) states in SR5-05's
-//! subregions 3e, 3h, 3n and 3x at the release's check points).
+//! subregions 3e, 3h, 3n and 3x at the release's check points; 24–35 the
+//! slow inverse pairs on inputs computed before the loop, so the count is the
+//! pair's alone: 24–27 (ρ, T) in regions 1, 2, 3 and 5, 29 (v, T) in region
+//! 1; wet steam of quality 0.1 … 0.8: (ρ, T) 28 at 20 MPa and 30 at 1 MPa,
+//! (h, s) 31 at 20 MPa and 32 at 1 MPa, (v, u) 33 at 20, 34 at 1 and 35 at
+//! 0.01 MPa; 36–39 (v, u) in regions 1, 2, 3 and 5).
 use std::hint::black_box;
 fn main() {
     let which: u32 = std::env::args()
@@ -48,6 +53,54 @@ fn main() {
         (20.0, 2250.0),
     ];
     let (phs1, phs2, phs5) = (caloric(&pts1), caloric(&pts2), caloric(&pts5));
+    // Region 3 states, liquid-like, vapour-like and supercritical.
+    let pts3 = [
+        (25.0, 650.0),
+        (40.0, 700.0),
+        (60.0, 750.0),
+        (100.0, 800.0),
+        (20.0, 630.0),
+        (19.5, 640.0),
+        (30.0, 660.0),
+        (80.0, 700.0),
+    ];
+    let dense = |pts: &[(f64, f64); 8]| {
+        pts.map(|(p, t)| {
+            let s = ebullio::State::from_pt(p, t, native).unwrap();
+            (s.density(), t)
+        })
+    };
+    // Wet steam of quality 0.1 … 0.8 at p: the pair's two values.
+    let wet = |p: f64, read: fn(&ebullio::State) -> (f64, f64)| -> [(f64, f64); 8] {
+        core::array::from_fn(|k| {
+            read(&ebullio::State::from_px(p, 0.1 * (k + 1) as f64, native).unwrap())
+        })
+    };
+    let rho_t = |s: &ebullio::State| (s.density(), s.temperature());
+    let h_s = |s: &ebullio::State| (s.enthalpy(), s.entropy());
+    let v_u = |s: &ebullio::State| (s.specific_volume(), s.internal_energy());
+    let single = |pts: &[(f64, f64); 8]| {
+        pts.map(|(p, t)| v_u(&ebullio::State::from_pt(p, t, native).unwrap()))
+    };
+    let slow_pairs: Option<[(f64, f64); 8]> = match which {
+        24 | 29 => Some(dense(&pts1)),
+        25 => Some(dense(&pts2)),
+        26 => Some(dense(&pts3)),
+        27 => Some(dense(&pts5)),
+        28 => Some(wet(20.0, rho_t)),
+        30 => Some(wet(1.0, rho_t)),
+        31 => Some(wet(20.0, h_s)),
+        32 => Some(wet(1.0, h_s)),
+        33 => Some(wet(20.0, v_u)),
+        34 => Some(wet(1.0, v_u)),
+        35 => Some(wet(0.01, v_u)),
+        36 => Some(single(&pts1)),
+        37 => Some(single(&pts2)),
+        38 => Some(single(&pts3)),
+        39 => Some(single(&pts5)),
+        _ => None,
+    };
+    let slow_pairs = slow_pairs.unwrap_or_default();
     let n = 100_000;
     let mut acc = 0.0;
     for k in 0..n {
@@ -131,6 +184,16 @@ fn main() {
                 ebullio::State::from_pt(p, t, native)
                     .unwrap()
                     .specific_volume()
+            }
+            24..=39 => {
+                let (a, b) = black_box(slow_pairs[k & 7]);
+                let state = match which {
+                    29 => ebullio::State::from_vt(1.0 / a, b, native),
+                    31 | 32 => ebullio::State::from_hs(a, b, native),
+                    33..=39 => ebullio::State::from_vu(a, b, native),
+                    _ => ebullio::State::from_rho_t(a, b, native),
+                };
+                state.unwrap().temperature()
             }
             _ => 0.0,
         };

@@ -1250,19 +1250,24 @@ fn cycles() -> Vec<CycleSpec> {
 /// 38c018a and re-recorded once on 3933bd0, whose (v, u) fix returns
 /// states a rounding past region 2's corner on the range's edge (meant to
 /// change results: those states had p or T a hair outside the range, and
-/// their transport now reads). Never re-record these in a refactor; see
-/// the module comment.
+/// their transport now reads), and once for issue 17's faster wet (v, u)
+/// and wet (h, s) in region 3 (meant to change results: those wet states
+/// moved by at most 8e-13 relative, measured against the previous solvers
+/// on about 98 000 inputs of each pair, none changing status, region or
+/// phase; the derivatives, transport and equations families hash readings
+/// of the pairs' states and move with them). Never re-record these in a
+/// refactor; see the module comment.
 const RECORDED: [(&str, u64, u64); 6] = [
-    ("pairs", 0xf0d4_1e23_960a_c4df, 60817),
+    ("pairs", 0xbded_5e75_9ccb_a828, 60817),
     ("saturation", 0x707c_2a99_54c1_3289, 4145),
-    ("derivatives", 0x6b96_fce4_9608_37cc, 1055364),
-    ("transport", 0xd668_7dd3_ac2d_b9dd, 307280),
+    ("derivatives", 0xc5da_7327_4b5d_3652, 1055364),
+    ("transport", 0x32f0_acfe_1c2f_d4e8, 307280),
     ("plant", 0x83f1_7866_25f4_643a, 1211),
-    ("equations", 0xa026_9be1_18a7_d432, 54221),
+    ("equations", 0x21bd_f3e4_c1b1_6518, 54221),
 ];
 
 /// The hash of all families together, over their hashes and counts.
-const RECORDED_TOTAL: u64 = 0xb842_db6d_3638_b3ca;
+const RECORDED_TOTAL: u64 = 0xecb4_fb55_f01f_6e60;
 
 #[test]
 fn every_result_is_bitwise_the_recorded_one() {

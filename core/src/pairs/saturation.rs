@@ -20,6 +20,7 @@ use crate::read::variable::Variable;
 use crate::refine::region3_density::{density, density_near, Branch};
 use crate::units::input::native_input;
 use crate::units::{Quantity, Units};
+use core::ops::RangeInclusive;
 
 /// Lowest saturation pressure of the range of validity, psat(273.15 K),
 /// MPa, from the region 4 equation.
@@ -38,7 +39,7 @@ pub struct Saturation {
 /// gives about 3e-10 MPa above pc (Eq. 2) within about 1e-9 K below Tc,
 /// held at pc, so that a saturated state's own pressure is one the line
 /// accepts.
-fn line_pressure(t: f64) -> f64 {
+pub(crate) fn line_pressure(t: f64) -> f64 {
     saturation_pressure(t).min(CRITICAL_PRESSURE)
 }
 
@@ -146,26 +147,39 @@ impl Saturation {
 
     /// Both phases at native `p`, `t` on the line.
     fn at(p: f64, t: f64, units: Units) -> Result<Saturation, Error> {
-        let (liquid, vapour, region) = if t <= REGION13_TEMPERATURE {
-            (
-                region1::gibbs(p, t).properties(p, t),
-                region2::gibbs(p, t).properties(p, t),
-                (Region::One, Region::Two),
-            )
-        } else if t >= CRITICAL_TEMPERATURE {
+        if t <= REGION13_TEMPERATURE {
+            let (liquid, vapour) = (gibbs_liquid(p, t), gibbs_vapour(p, t));
+            return Ok(Saturation::of_phases(liquid, vapour, Region::Two, units));
+        }
+        let (liquid, vapour) = if t >= CRITICAL_TEMPERATURE {
             let critical = region3_phase(p, t, Branch::Supercritical)?;
-            (critical, critical, (Region::Three, Region::Three))
+            (critical, critical)
         } else {
             (
                 region3_phase(p, t, Branch::Liquid)?,
                 region3_phase(p, t, Branch::Vapour)?,
-                (Region::Three, Region::Three),
             )
         };
-        Ok(Saturation {
-            liquid: State::single_phase(liquid, region.0, Phase::SaturatedLiquid, units),
-            vapour: State::single_phase(vapour, region.1, Phase::SaturatedVapour, units),
-        })
+        Ok(Saturation::of_phases(liquid, vapour, Region::Three, units))
+    }
+
+    /// The saturation point of two phases at the same (p, T): the vapour's
+    /// region is region 3 or 2, the liquid's region 3 or 1.
+    pub(crate) fn of_phases(
+        liquid: Properties,
+        vapour: Properties,
+        vapour_region: Region,
+        units: Units,
+    ) -> Saturation {
+        let liquid_region = if vapour_region == Region::Two {
+            Region::One
+        } else {
+            Region::Three
+        };
+        Saturation {
+            liquid: State::single_phase(liquid, liquid_region, Phase::SaturatedLiquid, units),
+            vapour: State::single_phase(vapour, vapour_region, Phase::SaturatedVapour, units),
+        }
     }
 
     /// The saturated liquid, x = 0.
@@ -246,6 +260,12 @@ const NEAR_SPAN: f64 = 0.5;
 /// the margin covers the random-input campaign's cases, up to 1.5e-5 K.
 pub(crate) const UNRESOLVED_BELOW_CRITICAL: f64 = 2e-5;
 
+/// Region 3's part of the dome, from 623.15 K to the critical point: its
+/// saturated phases' densities lie within these, kg/m³ (113.6 for the
+/// vapour and 574.7 for the liquid at 623.15 K; the module's test checks
+/// the line against them). A density outside is not wet above 623.15 K.
+pub(crate) const REGION3_DOME_DENSITIES: RangeInclusive<f64> = 113.0..=576.0;
+
 /// Within this many kelvins of Tc the densities are not carried along the
 /// line: the slopes that carry them are not resolved there (about 1.3e-5
 /// K), and from the carried guess the density iteration found the other
@@ -264,6 +284,17 @@ pub(crate) fn check_quality(x: f64) -> Result<(), Error> {
         return Err(Error::QualityOutOfRange { value: x });
     }
     Ok(())
+}
+
+/// The saturated liquid of region 1 at native `p` = psat(T), `t` ≤ 623.15 K;
+/// the vapour of region 2 there is [`gibbs_vapour`].
+pub(crate) fn gibbs_liquid(p: f64, t: f64) -> Properties {
+    region1::gibbs(p, t).properties(p, t)
+}
+
+/// The saturated vapour of region 2 at native `p` = psat(T), `t` ≤ 623.15 K.
+pub(crate) fn gibbs_vapour(p: f64, t: f64) -> Properties {
+    region2::gibbs(p, t).properties(p, t)
 }
 
 /// One saturated phase in region 3 at native `p`, `t`.
@@ -293,5 +324,27 @@ impl State {
         native_input(units, Quantity::Temperature, t)?;
         check_quality(x)?;
         Saturation::at_temperature(t, units)?.mixture(x)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// The saturated phases of region 3 lie inside `REGION3_DOME_DENSITIES`
+    /// from 623.15 K to the critical point.
+    #[test]
+    fn region3_dome_lies_inside_its_bounds() {
+        let n = 4_000;
+        for k in 0..=n {
+            let t = REGION13_TEMPERATURE
+                + (CRITICAL_TEMPERATURE - REGION13_TEMPERATURE) * f64::from(k) / f64::from(n);
+            let Ok(sat) = Saturation::at_native_temperature(t) else {
+                continue;
+            };
+            for phase in [sat.liquid().native(), sat.vapour().native()] {
+                assert!(REGION3_DOME_DENSITIES.contains(&(1.0 / phase.v)), "{t} K");
+            }
+        }
     }
 }

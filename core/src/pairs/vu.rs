@@ -2,7 +2,11 @@
 //! variables of simulators that integrate mass and energy balances of a
 //! fixed volume.
 //!
-//! No IAPWS backward equation exists for this pair. Each single-phase
+//! No IAPWS backward equation exists for this pair. Wet steam well inside
+//! the dome is tried first: above 623.15 K by Newton's method on T and
+//! both saturated densities together ([`crate::refine::wet_region3`]),
+//! below it by the wet iteration described next from a start on fits of
+//! the saturated phases ([`crate::start::wet_vu_start`]). Each single-phase
 //! region is tried with Newton's method on its basic equation from a
 //! physically reasonable start, in the order the specific volume makes
 //! likely, and a solution is accepted only where that region's equation is
@@ -17,9 +21,7 @@
 //! Valid wherever a (p, T) state is. Within millikelvins of 623.15 K on
 //! the saturation line, where the saturated phases of regions 1/2 and of
 //! region 3 differ by the formulation's inconsistency, wet steam can have
-//! a root on each side; the one at or below 623.15 K is returned. This
-//! pair costs more than the others (microseconds for wet steam); see the
-//! benchmarks.
+//! a root on each side; the one at or below 623.15 K is returned.
 
 use crate::equations::free_energy::Properties;
 use crate::equations::saturation_line::{saturation_pressure, saturation_pressure_slope};
@@ -36,6 +38,8 @@ use crate::refine::inverse::{
     onto_saturated_liquid, refine, reproduces_as_promised, within_promise, Bounds, Equation, Given,
 };
 use crate::refine::region3_density::Branch;
+use crate::refine::wet_region3::{wet_in_region3, SEAM_CLEAR, X_CLEAR};
+use crate::start::wet_vu_start;
 use crate::units::input::solve_given;
 use crate::units::{Quantity, Units};
 use core::convert::Infallible;
@@ -70,6 +74,9 @@ pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
     let beside = |extreme: f64| within_promise(Given::SpecificVolume, extreme, v);
     if !((v_min..=v_max).contains(&v) || beside(v_min) || beside(v_max)) {
         return Err(NO_STATE);
+    }
+    if let Some(state) = wet_in_region3_at_once(v, u).or_else(|| wet_below_623_at_once(v, u)) {
+        return Ok(state.in_units(units));
     }
     let liquid_like = v < 1.0 / CRITICAL_DENSITY;
     let order: [Equation; 4] = if liquid_like {
@@ -114,6 +121,119 @@ pub(crate) fn solve(v: f64, u: f64, units: Units) -> Result<State, Error> {
         return Ok(state.in_units(units));
     }
     Err(NO_STATE)
+}
+
+/// Wet steam well inside region 3's part of the dome, by Newton's method
+/// on T and both saturated densities together ([`wet_in_region3`]: the
+/// quality from v, u reproduced to the wet iteration's aim); `None` near
+/// the lines and where that iteration gives up, for the single-phase
+/// attempts and the wet iteration along the isochore to decide. No
+/// single-phase state shares (v, u) with such a state: region 3's single
+/// phase on its isochore lies above the dome, where u is higher, and
+/// regions 1, 2 and 5 cannot hold these v and u together (see
+/// [`could_hold`]).
+fn wet_in_region3_at_once(v: f64, u: f64) -> Option<State> {
+    if !inside_region3_dome(v, u) {
+        return None;
+    }
+    let point = wet_in_region3((Given::SpecificVolume, v), (Given::InternalEnergy, u))?;
+    let sat = Saturation::of_phases(point.liquid, point.vapour, Region::Three, Units::Native);
+    sat.mixture(point.x).ok()
+}
+
+/// Whether (v, u) lies clearly inside region 3's part of the dome: on an
+/// isochore between its saturated phases at 623.15 K, above the 623.15 K
+/// wet isotherm and below the saturated phase's u where the isochore meets
+/// the line ([`REGION3_DOME_TOP`]), each by [`DOME_MARGIN`]. Along an
+/// isochore u rises with T in the dome and beyond it, so a single-phase
+/// state of that density lies above the line's u, and a wet state below
+/// 623.15 K below the isotherm.
+fn inside_region3_dome(v: f64, u: f64) -> bool {
+    let rho = 1.0 / v;
+    let [(rho_l, _), .., (rho_g, _)] = REGION3_DOME_TOP;
+    rho < rho_l
+        && rho > rho_g
+        && u > wet_isotherm_623(v) + DOME_MARGIN
+        && u < dome_top(rho) - DOME_MARGIN
+}
+
+/// The u of wet steam of volume `v` at 623.15 K, kJ/kg: the lever rule
+/// between region 3's saturated phases there (the ends of
+/// [`REGION3_DOME_TOP`]). On an isochore through the dome, u below it is
+/// wet steam colder than 623.15 K (or a single phase beside that part of
+/// the dome), above it wet steam of region 3 or a single phase above the
+/// dome.
+fn wet_isotherm_623(v: f64) -> f64 {
+    let [(rho_l, u_l), .., (rho_g, u_g)] = REGION3_DOME_TOP;
+    let x = (v - 1.0 / rho_l) / (1.0 / rho_g - 1.0 / rho_l);
+    u_l + x * (u_g - u_l)
+}
+
+/// The saturated phase's u on the isochore ρ, kJ/kg, interpolated in
+/// [`REGION3_DOME_TOP`]: at most 0.66 kJ/kg above the line (the chords of
+/// the vapour branch, which curves down between the points; less than
+/// [`DOME_MARGIN`]) and at most 0.9 below it.
+fn dome_top(rho: f64) -> f64 {
+    let top = REGION3_DOME_TOP;
+    let k = top
+        .iter()
+        .position(|&(r, _)| r <= rho)
+        .unwrap_or(top.len() - 1)
+        .max(1);
+    let ((r1, u1), (r0, u0)) = (top[k - 1], top[k]);
+    u0 + (u1 - u0) * (rho - r0) / (r1 - r0)
+}
+
+/// Region 3's saturation line as (ρ, u), kg/m³ and kJ/kg, from the
+/// saturated vapour at 623.15 K (113.62) through the critical point to the
+/// saturated liquid at 623.15 K (574.69) — listed from the densest: the
+/// phase of each density on R7-97 region 3 at psat (the module's test
+/// checks the interpolation against the line).
+const REGION3_DOME_TOP: [(f64, f64); 15] = [
+    (574.689, 1642.096),
+    (540.0, 1705.26),
+    (500.0, 1771.56),
+    (460.0, 1831.70),
+    (420.0, 1887.03),
+    (380.0, 1939.75),
+    (350.0, 1979.66),
+    (322.0, 2019.03),
+    (290.0, 2068.31),
+    (260.0, 2119.39),
+    (230.0, 2174.82),
+    (200.0, 2233.80),
+    (170.0, 2295.69),
+    (140.0, 2360.03),
+    (113.624, 2418.120),
+];
+
+/// How far (kJ/kg) a point must lie inside the dome's edges in u to be
+/// taken to [`wet_in_region3_at_once`]: beyond the interpolation's 0.66.
+const DOME_MARGIN: f64 = 1.0;
+
+/// Wet steam below 623.15 K well inside the dome (a quality at least
+/// [`X_CLEAR`] from either line, a temperature at least [`SEAM_CLEAR`] from
+/// 623.15 K and 273.15 K), by the wet iteration along the isochore from the
+/// fitted line's start ([`wet_vu_start`]); `None` elsewhere, for the
+/// single-phase attempts and the iteration from the isochore's dew point
+/// to decide. No single-phase state shares (v, u) with such a state.
+fn wet_below_623_at_once(v: f64, u: f64) -> Option<State> {
+    // Region 1's volumes are wet only within 0.005 of x = 0, which the
+    // fitted start does not take; above the 623.15 K wet isotherm of an
+    // isochore through region 3's part of the dome, no state is wet below
+    // 623.15 K; above u''(509.65 K) none at all.
+    let v_623 = 1.0 / REGION3_DOME_TOP[REGION3_DOME_TOP.len() - 1].0;
+    let beside = v <= REGION1_MAX_VOLUME || (v < v_623 && u > wet_isotherm_623(v) - DOME_MARGIN);
+    if beside || u >= U_VAPOUR_HIGHEST {
+        return None;
+    }
+    let start = wet_vu_start::wet_temperature_start(v, u)?;
+    let state = wet_state_from(v, u, (REGION13_TEMPERATURE, start), FAST_WET_STEPS).ok()??;
+    let (t, x) = (state.native().t, state.quality()?);
+    let clear = (X_CLEAR..=1.0 - X_CLEAR).contains(&x)
+        && t > MIN_TEMPERATURE + SEAM_CLEAR
+        && t < REGION13_TEMPERATURE - SEAM_CLEAR;
+    clear.then_some(state)
 }
 
 const NO_STATE: Error = Error::NoStateInRange {
@@ -265,12 +385,16 @@ fn just_inside_region3(
 /// dome, most of the cost).
 fn could_hold(equation: Equation, v: f64, u: f64) -> bool {
     match equation {
-        Equation::Region1 => v <= 0.00175 && u <= 1650.0,
+        Equation::Region1 => v <= REGION1_MAX_VOLUME && u <= 1650.0,
         Equation::Region3 => (105.0..=770.0).contains(&(1.0 / v)) && (1400.0..=2570.0).contains(&u),
         Equation::Region5 => v >= 0.009 && u >= 3450.0,
         Equation::Region2 => v >= 0.0088 || u >= 2418.0,
     }
 }
+
+/// Above region 1's largest specific volume (0.00174 m³/kg, its saturated
+/// liquid at 623.15 K), m³/kg, with margin (see [`could_hold`]).
+const REGION1_MAX_VOLUME: f64 = 0.00175;
 
 /// Steps of the isochore's bracketed iteration in T, and of Newton's in p
 /// on each isotherm: bisection alone closes the widest bracket (273.15 to
@@ -614,6 +738,11 @@ fn stable_below_critical(props: &Properties, branch: Branch) -> bool {
     }
 }
 
+/// Points of the wet iteration from the fitted start (within 0.31 K of the
+/// root): it settles in three to five; a state it does not settle in that
+/// many is left to the full iteration.
+const FAST_WET_STEPS: u32 = 8;
+
 /// Steps of the wet iteration: bisection alone closes its bracket (273.15 K
 /// to Tc) in about 60, and takes at least every other step where Newton
 /// crawls.
@@ -638,6 +767,17 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     } else {
         t_max
     };
+    wet_state_from(v, u, (t_max, start), WET_STEPS)
+}
+
+/// [`wet_state`] from the temperature `start` inside its bracket, in at
+/// most `max_steps` points.
+fn wet_state_from(
+    v: f64,
+    u: f64,
+    (t_max, start): (f64, f64),
+    max_steps: u32,
+) -> Result<Option<State>, Error> {
     let mut walk = IsochoreWalk {
         v,
         u,
@@ -649,7 +789,7 @@ fn wet_state(v: f64, u: f64, t_max: f64) -> Result<Option<State>, Error> {
     let ended = bracketed_root(
         (MIN_TEMPERATURE, t_max),
         start,
-        WET_STEPS,
+        max_steps,
         |t| walk.verdict(t),
         |lo, hi, _| hi - lo <= 4.0 * f64::EPSILON * hi,
     )?;
@@ -894,6 +1034,27 @@ mod tests {
             }
         }
         assert!(count > 1000, "{count}");
+    }
+
+    /// `dome_top` never lies more than 0.66 kJ/kg above region 3's
+    /// saturation line (between 623.15 K and Tc), and at most 0.9 below it.
+    #[test]
+    fn the_dome_top_follows_the_line() {
+        let n = 4_000;
+        let mut worst = (0.0_f64, 0.0_f64);
+        for k in 0..=n {
+            let t = REGION13_TEMPERATURE
+                + (CRITICAL_TEMPERATURE - REGION13_TEMPERATURE)
+                    * (1.0 - (1.0 - f64::from(k) / f64::from(n)).powi(3));
+            let Ok(sat) = Saturation::at_native_temperature(t) else {
+                continue;
+            };
+            for phase in [sat.liquid().native(), sat.vapour().native()] {
+                let excess = dome_top(1.0 / phase.v) - phase.u;
+                worst = (worst.0.min(excess), worst.1.max(excess));
+            }
+        }
+        assert!(worst.0 > -0.9 && worst.1 < 0.66, "{worst:?}");
     }
 
     /// `U_VAPOUR_HIGHEST` lies above u'' of region 2 along the whole

@@ -75,7 +75,7 @@ pub(crate) fn value(given: Given, props: &Properties) -> f64 {
 /// (∂z/∂x, ∂z/∂T) of `given` = z, where x is p (Gibbs) or ρ (Helmholtz).
 /// pv-type products carry a factor 10³ (MPa·m³/kg = 10³ kJ/kg).
 #[inline]
-fn partials(equation: Equation, given: Given, s: &Properties) -> (f64, f64) {
+pub(crate) fn partials(equation: Equation, given: Given, s: &Properties) -> (f64, f64) {
     let (v, t, alpha, kappa) = (s.v, s.t, s.alpha_v, s.kappa_t);
     match equation {
         Equation::Region3 => {

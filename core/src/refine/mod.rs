@@ -5,3 +5,4 @@
 pub(crate) mod bracketed_root;
 pub(crate) mod inverse;
 pub(crate) mod region3_density;
+pub(crate) mod wet_region3;

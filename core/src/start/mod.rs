@@ -4,3 +4,4 @@
 
 pub(crate) mod saturated_density_estimate;
 pub(crate) mod wet_hs_start;
+pub(crate) mod wet_vu_start;

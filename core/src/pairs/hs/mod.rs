@@ -35,7 +35,10 @@
 //! bisection iteration on [273.15 K, Tc], starting from SR4-04's
 //! Tsat(h,s) where that equation is valid (s ≥ s''(623.15 K)) and below
 //! it from the backward equations' wet isotherm through the point
-//! ([`crate::start::wet_hs_start`]).
+//! ([`crate::start::wet_hs_start`]). Above the 623.15 K wet isotherm
+//! (region 3's part of the dome) Newton's method on T and both saturated
+//! densities together ([`crate::refine::wet_region3`]) comes first, and the
+//! iteration in T decides only where it gives up (near the lines and Tc).
 //!
 //! One idea per file: [`place`] the boundary equations' placement,
 //! [`starts`] and [`gas_start`] the single-phase starts, [`single`] the

@@ -9,9 +9,12 @@ use crate::backward::sr4_04::{self, S_LIQUID_273, S_LIQUID_623};
 use crate::error::Error;
 use crate::numerics::constants::*;
 use crate::pairs::saturation::{Saturation, UNRESOLVED_BELOW_CRITICAL};
+use crate::read::state::Region;
 use crate::refine::bracketed_root::{bracketed_root, End, Step, Verdict};
 use crate::refine::inverse::{within_promise, Given};
+use crate::refine::wet_region3::wet_in_region3;
 use crate::start::wet_hs_start::wet_temperature_start;
+use crate::units::Units;
 
 // The wet isotherms 273.15 K and 623.15 K in the h–s plane (straight lines
 // between their saturated phases): h'(273.15 K), h''(273.15 K), h'(623.15
@@ -126,6 +129,11 @@ pub(super) fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
         Ok(bracket) => bracket,
         Err(edge) => return Ok(edge),
     };
+    if lo == REGION13_TEMPERATURE {
+        if let Some(inside) = in_region3_at_once(h, s) {
+            return Ok(inside);
+        }
+    }
     // On [273.15 K, T_sat(s)] the difference rises with T; above T_sat(s)
     // (quality below 0, liquid side) it counts as "too hot".
     let mut walk = WetWalk {
@@ -148,6 +156,17 @@ pub(super) fn attempt_wet(h: f64, s: f64) -> Result<Attempt, Error> {
         return found(sat, x, t, h, s);
     }
     closed_without_root(&walk, t, (lo, hi))
+}
+
+/// Wet steam well inside region 3's part of the dome, by Newton's method
+/// on T and both saturated densities together ([`wet_in_region3`]: the
+/// quality from s, h reproduced to the wet iteration's aim); `None` near
+/// the lines and where that iteration gives up, for the one-dimensional
+/// iteration to decide.
+fn in_region3_at_once(h: f64, s: f64) -> Option<Attempt> {
+    let point = wet_in_region3((Given::Entropy, s), (Given::Enthalpy, h))?;
+    let sat = Saturation::of_phases(point.liquid, point.vapour, Region::Three, Units::Native);
+    sat.mixture(point.x).ok().map(Attempt::Inside)
 }
 
 /// The bracket in T of the wet iteration, [273.15 K, just below Tc]
