@@ -119,6 +119,21 @@ impl<const N: usize> Real for Lanes<N> {
 
     #[inline(always)]
     fn sqrt(self) -> Lanes<N> {
-        self.map(math::sqrt)
+        self.map(lane_sqrt)
     }
+}
+
+/// The square root of one lane: IEEE 754's, correctly rounded like
+/// [`math::sqrt`] and so the same bits, but as the compiler's own
+/// instruction where `std` provides it. `libm`'s x86 square root is an
+/// inline-assembly `sqrtsd`, which the compiler can neither vectorise nor
+/// encode for AVX: inside the AVX kernels the legacy encoding stalled
+/// every lane on the upper register halves (a batch 5× slower than the
+/// baseline). Without `std` only the baseline kernels run, where it is fine.
+#[inline(always)]
+fn lane_sqrt(x: f64) -> f64 {
+    #[cfg(feature = "std")]
+    return std::primitive::f64::sqrt(x);
+    #[cfg(not(feature = "std"))]
+    return math::sqrt(x);
 }

@@ -112,10 +112,14 @@ impl PowerChain {
         false
     }
 
-    /// The powers of `x` the chain was built for (others are left at 1).
+    /// The powers of `x` the chain was built for (others are left at 0).
+    /// Zeros, not ones, fill the rest: an all-zero array is one memset the
+    /// optimiser drops, where a fill of ones over lanes stayed a loop that
+    /// AVX-512 code turned into 64 scatters per evaluation.
     #[inline(always)]
     fn powers<V: Real>(&self, x: V) -> [V; MAX_POWER] {
-        let mut p = [V::splat(1.0); MAX_POWER];
+        let mut p = [V::splat(0.0); MAX_POWER];
+        p[0] = V::splat(1.0);
         p[1] = x;
         unrolled!(K, {
             if K < self.len {
@@ -271,13 +275,15 @@ impl Series {
         unrolled!(K, {
             if K < self.len {
                 let yj = py[self.y_index[K] as usize];
-                let [c0, c1, c2, _] = self.coefficients[K].map(V::splat);
+                let [c0, c1, c2, _] = self.coefficients[K];
+                let (c0, c1, c2) = (V::splat(c0), V::splat(c1), V::splat(c2));
                 p += c0 * yj;
                 q += c1 * yj;
                 r += c2 * yj;
                 if self.closes_group[K] {
                     let xi = px[self.x_index[K] as usize];
-                    let [wi, wii] = self.x_weights[K].map(V::splat);
+                    let [wi, wii] = self.x_weights[K];
+                    let (wi, wii) = (V::splat(wi), V::splat(wii));
                     let (xp, xq) = (xi * p, xi * q);
                     s.value += xp;
                     s.x += wi * xp;
@@ -310,7 +316,8 @@ impl Series {
         unrolled!(K, {
             if K < self.len {
                 let yj = py[self.y_index[K] as usize];
-                let [c0, c1, c2, c3] = self.coefficients[K].map(V::splat);
+                let [c0, c1, c2, c3] = self.coefficients[K];
+                let [c0, c1, c2, c3] = [V::splat(c0), V::splat(c1), V::splat(c2), V::splat(c3)];
                 p += c0 * yj;
                 q += c1 * yj;
                 r += c2 * yj;
