@@ -104,6 +104,29 @@ fn exercise_everything() -> f64 {
         ebullio::batch::states_from_pt(inputs(), units, |_, s| sum += read_all(s));
         ebullio::batch::enthalpies_from_pt(inputs(), units, |_, h| sum += h.unwrap_or(0.0));
         sum += f64::from(ebullio::batch::Dispatch::detected() as u8);
+        let line = [
+            273.15,
+            400.0,
+            623.15,
+            640.0,
+            700.0,
+            f64::NAN,
+            0.001,
+            10.0,
+            22.064,
+        ]
+        .map(|x| units.from_native(ebullio::Quantity::Temperature, x));
+        let line = || line.iter().cycle().take(40).copied();
+        let both = |s: Result<Saturation, ebullio::Error>| match s {
+            Ok(s) => read_all(Ok(*s.liquid())) + read_all(Ok(*s.vapour())),
+            Err(e) => read_all(Err(e)),
+        };
+        for dispatch in ebullio::batch::Dispatch::ALL {
+            dispatch.saturation_at_temperatures(line(), units, |_, s| sum += both(s));
+            dispatch.saturation_at_pressures(line(), units, |_, s| sum += both(s));
+        }
+        ebullio::batch::saturation_at_temperatures(line(), units, |_, s| sum += both(s));
+        ebullio::batch::saturation_at_pressures(line(), units, |_, s| sum += both(s));
         for method in [Method::Exact, Method::BackwardOnly] {
             for pair in [InputPair::PressureTemperature, InputPair::PressureEnthalpy] {
                 let request = Request {

@@ -144,17 +144,6 @@ impl<const M: usize, F> Solve<M> for F where
 {
 }
 
-/// A [`Solve`] of one element at a time.
-fn one_by_one<const M: usize>(
-    element: impl Fn(usize) -> Result<[State; M], Error> + Sync,
-) -> impl Solve<M> + Sync {
-    move |range: Range<usize>, each: &mut dyn FnMut(usize, Result<[State; M], Error>)| {
-        for i in range {
-            each(i, element(i));
-        }
-    }
-}
-
 /// Splits `column` (length `n`) into work-item slices.
 fn split<T>(column: &mut [T]) -> std::slice::ChunksMut<'_, T> {
     column.chunks_mut(CHUNK)
@@ -412,16 +401,13 @@ pub(crate) fn saturation_into<'py>(
 ) -> PyResult<Arrays<'py>> {
     let n = values.len();
     let arrays = fresh::<2>(py, n);
-    write::<2>(
-        py,
-        &arrays,
-        n,
-        threads,
-        one_by_one(|i| {
-            by.solve(values[i], units)
-                .map(|s| [*s.liquid(), *s.vapour()])
-        }),
-    )?;
+    let solve = |range: Range<usize>, each: &mut dyn FnMut(usize, Result<[State; 2], Error>)| {
+        let start = range.start;
+        by.solve_each(range.map(|i| values[i]), units, |i, point| {
+            each(start + i, point.map(|s| [*s.liquid(), *s.vapour()]));
+        });
+    };
+    write::<2>(py, &arrays, n, threads, solve)?;
     Ok(arrays)
 }
 

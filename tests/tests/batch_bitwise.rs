@@ -8,7 +8,7 @@
 
 use ebullio::batch::Dispatch;
 use ebullio::saturation_line::{saturation_pressure, saturation_temperature};
-use ebullio::{boundary_b23, Error, State, Units};
+use ebullio::{boundary_b23, Error, Saturation, State, Units};
 use ebullio_conformance::random_inputs::draw::{campaign_seed, Draw, Seeded};
 use ebullio_conformance::random_inputs::values::SPECIALS;
 
@@ -212,6 +212,81 @@ fn short_and_empty_batches_report_every_element_once() {
                 assert_eq!(r, State::from_pt(p, t, Units::Native));
             });
             assert!(seen.iter().all(|&c| c == 1), "{dispatch:?} {n}: {seen:?}");
+        }
+    }
+}
+
+/// A value on the saturation line's own variable, native: the span, its
+/// ends and the 623.15 K seam a few ulps either side, and beyond.
+fn native_on_line(d: &mut Seeded, temperature: bool) -> f64 {
+    // IAPWS R7-97(2012), section 3 and Eq. 30: 273.15 K to Tc, psat there.
+    let (lo, seam, hi) = if temperature {
+        (273.15, 623.15, 647.096)
+    } else {
+        (
+            saturation_pressure(273.15),
+            saturation_pressure(623.15),
+            22.064,
+        )
+    };
+    match d.below(4) {
+        0 | 1 => d.range(lo, hi),
+        2 => ulps([lo, seam, hi][d.below(3)], d.below(9) as i64 - 4),
+        _ => d.range(lo - 0.5 * (hi - lo), hi + 0.5 * (hi - lo)),
+    }
+}
+
+#[test]
+fn batch_saturation_is_the_scalar_saturation_bit_for_bit_on_every_variant() {
+    let mut draw = Seeded::for_target(campaign_seed(), "batch_bitwise_saturation");
+    for units in Units::ALL {
+        for temperature in [true, false] {
+            let quantity = if temperature {
+                ebullio::Quantity::Temperature
+            } else {
+                ebullio::Quantity::Pressure
+            };
+            let inputs: Vec<f64> = (0..COUNT_PER_UNITS)
+                .map(|_| {
+                    if draw.chance(0.02) {
+                        SPECIALS[draw.below(SPECIALS.len())]
+                    } else {
+                        units.from_native(quantity, native_on_line(&mut draw, temperature))
+                    }
+                })
+                .collect();
+            let bits = |s: Saturation| (state_bits(s.liquid()), state_bits(s.vapour()));
+            let scalar: Vec<_> = inputs
+                .iter()
+                .map(|&x| {
+                    if temperature {
+                        Saturation::at_temperature(x, units)
+                    } else {
+                        Saturation::at_pressure(x, units)
+                    }
+                    .map(bits)
+                })
+                .collect();
+            for dispatch in variants() {
+                let mut batch = vec![None; inputs.len()];
+                let mut put = |i: usize, r: Result<Saturation, Error>| {
+                    assert!(batch[i].is_none(), "element {i} reported twice");
+                    batch[i] = Some(r.map(bits));
+                };
+                if temperature {
+                    dispatch.saturation_at_temperatures(inputs.iter().copied(), units, &mut put);
+                } else {
+                    dispatch.saturation_at_pressures(inputs.iter().copied(), units, &mut put);
+                }
+                for (i, (b, s)) in batch.iter().zip(&scalar).enumerate() {
+                    assert_eq!(
+                        b.as_ref(),
+                        Some(s),
+                        "{dispatch:?} {units:?} element {i} at {}",
+                        inputs[i]
+                    );
+                }
+            }
         }
     }
 }

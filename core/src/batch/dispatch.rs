@@ -13,7 +13,7 @@
 use crate::error::Error;
 use crate::units::Units;
 
-use super::pt_lanes::{self, PtKernel};
+use super::pipeline::{self, Kernel};
 
 /// An instruction set for the batch kernels. Public for the tests, which
 /// run every variant the machine supports against the scalar calls; a
@@ -64,10 +64,10 @@ impl Dispatch {
     /// Runs `kernel` over `inputs` on this variant, or on the baseline
     /// where the machine does not support it.
     #[inline]
-    pub(crate) fn run<K: PtKernel>(
+    pub(crate) fn run<K: Kernel>(
         self,
         kernel: &K,
-        inputs: impl IntoIterator<Item = (f64, f64)>,
+        inputs: impl IntoIterator<Item = K::Input>,
         units: Units,
         each: impl FnMut(usize, Result<K::Output, Error>),
     ) {
@@ -81,7 +81,7 @@ impl Dispatch {
                 Dispatch::Baseline => {}
             }
         }
-        pt_lanes::run::<2, K>(kernel, inputs, units, each)
+        pipeline::run::<2, K>(kernel, inputs, units, each)
     }
 }
 
@@ -91,22 +91,22 @@ mod x86 {
     use super::*;
 
     #[target_feature(enable = "avx512f")]
-    pub(super) fn avx512<K: PtKernel>(
+    pub(super) fn avx512<K: Kernel>(
         kernel: &K,
-        inputs: impl IntoIterator<Item = (f64, f64)>,
+        inputs: impl IntoIterator<Item = K::Input>,
         units: Units,
         each: impl FnMut(usize, Result<K::Output, Error>),
     ) {
-        pt_lanes::run::<8, K>(kernel, inputs, units, each)
+        pipeline::run::<8, K>(kernel, inputs, units, each)
     }
 
     #[target_feature(enable = "avx2,fma")]
-    pub(super) fn avx2<K: PtKernel>(
+    pub(super) fn avx2<K: Kernel>(
         kernel: &K,
-        inputs: impl IntoIterator<Item = (f64, f64)>,
+        inputs: impl IntoIterator<Item = K::Input>,
         units: Units,
         each: impl FnMut(usize, Result<K::Output, Error>),
     ) {
-        pt_lanes::run::<4, K>(kernel, inputs, units, each)
+        pipeline::run::<4, K>(kernel, inputs, units, each)
     }
 }

@@ -8,8 +8,9 @@
 //! (so not in order); nothing is allocated.
 
 mod dispatch;
+mod pipeline;
 mod pt_kernels;
-mod pt_lanes;
+mod saturation_kernels;
 
 pub use dispatch::Dispatch;
 
@@ -17,7 +18,10 @@ use crate::error::Error;
 use crate::read::state::State;
 use crate::units::Units;
 
+use crate::pairs::saturation::Saturation;
+
 use pt_kernels::{Enthalpy, FullState};
+use saturation_kernels::{AtPressure, AtTemperature};
 
 /// [`State::from_pt`] of every (p, T) of `inputs` in `units`: `each` gets
 /// the element's index (its place in `inputs`) and its result, once per
@@ -49,6 +53,26 @@ pub fn enthalpies_from_pt(
     Dispatch::detected().enthalpies_from_pt(inputs, units, each)
 }
 
+/// [`Saturation::at_temperature`] of every temperature of `inputs` in
+/// `units`, as [`states_from_pt`] gives states.
+pub fn saturation_at_temperatures(
+    inputs: impl IntoIterator<Item = f64>,
+    units: Units,
+    each: impl FnMut(usize, Result<Saturation, Error>),
+) {
+    Dispatch::detected().saturation_at_temperatures(inputs, units, each)
+}
+
+/// [`Saturation::at_pressure`] of every pressure of `inputs` in `units`,
+/// as [`states_from_pt`] gives states.
+pub fn saturation_at_pressures(
+    inputs: impl IntoIterator<Item = f64>,
+    units: Units,
+    each: impl FnMut(usize, Result<Saturation, Error>),
+) {
+    Dispatch::detected().saturation_at_pressures(inputs, units, each)
+}
+
 impl Dispatch {
     /// [`states_from_pt`] on this variant (the baseline where the machine
     /// does not support it).
@@ -71,5 +95,27 @@ impl Dispatch {
         each: impl FnMut(usize, Result<f64, Error>),
     ) {
         self.run(&Enthalpy, inputs, units, each)
+    }
+
+    /// [`saturation_at_temperatures`] on this variant.
+    #[doc(hidden)]
+    pub fn saturation_at_temperatures(
+        self,
+        inputs: impl IntoIterator<Item = f64>,
+        units: Units,
+        each: impl FnMut(usize, Result<Saturation, Error>),
+    ) {
+        self.run(&AtTemperature, inputs, units, each)
+    }
+
+    /// [`saturation_at_pressures`] on this variant.
+    #[doc(hidden)]
+    pub fn saturation_at_pressures(
+        self,
+        inputs: impl IntoIterator<Item = f64>,
+        units: Units,
+        each: impl FnMut(usize, Result<Saturation, Error>),
+    ) {
+        self.run(&AtPressure, inputs, units, each)
     }
 }

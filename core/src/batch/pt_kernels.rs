@@ -4,30 +4,87 @@
 use core::array;
 
 use crate::equations::free_energy::{gibbs_properties, Properties, ReducedGibbs};
+use crate::equations::saturation_line::saturation_pressure_of;
 use crate::equations::{region1, region2, region5};
 use crate::error::Error;
-use crate::locate::regions::single_phase;
+use crate::locate::regions::{liquid_side_temperature, locate_with, single_phase, Located};
 use crate::numerics::lanes::Lanes;
 use crate::pairs::pt::enthalpy_from_pt;
 use crate::read::state::{Region, State};
+use crate::units::input::native_input;
 use crate::units::{Quantity, Units};
 
-use super::pt_lanes::PtKernel;
+use super::pipeline::{Kernel, Place};
+
+/// The regions of the lanes' queues.
+const REGIONS: [Region; 3] = [Region::One, Region::Two, Region::Five];
+
+/// Where each (p, T) of `given` goes: located as `State::from_pt` locates
+/// (the liquid side's saturation pressures over lanes first), regions 1, 2
+/// and 5 into their queues, the rest (region 3, errors) to the scalar call.
+#[inline(always)]
+fn place_pt<const N: usize>(given: &[(f64, f64); N], len: usize, units: Units) -> [Place; N] {
+    let mut p = [0.0; N];
+    let mut t = [0.0; N];
+    // An input that does not convert is the scalar call's (its error).
+    let mut converted = [false; N];
+    for k in 0..len {
+        let native = (
+            native_input(units, Quantity::Pressure, given[k].0),
+            native_input(units, Quantity::Temperature, given[k].1),
+        );
+        if let (Ok(pk), Ok(tk)) = native {
+            (p[k], t[k], converted[k]) = (pk, tk, true);
+        }
+    }
+    // Unused lanes and failed conversions compute a harmless psat at 0 K.
+    let psat = saturation_pressure_of(liquid_side_temperature(Lanes(t))).0;
+    array::from_fn(|k| {
+        let located = if k < len && converted[k] {
+            locate_with(p[k], t[k], units, || psat[k]).ok()
+        } else {
+            None
+        };
+        let queue = match located {
+            Some(Located::Region1) => 0,
+            Some(Located::Region2) => 1,
+            Some(Located::Region5) => 2,
+            _ => return Place::Scalar,
+        };
+        Place::Lanes {
+            queue,
+            p: p[k],
+            t: t[k],
+        }
+    })
+}
 
 /// The stable state, as [`State::from_pt`].
 pub(crate) struct FullState;
 
-impl PtKernel for FullState {
+impl Kernel for FullState {
+    type Input = (f64, f64);
     type Output = State;
+
+    #[inline(always)]
+    fn place<const N: usize>(
+        &self,
+        given: &[(f64, f64); N],
+        len: usize,
+        units: Units,
+    ) -> [Place; N] {
+        place_pt(given, len, units)
+    }
 
     #[inline(always)]
     fn lanes<const N: usize>(
         &self,
-        region: Region,
+        queue: usize,
         p: Lanes<N>,
         t: Lanes<N>,
         units: Units,
     ) -> [State; N] {
+        let region = REGIONS[queue];
         let gibbs: ReducedGibbs<Lanes<N>> = match region {
             Region::One => region1::gibbs_of(p, t),
             Region::Two => region2::gibbs_of(p, t),
@@ -41,7 +98,7 @@ impl PtKernel for FullState {
         })
     }
 
-    fn scalar(&self, p: f64, t: f64, units: Units) -> Result<State, Error> {
+    fn scalar(&self, (p, t): (f64, f64), units: Units) -> Result<State, Error> {
         State::from_pt(p, t, units)
     }
 }
@@ -49,18 +106,29 @@ impl PtKernel for FullState {
 /// Specific enthalpy alone, as [`enthalpy_from_pt`].
 pub(crate) struct Enthalpy;
 
-impl PtKernel for Enthalpy {
+impl Kernel for Enthalpy {
+    type Input = (f64, f64);
     type Output = f64;
+
+    #[inline(always)]
+    fn place<const N: usize>(
+        &self,
+        given: &[(f64, f64); N],
+        len: usize,
+        units: Units,
+    ) -> [Place; N] {
+        place_pt(given, len, units)
+    }
 
     #[inline(always)]
     fn lanes<const N: usize>(
         &self,
-        region: Region,
+        queue: usize,
         p: Lanes<N>,
         t: Lanes<N>,
         units: Units,
     ) -> [f64; N] {
-        let h = match region {
+        let h = match REGIONS[queue] {
             Region::One => region1::enthalpy_of(p, t),
             Region::Two => region2::enthalpy_of(p, t),
             _ => region5::enthalpy_of(p, t),
@@ -68,14 +136,14 @@ impl PtKernel for Enthalpy {
         h.0.map(|h| units.from_native(Quantity::Enthalpy, h))
     }
 
-    fn scalar(&self, p: f64, t: f64, units: Units) -> Result<f64, Error> {
+    fn scalar(&self, (p, t): (f64, f64), units: Units) -> Result<f64, Error> {
         enthalpy_from_pt(p, t, units)
     }
 }
 
 /// Lane `k` of properties evaluated over lanes.
 #[inline(always)]
-fn lane<const N: usize>(props: &Properties<Lanes<N>>, k: usize) -> Properties {
+pub(super) fn lane<const N: usize>(props: &Properties<Lanes<N>>, k: usize) -> Properties {
     Properties {
         p: props.p.0[k],
         t: props.t.0[k],
