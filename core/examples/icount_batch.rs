@@ -5,7 +5,10 @@
 //! 1–3 full states in regions 1, 2 and 5, read as icount's probes 5–6 read
 //! them; 4–5 enthalpy alone in regions 1 and 2; on the widest variant the
 //! machine offers (valgrind hides AVX-512: AVX2 under callgrind); 6–7 region
-//! 1's full state and enthalpy on the baseline variant.
+//! 1's full state and enthalpy on the baseline variant; 8 both saturated
+//! phases from T (280–600 K). The same work one element at a time, for
+//! comparison: 11–13 full states in regions 1, 2 and 5, 14–15 enthalpy in
+//! regions 1 and 2, 18 saturation from T.
 use ebullio::batch::Dispatch;
 use ebullio::Units;
 use std::hint::black_box;
@@ -50,12 +53,13 @@ fn main() {
         (5.0, 1150.0),
         (20.0, 2250.0),
     ];
-    let points = match which {
+    let points = match which % 10 {
         2 | 5 => pts2,
         3 => pts5,
         _ => pts1,
     };
-    let dispatch = if which >= 6 {
+    let temperatures: [f64; 8] = core::array::from_fn(|k| 280.0 + 40.0 * k as f64);
+    let dispatch = if matches!(which, 6 | 7) {
         Dispatch::Baseline
     } else {
         Dispatch::detected()
@@ -63,17 +67,39 @@ fn main() {
     let mut acc = 0.0;
     for _ in 0..ELEMENTS / BATCH {
         let inputs = (0..BATCH).map(|j| black_box(points[j & 7]));
+        let line = (0..BATCH).map(|j| black_box(temperatures[j & 7]));
+        let read = |s: ebullio::State| {
+            s.enthalpy()
+                + s.entropy()
+                + s.specific_volume()
+                + s.isobaric_heat_capacity().unwrap()
+                + s.speed_of_sound().unwrap()
+        };
         match which {
-            1..=3 | 6 => dispatch.states_from_pt(inputs, Units::Native, |_, s| {
-                let s = s.unwrap();
-                acc += s.enthalpy()
-                    + s.entropy()
-                    + s.specific_volume()
-                    + s.isobaric_heat_capacity().unwrap()
-                    + s.speed_of_sound().unwrap();
-            }),
+            1..=3 | 6 => {
+                dispatch.states_from_pt(inputs, Units::Native, |_, s| acc += read(s.unwrap()))
+            }
             4 | 5 | 7 => {
                 dispatch.enthalpies_from_pt(inputs, Units::Native, |_, h| acc += h.unwrap())
+            }
+            8 => dispatch.saturation_at_temperatures(line, Units::Native, |_, s| {
+                acc += s.unwrap().liquid().enthalpy() + s.unwrap().vapour().enthalpy()
+            }),
+            11..=13 => {
+                for (p, t) in inputs {
+                    acc += read(ebullio::State::from_pt(p, t, Units::Native).unwrap());
+                }
+            }
+            14 | 15 => {
+                for (p, t) in inputs {
+                    acc += ebullio::enthalpy_from_pt(p, t, Units::Native).unwrap();
+                }
+            }
+            18 => {
+                for t in line {
+                    let s = ebullio::Saturation::at_temperature(t, Units::Native).unwrap();
+                    acc += s.liquid().enthalpy() + s.vapour().enthalpy();
+                }
             }
             _ => {}
         }

@@ -31,14 +31,18 @@ pub(crate) trait Kernel {
         len: usize,
         units: Units,
     ) -> [Place; N];
-    /// The results of `N` native (p, T) of queue `queue`, in `units`.
+    /// The results of `N` native (p, T) of queue `queue`, in `units`,
+    /// each handed to `out` with its lane (no array of results is built:
+    /// the optimiser left the one of `State`s out of line, compiled for
+    /// the baseline).
     fn lanes<const N: usize>(
         &self,
         queue: usize,
         p: Lanes<N>,
         t: Lanes<N>,
         units: Units,
-    ) -> [Self::Output; N];
+        out: impl FnMut(usize, Self::Output),
+    );
     /// The scalar call on the caller's own input, in `units`.
     fn scalar(&self, input: Self::Input, units: Units) -> Result<Self::Output, Error>;
 }
@@ -89,13 +93,16 @@ impl Waiting {
         each: &mut impl FnMut(usize, Result<K::Output, Error>),
     ) {
         let taken = self.len.min(N);
-        let lane = |x: &[f64; ROOM], k: usize| if k < taken { x[k] } else { x[0] };
-        let p = Lanes::<N>(core::array::from_fn(|k| lane(&self.p, k)));
-        let t = Lanes::<N>(core::array::from_fn(|k| lane(&self.t, k)));
-        let results = kernel.lanes(self.queue, p, t, units);
-        for (k, result) in results.into_iter().take(taken).enumerate() {
-            each(self.index[k], Ok(result));
-        }
+        let mut p = Lanes([self.p[0]; N]);
+        let mut t = Lanes([self.t[0]; N]);
+        p.0[..taken].copy_from_slice(&self.p[..taken]);
+        t.0[..taken].copy_from_slice(&self.t[..taken]);
+        let index = &self.index;
+        kernel.lanes(self.queue, p, t, units, |k, result| {
+            if k < taken {
+                each(index[k], Ok(result));
+            }
+        });
         self.index.copy_within(taken..self.len, 0);
         self.p.copy_within(taken..self.len, 0);
         self.t.copy_within(taken..self.len, 0);

@@ -1,8 +1,6 @@
 //! What the (p, T) batches compute over lanes: the full state, and
 //! enthalpy alone; each beside the scalar call it matches bit for bit.
 
-use core::array;
-
 use crate::equations::free_energy::{gibbs_properties, Properties, ReducedGibbs};
 use crate::equations::saturation_line::saturation_pressure_of;
 use crate::equations::{region1, region2, region5};
@@ -39,24 +37,24 @@ fn place_pt<const N: usize>(given: &[(f64, f64); N], len: usize, units: Units) -
     }
     // Unused lanes and failed conversions compute a harmless psat at 0 K.
     let psat = saturation_pressure_of(liquid_side_temperature(Lanes(t))).0;
-    array::from_fn(|k| {
-        let located = if k < len && converted[k] {
-            locate_with(p[k], t[k], units, || psat[k]).ok()
-        } else {
-            None
+    let mut places = [Place::Scalar; N];
+    for k in 0..len {
+        if !converted[k] {
+            continue;
+        }
+        let queue = match locate_with(p[k], t[k], units, || psat[k]) {
+            Ok(Located::Region1) => 0,
+            Ok(Located::Region2) => 1,
+            Ok(Located::Region5) => 2,
+            _ => continue,
         };
-        let queue = match located {
-            Some(Located::Region1) => 0,
-            Some(Located::Region2) => 1,
-            Some(Located::Region5) => 2,
-            _ => return Place::Scalar,
-        };
-        Place::Lanes {
+        places[k] = Place::Lanes {
             queue,
             p: p[k],
             t: t[k],
-        }
-    })
+        };
+    }
+    places
 }
 
 /// The stable state, as [`State::from_pt`].
@@ -83,7 +81,8 @@ impl Kernel for FullState {
         p: Lanes<N>,
         t: Lanes<N>,
         units: Units,
-    ) -> [State; N] {
+        mut out: impl FnMut(usize, State),
+    ) {
         let region = REGIONS[queue];
         let gibbs: ReducedGibbs<Lanes<N>> = match region {
             Region::One => region1::gibbs_of(p, t),
@@ -91,11 +90,11 @@ impl Kernel for FullState {
             _ => region5::gibbs_of(p, t),
         };
         let props = gibbs_properties(&gibbs, p, t);
-        array::from_fn(|k| {
+        for k in 0..N {
             let props = lane(&props, k);
             let phase = single_phase(props.p, props.t, region == Region::One);
-            State::single_phase(props, region, phase, units)
-        })
+            out(k, State::single_phase(props, region, phase, units));
+        }
     }
 
     fn scalar(&self, (p, t): (f64, f64), units: Units) -> Result<State, Error> {
@@ -127,13 +126,16 @@ impl Kernel for Enthalpy {
         p: Lanes<N>,
         t: Lanes<N>,
         units: Units,
-    ) -> [f64; N] {
+        mut out: impl FnMut(usize, f64),
+    ) {
         let h = match REGIONS[queue] {
             Region::One => region1::enthalpy_of(p, t),
             Region::Two => region2::enthalpy_of(p, t),
             _ => region5::enthalpy_of(p, t),
         };
-        h.0.map(|h| units.from_native(Quantity::Enthalpy, h))
+        for (k, h) in h.0.into_iter().enumerate() {
+            out(k, units.from_native(Quantity::Enthalpy, h));
+        }
     }
 
     fn scalar(&self, (p, t): (f64, f64), units: Units) -> Result<f64, Error> {

@@ -4,8 +4,6 @@
 //! over lanes with psat(T) or Tsat(p) itself; region 3's part of the line
 //! and every refused input take the scalar call.
 
-use core::array;
-
 use crate::equations::free_energy::gibbs_properties;
 use crate::equations::saturation_line::{saturation_pressure_of, saturation_temperature_of};
 use crate::equations::{region1, region2};
@@ -32,20 +30,16 @@ impl Kernel for AtTemperature {
 
     #[inline(always)]
     fn place<const N: usize>(&self, given: &[f64; N], len: usize, units: Units) -> [Place; N] {
-        let t: [Option<f64>; N] = array::from_fn(|k| {
-            let t = native_input(units, Quantity::Temperature, given[k]).ok();
-            t.filter(|t| k < len && (MIN_TEMPERATURE..=REGION13_TEMPERATURE).contains(t))
-        });
+        let mut t = [MIN_TEMPERATURE; N];
+        let mut on_lanes = [false; N];
+        for k in 0..len {
+            if let Ok(tk) = native_input(units, Quantity::Temperature, given[k]) {
+                (t[k], on_lanes[k]) = (tk, (MIN_TEMPERATURE..=REGION13_TEMPERATURE).contains(&tk));
+            }
+        }
         // psat below 623.15 K lies under pc: `line_pressure`'s min is moot.
-        let p = saturation_pressure_of(Lanes(t.map(|t| t.unwrap_or(MIN_TEMPERATURE)))).0;
-        array::from_fn(|k| match t[k] {
-            Some(t) => Place::Lanes {
-                queue: 0,
-                p: p[k],
-                t,
-            },
-            None => Place::Scalar,
-        })
+        let p = saturation_pressure_of(Lanes(t)).0;
+        placed(on_lanes, p, t)
     }
 
     #[inline(always)]
@@ -55,8 +49,9 @@ impl Kernel for AtTemperature {
         p: Lanes<N>,
         t: Lanes<N>,
         units: Units,
-    ) -> [Saturation; N] {
-        both_phases(p, t, units)
+        out: impl FnMut(usize, Saturation),
+    ) {
+        both_phases(p, t, units, out)
     }
 
     fn scalar(&self, t: f64, units: Units) -> Result<Saturation, Error> {
@@ -70,20 +65,20 @@ impl Kernel for AtPressure {
 
     #[inline(always)]
     fn place<const N: usize>(&self, given: &[f64; N], len: usize, units: Units) -> [Place; N] {
-        let p: [Option<f64>; N] = array::from_fn(|k| {
-            let p = native_input(units, Quantity::Pressure, given[k]).ok();
-            // pc itself is Tc, region 3: the scalar call's.
-            p.filter(|p| k < len && (min_saturation_pressure()..CRITICAL_PRESSURE).contains(p))
-        });
-        let t = saturation_temperature_of(Lanes(p.map(|p| p.unwrap_or(CRITICAL_PRESSURE)))).0;
-        array::from_fn(|k| match p[k] {
-            Some(p) if t[k] <= REGION13_TEMPERATURE => Place::Lanes {
-                queue: 0,
-                p,
-                t: t[k],
-            },
-            _ => Place::Scalar,
-        })
+        let mut p = [CRITICAL_PRESSURE; N];
+        let mut on_lanes = [false; N];
+        // pc itself is Tc, region 3: the scalar call's.
+        let range = min_saturation_pressure()..CRITICAL_PRESSURE;
+        for k in 0..len {
+            if let Ok(pk) = native_input(units, Quantity::Pressure, given[k]) {
+                (p[k], on_lanes[k]) = (pk, range.contains(&pk));
+            }
+        }
+        let t = saturation_temperature_of(Lanes(p)).0;
+        for k in 0..len {
+            on_lanes[k] &= t[k] <= REGION13_TEMPERATURE;
+        }
+        placed(on_lanes, p, t)
     }
 
     #[inline(always)]
@@ -93,8 +88,9 @@ impl Kernel for AtPressure {
         p: Lanes<N>,
         t: Lanes<N>,
         units: Units,
-    ) -> [Saturation; N] {
-        both_phases(p, t, units)
+        out: impl FnMut(usize, Saturation),
+    ) {
+        both_phases(p, t, units, out)
     }
 
     fn scalar(&self, p: f64, units: Units) -> Result<Saturation, Error> {
@@ -102,14 +98,42 @@ impl Kernel for AtPressure {
     }
 }
 
+/// Queue 0 at (p, T) where `on_lanes`, else the scalar call.
+#[inline(always)]
+fn placed<const N: usize>(on_lanes: [bool; N], p: [f64; N], t: [f64; N]) -> [Place; N] {
+    let mut places = [Place::Scalar; N];
+    for k in 0..N {
+        if on_lanes[k] {
+            places[k] = Place::Lanes {
+                queue: 0,
+                p: p[k],
+                t: t[k],
+            };
+        }
+    }
+    places
+}
+
 /// The saturated liquid (region 1) and vapour (region 2) at native
 /// (p, T) on the line up to 623.15 K, as `Saturation::at` builds them.
 #[inline(always)]
-fn both_phases<const N: usize>(p: Lanes<N>, t: Lanes<N>, units: Units) -> [Saturation; N] {
+fn both_phases<const N: usize>(
+    p: Lanes<N>,
+    t: Lanes<N>,
+    units: Units,
+    mut out: impl FnMut(usize, Saturation),
+) {
     let liquid = gibbs_properties(&region1::gibbs_of(p, t), p, t);
     let vapour = gibbs_properties(&region2::gibbs_of(p, t), p, t);
-    array::from_fn(|k| Saturation {
-        liquid: State::single_phase(lane(&liquid, k), Region::One, Phase::SaturatedLiquid, units),
-        vapour: State::single_phase(lane(&vapour, k), Region::Two, Phase::SaturatedVapour, units),
-    })
+    for k in 0..N {
+        let liquid = lane(&liquid, k);
+        let vapour = lane(&vapour, k);
+        out(
+            k,
+            Saturation {
+                liquid: State::single_phase(liquid, Region::One, Phase::SaturatedLiquid, units),
+                vapour: State::single_phase(vapour, Region::Two, Phase::SaturatedVapour, units),
+            },
+        );
+    }
 }
