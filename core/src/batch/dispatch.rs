@@ -81,8 +81,20 @@ impl Dispatch {
                 Dispatch::Baseline => {}
             }
         }
-        pipeline::run::<2, K>(kernel, inputs, units, each)
+        baseline(kernel, inputs, units, each)
     }
+}
+
+/// The pipeline for the target's baseline, on its own: inlined into
+/// [`Dispatch::run`] its unoptimised (debug) frame stacked on the AVX
+/// variant's, past the 2 MB of a test thread.
+fn baseline<K: Kernel>(
+    kernel: &K,
+    inputs: impl IntoIterator<Item = K::Input>,
+    units: Units,
+    each: impl FnMut(usize, Result<K::Output, Error>),
+) {
+    pipeline::run::<2, K>(kernel, inputs, units, each)
 }
 
 /// The pipeline compiled for each x86-64 instruction set.
