@@ -12,7 +12,9 @@
 //! # Ok::<(), ebullio::Error>(())
 //! ```
 #![no_std]
-#![forbid(unsafe_code)]
+// `unsafe` only where a batch calls code compiled for an instruction set
+// the machine was just found to have (`batch/dispatch.rs`).
+#![deny(unsafe_code)]
 #![warn(missing_docs)]
 
 #[cfg(feature = "std")]
@@ -22,6 +24,7 @@ extern crate std;
 // core/src"): the caller's pair and units, into native units, located,
 // started, refined, then read in the caller's units.
 pub mod backward;
+pub mod batch;
 mod equations;
 mod error;
 mod locate;

@@ -85,6 +85,62 @@ fn exercise_everything() -> f64 {
             sum += read_all(State::from_pt(p(pp), t(tt), units));
             sum += ebullio::enthalpy_from_pt(p(pp), t(tt), units).unwrap_or(0.0);
         }
+        // The batches on every variant, lanes and fallback, and through
+        // the request; more elements than the widest lanes.
+        let batch = [
+            (3.0, 300.0),
+            (0.0035, 700.0),
+            (30.0, 1500.0),
+            (25.0, 650.0),
+            (200.0, 300.0),
+            (f64::NAN, 300.0),
+        ]
+        .map(|(pp, tt)| (p(pp), t(tt)));
+        let inputs = || batch.iter().cycle().take(40).copied();
+        for dispatch in ebullio::batch::Dispatch::ALL {
+            dispatch.states_from_pt(inputs(), units, |_, s| sum += read_all(s));
+            dispatch.enthalpies_from_pt(inputs(), units, |_, h| sum += h.unwrap_or(0.0));
+        }
+        ebullio::batch::states_from_pt(inputs(), units, |_, s| sum += read_all(s));
+        ebullio::batch::enthalpies_from_pt(inputs(), units, |_, h| sum += h.unwrap_or(0.0));
+        sum += f64::from(ebullio::batch::Dispatch::detected() as u8);
+        let line = [
+            273.15,
+            400.0,
+            623.15,
+            640.0,
+            700.0,
+            f64::NAN,
+            0.001,
+            10.0,
+            22.064,
+        ]
+        .map(|x| units.from_native(ebullio::Quantity::Temperature, x));
+        let line = || line.iter().cycle().take(40).copied();
+        let both = |s: Result<Saturation, ebullio::Error>| match s {
+            Ok(s) => read_all(Ok(*s.liquid())) + read_all(Ok(*s.vapour())),
+            Err(e) => read_all(Err(e)),
+        };
+        for dispatch in ebullio::batch::Dispatch::ALL {
+            dispatch.saturation_at_temperatures(line(), units, |_, s| sum += both(s));
+            dispatch.saturation_at_pressures(line(), units, |_, s| sum += both(s));
+        }
+        ebullio::batch::saturation_at_temperatures(line(), units, |_, s| sum += both(s));
+        ebullio::batch::saturation_at_pressures(line(), units, |_, s| sum += both(s));
+        for method in [Method::Exact, Method::BackwardOnly] {
+            for pair in [InputPair::PressureTemperature, InputPair::PressureEnthalpy] {
+                let request = Request {
+                    pair,
+                    units,
+                    method,
+                };
+                request.solve_each(inputs(), |_, s| sum += read_all(s));
+                let enthalpy = Reading::Thermodynamic(Property::Enthalpy);
+                request.read_each(enthalpy, inputs(), |_, h| {
+                    sum += h.ok().flatten().unwrap_or(0.0);
+                });
+            }
+        }
         // Every input pair, exact and backward-only, through the dispatch too.
         for (pp, tt) in [(3.0, 300.0), (0.1, 500.0), (25.0, 650.0), (20.0, 1500.0)] {
             let Ok(s) = State::from_pt(p(pp), t(tt), units) else {

@@ -10,7 +10,6 @@ use ebullio::{Request, State};
 use crate::args::{check_len, InArray, OutArray};
 use crate::boundary::boundary;
 use crate::codes;
-use crate::state::solved;
 use crate::status::{finite, reading, EbullioStatus};
 
 /// How an array call reports a value a solved state does not have (the
@@ -33,9 +32,23 @@ pub(crate) trait Columns {
     fn count(&self) -> usize;
     /// Every code is decoded before anything is written.
     fn check(&self) -> Result<(), EbullioStatus>;
-    /// The only value of the state (`Asked::OnePerElement`), from the inputs.
-    fn single(&self, request: Request, a: f64, b: f64) -> Result<f64, EbullioStatus> {
-        self.read(&solved(request, a, b)?, 0)
+    /// The only value of each state (`Asked::OnePerElement`) of `inputs`:
+    /// `each` gets the element's index and its value, in no particular
+    /// order (the core's batches, [`Request::solve_each`]).
+    fn single_each(
+        &self,
+        request: Request,
+        inputs: impl IntoIterator<Item = (f64, f64)>,
+        mut each: impl FnMut(usize, Result<f64, EbullioStatus>),
+    ) {
+        request.solve_each(inputs, |i, state| {
+            each(
+                i,
+                state
+                    .map_err(|e| EbullioStatus::from(&e))
+                    .and_then(|s| self.read(&s, 0)),
+            );
+        });
     }
     /// Value `k` of a solved state.
     fn read(&self, state: &State, k: usize) -> Result<f64, EbullioStatus>;
@@ -53,8 +66,17 @@ impl Columns for Properties {
         (0..self.count()).try_for_each(|k| codes::property(self.0.get(k)).map(|_| ()))
     }
 
-    fn single(&self, request: Request, a: f64, b: f64) -> Result<f64, EbullioStatus> {
-        reading(request.read(codes::property(self.0.get(0))?, a, b))
+    fn single_each(
+        &self,
+        request: Request,
+        inputs: impl IntoIterator<Item = (f64, f64)>,
+        mut each: impl FnMut(usize, Result<f64, EbullioStatus>),
+    ) {
+        match codes::property(self.0.get(0)) {
+            Ok(property) => request.read_each(property, inputs, |i, r| each(i, reading(r))),
+            // Unreachable: `check` decoded every number first.
+            Err(status) => (0..inputs.into_iter().count()).for_each(|i| each(i, Err(status))),
+        }
     }
 
     fn read(&self, state: &State, k: usize) -> Result<f64, EbullioStatus> {
@@ -184,15 +206,26 @@ pub(crate) unsafe fn kernel(
     let request = codes::request(pair, units, method)?;
     columns.check()?;
 
+    // Every element is reported once; the batches report them grouped by
+    // region, so each is written by its index. Element i's output is
+    // written after its inputs are read: in place stays safe.
+    let inputs = (0..n).map(|i| (a.get(i), b.get(i)));
     let mut all_good = true;
-    for i in 0..n {
-        let (x, y) = (a.get(i), b.get(i));
-        let element = if asked == Asked::OnePerElement {
-            let r = finite(columns.single(request, x, y));
+    let mut report = |i: usize, element: EbullioStatus| {
+        all_good &= element == EbullioStatus::Ok;
+        if let Some(s) = &statuses {
+            s.set(i, element);
+        }
+    };
+    if asked == Asked::OnePerElement {
+        columns.single_each(request, inputs, |i, r| {
+            let r = finite(r);
             out.set(i, *r.as_ref().unwrap_or(&f64::NAN));
-            r.err().unwrap_or(EbullioStatus::Ok)
-        } else {
-            match solved(request, x, y) {
+            report(i, r.err().unwrap_or(EbullioStatus::Ok));
+        });
+    } else {
+        request.solve_each(inputs, |i, state| {
+            let element = match state {
                 Ok(state) => {
                     for c in 0..k {
                         let r = finite(columns.read(&state, c));
@@ -200,18 +233,15 @@ pub(crate) unsafe fn kernel(
                     }
                     EbullioStatus::Ok
                 }
-                Err(status) => {
+                Err(e) => {
                     for c in 0..k {
                         out.set(i * k + c, f64::NAN);
                     }
-                    status
+                    EbullioStatus::from(&e)
                 }
-            }
-        };
-        all_good &= element == EbullioStatus::Ok;
-        if let Some(s) = &statuses {
-            s.set(i, element);
-        }
+            };
+            report(i, element);
+        });
     }
     Ok(if all_good {
         EbullioStatus::Ok

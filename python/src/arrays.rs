@@ -9,6 +9,8 @@
 //! bit: each element is exactly the scalar core call on its inputs.
 
 use ebullio::{Error, Reading, Request, State, Status, Units};
+use std::ops::Range;
+
 use numpy::ndarray::{Array1, ArrayView1};
 use numpy::{
     Element, PyArray1, PyArrayDyn, PyArrayMethods, PyReadonlyArray1, PyReadwriteArrayDyn,
@@ -95,36 +97,51 @@ struct Job<'a> {
 }
 
 impl Job<'_> {
-    fn run<const M: usize>(
-        &mut self,
-        element: &(impl Fn(usize) -> Result<[State; M], Error> + Sync),
-    ) {
-        for i in 0..self.status.len() {
-            match element(self.start + i) {
-                Ok(states) => {
-                    for (m, state) in states.iter().enumerate() {
-                        for (c, column) in COLUMNS.iter().enumerate() {
-                            self.values[m * COUNT + c][i] =
-                                state.get(column.property).unwrap_or(f64::NAN);
-                        }
-                        self.region[m][i] = state.region().number() as u8;
-                        self.phase[m][i] = state.phase() as u8;
+    fn run<const M: usize>(&mut self, solve: &(impl Solve<M> + Sync)) {
+        let start = self.start;
+        let range = start..start + self.status.len();
+        solve(range, &mut |i, result| self.write(i - start, result));
+    }
+
+    /// Element `i` of this work item.
+    fn write<const M: usize>(&mut self, i: usize, result: Result<[State; M], Error>) {
+        match result {
+            Ok(states) => {
+                for (m, state) in states.iter().enumerate() {
+                    for (c, column) in COLUMNS.iter().enumerate() {
+                        self.values[m * COUNT + c][i] =
+                            state.get(column.property).unwrap_or(f64::NAN);
                     }
-                    self.status[i] = code(Status::Ok);
+                    self.region[m][i] = state.region().number() as u8;
+                    self.phase[m][i] = state.phase() as u8;
                 }
-                Err(error) => {
-                    for column in self.values.iter_mut() {
-                        column[i] = f64::NAN;
-                    }
-                    for m in 0..M {
-                        self.region[m][i] = 0;
-                        self.phase[m][i] = 0;
-                    }
-                    self.status[i] = status_of(&error);
+                self.status[i] = code(Status::Ok);
+            }
+            Err(error) => {
+                for column in self.values.iter_mut() {
+                    column[i] = f64::NAN;
                 }
+                for m in 0..M {
+                    self.region[m][i] = 0;
+                    self.phase[m][i] = 0;
+                }
+                self.status[i] = status_of(&error);
             }
         }
     }
+}
+
+/// How a work item's elements are solved: the elements of a range, each
+/// one's `M` states handed with its index to the writer (in any order: the
+/// core's batches report them grouped by region).
+pub(crate) trait Solve<const M: usize>:
+    Fn(Range<usize>, &mut dyn FnMut(usize, Result<[State; M], Error>))
+{
+}
+
+impl<const M: usize, F> Solve<M> for F where
+    F: Fn(Range<usize>, &mut dyn FnMut(usize, Result<[State; M], Error>))
+{
 }
 
 /// Splits `column` (length `n`) into work-item slices.
@@ -138,7 +155,7 @@ fn split<T>(column: &mut [T]) -> std::slice::ChunksMut<'_, T> {
 fn fill<const M: usize>(
     out: Outputs<'_>,
     threads: Threads,
-    element: impl Fn(usize) -> Result<[State; M], Error> + Sync,
+    element: impl Solve<M> + Sync,
 ) -> Result<(), rayon::ThreadPoolBuildError> {
     let n = out.status.len();
     if n == 0 {
@@ -239,7 +256,7 @@ fn write<const M: usize>(
     arrays: &Arrays<'_>,
     n: usize,
     threads: Threads,
-    element: impl Fn(usize) -> Result<[State; M], Error> + Sync + Send,
+    element: impl Solve<M> + Sync + Send,
 ) -> PyResult<()> {
     let mut values = writable(&arrays.0, "values", M * COUNT * n)?;
     let mut region = writable(&arrays.1, "region", M * n)?;
@@ -332,9 +349,16 @@ impl<'a> PairCall<'a> {
     ) -> PyResult<Arrays<'py>> {
         let n = self.len();
         let arrays = out.unwrap_or_else(|| fresh::<1>(py, n));
-        write::<1>(py, &arrays, n, self.threads, |i| {
-            self.state(i).map(|s| [s.in_units(read)])
-        })?;
+        // Exact (p, T) in the core's batch kernels, the rest one by one.
+        let solve = |range: Range<usize>,
+                     each: &mut dyn FnMut(usize, Result<[State; 1], Error>)| {
+            let start = range.start;
+            let inputs = range.map(|i| (self.a[i], self.b[i]));
+            self.request.solve_each(inputs, |i, state| {
+                each(start + i, state.map(|s| [s.in_units(read)]));
+            });
+        };
+        write::<1>(py, &arrays, n, self.threads, solve)?;
         Ok(arrays)
     }
 }
@@ -377,10 +401,13 @@ pub(crate) fn saturation_into<'py>(
 ) -> PyResult<Arrays<'py>> {
     let n = values.len();
     let arrays = fresh::<2>(py, n);
-    write::<2>(py, &arrays, n, threads, |i| {
-        by.solve(values[i], units)
-            .map(|s| [*s.liquid(), *s.vapour()])
-    })?;
+    let solve = |range: Range<usize>, each: &mut dyn FnMut(usize, Result<[State; 2], Error>)| {
+        let start = range.start;
+        by.solve_each(range.map(|i| values[i]), units, |i, point| {
+            each(start + i, point.map(|s| [*s.liquid(), *s.vapour()]));
+        });
+    };
+    write::<2>(py, &arrays, n, threads, solve)?;
     Ok(arrays)
 }
 

@@ -38,6 +38,20 @@ impl By {
         }
     }
 
+    /// [`By::solve`] of every value of `values`, through the core's batch
+    /// kernels: `each` gets the index and the point, in no particular order.
+    pub(crate) fn solve_each(
+        self,
+        values: impl IntoIterator<Item = f64>,
+        units: Units,
+        each: impl FnMut(usize, Result<Saturation, ebullio::Error>),
+    ) {
+        match self {
+            By::Pressure => ebullio::batch::saturation_at_pressures(values, units, each),
+            By::Temperature => ebullio::batch::saturation_at_temperatures(values, units, each),
+        }
+    }
+
     /// The constructor that asks for the point this way.
     const fn call(self) -> &'static str {
         match self {

@@ -7,38 +7,40 @@
 //! of IAPWS R7-97(2012), Tables 3, 12, 31 and 39, written in this form.
 
 use crate::numerics::constants::SPECIFIC_GAS_CONSTANT as R;
+use crate::numerics::lanes::Real;
 use crate::numerics::math::sqrt;
 
 /// Dimensionless Gibbs free energy γ = g/(RT) of a region and its reduced
-/// derivatives with respect to π = p/p* and τ = T*/T.
+/// derivatives with respect to π = p/p* and τ = T*/T (`V`: one number,
+/// or the lanes of a batch).
 #[derive(Clone, Copy, Debug, PartialEq)]
-pub struct ReducedGibbs {
+pub struct ReducedGibbs<V = f64> {
     /// γ
-    pub g: f64,
+    pub g: V,
     /// π·γ_π
-    pub g_p: f64,
+    pub g_p: V,
     /// π²·γ_ππ
-    pub g_pp: f64,
+    pub g_pp: V,
     /// τ·γ_τ
-    pub g_t: f64,
+    pub g_t: V,
     /// τ²·γ_ττ
-    pub g_tt: f64,
+    pub g_tt: V,
     /// π·τ·γ_πτ
-    pub g_pt: f64,
+    pub g_pt: V,
 }
 
 /// γ of a Gibbs region and its reduced τ derivatives up to the third, at
 /// fixed π: what a Halley step along an isobar needs.
 #[derive(Clone, Copy, Debug, PartialEq)]
-pub(crate) struct IsobarGibbs {
+pub(crate) struct IsobarGibbs<V = f64> {
     /// γ
-    pub g: f64,
+    pub g: V,
     /// τ·γ_τ
-    pub g_t: f64,
+    pub g_t: V,
     /// τ²·γ_ττ
-    pub g_tt: f64,
+    pub g_tt: V,
     /// τ³·γ_τττ
-    pub g_ttt: f64,
+    pub g_ttt: V,
 }
 
 /// Dimensionless Helmholtz free energy φ = f/(RT) of region 3 and its
@@ -59,33 +61,34 @@ pub struct ReducedHelmholtz {
     pub f_dt: f64,
 }
 
-/// The thermodynamic properties of one single-phase point, native units.
+/// The thermodynamic properties of one single-phase point, native units
+/// (`V`: one point, or the lanes of a batch).
 #[derive(Clone, Copy, Debug, PartialEq)]
-pub struct Properties {
+pub struct Properties<V = f64> {
     /// Pressure, MPa.
-    pub p: f64,
+    pub p: V,
     /// Temperature, K.
-    pub t: f64,
+    pub t: V,
     /// Specific volume, m³/kg.
-    pub v: f64,
+    pub v: V,
     /// Specific internal energy, kJ/kg.
-    pub u: f64,
+    pub u: V,
     /// Specific enthalpy, kJ/kg.
-    pub h: f64,
+    pub h: V,
     /// Specific entropy, kJ/(kg·K).
-    pub s: f64,
+    pub s: V,
     /// Specific Gibbs free energy, kJ/kg.
-    pub g: f64,
+    pub g: V,
     /// Specific isobaric heat capacity, kJ/(kg·K).
-    pub cp: f64,
+    pub cp: V,
     /// Specific isochoric heat capacity, kJ/(kg·K).
-    pub cv: f64,
+    pub cv: V,
     /// Speed of sound, m/s.
-    pub w: f64,
+    pub w: V,
     /// Isobaric cubic expansion coefficient, 1/K.
-    pub alpha_v: f64,
+    pub alpha_v: V,
     /// Isothermal compressibility, 1/MPa.
-    pub kappa_t: f64,
+    pub kappa_t: V,
 }
 
 impl Properties {
@@ -137,25 +140,41 @@ impl ReducedGibbs {
     /// The properties at pressure `p` (MPa) and temperature `t` (K).
     #[inline]
     pub fn properties(&self, p: f64, t: f64) -> Properties {
-        let rt = R * t;
-        // (π·γ_π − π·τ·γ_πτ) appears in cv, w and the expansion coefficient.
-        let a = self.g_p - self.g_pt;
-        Properties {
-            p,
-            t,
-            // RT/p in kJ/kg over MPa gives 10³ m³/kg.
-            v: rt * self.g_p / (1e3 * p),
-            u: rt * (self.g_t - self.g_p),
-            h: rt * self.g_t,
-            s: R * (self.g_t - self.g),
-            g: rt * self.g,
-            cp: -R * self.g_tt,
-            cv: R * (-self.g_tt + a * a / self.g_pp),
-            // kJ/kg = 10³ m²/s².
-            w: sqrt(1e3 * rt * self.g_p * self.g_p / (a * a / self.g_tt - self.g_pp)),
-            alpha_v: a / (self.g_p * t),
-            kappa_t: -self.g_pp / (self.g_p * p),
-        }
+        gibbs_properties(self, p, t)
+    }
+}
+
+/// [`ReducedGibbs::properties`] for any [`Real`]: the batch kernels'
+/// lanes run these very operations.
+#[inline(always)]
+pub(crate) fn gibbs_properties<V: Real>(gibbs: &ReducedGibbs<V>, p: V, t: V) -> Properties<V> {
+    let ReducedGibbs {
+        g,
+        g_p,
+        g_pp,
+        g_t,
+        g_tt,
+        g_pt,
+    } = *gibbs;
+    let r = V::splat(R);
+    let rt = r * t;
+    // (π·γ_π − π·τ·γ_πτ) appears in cv, w and the expansion coefficient.
+    let a = g_p - g_pt;
+    Properties {
+        p,
+        t,
+        // RT/p in kJ/kg over MPa gives 10³ m³/kg.
+        v: rt * g_p / (V::splat(1e3) * p),
+        u: rt * (g_t - g_p),
+        h: rt * g_t,
+        s: r * (g_t - g),
+        g: rt * g,
+        cp: V::splat(-R) * g_tt,
+        cv: r * (-g_tt + a * a / g_pp),
+        // kJ/kg = 10³ m²/s².
+        w: (V::splat(1e3) * rt * g_p * g_p / (a * a / g_tt - g_pp)).sqrt(),
+        alpha_v: a / (g_p * t),
+        kappa_t: -g_pp / (g_p * p),
     }
 }
 

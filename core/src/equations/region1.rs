@@ -6,6 +6,7 @@
 
 use crate::equations::free_energy::{IsobarGibbs, ReducedGibbs};
 use crate::numerics::constants::SPECIFIC_GAS_CONSTANT as R;
+use crate::numerics::lanes::Real;
 use crate::numerics::series::{Series, Term};
 
 /// Reducing pressure p*, MPa.
@@ -58,19 +59,25 @@ const J_SHIFT: i32 = 41;
 const SERIES: Series = Series::new(&COEFFICIENTS, J_SHIFT);
 
 #[inline(always)]
-fn shifted_variables(p: f64, t: f64) -> (f64, f64, f64, f64) {
-    let pi = p / REDUCING_PRESSURE;
-    let tau = REDUCING_TEMPERATURE / t;
-    (pi, tau, 7.1 - pi, tau - 1.222)
+fn shifted_variables<V: Real>(p: V, t: V) -> (V, V, V, V) {
+    let pi = p / V::splat(REDUCING_PRESSURE);
+    let tau = V::splat(REDUCING_TEMPERATURE) / t;
+    (pi, tau, V::splat(7.1) - pi, tau - V::splat(1.222))
 }
 
 /// γ and its reduced derivatives at `p` (MPa) and `t` (K).
 #[inline]
 pub fn gibbs(p: f64, t: f64) -> ReducedGibbs {
+    gibbs_of(p, t)
+}
+
+/// [`gibbs`] for any [`Real`]: the batch kernels' lanes.
+#[inline(always)]
+pub(crate) fn gibbs_of<V: Real>(p: V, t: V) -> ReducedGibbs<V> {
     let (pi, tau, x, y) = shifted_variables(p, t);
     let (s, yp) = SERIES.sums(x, y);
     // Undo the exponent shift: multiply by y^−41.
-    let scale = 1.0 / yp;
+    let scale = V::splat(1.0) / yp;
     // d/dπ of (7.1 − π)^I brings −I/(7.1 − π); d/dτ of (τ − 1.222)^J brings J/(τ − 1.222).
     let px = -pi / x;
     let ty = tau / y;
@@ -102,8 +109,14 @@ pub(crate) fn isobar(p: f64, t: f64) -> IsobarGibbs {
 /// Specific enthalpy alone, kJ/kg, at `p` (MPa) and `t` (K): h = RT·τγ_τ.
 #[inline]
 pub fn enthalpy(p: f64, t: f64) -> f64 {
+    enthalpy_of(p, t)
+}
+
+/// [`enthalpy`] for any [`Real`]: the batch kernels' lanes.
+#[inline(always)]
+pub(crate) fn enthalpy_of<V: Real>(p: V, t: V) -> V {
     let (_, tau, x, y) = shifted_variables(p, t);
     let (sum_j, yp) = SERIES.y_weighted_sum(x, y);
     // Same operations as `gibbs` followed by `properties`, bit for bit.
-    R * t * (tau / y * sum_j * (1.0 / yp))
+    V::splat(R) * t * (tau / y * sum_j * (V::splat(1.0) / yp))
 }

@@ -5,6 +5,7 @@
 //! Valid from 273.15 K (611.213 Pa) to the critical point, 647.096 K and
 //! 22.064 MPa. Verification values: R7-97 Tables 35 and 36.
 
+use crate::numerics::lanes::Real;
 use crate::numerics::math::sqrt;
 
 /// n₁ … n₁₀ of R7-97 Table 34.
@@ -27,11 +28,18 @@ const N: [f64; 10] = COEFFICIENTS;
 /// Saturation pressure, MPa, at temperature `t` (K), R7-97 Eq. 30.
 #[inline]
 pub fn saturation_pressure(t: f64) -> f64 {
-    let theta = t + N[8] / (t - N[9]);
-    let a = theta * theta + N[0] * theta + N[1];
-    let b = N[2] * theta * theta + N[3] * theta + N[4];
-    let c = N[5] * theta * theta + N[6] * theta + N[7];
-    let x = 2.0 * c / (-b + sqrt(b * b - 4.0 * a * c));
+    saturation_pressure_of(t)
+}
+
+/// [`saturation_pressure`] for any [`Real`]: the batch kernels' lanes.
+#[inline(always)]
+pub(crate) fn saturation_pressure_of<V: Real>(t: V) -> V {
+    let n = N.map(V::splat);
+    let theta = t + n[8] / (t - n[9]);
+    let a = theta * theta + n[0] * theta + n[1];
+    let b = n[2] * theta * theta + n[3] * theta + n[4];
+    let c = n[5] * theta * theta + n[6] * theta + n[7];
+    let x = V::splat(2.0) * c / (-b + (b * b - V::splat(4.0) * a * c).sqrt());
     let x2 = x * x;
     x2 * x2
 }
@@ -39,13 +47,21 @@ pub fn saturation_pressure(t: f64) -> f64 {
 /// Saturation temperature, K, at pressure `p` (MPa), R7-97 Eq. 31.
 #[inline]
 pub fn saturation_temperature(p: f64) -> f64 {
-    let beta = sqrt(sqrt(p));
-    let e = beta * beta + N[2] * beta + N[5];
-    let f = N[0] * beta * beta + N[3] * beta + N[6];
-    let g = N[1] * beta * beta + N[4] * beta + N[7];
-    let d = 2.0 * g / (-f - sqrt(f * f - 4.0 * e * g));
-    let s = N[9] + d;
-    (s - sqrt(s * s - 4.0 * (N[8] + N[9] * d))) / 2.0
+    saturation_temperature_of(p)
+}
+
+/// [`saturation_temperature`] for any [`Real`]: the batch kernels' lanes.
+#[inline(always)]
+pub(crate) fn saturation_temperature_of<V: Real>(p: V) -> V {
+    let n = N.map(V::splat);
+    let (two, four) = (V::splat(2.0), V::splat(4.0));
+    let beta = p.sqrt().sqrt();
+    let e = beta * beta + n[2] * beta + n[5];
+    let f = n[0] * beta * beta + n[3] * beta + n[6];
+    let g = n[1] * beta * beta + n[4] * beta + n[7];
+    let d = two * g / (-f - (f * f - four * e * g).sqrt());
+    let s = n[9] + d;
+    (s - (s * s - four * (n[8] + n[9] * d)).sqrt()) / two
 }
 
 /// The slope dpsat/dT, MPa/K, of Eq. 30 at `t` (K), differentiated

@@ -32,6 +32,7 @@ pub(crate) fn check_temperature(t: f64, units: Units) -> Result<(), Error> {
 
 /// Refuses native `p` (MPa) and `t` (K) outside the range, T first; the
 /// error in `units`.
+#[inline]
 pub(crate) fn check(p: f64, t: f64, units: Units) -> Result<(), Error> {
     check_temperature(t, units)?;
     let max_pressure = max_pressure(t);

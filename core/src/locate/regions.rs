@@ -8,6 +8,7 @@ use crate::equations::saturation_line::saturation_pressure;
 use crate::error::Error;
 use crate::locate::range;
 use crate::numerics::constants::*;
+use crate::numerics::lanes::Real;
 use crate::read::state::Phase;
 use crate::refine::region3_density::Branch;
 use crate::units::Units;
@@ -26,28 +27,44 @@ pub(crate) enum Located {
 /// [`crate::State::SATURATION_TOLERANCE`].
 pub(crate) const SATURATION_TOLERANCE: f64 = 1e-11;
 
-/// Whether native (`p`, `t`), below Tc, is on the liquid side: above the
-/// saturation line or on it, within [`SATURATION_TOLERANCE`]. T ≤
-/// Tsat(p)·(1 + tol) written as p ≥ psat(T/(1 + tol)): one psat, and
-/// valid at any p.
-fn liquid_side(p: f64, t: f64) -> bool {
-    p >= saturation_pressure(t / (1.0 + SATURATION_TOLERANCE))
+/// The temperature whose saturation pressure decides the liquid side at
+/// native `t`: T ≤ Tsat(p)·(1 + tol), within [`SATURATION_TOLERANCE`] of
+/// the line, written as p ≥ psat(T/(1 + tol)): one psat, and valid at any p.
+#[inline(always)]
+pub(crate) fn liquid_side_temperature<V: Real>(t: V) -> V {
+    t / V::splat(1.0 + SATURATION_TOLERANCE)
 }
 
 /// Locates native `p` (MPa) and `t` (K); out-of-range errors are reported
 /// in `units`. A state on the saturation line (within
 /// [`SATURATION_TOLERANCE`]) is taken as liquid, at 623.15 K too.
 pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
+    locate_with(p, t, units, || {
+        saturation_pressure(liquid_side_temperature(t))
+    })
+}
+
+/// [`locate`], taking psat at [`liquid_side_temperature`] from
+/// `liquid_side_psat` where it needs it (a batch computes it over lanes
+/// beforehand): p at or above it, below Tc, is the liquid side, on the
+/// line or above it.
+#[inline(always)]
+pub(crate) fn locate_with(
+    p: f64,
+    t: f64,
+    units: Units,
+    liquid_side_psat: impl Fn() -> f64,
+) -> Result<Located, Error> {
     range::check(p, t, units)?;
     Ok(if t <= REGION13_TEMPERATURE {
-        if liquid_side(p, t) {
+        if p >= liquid_side_psat() {
             Located::Region1
         } else {
             Located::Region2
         }
     } else if t <= REGION13_TEMPERATURE * (1.0 + SATURATION_TOLERANCE)
         && p <= boundary_b23::pressure(t)
-        && liquid_side(p, t)
+        && p >= liquid_side_psat()
     {
         // On the line a few nanokelvin above 623.15 K, where B23 lies
         // 1.7e-11 MPa above psat (measured) and would make the liquid side
@@ -58,7 +75,7 @@ pub(crate) fn locate(p: f64, t: f64, units: Units) -> Result<Located, Error> {
             Located::Region2
         } else if t >= CRITICAL_TEMPERATURE {
             Located::Region3(Branch::Supercritical)
-        } else if liquid_side(p, t) {
+        } else if p >= liquid_side_psat() {
             Located::Region3(Branch::Liquid)
         } else {
             Located::Region3(Branch::Vapour)

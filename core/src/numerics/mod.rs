@@ -3,5 +3,6 @@
 //! equations are written in, and the reference constants of IAPWS-IF97.
 
 pub mod constants;
+pub(crate) mod lanes;
 pub(crate) mod math;
 pub(crate) mod series;

@@ -12,28 +12,30 @@
 //! chain). At run time that leaves three multiply-adds per term and a few
 //! per group.
 
+use crate::numerics::lanes::Real;
+
 /// A term `n · x^i · y^j`, exponents and coefficient as the release prints.
 pub(crate) type Term = (i32, i32, f64);
 
 /// Σt, ΣJ·t, ΣJ(J−1)·t, ΣJ(J−1)(J−2)·t: what an iteration along an
 /// isobar needs (x fixed), up to the third derivative in y.
-#[derive(Clone, Copy, Debug, Default)]
-pub(crate) struct IsobarSums {
-    pub value: f64,
-    pub y: f64,
-    pub yy: f64,
-    pub yyy: f64,
+#[derive(Clone, Copy, Debug)]
+pub(crate) struct IsobarSums<V = f64> {
+    pub value: V,
+    pub y: V,
+    pub yy: V,
+    pub yyy: V,
 }
 
 /// Σt, ΣI·t, ΣI(I−1)·t, ΣJ·t, ΣJ(J−1)·t, ΣI·J·t for the terms t of a series.
-#[derive(Clone, Copy, Debug, Default)]
-pub(crate) struct SeriesSums {
-    pub value: f64,
-    pub x: f64,
-    pub xx: f64,
-    pub y: f64,
-    pub yy: f64,
-    pub xy: f64,
+#[derive(Clone, Copy, Debug)]
+pub(crate) struct SeriesSums<V = f64> {
+    pub value: V,
+    pub x: V,
+    pub xx: V,
+    pub y: V,
+    pub yy: V,
+    pub xy: V,
 }
 
 /// Runs `$body` for `$k` = 0, 1, … 63 as straight-line code. With the
@@ -110,10 +112,14 @@ impl PowerChain {
         false
     }
 
-    /// The powers of `x` the chain was built for (others are left at 1).
+    /// The powers of `x` the chain was built for (others are left at 0).
+    /// Zeros, not ones, fill the rest: an all-zero array is one memset the
+    /// optimiser drops, where a fill of ones over lanes stayed a loop that
+    /// AVX-512 code turned into 64 scatters per evaluation.
     #[inline(always)]
-    fn powers(&self, x: f64) -> [f64; MAX_POWER] {
-        let mut p = [1.0; MAX_POWER];
+    fn powers<V: Real>(&self, x: V) -> [V; MAX_POWER] {
+        let mut p = [V::splat(0.0); MAX_POWER];
+        p[0] = V::splat(1.0);
         p[1] = x;
         unrolled!(K, {
             if K < self.len {
@@ -253,21 +259,31 @@ impl Series {
     // The unrolled copy after the last group resets sums nobody reads.
     #[allow(unused_assignments)]
     #[inline(always)]
-    pub(crate) fn sums(&self, x: f64, y: f64) -> (SeriesSums, f64) {
+    pub(crate) fn sums<V: Real>(&self, x: V, y: V) -> (SeriesSums<V>, V) {
         let px = self.x_chain.powers(x);
         let py = self.y_chain.powers(y);
-        let mut s = SeriesSums::default();
-        let (mut p, mut q, mut r) = (0.0, 0.0, 0.0);
+        let zero = V::splat(0.0);
+        let mut s = SeriesSums {
+            value: zero,
+            x: zero,
+            xx: zero,
+            y: zero,
+            yy: zero,
+            xy: zero,
+        };
+        let (mut p, mut q, mut r) = (zero, zero, zero);
         unrolled!(K, {
             if K < self.len {
                 let yj = py[self.y_index[K] as usize];
                 let [c0, c1, c2, _] = self.coefficients[K];
+                let (c0, c1, c2) = (V::splat(c0), V::splat(c1), V::splat(c2));
                 p += c0 * yj;
                 q += c1 * yj;
                 r += c2 * yj;
                 if self.closes_group[K] {
                     let xi = px[self.x_index[K] as usize];
                     let [wi, wii] = self.x_weights[K];
+                    let (wi, wii) = (V::splat(wi), V::splat(wii));
                     let (xp, xq) = (xi * p, xi * q);
                     s.value += xp;
                     s.x += wi * xp;
@@ -275,7 +291,7 @@ impl Series {
                     s.y += xq;
                     s.yy += xi * r;
                     s.xy += wi * xq;
-                    (p, q, r) = (0.0, 0.0, 0.0);
+                    (p, q, r) = (zero, zero, zero);
                 }
             }
         });
@@ -286,15 +302,22 @@ impl Series {
     /// for a Halley step along an isobar (no x derivatives).
     #[allow(unused_assignments)]
     #[inline(always)]
-    pub(crate) fn isobar_sums(&self, x: f64, y: f64) -> (IsobarSums, f64) {
+    pub(crate) fn isobar_sums<V: Real>(&self, x: V, y: V) -> (IsobarSums<V>, V) {
         let px = self.x_chain.powers(x);
         let py = self.y_chain.powers(y);
-        let mut s = IsobarSums::default();
-        let (mut p, mut q, mut r, mut u) = (0.0, 0.0, 0.0, 0.0);
+        let zero = V::splat(0.0);
+        let mut s = IsobarSums {
+            value: zero,
+            y: zero,
+            yy: zero,
+            yyy: zero,
+        };
+        let (mut p, mut q, mut r, mut u) = (zero, zero, zero, zero);
         unrolled!(K, {
             if K < self.len {
                 let yj = py[self.y_index[K] as usize];
                 let [c0, c1, c2, c3] = self.coefficients[K];
+                let [c0, c1, c2, c3] = [V::splat(c0), V::splat(c1), V::splat(c2), V::splat(c3)];
                 p += c0 * yj;
                 q += c1 * yj;
                 r += c2 * yj;
@@ -305,7 +328,7 @@ impl Series {
                     s.y += xi * q;
                     s.yy += xi * r;
                     s.yyy += xi * u;
-                    (p, q, r, u) = (0.0, 0.0, 0.0, 0.0);
+                    (p, q, r, u) = (zero, zero, zero, zero);
                 }
             }
         });
@@ -317,16 +340,17 @@ impl Series {
     /// so both paths agree to the bit.
     #[allow(unused_assignments)]
     #[inline(always)]
-    pub(crate) fn y_weighted_sum(&self, x: f64, y: f64) -> (f64, f64) {
+    pub(crate) fn y_weighted_sum<V: Real>(&self, x: V, y: V) -> (V, V) {
         let px = self.x_chain.powers(x);
         let py = self.y_chain.powers(y);
-        let (mut sum, mut q) = (0.0, 0.0);
+        let zero = V::splat(0.0);
+        let (mut sum, mut q) = (zero, zero);
         unrolled!(K, {
             if K < self.len {
-                q += self.coefficients[K][1] * py[self.y_index[K] as usize];
+                q += V::splat(self.coefficients[K][1]) * py[self.y_index[K] as usize];
                 if self.closes_group[K] {
                     sum += px[self.x_index[K] as usize] * q;
-                    q = 0.0;
+                    q = zero;
                 }
             }
         });

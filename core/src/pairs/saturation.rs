@@ -31,8 +31,8 @@ pub fn min_saturation_pressure() -> f64 {
 /// The saturated liquid and vapour at one point of the saturation line.
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct Saturation {
-    liquid: State,
-    vapour: State,
+    pub(crate) liquid: State,
+    pub(crate) vapour: State,
 }
 
 /// The saturation pressure at native `t` ≤ Tc, MPa: R7-97 Eq. 30, which

@@ -1,7 +1,7 @@
 //! One request to the engine: the input pair, the units of its values and
 //! of the state, and how an inverse pair is finished.
 
-use crate::{Error, InputPair, Method, State, Units};
+use crate::{batch, Error, InputPair, Method, Property, State, Units};
 
 use super::{Reading, Status};
 
@@ -53,12 +53,52 @@ impl Request {
     /// state; the backward method solves the state, whose region 3
     /// density, and so enthalpy, is the backward equation's.
     pub fn read(self, reading: Reading, a: f64, b: f64) -> Result<Option<f64>, Error> {
-        if reading == Reading::Thermodynamic(crate::Property::Enthalpy)
+        if reading == Reading::Thermodynamic(Property::Enthalpy)
             && self.pair == InputPair::PressureTemperature
             && self.method == Method::Exact
         {
             return crate::enthalpy_from_pt(a, b, self.units).map(Some);
         }
         self.solve(a, b)?.reading(reading)
+    }
+
+    /// [`Request::solve`] of every (a, b) of `inputs`: `each` gets the
+    /// element's index and its state, once per element, in no particular
+    /// order. Exact (p, T) goes through the batch kernels
+    /// ([`batch::states_from_pt`]), the same bits several per instruction;
+    /// every other request element by element.
+    pub fn solve_each(
+        self,
+        inputs: impl IntoIterator<Item = (f64, f64)>,
+        mut each: impl FnMut(usize, Result<State, Error>),
+    ) {
+        if self.pair == InputPair::PressureTemperature && self.method == Method::Exact {
+            batch::states_from_pt(inputs, self.units, each);
+        } else {
+            for (i, (a, b)) in inputs.into_iter().enumerate() {
+                each(i, self.solve(a, b));
+            }
+        }
+    }
+
+    /// [`Request::read`] of every (a, b) of `inputs`, as
+    /// [`Request::solve_each`] gives states: the exact enthalpy from
+    /// (p, T) through [`batch::enthalpies_from_pt`].
+    pub fn read_each(
+        self,
+        reading: Reading,
+        inputs: impl IntoIterator<Item = (f64, f64)>,
+        mut each: impl FnMut(usize, Result<Option<f64>, Error>),
+    ) {
+        if reading == Reading::Thermodynamic(Property::Enthalpy)
+            && self.pair == InputPair::PressureTemperature
+            && self.method == Method::Exact
+        {
+            batch::enthalpies_from_pt(inputs, self.units, |i, h| each(i, h.map(Some)));
+        } else {
+            self.solve_each(inputs, |i, state| {
+                each(i, state.and_then(|s| s.reading(reading)));
+            });
+        }
     }
 }
